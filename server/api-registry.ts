@@ -1,0 +1,123 @@
+import express, { type Request, type Response, type RequestHandler } from 'express';
+import type { z } from 'zod';
+import type { Session } from 'lucia';
+import type { CurrentUser } from '../shared/schemas/auth';
+import type { Role } from '../shared/schemas/common';
+import { AppError } from './errors';
+
+/** Who may call a route: anyone, any signed-in user, or the listed roles. */
+export type Access = 'public' | 'signed-in' | readonly Role[];
+type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
+
+export interface RouteContext<B, Q, P> {
+  req: Request;
+  res: Response;
+  body: B;
+  query: Q;
+  params: P;
+  user: CurrentUser | null;
+  session: Session | null;
+}
+
+/** A signed-in context: handlers of non-public routes can rely on `user`. */
+export interface AuthedContext<B, Q, P> extends RouteContext<B, Q, P> {
+  user: CurrentUser;
+  session: Session;
+}
+
+export interface RouteSpec<BS extends z.ZodType, QS extends z.ZodType, PS extends z.ZodType> {
+  method: Method;
+  /** Full path below the site root, e.g. `/api/users/:id`. */
+  path: string;
+  access: Access;
+  summary: string;
+  tag: string;
+  body?: BS;
+  query?: QS;
+  params?: PS;
+  response?: z.ZodType;
+  /** multipart/form-data routes list their file fields here (the route adds its own multer middleware). */
+  multipart?: { fields: Record<string, 'file' | 'json' | 'string'> };
+  produces?: string;
+  successStatus?: number;
+  before?: RequestHandler[];
+  handler: (
+    ctx: AuthedContext<z.output<BS>, z.output<QS>, z.output<PS>>,
+  ) => Promise<unknown> | unknown;
+}
+
+export interface RegisteredRoute {
+  method: Method;
+  path: string;
+  access: Access;
+  summary: string;
+  tag: string;
+  body?: z.ZodType;
+  query?: z.ZodType;
+  params?: z.ZodType;
+  response?: z.ZodType;
+  multipart?: { fields: Record<string, 'file' | 'json' | 'string'> };
+  produces?: string;
+  successStatus: number;
+}
+
+function fieldErrors(error: z.ZodError): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.join('.') || '_';
+    fields[key] ??= issue.message;
+  }
+  return fields;
+}
+
+export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, where: string): z.output<S> {
+  const parsed = schema.safeParse(value);
+  if (!parsed.success) {
+    throw new AppError('validation_failed', 400, `Some ${where} values are not valid.`, fieldErrors(parsed.error));
+  }
+  return parsed.data;
+}
+
+export function checkAccess(access: Access, user: CurrentUser | null) {
+  if (access === 'public') return;
+  if (!user) throw new AppError('unauthenticated', 401, 'Sign in to continue.');
+  if (access === 'signed-in') return;
+  if (!access.includes(user.role)) throw new AppError('forbidden', 403, 'Your role may not do this.');
+}
+
+/**
+ * Every API route is declared here with its access rule and schemas, so the role check, the validation
+ * and the OpenAPI document come from one declaration.
+ */
+export class ApiRegistry {
+  readonly router = express.Router();
+  readonly routes: RegisteredRoute[] = [];
+
+  add<BS extends z.ZodType = z.ZodUnknown, QS extends z.ZodType = z.ZodUnknown, PS extends z.ZodType = z.ZodUnknown>(
+    spec: RouteSpec<BS, QS, PS>,
+  ) {
+    const successStatus = spec.successStatus ?? (spec.method === 'post' ? 201 : 200);
+    this.routes.push({ ...spec, successStatus });
+    const guard: RequestHandler = (_req, res, next) => {
+      checkAccess(spec.access, res.locals.user ?? null);
+      next();
+    };
+    const handle: RequestHandler = async (req, res) => {
+      const ctx = {
+        req,
+        res,
+        body: spec.body ? parseOrThrow(spec.body, req.body, 'form') : req.body,
+        query: spec.query ? parseOrThrow(spec.query, req.query, 'query') : req.query,
+        params: spec.params ? parseOrThrow(spec.params, req.params, 'path') : req.params,
+        user: res.locals.user ?? null,
+        session: res.locals.session ?? null,
+      } as AuthedContext<z.output<BS>, z.output<QS>, z.output<PS>>;
+      const result = await spec.handler(ctx);
+      if (res.headersSent) return;
+      if (result === undefined) res.status(204).end();
+      // A handler may set its own status (e.g. 503 from the health check); otherwise the route's success status.
+      else res.status(res.statusCode !== 200 ? res.statusCode : successStatus).json(result);
+    };
+    this.router[spec.method](spec.path, guard, ...(spec.before ?? []), handle);
+  }
+}

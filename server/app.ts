@@ -1,0 +1,67 @@
+import express from 'express';
+import helmet from 'helmet';
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import type { DataSource } from 'typeorm';
+import { ApiRegistry } from './api-registry';
+import type { AppContext } from './app-context';
+import { createSessionStore } from './auth/session-store';
+import { parseTrustProxy, type Env } from './env';
+import { authenticate } from './middleware/authenticate';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { verifyOrigin } from './middleware/verify-origin';
+import { registerFeatureRoutes } from './routes/all';
+
+export interface CreateAppOptions {
+  dataSource: DataSource;
+  env: Env;
+  /** Serve the built client from this folder (production); omitted in API tests and in development. */
+  clientDir?: string;
+}
+
+/** Builds the Express app (no listen): API, then the built client. Tests import this. */
+export function createApp({ dataSource, env, clientDir }: CreateAppOptions) {
+  const secureCookie = env.COOKIE_SECURE === 'auto' ? env.NODE_ENV === 'production' : env.COOKIE_SECURE === 'true';
+  const sessions = createSessionStore(dataSource, { secureCookie, sessionDays: env.SESSION_DAYS });
+  const context: AppContext = { dataSource, sessions, env };
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', parseTrustProxy(env.TRUST_PROXY));
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: true,
+        directives: {
+          'script-src': ["'self'"],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'font-src': ["'self'", 'data:'],
+          'connect-src': ["'self'"],
+          // Plain-HTTP local use must not be forced onto HTTPS.
+          'upgrade-insecure-requests': secureCookie ? [] : null,
+        },
+      },
+      strictTransportSecurity: secureCookie,
+    }),
+  );
+
+  const api = new ApiRegistry();
+  registerFeatureRoutes(api, context);
+  app.locals.api = api;
+
+  app.use('/api', express.json({ limit: '1mb' }), verifyOrigin, authenticate(sessions));
+  app.use(api.router);
+  app.use('/api', apiNotFound);
+
+  if (clientDir && existsSync(resolve(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h', setHeaders: immutableAssets }));
+    app.get('/*splat', (_req, res) => res.sendFile(resolve(clientDir, 'index.html'), { headers: { 'Cache-Control': 'no-cache' } }));
+  }
+  app.use(errorHandler);
+  return app;
+}
+
+function immutableAssets(res: express.Response, path: string) {
+  if (path.includes('/assets/')) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+}

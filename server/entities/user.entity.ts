@@ -1,0 +1,32 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import type { Role } from '../../shared/schemas/common';
+
+@Entity({ name: 'users' })
+export class UserEntity {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'varchar', length: 254, unique: true })
+  email: string;
+
+  @Column({ type: 'varchar', length: 120, name: 'display_name' })
+  displayName: string;
+
+  @Column({ type: 'enum', enum: ['admin', 'editor', 'writer', 'tester'] })
+  role: Role;
+
+  @Column({ type: 'varchar', length: 255, name: 'password_hash' })
+  passwordHash: string;
+
+  @Column({ type: 'boolean', default: true })
+  active: boolean;
+
+  @Column({ type: 'datetime', precision: 3, name: 'last_sign_in_at', nullable: true })
+  lastSignInAt: Date | null;
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
+  updatedAt: Date;
+}

@@ -1,0 +1,84 @@
+import { z } from 'zod';
+import type { RegisteredRoute } from './api-registry';
+import { apiErrorSchema, roles } from '../shared/schemas/common';
+
+function jsonSchema(schema: z.ZodType, io: 'input' | 'output') {
+  return z.toJSONSchema(schema, { io, target: 'draft-2020-12', unrepresentable: 'any' });
+}
+
+function rolesFor(route: RegisteredRoute): string[] {
+  if (route.access === 'public') return ['anonymous', ...roles];
+  if (route.access === 'signed-in') return [...roles];
+  return [...route.access];
+}
+
+/** OpenAPI 3.1 (whose schemas are JSON Schema 2020-12) from the same zod schemas the routes validate with. */
+export function buildOpenApiDocument(routes: RegisteredRoute[]) {
+  const paths: Record<string, Record<string, unknown>> = {};
+  const errorContent = { 'application/json': { schema: jsonSchema(apiErrorSchema, 'output') } };
+  for (const route of routes) {
+    const openApiPath = route.path.replace(/:(\w+)/g, '{$1}');
+    const parameters: unknown[] = [];
+    for (const [location, schema] of [
+      ['path', route.params],
+      ['query', route.query],
+    ] as const) {
+      if (!schema) continue;
+      const object = jsonSchema(schema, 'input') as { properties?: Record<string, unknown>; required?: string[] };
+      for (const [name, property] of Object.entries(object.properties ?? {})) {
+        parameters.push({ name, in: location, required: location === 'path' || !!object.required?.includes(name), schema: property });
+      }
+    }
+    for (const match of route.path.matchAll(/:(\w+)/g)) {
+      if (!parameters.some((p) => (p as { name: string }).name === match[1])) {
+        parameters.push({ name: match[1], in: 'path', required: true, schema: { type: 'string' } });
+      }
+    }
+    const allowed = rolesFor(route);
+    const operation: Record<string, unknown> = {
+      operationId: `${route.method}_${route.path.replace(/^\/api\//, '').replace(/[^a-zA-Z0-9]+/g, '_')}`,
+      summary: route.summary,
+      tags: [route.tag],
+      description: `Allowed: ${allowed.join(', ')}.`,
+      'x-benchwire-roles': allowed,
+      security: route.access === 'public' ? [] : [{ sessionCookie: [] }],
+      parameters,
+      responses: {
+        [String(route.successStatus)]: {
+          description: 'Success',
+          content: route.response
+            ? { 'application/json': { schema: jsonSchema(route.response, 'output') } }
+            : { [route.produces ?? 'application/json']: {} },
+        },
+        '400': { description: 'Invalid input', content: errorContent },
+        ...(route.access === 'public' ? {} : { '401': { description: 'Not signed in', content: errorContent } }),
+        ...(Array.isArray(route.access) ? { '403': { description: 'Role not allowed', content: errorContent } } : {}),
+      },
+    };
+    if (route.body) {
+      operation.requestBody = { required: true, content: { 'application/json': { schema: jsonSchema(route.body, 'input') } } };
+    }
+    if (route.multipart) {
+      const properties: Record<string, unknown> = {};
+      for (const [name, kind] of Object.entries(route.multipart.fields)) {
+        properties[name] = kind === 'file' ? { type: 'string', contentMediaType: 'application/octet-stream' } : { type: 'string', description: kind === 'json' ? 'JSON text' : undefined };
+      }
+      operation.requestBody = { required: true, content: { 'multipart/form-data': { schema: { type: 'object', properties } } } };
+    }
+    paths[openApiPath] ??= {};
+    paths[openApiPath][route.method] = operation;
+  }
+  return {
+    openapi: '3.1.0',
+    info: {
+      title: 'Benchwire API',
+      version: '1',
+      description:
+        'JSON API of Benchwire. Sign in with POST /api/auth/sign-in to get the session cookie; every request that changes data must send an Origin header naming this host. Errors are { error: { code, message, fields? } }.',
+    },
+    components: {
+      securitySchemes: { sessionCookie: { type: 'apiKey', in: 'cookie', name: 'benchwire_session' } },
+    },
+    paths,
+  };
+}

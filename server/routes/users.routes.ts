@@ -1,0 +1,42 @@
+import type { ApiRegistry } from '../api-registry';
+import type { AppContext } from '../app-context';
+import { UsersService } from '../services/users.service';
+import { idParamSchema } from '../../shared/schemas/common';
+import { createUserRequestSchema, updateUserRequestSchema, userListSchema, userSchema } from '../../shared/schemas/users';
+
+export function registerUserRoutes(api: ApiRegistry, { dataSource }: AppContext) {
+  const users = new UsersService(dataSource);
+
+  api.add({
+    method: 'get',
+    path: '/api/users',
+    access: ['admin'],
+    tag: 'Users',
+    summary: 'All staff accounts.',
+    response: userListSchema,
+    handler: async () => ({ users: await users.list() }),
+  });
+
+  api.add({
+    method: 'post',
+    path: '/api/users',
+    access: ['admin'],
+    tag: 'Users',
+    summary: 'Create a staff account.',
+    body: createUserRequestSchema,
+    response: userSchema,
+    handler: ({ user, body }) => users.create(user, body),
+  });
+
+  api.add({
+    method: 'patch',
+    path: '/api/users/:id',
+    access: ['admin'],
+    tag: 'Users',
+    summary: 'Edit, deactivate or reactivate an account, change its role or reset its password.',
+    params: idParamSchema,
+    body: updateUserRequestSchema,
+    response: userSchema,
+    handler: ({ user, params, body }) => users.update(user, params.id, body),
+  });
+}

@@ -1,0 +1,74 @@
+import type { DataSource } from 'typeorm';
+import { Not } from 'typeorm';
+import { UserEntity } from '../entities/user.entity';
+import { SessionEntity } from '../entities/session.entity';
+import { hashPassword, verifyPassword } from '../auth/passwords';
+import type { SessionStore } from '../auth/session-store';
+import { AppError } from '../errors';
+import { recordAudit } from './audit.service';
+import type { ChangePasswordRequest, CurrentUser, SessionInfo, SignInRequest } from '../../shared/schemas/auth';
+
+const wrongCredentials = () =>
+  new AppError('invalid_credentials', 401, 'That e-mail and password do not match an active account.');
+
+export class AuthService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly sessions: SessionStore,
+  ) {}
+
+  /** Checks the password and opens a session. Unknown, wrong and deactivated all answer the same. */
+  async signIn(input: SignInRequest, client: { userAgent: string | null; ipAddress: string | null }) {
+    const user = await this.dataSource.getRepository(UserEntity).findOneBy({ email: input.email });
+    const ok = await verifyPassword(user?.passwordHash ?? null, input.password);
+    if (!user || !ok || !user.active) throw wrongCredentials();
+    const session = await this.sessions.createSession(user.id, { ...client, createdAt: new Date() });
+    await this.dataSource.transaction(async (manager) => {
+      await manager.getRepository(UserEntity).update({ id: user.id }, { lastSignInAt: new Date() });
+      await recordAudit(manager, { actorId: user.id, action: 'session.signed_in', subjectType: 'user', subjectId: user.id, details: { ip: client.ipAddress } });
+    });
+    const current: CurrentUser = { id: user.id, email: user.email, displayName: user.displayName, role: user.role };
+    return { session, user: current };
+  }
+
+  signOut(sessionId: string) {
+    return this.sessions.invalidateSession(sessionId);
+  }
+
+  async listSessions(userId: number, currentSessionId: string): Promise<SessionInfo[]> {
+    const rows = await this.dataSource
+      .getRepository(SessionEntity)
+      .find({ where: { userId }, order: { createdAt: 'DESC' } });
+    return rows
+      .filter((row) => row.expiresAt.getTime() > Date.now())
+      .map((row) => ({
+        id: row.id,
+        current: row.id === currentSessionId,
+        createdAt: row.createdAt.toISOString(),
+        expiresAt: row.expiresAt.toISOString(),
+        userAgent: row.userAgent,
+        ipAddress: row.ipAddress,
+      }));
+  }
+
+  async revokeSession(userId: number, sessionId: string) {
+    const result = await this.dataSource.getRepository(SessionEntity).delete({ id: sessionId, userId });
+    if (!result.affected) throw new AppError('not_found', 404, 'That session was not found among yours.');
+  }
+
+  /** Changes the password and ends every other session of the user, in one transaction. */
+  async changePassword(userId: number, currentSessionId: string, input: ChangePasswordRequest) {
+    const user = await this.dataSource.getRepository(UserEntity).findOneByOrFail({ id: userId });
+    if (!(await verifyPassword(user.passwordHash, input.currentPassword))) {
+      throw new AppError('wrong_password', 400, 'Your current password is not right.', {
+        currentPassword: 'This is not your current password.',
+      });
+    }
+    const passwordHash = await hashPassword(input.newPassword);
+    await this.dataSource.transaction(async (manager) => {
+      await manager.getRepository(UserEntity).update({ id: userId }, { passwordHash });
+      await manager.getRepository(SessionEntity).delete({ userId, id: Not(currentSessionId) });
+      await recordAudit(manager, { actorId: userId, action: 'user.password_changed', subjectType: 'user', subjectId: userId });
+    });
+  }
+}

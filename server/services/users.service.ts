@@ -1,0 +1,101 @@
+import type { DataSource } from 'typeorm';
+import { UserEntity } from '../entities/user.entity';
+import { SessionEntity } from '../entities/session.entity';
+import { hashPassword } from '../auth/passwords';
+import { AppError, conflict, notFound } from '../errors';
+import { recordAudit } from './audit.service';
+import type { CreateUserRequest, UpdateUserRequest, User } from '../../shared/schemas/users';
+import type { CurrentUser } from '../../shared/schemas/auth';
+
+export function toUserDto(user: UserEntity): User {
+  return {
+    id: user.id,
+    email: user.email,
+    displayName: user.displayName,
+    role: user.role,
+    active: Boolean(user.active),
+    createdAt: user.createdAt.toISOString(),
+    updatedAt: user.updatedAt.toISOString(),
+    lastSignInAt: user.lastSignInAt ? user.lastSignInAt.toISOString() : null,
+  };
+}
+
+const emailTaken = () => conflict('email_taken', 'Another account already uses this e-mail address.', {
+  email: 'Another account already uses this e-mail address.',
+});
+
+function isDuplicateKey(error: unknown) {
+  return (error as { code?: string })?.code === 'ER_DUP_ENTRY';
+}
+
+export class UsersService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  async list(): Promise<User[]> {
+    const users = await this.dataSource.getRepository(UserEntity).find({ order: { displayName: 'ASC' } });
+    return users.map(toUserDto);
+  }
+
+  async create(actor: CurrentUser, input: CreateUserRequest): Promise<User> {
+    const passwordHash = await hashPassword(input.password);
+    try {
+      return await this.dataSource.transaction(async (manager) => {
+        const repo = manager.getRepository(UserEntity);
+        const { identifiers } = await repo.insert({
+          email: input.email,
+          displayName: input.displayName,
+          role: input.role,
+          passwordHash,
+          active: true,
+        });
+        const user = await repo.findOneByOrFail({ id: identifiers[0].id });
+        await recordAudit(manager, {
+          actorId: actor.id,
+          action: 'user.created',
+          subjectType: 'user',
+          subjectId: user.id,
+          details: { email: user.email, role: user.role },
+        });
+        return toUserDto(user);
+      });
+    } catch (error) {
+      if (isDuplicateKey(error)) throw emailTaken();
+      throw error;
+    }
+  }
+
+  async update(actor: CurrentUser, id: number, input: UpdateUserRequest): Promise<User> {
+    if (id === actor.id && (input.active === false || (input.role && input.role !== 'admin'))) {
+      throw new AppError('self_lockout', 409, 'You cannot deactivate yourself or remove your own admin role.');
+    }
+    const passwordHash = input.password ? await hashPassword(input.password) : undefined;
+    try {
+      return await this.dataSource.transaction(async (manager) => {
+        const repo = manager.getRepository(UserEntity);
+        const user = await repo.findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+        if (!user) throw notFound('That user');
+        const changes: Record<string, unknown> = {};
+        for (const key of ['email', 'displayName', 'role', 'active'] as const) {
+          if (input[key] !== undefined && input[key] !== user[key]) {
+            changes[key] = { from: user[key], to: input[key] };
+            (user as unknown as Record<string, unknown>)[key] = input[key];
+          }
+        }
+        if (passwordHash) {
+          user.passwordHash = passwordHash;
+          changes.password = 'reset by admin';
+        }
+        await repo.save(user);
+        // Deactivation, a role change and a password reset all end the user's sessions at once.
+        if (changes.active || changes.role || changes.password) {
+          await manager.getRepository(SessionEntity).delete({ userId: id });
+        }
+        await recordAudit(manager, { actorId: actor.id, action: 'user.updated', subjectType: 'user', subjectId: id, details: changes });
+        return toUserDto(await repo.findOneByOrFail({ id }));
+      });
+    } catch (error) {
+      if (isDuplicateKey(error)) throw emailTaken();
+      throw error;
+    }
+  }
+}

@@ -1,0 +1,57 @@
+import { z } from 'zod';
+import { instantSchema, roleSchema } from './common';
+
+export const PASSWORD_MIN = 12;
+export const PASSWORD_MAX = 128;
+
+/** New passwords: 12 to 128 characters, used as typed (no trimming, no truncation). */
+export const newPasswordSchema = z
+  .string()
+  .min(PASSWORD_MIN, `Use at least ${PASSWORD_MIN} characters.`)
+  .max(PASSWORD_MAX, `Use at most ${PASSWORD_MAX} characters.`);
+
+export const emailSchema = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .pipe(z.email('Enter an e-mail address such as name@example.org.').max(254));
+
+export const signInRequestSchema = z.object({
+  email: emailSchema,
+  // Sign-in accepts any length up to the maximum so old passwords still work.
+  password: z.string().min(1, 'Enter your password.').max(PASSWORD_MAX, `Use at most ${PASSWORD_MAX} characters.`),
+});
+export type SignInRequest = z.infer<typeof signInRequestSchema>;
+
+export const currentUserSchema = z.object({
+  id: z.number().int(),
+  email: z.string(),
+  displayName: z.string(),
+  role: roleSchema,
+});
+export type CurrentUser = z.infer<typeof currentUserSchema>;
+
+export const sessionResponseSchema = z.object({ user: currentUserSchema });
+
+export const changePasswordRequestSchema = z
+  .object({
+    currentPassword: z.string().min(1, 'Enter your current password.').max(PASSWORD_MAX),
+    newPassword: newPasswordSchema,
+    confirmPassword: z.string(),
+  })
+  .refine((v) => v.newPassword === v.confirmPassword, {
+    path: ['confirmPassword'],
+    message: 'The two new passwords do not match.',
+  });
+export type ChangePasswordRequest = z.infer<typeof changePasswordRequestSchema>;
+
+export const sessionInfoSchema = z.object({
+  id: z.string(),
+  current: z.boolean(),
+  createdAt: instantSchema,
+  expiresAt: instantSchema,
+  userAgent: z.string().nullable(),
+  ipAddress: z.string().nullable(),
+});
+export type SessionInfo = z.infer<typeof sessionInfoSchema>;
+export const sessionListSchema = z.object({ sessions: z.array(sessionInfoSchema) });

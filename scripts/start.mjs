@@ -15,7 +15,9 @@ async function shutdown(code) {
   if (stopping) return;
   stopping = true;
   for (const child of children) child.kill('SIGTERM');
-  await Promise.all(children.map((child) => new Promise((r) => (child.exitCode !== null ? r() : child.once('exit', r)))));
+  await Promise.all(
+    children.map((child) => new Promise((r) => (child.exitCode !== null ? r() : child.once('exit', r)))),
+  );
   if (database.startedHere) {
     console.log('[setup] stopping the private MariaDB');
     await database.stop();
@@ -28,7 +30,12 @@ process.on('SIGTERM', () => shutdown(0));
 try {
   runStep('tsx', ['server/cli/setup-database.ts', '--seed'], env);
   if (dev) {
-    children.push(startProcess('tsx', ['watch', '--clear-screen=false', 'server/index.ts'], { ...env, PORT: env.API_PORT ?? '3001' }));
+    children.push(
+      startProcess('tsx', ['watch', '--clear-screen=false', 'server/index.ts'], {
+        ...env,
+        PORT: env.API_PORT ?? '3001',
+      }),
+    );
     children.push(startProcess('vite', [], env));
   } else {
     runStep('vite', ['build', '--logLevel', 'warn'], env);

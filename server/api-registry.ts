@@ -41,9 +41,7 @@ export interface RouteSpec<BS extends z.ZodType, QS extends z.ZodType, PS extend
   produces?: string;
   successStatus?: number;
   before?: RequestHandler[];
-  handler: (
-    ctx: AuthedContext<z.output<BS>, z.output<QS>, z.output<PS>>,
-  ) => Promise<unknown> | unknown;
+  handler: (ctx: AuthedContext<z.output<BS>, z.output<QS>, z.output<PS>>) => Promise<unknown> | unknown;
 }
 
 export interface RegisteredRoute {

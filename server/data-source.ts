@@ -27,7 +27,8 @@ export function createDataSource(databaseUrl: string, options: { logging?: boole
     migrationsTransactionMode: 'each',
     timezone: 'Z',
     charset: 'utf8mb4_unicode_ci',
-    logging: options.logging ? ['query', 'error'] : ['error'],
+    // Failed queries surface through the error handler; logging them here too would also log expected conflicts.
+    logging: options.logging ? ['query', 'error'] : false,
     poolSize: options.poolSize ?? 10,
   });
 }
@@ -38,8 +39,9 @@ export function createDataSource(databaseUrl: string, options: { logging?: boole
  */
 export async function initializeDataSource(dataSource: DataSource): Promise<DataSource> {
   await dataSource.initialize();
-  const pool = (dataSource.driver as unknown as { pool?: { on(event: 'connection', cb: (c: RawConnection) => void): void } })
-    .pool;
+  const pool = (
+    dataSource.driver as unknown as { pool?: { on(event: 'connection', cb: (c: RawConnection) => void): void } }
+  ).pool;
   pool?.on('connection', (connection) => connection.query("SET time_zone = '+00:00'"));
   // The connection TypeORM opened while initialising predates the hook: it is the only idle one, so this reaches it.
   await dataSource.query("SET time_zone = '+00:00'");

@@ -26,7 +26,12 @@ export function buildOpenApiDocument(routes: RegisteredRoute[]) {
       if (!schema) continue;
       const object = jsonSchema(schema, 'input') as { properties?: Record<string, unknown>; required?: string[] };
       for (const [name, property] of Object.entries(object.properties ?? {})) {
-        parameters.push({ name, in: location, required: location === 'path' || !!object.required?.includes(name), schema: property });
+        parameters.push({
+          name,
+          in: location,
+          required: location === 'path' || !!object.required?.includes(name),
+          schema: property,
+        });
       }
     }
     for (const match of route.path.matchAll(/:(\w+)/g)) {
@@ -56,14 +61,23 @@ export function buildOpenApiDocument(routes: RegisteredRoute[]) {
       },
     };
     if (route.body) {
-      operation.requestBody = { required: true, content: { 'application/json': { schema: jsonSchema(route.body, 'input') } } };
+      operation.requestBody = {
+        required: true,
+        content: { 'application/json': { schema: jsonSchema(route.body, 'input') } },
+      };
     }
     if (route.multipart) {
       const properties: Record<string, unknown> = {};
       for (const [name, kind] of Object.entries(route.multipart.fields)) {
-        properties[name] = kind === 'file' ? { type: 'string', contentMediaType: 'application/octet-stream' } : { type: 'string', description: kind === 'json' ? 'JSON text' : undefined };
+        properties[name] =
+          kind === 'file'
+            ? { type: 'string', contentMediaType: 'application/octet-stream' }
+            : { type: 'string', description: kind === 'json' ? 'JSON text' : undefined };
       }
-      operation.requestBody = { required: true, content: { 'multipart/form-data': { schema: { type: 'object', properties } } } };
+      operation.requestBody = {
+        required: true,
+        content: { 'multipart/form-data': { schema: { type: 'object', properties } } },
+      };
     }
     paths[openApiPath] ??= {};
     paths[openApiPath][route.method] = operation;

@@ -53,7 +53,9 @@ function isRoot() {
 export function ensureDebianPackages(packages, binaryNames) {
   if (findBinary(binaryNames)) return;
   if (!isRoot()) {
-    console.error(`Benchwire needs ${packages.join(' ')}: run "sudo apt-get install -y ${packages.join(' ')}" and try again.`);
+    console.error(
+      `Benchwire needs ${packages.join(' ')}: run "sudo apt-get install -y ${packages.join(' ')}" and try again.`,
+    );
     process.exit(1);
   }
   console.log(`[setup] installing ${packages.join(', ')} from Debian (first run only)…`);

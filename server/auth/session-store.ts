@@ -4,7 +4,6 @@ import { Lucia, TimeSpan } from 'lucia';
 import type { Adapter, DatabaseSession, DatabaseUser } from 'lucia';
 import { LessThan, type DataSource } from 'typeorm';
 import { SessionEntity } from '../entities/session.entity';
-import { UserEntity } from '../entities/user.entity';
 import type { Role } from '../../shared/schemas/common';
 
 type SessionAttributes = { userAgent: string | null; ipAddress: string | null; createdAt: Date };

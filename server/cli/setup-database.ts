@@ -29,7 +29,8 @@ if (args.has('--drop')) process.exit(0);
 
 const dataSource = await initializeDataSource(createDataSource(url));
 const applied = await dataSource.runMigrations({ transaction: 'each' });
-if (applied.length) console.log(`[setup] applied ${applied.length} migration(s): ${applied.map((m) => m.name).join(', ')}`);
+if (applied.length)
+  console.log(`[setup] applied ${applied.length} migration(s): ${applied.map((m) => m.name).join(', ')}`);
 if (args.has('--seed')) {
   const seeded = await seedDemoOnce(dataSource);
   if (seeded) console.log('[setup] seeded the demo outlet (The Soak Sheet)');

@@ -25,7 +25,8 @@ export const errorHandler: ErrorRequestHandler = (error, _req, res, _next) => {
     return;
   }
   // Errors raised by body parsers and multer carry an HTTP status of their own.
-  const status = typeof error?.status === 'number' ? error.status : typeof error?.statusCode === 'number' ? error.statusCode : 500;
+  const status =
+    typeof error?.status === 'number' ? error.status : typeof error?.statusCode === 'number' ? error.statusCode : 500;
   if (status >= 400 && status < 500) {
     const code = error?.code === 'LIMIT_FILE_SIZE' ? 'payload_too_large' : (statusCodes[status] ?? 'bad_request');
     const message =
@@ -38,5 +39,7 @@ export const errorHandler: ErrorRequestHandler = (error, _req, res, _next) => {
     return;
   }
   console.error(error);
-  res.status(500).json({ error: { code: 'internal_error', message: 'Something went wrong on the server. It has been logged.' } });
+  res
+    .status(500)
+    .json({ error: { code: 'internal_error', message: 'Something went wrong on the server. It has been logged.' } });
 };

@@ -12,7 +12,13 @@ export function registerAuthRoutes(api: ApiRegistry, { dataSource, sessions, env
   const tooMany = () => {
     throw new AppError('rate_limited', 429, 'Too many sign-in attempts. Wait a few minutes and try again.');
   };
-  const perIp = rateLimit({ windowMs, limit: env.SIGN_IN_LIMIT_PER_IP, standardHeaders: 'draft-8', legacyHeaders: false, handler: tooMany });
+  const perIp = rateLimit({
+    windowMs,
+    limit: env.SIGN_IN_LIMIT_PER_IP,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: tooMany,
+  });
   // Per account, only failed attempts count, so a colleague on the same network is not locked out.
   const perAccount = rateLimit({
     windowMs,
@@ -20,7 +26,10 @@ export function registerAuthRoutes(api: ApiRegistry, { dataSource, sessions, env
     standardHeaders: false,
     legacyHeaders: false,
     skipSuccessfulRequests: true,
-    keyGenerator: (req) => `account:${String(req.body?.email ?? '').trim().toLowerCase()}`,
+    keyGenerator: (req) =>
+      `account:${String(req.body?.email ?? '')
+        .trim()
+        .toLowerCase()}`,
     handler: tooMany,
   });
 

@@ -2,7 +2,12 @@ import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
 import { UsersService } from '../services/users.service';
 import { idParamSchema } from '../../shared/schemas/common';
-import { createUserRequestSchema, updateUserRequestSchema, userListSchema, userSchema } from '../../shared/schemas/users';
+import {
+  createUserRequestSchema,
+  updateUserRequestSchema,
+  userListSchema,
+  userSchema,
+} from '../../shared/schemas/users';
 
 export function registerUserRoutes(api: ApiRegistry, { dataSource }: AppContext) {
   const users = new UsersService(dataSource);

@@ -11,11 +11,12 @@ export interface AuditInput {
 
 /** Records an audit entry inside the caller's transaction, so the entry and the change land together. */
 export async function recordAudit(manager: EntityManager, input: AuditInput): Promise<void> {
-  await manager.getRepository(AuditEntryEntity).insert({
+  const entry = manager.getRepository(AuditEntryEntity).create({
     actorId: input.actorId,
     action: input.action,
     subjectType: input.subjectType,
     subjectId: input.subjectId == null ? null : String(input.subjectId),
     details: input.details ?? null,
   });
+  await manager.getRepository(AuditEntryEntity).save(entry);
 }

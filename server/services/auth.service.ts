@@ -25,7 +25,13 @@ export class AuthService {
     const session = await this.sessions.createSession(user.id, { ...client, createdAt: new Date() });
     await this.dataSource.transaction(async (manager) => {
       await manager.getRepository(UserEntity).update({ id: user.id }, { lastSignInAt: new Date() });
-      await recordAudit(manager, { actorId: user.id, action: 'session.signed_in', subjectType: 'user', subjectId: user.id, details: { ip: client.ipAddress } });
+      await recordAudit(manager, {
+        actorId: user.id,
+        action: 'session.signed_in',
+        subjectType: 'user',
+        subjectId: user.id,
+        details: { ip: client.ipAddress },
+      });
     });
     const current: CurrentUser = { id: user.id, email: user.email, displayName: user.displayName, role: user.role };
     return { session, user: current };
@@ -68,7 +74,12 @@ export class AuthService {
     await this.dataSource.transaction(async (manager) => {
       await manager.getRepository(UserEntity).update({ id: userId }, { passwordHash });
       await manager.getRepository(SessionEntity).delete({ userId, id: Not(currentSessionId) });
-      await recordAudit(manager, { actorId: userId, action: 'user.password_changed', subjectType: 'user', subjectId: userId });
+      await recordAudit(manager, {
+        actorId: userId,
+        action: 'user.password_changed',
+        subjectType: 'user',
+        subjectId: userId,
+      });
     });
   }
 }

@@ -20,9 +20,10 @@ export function toUserDto(user: UserEntity): User {
   };
 }
 
-const emailTaken = () => conflict('email_taken', 'Another account already uses this e-mail address.', {
-  email: 'Another account already uses this e-mail address.',
-});
+const emailTaken = () =>
+  conflict('email_taken', 'Another account already uses this e-mail address.', {
+    email: 'Another account already uses this e-mail address.',
+  });
 
 function isDuplicateKey(error: unknown) {
   return (error as { code?: string })?.code === 'ER_DUP_ENTRY';
@@ -90,7 +91,13 @@ export class UsersService {
         if (changes.active || changes.role || changes.password) {
           await manager.getRepository(SessionEntity).delete({ userId: id });
         }
-        await recordAudit(manager, { actorId: actor.id, action: 'user.updated', subjectType: 'user', subjectId: id, details: changes });
+        await recordAudit(manager, {
+          actorId: actor.id,
+          action: 'user.updated',
+          subjectType: 'user',
+          subjectId: id,
+          details: changes,
+        });
         return toUserDto(await repo.findOneByOrFail({ id }));
       });
     } catch (error) {

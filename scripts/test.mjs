@@ -1,0 +1,84 @@
+#!/usr/bin/env node
+// `npm test`: set up what the suite needs (dependencies, Chromium, MariaDB), then lint, typecheck,
+// Vitest (unit + API integration on a throwaway database) and Playwright (production build, seeded
+// throwaway database), and stop what it started.
+import { randomBytes } from 'node:crypto';
+import { createServer } from 'node:net';
+import { ensureDebianPackages } from './lib/mariadb.mjs';
+import { ensureDatabase, ensureDependencies, runStep } from './lib/setup.mjs';
+
+const only = process.argv.slice(2); // e.g. `npm test -- unit` or `npm test -- e2e`
+const wants = (step) => only.length === 0 || only.includes(step);
+
+ensureDependencies();
+if (wants('e2e')) ensureDebianPackages(['chromium'], ['chromium']);
+const database = await ensureDatabase();
+
+const suffix = `${process.pid}_${randomBytes(3).toString('hex')}`;
+const withDatabase = (name) => {
+  const url = new URL(database.url);
+  url.pathname = `/${name}`;
+  return url.toString();
+};
+const unitUrl = withDatabase(`benchwire_test_unit_${suffix}`);
+const e2eUrl = withDatabase(`benchwire_test_e2e_${suffix}`);
+const created = [];
+
+function freePort() {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.unref();
+    server.on('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const { port } = server.address();
+      server.close(() => resolve(port));
+    });
+  });
+}
+
+let exitCode = 0;
+const started = Date.now();
+try {
+  if (wants('lint')) {
+    console.log('\n== lint and format');
+    runStep('eslint', ['.', '--max-warnings=0']);
+    runStep('prettier', ['--check', '--log-level=warn', '.']);
+  }
+  if (wants('typecheck')) {
+    console.log('\n== typecheck');
+    runStep('tsc', ['--noEmit', '-p', 'tsconfig.json']);
+  }
+  if (wants('unit')) {
+    console.log('\n== vitest (unit and API integration on a throwaway MariaDB database)');
+    created.push(unitUrl);
+    runStep('tsx', ['server/cli/setup-database.ts', '--fresh'], { ...process.env, DATABASE_URL: unitUrl });
+    runStep('vitest', ['run'], { ...process.env, DATABASE_URL: unitUrl, NODE_ENV: 'test' });
+  }
+  if (wants('e2e')) {
+    console.log('\n== playwright (production build in Debian Chromium on a seeded throwaway database)');
+    created.push(e2eUrl);
+    runStep('tsx', ['server/cli/setup-database.ts', '--fresh', '--seed', '--quiet'], {
+      ...process.env,
+      DATABASE_URL: e2eUrl,
+    });
+    runStep('vite', ['build', '--logLevel', 'warn']);
+    const port = await freePort();
+    runStep('playwright', ['test'], { ...process.env, DATABASE_URL: e2eUrl, E2E_PORT: String(port) });
+  }
+} catch (error) {
+  console.error(`\n[test] ${error.message}`);
+  exitCode = error.exitCode ?? 1;
+} finally {
+  for (const url of created) {
+    try {
+      runStep('tsx', ['server/cli/setup-database.ts', '--drop'], { ...process.env, DATABASE_URL: url });
+    } catch {
+      console.error(`[test] could not drop ${url.replace(/:[^:@/]*@/, ':***@')}`);
+    }
+  }
+  if (database.startedHere) await database.stop();
+}
+console.log(
+  `\n[test] ${exitCode === 0 ? 'all steps passed' : 'FAILED'} in ${Math.round((Date.now() - started) / 1000)} s`,
+);
+process.exit(exitCode);

@@ -1,0 +1,124 @@
+import { randomBytes } from 'node:crypto';
+import { beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import type { Router } from 'express';
+import { SessionEntity } from '../../server/entities/session.entity';
+import { roles, type Role } from '../../shared/schemas/common';
+import { createTestUser, testApp, testDataSource, TEST_HOST, TEST_ORIGIN, type TestApp } from './support/test-app';
+
+type Caller = Role | 'anonymous';
+const everyone: Caller[] = ['anonymous', ...roles];
+const staff: Caller[] = [...roles];
+
+/**
+ * Who may call each API route. Every route registered on the Express router must have an entry here,
+ * so a new route cannot ship without someone deciding who may call it.
+ */
+const allowed: Record<string, Caller[]> = {
+  'GET /api/health': everyone,
+  'GET /api/openapi.json': everyone,
+  'POST /api/auth/sign-in': everyone,
+  'POST /api/auth/sign-out': staff,
+  'GET /api/auth/session': staff,
+  'POST /api/account/password': staff,
+  'GET /api/account/sessions': staff,
+  'DELETE /api/account/sessions/:sessionId': staff,
+  'GET /api/users': ['admin'],
+  'POST /api/users': ['admin'],
+  'PATCH /api/users/:id': ['admin'],
+};
+
+interface RouteLayer {
+  route?: { path: string; methods: Record<string, boolean> };
+  handle?: { stack?: RouteLayer[] };
+}
+
+/** Walks the Express router (and routers mounted without a path) for every /api route. */
+function registeredRoutes(router: Router): string[] {
+  const found: string[] = [];
+  const walk = (stack: RouteLayer[]) => {
+    for (const layer of stack) {
+      if (layer.route) {
+        for (const method of Object.keys(layer.route.methods)) {
+          if (method !== '_all' && layer.route.path.startsWith('/api/'))
+            found.push(`${method.toUpperCase()} ${layer.route.path}`);
+        }
+      } else if (layer.handle?.stack) {
+        walk(layer.handle.stack);
+      }
+    }
+  };
+  walk((router as unknown as { stack: RouteLayer[] }).stack);
+  return [...new Set(found)];
+}
+
+let app: TestApp;
+const cookies = new Map<Role, () => Promise<string>>();
+
+beforeAll(async () => {
+  app = await testApp({ SIGN_IN_LIMIT_PER_IP: '100000', SIGN_IN_LIMIT_PER_ACCOUNT: '100000' });
+  const ds = await testDataSource();
+  for (const role of roles) {
+    const user = await createTestUser(role);
+    // A fresh session per call, so routes that end a session do not spoil the next call.
+    cookies.set(role, async () => {
+      const id = randomBytes(20).toString('hex');
+      await ds
+        .getRepository(SessionEntity)
+        .insert({ id, userId: user.id, expiresAt: new Date(Date.now() + 3_600_000) });
+      return `benchwire_session=${id}`;
+    });
+  }
+});
+
+const routes = () => registeredRoutes(app.router as unknown as Router);
+
+describe('role × route matrix', () => {
+  it('every registered /api route has an entry in the table, and every entry is a registered route', () => {
+    const registered = routes();
+    expect(registered.length).toBeGreaterThan(5);
+    expect(
+      registered.filter((r) => !(r in allowed)),
+      'routes missing from the access table',
+    ).toEqual([]);
+    expect(
+      Object.keys(allowed).filter((r) => !registered.includes(r)),
+      'table entries with no route',
+    ).toEqual([]);
+  });
+
+  it('each caller gets the expected answer from each route', async () => {
+    const failures: string[] = [];
+    for (const route of routes()) {
+      const [method, path] = route.split(' ');
+      const url = path.replace(/:(\w+)/g, '999999');
+      for (const caller of everyone) {
+        let call = request(app)[method.toLowerCase() as 'get'](url).set('Host', TEST_HOST).set('Origin', TEST_ORIGIN);
+        if (caller !== 'anonymous') call = call.set('Cookie', await cookies.get(caller)!());
+        if (method !== 'GET' && method !== 'DELETE') call = call.send({});
+        const status = (await call).status;
+        const mayCall = allowed[route]?.includes(caller);
+        const expected = mayCall ? 'not 401/403/5xx' : caller === 'anonymous' ? '401' : '403';
+        const ok = mayCall
+          ? ![401, 403].includes(status) && status < 500
+          : status === (caller === 'anonymous' ? 401 : 403);
+        if (!ok) failures.push(`${route} as ${caller}: got ${status}, expected ${expected}`);
+      }
+    }
+    expect(failures).toEqual([]);
+  });
+
+  it('the OpenAPI document lists every route with the roles that may call it', async () => {
+    const document = (await request(app).get('/api/openapi.json')).body;
+    expect(document.openapi).toBe('3.1.0');
+    for (const route of routes()) {
+      const [method, path] = route.split(' ');
+      const operation = document.paths[path.replace(/:(\w+)/g, '{$1}')]?.[method.toLowerCase()];
+      expect(operation, `${route} is missing from openapi.json`).toBeTruthy();
+      const expectedRoles = allowed[route].filter((c) => c !== 'anonymous');
+      expect(operation['x-benchwire-roles'].filter((c: string) => c !== 'anonymous').sort()).toEqual(
+        [...expectedRoles].sort(),
+      );
+    }
+  });
+});

@@ -1,0 +1,92 @@
+import { randomBytes } from 'node:crypto';
+import request from 'supertest';
+import type { DataSource } from 'typeorm';
+import { createApp } from '../../../server/app';
+import { createDataSource, initializeDataSource } from '../../../server/data-source';
+import { loadEnv, type Env } from '../../../server/env';
+import { hashPassword } from '../../../server/auth/passwords';
+import { UserEntity } from '../../../server/entities/user.entity';
+import type { Role } from '../../../shared/schemas/common';
+
+/** Every request from the test "browser" names this host, and sends a matching Origin (CSRF check). */
+export const TEST_HOST = 'benchwire.test';
+export const TEST_ORIGIN = `http://${TEST_HOST}`;
+
+let dataSource: DataSource | null = null;
+
+export function testEnv(overrides: Partial<Record<keyof Env, string>> = {}): Env {
+  return loadEnv({ ...process.env, NODE_ENV: 'test', COOKIE_SECURE: 'false', ...overrides });
+}
+
+/** The file's DataSource on the throwaway, migrated test database. */
+export async function testDataSource(): Promise<DataSource> {
+  if (!dataSource) {
+    const env = testEnv();
+    if (!/benchwire_test_|_dev$|_test$/.test(env.DATABASE_URL)) {
+      throw new Error('API tests run only against a throwaway database: use `npm test`.');
+    }
+    dataSource = await initializeDataSource(createDataSource(env.DATABASE_URL, { poolSize: 5 }));
+  }
+  return dataSource;
+}
+
+export async function closeTestContext() {
+  await dataSource?.destroy();
+  dataSource = null;
+}
+
+/** A fresh app on the test database; each call has its own rate-limit counters. */
+export async function testApp(overrides: Partial<Record<keyof Env, string>> = {}) {
+  return createApp({ dataSource: await testDataSource(), env: testEnv(overrides) });
+}
+
+export type TestApp = Awaited<ReturnType<typeof testApp>>;
+
+export function uniqueEmail(label = 'user') {
+  return `${label}-${randomBytes(5).toString('hex')}@test.soaksheet.example`;
+}
+
+export interface TestUser {
+  id: number;
+  email: string;
+  password: string;
+  role: Role;
+  displayName: string;
+}
+
+/** Creates an active staff account directly in the database. */
+export async function createTestUser(
+  role: Role,
+  overrides: Partial<{ email: string; password: string; displayName: string; active: boolean }> = {},
+): Promise<TestUser> {
+  const ds = await testDataSource();
+  const email = overrides.email ?? uniqueEmail(role);
+  const password = overrides.password ?? `pw-${randomBytes(8).toString('hex')}`;
+  const displayName = overrides.displayName ?? `Test ${role} ${randomBytes(2).toString('hex')}`;
+  const saved = await ds.getRepository(UserEntity).save(
+    ds.getRepository(UserEntity).create({
+      email,
+      displayName,
+      role,
+      passwordHash: await hashPassword(password),
+      active: overrides.active ?? true,
+    }),
+  );
+  return { id: saved.id, email, password, role, displayName };
+}
+
+/** A cookie-keeping client that sends the test Host and a same-site Origin on every request. */
+export function client(app: TestApp) {
+  return request.agent(app).set('Host', TEST_HOST).set('Origin', TEST_ORIGIN);
+}
+
+export type Client = ReturnType<typeof client>;
+
+/** A client signed in as a new (or given) user of the role. */
+export async function signedIn(app: TestApp, roleOrUser: Role | TestUser) {
+  const user = typeof roleOrUser === 'string' ? await createTestUser(roleOrUser) : roleOrUser;
+  const agent = client(app);
+  const response = await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+  if (response.status !== 200) throw new Error(`sign-in failed for ${user.email}: ${response.status} ${response.text}`);
+  return { agent, user };
+}

@@ -1,0 +1,73 @@
+import { z } from 'zod';
+import { isKnownCurrency } from '../domain/planning/money';
+import { isValidTimeZone } from '../domain/planning/loan-overdue';
+
+/** A calendar date without time or zone, YYYY-MM-DD (release dates, due dates, return-by dates). */
+export const calendarDateSchema = z.iso.date('Enter a date as YYYY-MM-DD.');
+
+/** ISO 4217 currency code, e.g. EUR. Upper-cased on input. */
+export const currencySchema = z
+  .string()
+  .trim()
+  .toUpperCase()
+  .refine((code) => isKnownCurrency(code), 'Enter an ISO 4217 currency code such as EUR, GBP or USD.');
+
+/** A sales region code, e.g. DE, GB, US or EU: 2–8 capital letters or digits. Upper-cased on input. */
+export const regionSchema = z
+  .string()
+  .trim()
+  .toUpperCase()
+  .regex(/^[A-Z0-9]{2,8}$/, 'Enter a region code of 2–8 letters or digits, e.g. DE, GB, US or EU.');
+
+/** IANA time zone name, e.g. Europe/Berlin. */
+export const timeZoneSchema = z
+  .string()
+  .trim()
+  .min(1)
+  .max(64)
+  .refine((zone) => isValidTimeZone(zone), 'Enter an IANA time zone such as Europe/Berlin or UTC.');
+
+/** Integer amount in the currency's minor unit (cents for EUR). */
+export const amountMinorSchema = z
+  .number()
+  .int('Amounts are whole minor units (e.g. cents).')
+  .min(0, 'Amounts cannot be negative.')
+  .max(2_000_000_000, 'The amount is too large.');
+
+/** A money amount: integer minor units plus ISO 4217 currency. */
+export const moneySchema = z.object({ amountMinor: amountMinorSchema, currency: currencySchema });
+export type Money = z.infer<typeof moneySchema>;
+
+/** A measurement with a fixed number of decimals (it is stored as DECIMAL with that scale). */
+export function decimalSchema(min: number, max: number, scale: number, unit: string) {
+  const factor = 10 ** scale;
+  return z
+    .number()
+    .min(min, `Use at least ${min} ${unit}.`)
+    .max(max, `Use at most ${max} ${unit}.`)
+    .refine(
+      (value) => Math.abs(Math.round(value * factor) - value * factor) < 1e-6,
+      `Use at most ${scale} decimal place${scale === 1 ? '' : 's'}.`,
+    );
+}
+
+/** Optional free text: trimmed, empty becomes null. */
+export function optionalTextSchema(max: number) {
+  return z
+    .string()
+    .trim()
+    .max(max, `Use at most ${max} characters.`)
+    .nullable()
+    .optional()
+    .transform((value) => (value ? value : null));
+}
+
+export function requiredTextSchema(max: number, emptyMessage = 'This cannot be empty.') {
+  return z.string().trim().min(1, emptyMessage).max(max, `Use at most ${max} characters.`);
+}
+
+export const idSchema = z.number().int().positive();
+
+/** A staff member as other records mention them. */
+export const personRefSchema = z.object({ id: z.number().int(), displayName: z.string() });
+export type PersonRef = z.infer<typeof personRefSchema>;

@@ -1,0 +1,204 @@
+import Papa from 'papaparse';
+import type { ParseError } from '../schemas/analysis';
+import { looksLikeData } from './log-cell-value';
+import { ParseErrorList, cellLabel } from './parse-error-list';
+
+export type Delimiter = ',' | ';' | '\t';
+
+/** A logger export split into preamble, header and raw data cells; nothing is interpreted yet. */
+export interface LoggerTable {
+  delimiter: Delimiter;
+  decimalComma: boolean;
+  preambleLines: string[];
+  /** 1-based line of the header in the file. */
+  headerRow: number;
+  columns: string[];
+  rows: string[][];
+  /** 1-based file line of each data row. */
+  rowNumbers: Int32Array;
+}
+
+export type LoggerTableOutcome = { ok: true; table: LoggerTable } | { ok: false; errors: ParseError[] };
+
+const delimiterCandidates: Delimiter[] = ['\t', ';', ','];
+/** Loggers write a few lines of preamble (device, start time, interval); the header is found within these lines. */
+const headerSearchLines = 200;
+/** Data rows checked after a candidate header. */
+const headerConfirmRows = 5;
+const decimalCommaPattern = /^\s*[+-]?\d+,\d+\s*$/;
+
+function isBlank(row: readonly string[]): boolean {
+  for (const cell of row) if (cell.trim() !== '') return false;
+  return true;
+}
+
+function filledWidth(row: readonly string[]): number {
+  let width = row.length;
+  while (width > 0 && row[width - 1].trim() === '') width--;
+  return width;
+}
+
+function isHeaderLike(row: readonly string[]): boolean {
+  const filled = row.filter((cell) => cell.trim() !== '');
+  if (row.length < 2 || filled.length < 2) return false;
+  const names = filled.filter((cell) => !looksLikeData(cell, true)).length;
+  return names * 2 >= filled.length;
+}
+
+function isDataLike(row: readonly string[], headerWidth: number): boolean {
+  const width = filledWidth(row);
+  if (width < 2 || width > headerWidth) return false;
+  let data = 0;
+  let filled = 0;
+  for (let index = 0; index < width; index++) {
+    if (row[index].trim() === '') continue;
+    filled++;
+    if (looksLikeData(row[index], true)) data++;
+  }
+  return data >= 2 && data * 2 >= filled;
+}
+
+function findHeader(rows: readonly string[][]): number {
+  for (let index = 0; index < rows.length; index++) {
+    if (!isHeaderLike(rows[index])) continue;
+    const width = rows[index].length;
+    let confirmed = 0;
+    let rejected = false;
+    for (let next = index + 1; next < rows.length && confirmed < headerConfirmRows; next++) {
+      if (isBlank(rows[next])) continue;
+      if (!isDataLike(rows[next], width)) {
+        rejected = true;
+        break;
+      }
+      confirmed++;
+    }
+    if (!rejected && confirmed > 0) return index;
+  }
+  return -1;
+}
+
+function lineStartOffset(text: string, line: number): number {
+  let offset = 0;
+  for (let current = 0; current < line; current++) {
+    const next = text.indexOf('\n', offset);
+    if (next < 0) return text.length;
+    offset = next + 1;
+  }
+  return offset;
+}
+
+function uniqueColumnNames(header: readonly string[]): string[] {
+  const seen = new Map<string, number>();
+  return header.map((raw, index) => {
+    const base = raw.trim() || `Column ${index + 1}`;
+    const count = (seen.get(base.toLowerCase()) ?? 0) + 1;
+    seen.set(base.toLowerCase(), count);
+    return count === 1 ? base : `${base} (${count})`;
+  });
+}
+
+function noHeaderError(sampleRows: readonly string[][]): ParseError {
+  const dataRow = sampleRows.findIndex((row) => row.some((cell) => looksLikeData(cell, true)));
+  if (dataRow < 0) {
+    const headerRow = sampleRows.findIndex(isHeaderLike);
+    return {
+      row: headerRow >= 0 ? headerRow + 2 : null,
+      column: null,
+      code: 'no-numeric-data',
+      message:
+        'No numeric data: expected a header row of column names followed by rows of numbers (a time and one value per channel).',
+    };
+  }
+  return {
+    row: dataRow + 1,
+    column: null,
+    code: 'no-header',
+    message: `${cellLabel(dataRow + 1, null)}: expected a header row of column names (for example Time, VRM 1, Ambient) above the numeric rows, with the columns separated by commas, semicolons or tabs.`,
+  };
+}
+
+/** Finds preamble, delimiter, decimal separator and header, then splits the data rows with papaparse. */
+export function parseLoggerTable(input: string): LoggerTableOutcome {
+  let text = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
+  if (text.indexOf('\n') < 0 && text.indexOf('\r') >= 0) text = text.replace(/\r/g, '\n');
+  if (text.trim() === '') {
+    return { ok: false, errors: [{ row: null, column: null, code: 'empty-file', message: 'The file is empty.' }] };
+  }
+
+  const sampleEnd = lineStartOffset(text, headerSearchLines);
+  const sample = text.slice(0, sampleEnd);
+  let best: { delimiter: Delimiter; rows: string[][]; headerIndex: number } | null = null;
+  let fallbackRows: string[][] = [];
+  for (const delimiter of delimiterCandidates) {
+    const rows = Papa.parse<string[]>(sample, { delimiter, skipEmptyLines: false }).data;
+    if (delimiter === ',') fallbackRows = rows;
+    const headerIndex = findHeader(rows);
+    if (headerIndex < 0) continue;
+    if (!best || rows[headerIndex].length > best.rows[best.headerIndex].length) best = { delimiter, rows, headerIndex };
+  }
+  if (!best) return { ok: false, errors: [noHeaderError(fallbackRows)] };
+
+  const { delimiter, headerIndex } = best;
+  const header = best.rows[headerIndex];
+  const width = header.length;
+  const columns = uniqueColumnNames(header);
+  const preambleLines = text
+    .slice(0, lineStartOffset(text, headerIndex))
+    .split('\n')
+    .map((line) => line.trimEnd())
+    .filter((line) => line !== '');
+
+  const body = Papa.parse<string[]>(text.slice(lineStartOffset(text, headerIndex + 1)), {
+    delimiter,
+    skipEmptyLines: false,
+  });
+  const errors = new ParseErrorList();
+  const firstBodyLine = headerIndex + 2;
+  for (const error of body.errors) {
+    const row = error.row === undefined ? null : firstBodyLine + error.row;
+    errors.add(row, null, 'malformed-row', `${cellLabel(row, null)}: ${error.message}.`);
+  }
+
+  const rows: string[][] = [];
+  const rowNumbers = new Int32Array(body.data.length);
+  for (let index = 0; index < body.data.length; index++) {
+    const row = body.data[index];
+    if (row[0].trim() === '' && isBlank(row)) continue;
+    if (row.length > width) {
+      const extra = filledWidth(row);
+      if (extra > width) {
+        const line = firstBodyLine + index;
+        errors.add(
+          line,
+          null,
+          'extra-cells',
+          `${cellLabel(line, null)}: ${extra} cells, but the header (row ${headerIndex + 1}) names ${width} columns.`,
+        );
+        continue;
+      }
+    }
+    rowNumbers[rows.length] = firstBodyLine + index;
+    rows.push(row);
+  }
+  if (!errors.isEmpty) return { ok: false, errors: errors.list() };
+
+  let decimalComma = false;
+  if (delimiter !== ',') {
+    for (let index = 0; index < Math.min(rows.length, 50) && !decimalComma; index++) {
+      decimalComma = rows[index].some((cell) => decimalCommaPattern.test(cell));
+    }
+  }
+
+  return {
+    ok: true,
+    table: {
+      delimiter,
+      decimalComma,
+      preambleLines,
+      headerRow: headerIndex + 1,
+      columns,
+      rows,
+      rowNumbers: rowNumbers.subarray(0, rows.length),
+    },
+  };
+}

@@ -1,0 +1,81 @@
+import {
+  analysisRequestSchema,
+  type AnalysisRequestInput,
+  type AnalysisResult,
+  type LogPreview,
+  type ParseError,
+} from '../schemas/analysis';
+import { guessColumnMapping, guessColumnRole, unitFromColumnName } from './log-column-guess';
+import { detectTimeFormat } from './log-time-value';
+import { parseLoggerTable, type LoggerTable } from './logger-table';
+import { guessTimeColumn, readMappedLog } from './read-mapped-log';
+import { analyzeRun } from './run-analysis';
+
+/** Data rows shown in the preview. */
+export const previewRowCount = 20;
+
+export type LogPreviewOutcome =
+  { ok: true; preview: LogPreview; table: LoggerTable } | { ok: false; preview: null; errors: ParseError[] };
+
+export type PreviewAndAnalyzeOutcome =
+  | { ok: true; preview: LogPreview; analysis: AnalysisResult }
+  | { ok: false; preview: LogPreview | null; errors: ParseError[] };
+
+function buildPreview(table: LoggerTable): LogPreview {
+  const timeIndex = guessTimeColumn(table);
+  const timeColumn = timeIndex < 0 ? null : table.columns[timeIndex];
+  return {
+    delimiter: table.delimiter,
+    decimalSeparator: table.decimalComma ? ',' : '.',
+    preambleLines: table.preambleLines,
+    headerRow: table.headerRow,
+    columns: table.columns.map((name, index) => ({
+      index,
+      name,
+      guessedRole: index === timeIndex ? 'time' : guessColumnRole(name) === 'time' ? 'other' : guessColumnRole(name),
+      guessedUnit: unitFromColumnName(name),
+    })),
+    timeColumn,
+    timeFormat: timeColumn === null ? null : detectTimeFormat(table.rows[0][timeIndex], timeColumn),
+    rows: table.rows.slice(0, previewRowCount),
+    dataRowCount: table.rows.length,
+    guessedMapping: guessColumnMapping(table.columns, timeColumn),
+  };
+}
+
+/** First step of an upload: how Benchwire reads the file (delimiter, header, columns, guessed roles), no analysis. */
+export function previewLog(text: string): LogPreviewOutcome {
+  const parsed = parseLoggerTable(text);
+  if (!parsed.ok) return { ok: false, preview: null, errors: parsed.errors };
+  return { ok: true, preview: buildPreview(parsed.table), table: parsed.table };
+}
+
+/**
+ * The whole engine behind POST /api/analysis/preview: read the logger file, apply the tester's mapping (or the
+ * guessed one, flagged), analyse the run. Pure; bad input comes back as parse errors with row and column.
+ */
+export function previewAndAnalyze(text: string, requestInput: AnalysisRequestInput): PreviewAndAnalyzeOutcome {
+  const request = analysisRequestSchema.parse(requestInput);
+  const previewed = previewLog(text);
+  if (!previewed.ok) return previewed;
+  const { preview, table } = previewed;
+  const mapping = request.mapping ?? preview.guessedMapping;
+  if (!mapping) {
+    return {
+      ok: false,
+      preview,
+      errors: [
+        {
+          row: table.headerRow,
+          column: null,
+          code: 'mapping-incomplete',
+          message: `No VRM probe column could be guessed from the header (${table.columns.join(', ')}): choose the VRM columns.`,
+        },
+      ],
+    };
+  }
+  const mapped = readMappedLog(table, mapping, request.options);
+  if (!mapped.ok) return { ok: false, preview, errors: mapped.errors };
+  const analysis = analyzeRun(mapped.log, request.options, { mappingGuessed: request.mapping === undefined });
+  return { ok: true, preview, analysis };
+}

@@ -1,0 +1,51 @@
+import { paths } from '../lib/paths';
+import { roles, type Role } from '../../shared/schemas/common';
+
+export interface NavigationEntry {
+  to: string;
+  label: string;
+  /** Who sees the entry and may open the page (the server checks again on every request). */
+  roles: readonly Role[];
+  /** One line for the dashboard's list of places. */
+  description: string;
+  /** Match the path exactly (for "/"). */
+  end?: boolean;
+}
+
+const everyone = roles;
+
+/**
+ * The side navigation, in order. A new page adds one line here (and its route in router.tsx); Benchwire's names
+ * for the places to come are Catalog, Roundups, Matrix, My bench, Samples and Benches.
+ */
+export const navigation: readonly NavigationEntry[] = [
+  {
+    to: paths.dashboard,
+    label: 'Dashboard',
+    roles: everyone,
+    end: true,
+    description: 'Where you start: what your role does and where to go next.',
+  },
+  {
+    to: paths.users,
+    label: 'Users',
+    roles: ['admin'],
+    description: 'Staff accounts: add colleagues, set roles, deactivate accounts, reset passwords.',
+  },
+  {
+    to: paths.account,
+    label: 'Account',
+    roles: everyone,
+    description: 'Your details, your password and the devices you are signed in on.',
+  },
+];
+
+export function navigationFor(role: Role): NavigationEntry[] {
+  return navigation.filter((entry) => entry.roles.includes(role));
+}
+
+/** Whether a role may open a page; pages without a navigation entry are open to every signed-in role. */
+export function canOpen(path: string, role: Role): boolean {
+  const entry = navigation.find((candidate) => candidate.to === path);
+  return entry ? entry.roles.includes(role) : true;
+}

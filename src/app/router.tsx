@@ -1,0 +1,68 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter, type LoaderFunction } from 'react-router';
+import type { ComponentType } from 'react';
+import { setUnauthorizedHandler } from '../lib/api-client';
+import { paths } from '../lib/paths';
+import { sessionKey } from '../features/auth/api/auth-keys';
+import { LoadingState } from '../components/ui/loading-state';
+import * as appLayout from './routes/app-layout';
+import * as signIn from './routes/sign-in';
+import { RootErrorBoundary } from './routes/root-error-boundary';
+import { RouteErrorBoundary } from './routes/route-error-boundary';
+
+/** What every file in app/routes exports: the page, and optionally a loader that warms the query cache. */
+export interface RouteModule {
+  Component: ComponentType;
+  loader?: (queryClient: QueryClient) => LoaderFunction;
+}
+
+function FullPageLoading() {
+  return <LoadingState fullPage label="Opening Benchwire…" />;
+}
+
+/**
+ * All client routes. To add a page: create app/routes/<page>.tsx exporting Component (and loader), add a line to the
+ * children below, and a line to app/navigation.ts if it belongs in the side navigation.
+ */
+export function createAppRouter(queryClient: QueryClient) {
+  const load = (module: RouteModule) => ({ Component: module.Component, loader: module.loader?.(queryClient) });
+  // Pages load on first visit, so later heavy screens (editor, charts) do not weigh on sign-in.
+  const lazy = (importer: () => Promise<RouteModule>) => async () => load(await importer());
+
+  const router = createBrowserRouter([
+    {
+      id: 'root',
+      HydrateFallback: FullPageLoading,
+      ErrorBoundary: RootErrorBoundary,
+      children: [
+        { path: 'sign-in', ...load(signIn) },
+        {
+          id: 'app',
+          ...load(appLayout),
+          children: [
+            {
+              // Errors of a page show inside the frame, so the navigation stays usable.
+              ErrorBoundary: RouteErrorBoundary,
+              children: [
+                { index: true, lazy: lazy(() => import('./routes/dashboard')) },
+                { path: 'users', lazy: lazy(() => import('./routes/users')) },
+                { path: 'account', lazy: lazy(() => import('./routes/account')) },
+                { path: '*', lazy: lazy(() => import('./routes/not-found')) },
+              ],
+            },
+          ],
+        },
+      ],
+    },
+  ]);
+
+  // A request answered 401 means the session ended (expired, revoked, account deactivated): sign in again, then
+  // come back to the same page.
+  setUnauthorizedHandler(() => {
+    queryClient.setQueryData(sessionKey, null);
+    const { pathname, search } = router.state.location;
+    if (pathname !== '/sign-in') void router.navigate(paths.signIn(pathname + search), { replace: true });
+  });
+
+  return router;
+}

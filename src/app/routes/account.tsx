@@ -1,0 +1,29 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { PageHeader } from '../../components/ui/page-header';
+import { useSession } from '../../features/auth/api/get-session';
+import { sessionsQueryOptions } from '../../features/account/api/get-sessions';
+import { AccountDetails } from '../../features/account/components/account-details';
+import { ChangePasswordForm } from '../../features/account/components/change-password-form';
+import { SessionsPanel } from '../../features/account/components/sessions-panel';
+
+export function loader(queryClient: QueryClient) {
+  return async () => {
+    await queryClient.ensureQueryData(sessionsQueryOptions());
+    return null;
+  };
+}
+
+export function Component() {
+  const user = useSession();
+  if (!user) return null;
+  return (
+    <>
+      <PageHeader title="Account" description="Your own details, password and signed-in devices." />
+      <div className="grid grid-cols-1 gap-5 lg:grid-cols-2">
+        <AccountDetails user={user} />
+        <ChangePasswordForm />
+        <SessionsPanel className="lg:col-span-2" />
+      </div>
+    </>
+  );
+}

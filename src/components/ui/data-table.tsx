@@ -1,0 +1,235 @@
+import { useId, useMemo, useState, type ReactNode } from 'react';
+import { cx } from '../../lib/class-names';
+
+export type SortDirection = 'ascending' | 'descending';
+export interface SortState {
+  columnId: string;
+  direction: SortDirection;
+}
+
+export interface DataTableColumn<Row> {
+  id: string;
+  header: string;
+  cell: (row: Row) => ReactNode;
+  /** Makes the column sortable; null values sort last in either direction. */
+  sortValue?: (row: Row) => string | number | null;
+  /** Text the filter box searches in this column; string sort values are searched when this is absent. */
+  filterValue?: (row: Row) => string;
+  /** Right-aligned in the mono face with tabular figures: counts, temperatures, times. */
+  numeric?: boolean;
+  /** The cell that names the row, read out as the row's header. */
+  rowHeader?: boolean;
+  /** Hidden below this breakpoint (keeps phones readable); never hide the row header. */
+  hideBelow?: 'sm' | 'md' | 'lg';
+  className?: string;
+}
+
+export interface DataTableProps<Row> {
+  /** Names the table for screen readers (shown when `showCaption`). */
+  caption: string;
+  showCaption?: boolean;
+  rows: readonly Row[];
+  columns: readonly DataTableColumn<Row>[];
+  rowKey: (row: Row) => string | number;
+  initialSort?: SortState;
+  /** A filter box above the table; pass false to leave it out. */
+  filter?: { label: string; placeholder?: string } | false;
+  /** Singular and plural noun for the count line, e.g. ['user', 'users']. */
+  noun?: [string, string];
+  /** Extra controls next to the filter box. */
+  toolbar?: ReactNode;
+  /** A line under the table, e.g. which time zone the times are in. */
+  footnote?: ReactNode;
+  /** Shown instead of the table when there are no rows at all. */
+  empty?: ReactNode;
+  rowClassName?: (row: Row) => string | undefined;
+}
+
+const collator = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' });
+const hidden = { sm: 'hidden sm:table-cell', md: 'hidden md:table-cell', lg: 'hidden lg:table-cell' };
+
+function compare(a: string | number | null, b: string | number | null): number {
+  if (typeof a === 'number' && typeof b === 'number') return a - b;
+  return collator.compare(String(a), String(b));
+}
+
+/** A dense, sortable, filterable table: headers are buttons, the sorted one carries aria-sort. */
+export function DataTable<Row>({
+  caption,
+  showCaption = false,
+  rows,
+  columns,
+  rowKey,
+  initialSort,
+  filter = { label: 'Filter' },
+  noun = ['row', 'rows'],
+  toolbar,
+  footnote,
+  empty,
+  rowClassName,
+}: DataTableProps<Row>) {
+  const [sort, setSort] = useState<SortState | undefined>(initialSort);
+  const [query, setQuery] = useState('');
+  const captionId = useId();
+  const filterId = useId();
+
+  const visibleRows = useMemo(() => {
+    const needle = query.trim().toLocaleLowerCase();
+    let result = [...rows];
+    if (needle) {
+      result = result.filter((row) =>
+        columns.some((column) => {
+          const text = column.filterValue?.(row) ?? column.sortValue?.(row);
+          return typeof text === 'string' && text.toLocaleLowerCase().includes(needle);
+        }),
+      );
+    }
+    const column = sort && columns.find((candidate) => candidate.id === sort.columnId);
+    if (sort && column?.sortValue) {
+      const value = column.sortValue;
+      const factor = sort.direction === 'ascending' ? 1 : -1;
+      result.sort((a, b) => {
+        const left = value(a);
+        const right = value(b);
+        if (left === null || right === null) return left === right ? 0 : left === null ? 1 : -1;
+        return compare(left, right) * factor;
+      });
+    }
+    return result;
+  }, [rows, columns, query, sort]);
+
+  if (rows.length === 0 && empty) return <>{empty}</>;
+
+  const toggleSort = (columnId: string) =>
+    setSort((current) =>
+      current?.columnId === columnId
+        ? { columnId, direction: current.direction === 'ascending' ? 'descending' : 'ascending' }
+        : { columnId, direction: 'ascending' },
+    );
+
+  const [singular, plural] = noun;
+  const countText =
+    visibleRows.length === rows.length
+      ? `${rows.length} ${rows.length === 1 ? singular : plural}`
+      : `${visibleRows.length} of ${rows.length} ${plural} match`;
+
+  return (
+    <div>
+      {(filter || toolbar) && (
+        <div className="mb-2.5 flex flex-wrap items-end gap-3">
+          {filter && (
+            <div className="w-full sm:w-72">
+              <label htmlFor={filterId} className="mb-1 block text-sm font-semibold">
+                {filter.label}
+              </label>
+              <input
+                id={filterId}
+                type="search"
+                value={query}
+                onChange={(event) => setQuery(event.target.value)}
+                placeholder={filter.placeholder}
+                className="block w-full rounded-[3px] border border-edge bg-surface px-2.5 py-1.5 placeholder:text-muted focus-visible:border-copper"
+              />
+            </div>
+          )}
+          {toolbar}
+          <p aria-live="polite" className="numeric ml-auto pb-1.5 text-muted">
+            {countText}
+          </p>
+        </div>
+      )}
+      <div
+        role="region"
+        aria-labelledby={captionId}
+        tabIndex={0}
+        className="overflow-x-auto rounded-[3px] border border-rule bg-surface"
+      >
+        <table className="w-full border-collapse text-sm">
+          <caption id={captionId} className={showCaption ? 'px-3 py-2 text-left font-semibold' : 'sr-only'}>
+            {caption}
+          </caption>
+          <thead>
+            <tr className="border-b border-edge/70 bg-wash">
+              {columns.map((column) => {
+                const sorted = sort?.columnId === column.id ? sort.direction : undefined;
+                return (
+                  <th
+                    key={column.id}
+                    scope="col"
+                    aria-sort={column.sortValue ? (sorted ?? 'none') : undefined}
+                    className={cx(
+                      'px-3 py-1.5 text-xs font-semibold tracking-wide whitespace-nowrap text-muted uppercase',
+                      column.numeric ? 'text-right' : 'text-left',
+                      column.hideBelow && hidden[column.hideBelow],
+                    )}
+                  >
+                    {column.sortValue ? (
+                      <button
+                        type="button"
+                        onClick={() => toggleSort(column.id)}
+                        className={cx(
+                          'inline-flex items-center gap-1 rounded-[2px] uppercase hover:text-ink',
+                          sorted && 'text-ink',
+                          column.numeric && 'flex-row-reverse',
+                        )}
+                      >
+                        {column.header}
+                        <SortMark direction={sorted} />
+                      </button>
+                    ) : (
+                      column.header
+                    )}
+                  </th>
+                );
+              })}
+            </tr>
+          </thead>
+          <tbody>
+            {visibleRows.map((row) => (
+              <tr
+                key={rowKey(row)}
+                className={cx('border-b border-rule last:border-b-0 hover:bg-wash/60', rowClassName?.(row))}
+              >
+                {columns.map((column) => {
+                  const Cell = column.rowHeader ? 'th' : 'td';
+                  return (
+                    <Cell
+                      key={column.id}
+                      scope={column.rowHeader ? 'row' : undefined}
+                      className={cx(
+                        'px-3 py-1.5 align-middle',
+                        column.rowHeader && 'text-left font-medium',
+                        column.numeric && 'numeric text-right whitespace-nowrap',
+                        column.hideBelow && hidden[column.hideBelow],
+                        column.className,
+                      )}
+                    >
+                      {column.cell(row)}
+                    </Cell>
+                  );
+                })}
+              </tr>
+            ))}
+            {visibleRows.length === 0 && (
+              <tr>
+                <td colSpan={columns.length} className="px-3 py-6 text-center text-muted">
+                  Nothing matches “{query.trim()}”. Clear the filter to see all {plural}.
+                </td>
+              </tr>
+            )}
+          </tbody>
+        </table>
+      </div>
+      {footnote && <p className="mt-2 text-[0.8125rem] text-muted">{footnote}</p>}
+    </div>
+  );
+}
+
+function SortMark({ direction }: { direction?: SortDirection }) {
+  const glyph = direction === 'ascending' ? '▲' : direction === 'descending' ? '▼' : '↕';
+  return (
+    <span aria-hidden="true" className={cx('font-mono text-[0.625rem]', !direction && 'opacity-50')}>
+      {glyph}
+    </span>
+  );
+}

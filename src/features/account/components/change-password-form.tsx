@@ -1,0 +1,63 @@
+import { useState, type FormEvent } from 'react';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { FormErrorSummary } from '../../../components/ui/form-error-summary';
+import { Panel } from '../../../components/ui/panel';
+import { PasswordField } from '../../../components/ui/password-field';
+import { useZodForm } from '../../../lib/use-zod-form';
+import { changePasswordRequestSchema, PASSWORD_MIN } from '../../../../shared/schemas/auth';
+import { useChangePassword } from '../api/change-password';
+
+const emptyForm = { currentPassword: '', newPassword: '', confirmPassword: '' };
+
+export function ChangePasswordForm() {
+  const changePassword = useChangePassword();
+  const [changed, setChanged] = useState(false);
+  const form = useZodForm({
+    schema: changePasswordRequestSchema,
+    initialValues: emptyForm,
+    labels: { currentPassword: 'Current password', newPassword: 'New password', confirmPassword: 'New password again' },
+  });
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    setChanged(false);
+    const input = form.validate();
+    if (!input) return;
+    changePassword.mutate(input, {
+      onSuccess: () => {
+        form.reset();
+        setChanged(true);
+      },
+      onError: (error) => form.fail(error),
+    });
+  };
+
+  return (
+    <Panel title="Change password" description="Changing it signs you out on every other device.">
+      <form noValidate onSubmit={submit} className="max-w-md space-y-4">
+        {changed && (
+          <Alert tone="success" announce>
+            Your password is changed. Your other sessions have ended; this one stays signed in.
+          </Alert>
+        )}
+        <FormErrorSummary
+          title="The password was not changed"
+          items={form.summaryItems}
+          message={form.formError}
+          attempt={form.attempt}
+        />
+        <PasswordField {...form.field('currentPassword')} autoComplete="current-password" />
+        <PasswordField
+          {...form.field('newPassword')}
+          autoComplete="new-password"
+          description={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
+        />
+        <PasswordField {...form.field('confirmPassword')} autoComplete="new-password" />
+        <Button type="submit" variant="primary" pending={changePassword.isPending}>
+          Change password
+        </Button>
+      </form>
+    </Panel>
+  );
+}

@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { userSchema, type CreateUserRequest, type User } from '../../../../shared/schemas/users';
+import { userKeys } from './user-keys';
+
+export function createUser(input: CreateUserRequest): Promise<User> {
+  return apiClient.post('/api/users', input, { schema: userSchema });
+}
+
+export function useCreateUser() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createUser,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.all }),
+  });
+}

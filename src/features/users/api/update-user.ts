@@ -1,0 +1,22 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { userSchema, type UpdateUserRequest, type User } from '../../../../shared/schemas/users';
+import { userKeys } from './user-keys';
+
+export interface UpdateUserInput {
+  id: number;
+  /** Only the fields that change: a role change, deactivation or password reset ends the user's sessions. */
+  changes: UpdateUserRequest;
+}
+
+export function updateUser({ id, changes }: UpdateUserInput): Promise<User> {
+  return apiClient.patch(`/api/users/${id}`, changes, { schema: userSchema });
+}
+
+export function useUpdateUser() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateUser,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.all }),
+  });
+}

@@ -1,0 +1,53 @@
+import type { ReactNode } from 'react';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import type { User } from '../../../../shared/schemas/users';
+import { AccountAccess } from './account-access';
+import { ResetPasswordForm } from './reset-password-form';
+import { UserDetailsForm } from './user-details-form';
+
+export interface EditUserDialogProps {
+  /** The account being edited; kept while the dialog closes so its content does not vanish mid-animation. */
+  user: User | null;
+  open: boolean;
+  isSelf: boolean;
+  onClose: () => void;
+  onSaved: (user: User) => void;
+}
+
+export function EditUserDialog({ user, open, isSelf, onClose, onSaved }: EditUserDialogProps) {
+  return (
+    <Dialog
+      open={open}
+      onClose={onClose}
+      title={user ? `Edit ${user.displayName}` : 'Edit user'}
+      description={user?.email}
+      size="md"
+      footer={<Button onClick={onClose}>Close</Button>}
+    >
+      {user && (
+        // Keyed by account, so switching to another user starts from that user's values.
+        <div key={user.id} className="divide-y divide-rule">
+          <Section title="Details">
+            <UserDetailsForm user={user} isSelf={isSelf} onSaved={onSaved} />
+          </Section>
+          <Section title="Password">
+            <ResetPasswordForm user={user} isSelf={isSelf} onSaved={onSaved} />
+          </Section>
+          <Section title="Access">
+            <AccountAccess user={user} isSelf={isSelf} onSaved={onSaved} />
+          </Section>
+        </div>
+      )}
+    </Dialog>
+  );
+}
+
+function Section({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <section className="py-4 first:pt-0 last:pb-0">
+      <h3 className="mb-3 font-mono text-xs font-semibold tracking-wide text-muted uppercase">{title}</h3>
+      {children}
+    </section>
+  );
+}

@@ -1,0 +1,76 @@
+import { useState, type FormEvent } from 'react';
+import { Button } from '../../../components/ui/button';
+import { FormErrorSummary } from '../../../components/ui/form-error-summary';
+import { PasswordField } from '../../../components/ui/password-field';
+import { useZodForm } from '../../../lib/use-zod-form';
+import { PASSWORD_MIN } from '../../../../shared/schemas/auth';
+import { updateUserRequestSchema, type User } from '../../../../shared/schemas/users';
+import { useUpdateUser } from '../api/update-user';
+
+export interface ResetPasswordFormProps {
+  user: User;
+  isSelf: boolean;
+  onSaved: (user: User) => void;
+}
+
+const passwordOnly = updateUserRequestSchema.pick({ password: true }).required();
+
+export function ResetPasswordForm({ user, isSelf, onSaved }: ResetPasswordFormProps) {
+  const updateUser = useUpdateUser();
+  const [done, setDone] = useState<string | null>(null);
+  const form = useZodForm({
+    schema: passwordOnly,
+    initialValues: { password: '' },
+    labels: { password: 'New password' },
+  });
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    setDone(null);
+    const input = form.validate();
+    if (!input) return;
+    updateUser.mutate(
+      { id: user.id, changes: { password: input.password } },
+      {
+        onSuccess: (updated) => {
+          form.reset();
+          setDone(
+            `Password set. ${updated.displayName} has been signed out everywhere; give them the new one in person.`,
+          );
+          onSaved(updated);
+        },
+        onError: (error) => form.fail(error),
+      },
+    );
+  };
+
+  return (
+    <form noValidate onSubmit={submit} className="space-y-3">
+      <FormErrorSummary
+        title="The password was not set"
+        items={form.summaryItems}
+        message={form.formError}
+        attempt={form.attempt}
+      />
+      <PasswordField
+        {...form.field('password')}
+        autoComplete="new-password"
+        description={
+          isSelf
+            ? `At least ${PASSWORD_MIN} characters. This signs you out too; change your own password under Account instead.`
+            : `At least ${PASSWORD_MIN} characters. Setting it signs ${user.displayName} out on every device at once.`
+        }
+      />
+      <div className="flex flex-wrap items-center gap-3">
+        <Button type="submit" pending={updateUser.isPending}>
+          Set new password
+        </Button>
+        {done && (
+          <p role="status" className="text-sm text-teal">
+            {done}
+          </p>
+        )}
+      </div>
+    </form>
+  );
+}

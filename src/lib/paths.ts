@@ -1,0 +1,14 @@
+/** Every client URL in one place, so links and redirects cannot drift apart. */
+export const paths = {
+  dashboard: '/',
+  users: '/users',
+  account: '/account',
+  signIn: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
+} as const;
+
+/** Only a path on this site is an acceptable place to return to after signing in. */
+export function safeNextPath(next: string | null | undefined): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return paths.dashboard;
+  if (next.startsWith('/sign-in')) return paths.dashboard;
+  return next;
+}

@@ -1,0 +1,102 @@
+import { useCallback, useId, useMemo, useState, type ChangeEvent } from 'react';
+import type { z } from 'zod';
+import { describeSubmitError, zodFieldErrors, type FormErrorItem } from './form-errors';
+
+type Values = Record<string, string>;
+
+export interface UseZodFormOptions<Schema extends z.ZodType, V extends Values> {
+  /** The same schema the server validates the request with (from shared/schemas). */
+  schema: Schema;
+  initialValues: V;
+  /** Field labels in display order; used by the error summary. */
+  labels: Record<keyof V & string, string>;
+  /** Friendlier client-side messages for fields whose schema message reads technical (e.g. an enum). */
+  messages?: Partial<Record<keyof V & string, string>>;
+}
+
+/**
+ * Form state for plain controlled inputs: validates with a shared zod schema on submit, shows the server's field
+ * errors beside the fields, and never clears what was typed when something fails.
+ */
+export function useZodForm<Schema extends z.ZodType, V extends Values>({
+  schema,
+  initialValues,
+  labels,
+  messages,
+}: UseZodFormOptions<Schema, V>) {
+  type Field = keyof V & string;
+  const formId = useId();
+  const [values, setValues] = useState<V>(initialValues);
+  const [errors, setErrors] = useState<Partial<Record<Field, string>>>({});
+  const [formError, setFormError] = useState<string | undefined>();
+  const [attempt, setAttempt] = useState(0);
+
+  const fieldId = useCallback((name: Field) => `${formId}-${name}`, [formId]);
+
+  const setValue = useCallback((name: Field, value: string) => {
+    setValues((current) => ({ ...current, [name]: value }));
+    setErrors((current) => {
+      if (!(name in current)) return current;
+      const next = { ...current };
+      delete next[name];
+      return next;
+    });
+  }, []);
+
+  /** Props for a TextField / Select / PasswordField. */
+  const field = (name: Field) => ({
+    id: fieldId(name),
+    name,
+    label: labels[name],
+    value: values[name],
+    error: errors[name],
+    onChange: (event: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => setValue(name, event.target.value),
+  });
+
+  /** Parses the values; on failure shows the problems and returns null. */
+  const validate = (): z.output<Schema> | null => {
+    const result = schema.safeParse(values);
+    if (result.success) {
+      setErrors({});
+      setFormError(undefined);
+      return result.data;
+    }
+    const found = zodFieldErrors(result.error);
+    const next: Partial<Record<Field, string>> = {};
+    for (const name of Object.keys(labels) as Field[]) {
+      if (found[name]) next[name] = messages?.[name] ?? found[name];
+    }
+    setErrors(next);
+    setFormError(Object.keys(next).length === 0 ? Object.values(found)[0] : undefined);
+    setAttempt((count) => count + 1);
+    return null;
+  };
+
+  /** Shows a failed request: field errors beside their fields, anything else as the form's message. */
+  const fail = (error: unknown) => {
+    const { fields, message } = describeSubmitError(error);
+    const next: Partial<Record<Field, string>> = {};
+    for (const [name, text] of Object.entries(fields)) {
+      if (name in labels && text) next[name as Field] = text;
+    }
+    setErrors(next);
+    setFormError(Object.keys(next).length === 0 ? message : undefined);
+    setAttempt((count) => count + 1);
+  };
+
+  const reset = (next: V = initialValues) => {
+    setValues(next);
+    setErrors({});
+    setFormError(undefined);
+  };
+
+  const summaryItems: FormErrorItem[] = useMemo(
+    () =>
+      (Object.keys(labels) as Field[])
+        .filter((name) => errors[name])
+        .map((name) => ({ fieldId: fieldId(name), label: labels[name], message: errors[name] as string })),
+    [errors, labels, fieldId],
+  );
+
+  return { values, setValue, errors, formError, attempt, field, validate, fail, reset, summaryItems, fieldId };
+}

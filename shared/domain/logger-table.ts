@@ -55,24 +55,26 @@ function isDataLike(row: readonly string[], headerWidth: number): boolean {
     filled++;
     if (looksLikeData(row[index], true)) data++;
   }
-  return data >= 2 && data * 2 >= filled;
+  return data >= 1 && data * 2 >= filled;
 }
 
+/**
+ * The header is the first row of mostly names followed by rows of mostly data that fit under it. At least half of the
+ * next few rows must be data, so one bad row does not hide the header (it is reported with its row number later),
+ * while a preamble line followed by a wider header is not taken for the header.
+ */
 function findHeader(rows: readonly string[][]): number {
   for (let index = 0; index < rows.length; index++) {
     if (!isHeaderLike(rows[index])) continue;
     const width = rows[index].length;
-    let confirmed = 0;
-    let rejected = false;
-    for (let next = index + 1; next < rows.length && confirmed < headerConfirmRows; next++) {
+    let checked = 0;
+    let data = 0;
+    for (let next = index + 1; next < rows.length && checked < headerConfirmRows; next++) {
       if (isBlank(rows[next])) continue;
-      if (!isDataLike(rows[next], width)) {
-        rejected = true;
-        break;
-      }
-      confirmed++;
+      checked++;
+      if (isDataLike(rows[next], width)) data++;
     }
-    if (!rejected && confirmed > 0) return index;
+    if (data >= 1 && data * 2 >= checked) return index;
   }
   return -1;
 }

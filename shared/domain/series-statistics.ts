@@ -25,14 +25,43 @@ export function summarizeSeries(values: ArrayLike<number>, from = 0, to = values
     : { count, mean: sum / count, min, max };
 }
 
+/** k-th smallest of values[0..count) in place (Hoare's selection): linear time, where a sort would be n log n. */
+function selectInPlace(values: Float64Array, count: number, k: number): number {
+  let left = 0;
+  let right = count - 1;
+  while (left < right) {
+    const pivot = values[(left + right) >> 1];
+    let i = left;
+    let j = right;
+    while (i <= j) {
+      while (values[i] < pivot) i++;
+      while (values[j] > pivot) j--;
+      if (i <= j) {
+        const swap = values[i];
+        values[i] = values[j];
+        values[j] = swap;
+        i++;
+        j--;
+      }
+    }
+    if (k <= j) right = j;
+    else if (k >= i) left = i;
+    else return values[k];
+  }
+  return values[k];
+}
+
 export function medianOfSeries(values: ArrayLike<number>, from = 0, to = values.length): number {
   const valid = new Float64Array(Math.max(0, to - from));
   let count = 0;
   for (let i = from; i < to; i++) if (values[i] === values[i]) valid[count++] = values[i];
   if (count === 0) return Number.NaN;
-  const sorted = valid.subarray(0, count).sort();
   const middle = count >> 1;
-  return count % 2 === 1 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
+  const upper = selectInPlace(valid, count, middle);
+  if (count % 2 === 1) return upper;
+  let lower = Number.NEGATIVE_INFINITY;
+  for (let i = 0; i < middle; i++) if (valid[i] > lower) lower = valid[i];
+  return (lower + upper) / 2;
 }
 
 /** First index whose time is at or after `seconds` (binary search; times increase). */

@@ -1,10 +1,15 @@
+import {
+  effectivePhaseCount,
+  stagesPerPhaseProblem,
+  vcoreStageCount,
+  type PhaseMultiplication,
+} from './planning/power-design';
+
 /**
  * Electrical load on a board's VRM from first principles (REFERENCES.md, "Physics and trade practice", no published
  * source): core current ≈ core-rail power / core voltage; an ideally balanced multiphase buck shares it evenly over its
  * phases and the power stages within each phase.
  */
-
-export type PhaseMultiplication = 'direct' | 'doubled' | 'teamed';
 
 export interface VrmLoadInput {
   packagePowerW: number;
@@ -16,10 +21,9 @@ export interface VrmLoadInput {
   coreRailShare?: number;
   /** Phases the PWM controller drives. */
   controllerPhases: number;
-  /** direct: one phase per controller phase; doubled: a doubler splits each into two phases; teamed: one controller
-   *  phase drives several stages in parallel, so the phase count stays while the stages multiply. */
+  /** As the catalog records it; see planning/power-design for direct, doubled and teamed. */
   multiplication: PhaseMultiplication;
-  /** Power stages in parallel within each phase (teamed boards: usually 2). */
+  /** Power stages in parallel on each effective phase: 1 for direct and doubled, 2 or more for teamed. */
   stagesPerPhase: number;
   /** Continuous current rating of one power stage, A. */
   stageRatingA: number;
@@ -58,14 +62,13 @@ export function vrmElectricalLoad(input: VrmLoadInput): VrmLoad {
   ] as const) {
     if (!(Number.isInteger(value) && value >= 1)) throw new RangeError(`${name} must be a whole number of at least 1.`);
   }
-  if (input.multiplication === 'teamed' && input.stagesPerPhase < 2) {
-    throw new RangeError('Teamed phases drive at least two stages each.');
-  }
+  const stagesProblem = stagesPerPhaseProblem(input.multiplication, input.stagesPerPhase);
+  if (stagesProblem) throw new RangeError(stagesProblem);
   if (input.stageOnResistanceMilliohm !== undefined) requirePositive(input.stageOnResistanceMilliohm, 'On-resistance');
   const coreRailPowerW = input.packagePowerW * share;
   const coreCurrentA = coreRailPowerW / input.coreVoltageV;
-  const effectivePhases = input.controllerPhases * (input.multiplication === 'doubled' ? 2 : 1);
-  const totalStages = effectivePhases * input.stagesPerPhase;
+  const effectivePhases = effectivePhaseCount(input.controllerPhases, input.multiplication);
+  const totalStages = vcoreStageCount(input.controllerPhases, input.multiplication, input.stagesPerPhase);
   const currentPerStageA = coreCurrentA / totalStages;
   const resistanceOhm = input.stageOnResistanceMilliohm === undefined ? null : input.stageOnResistanceMilliohm / 1000;
   return {

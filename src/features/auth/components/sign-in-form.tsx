@@ -13,8 +13,7 @@ export interface SignInFormProps {
   onSignedIn: (user: CurrentUser) => void;
 }
 
-function waitMessage(seconds: number | null): string {
-  if (seconds === null) return 'Wait a few minutes before you try again.';
+function waitMessage(seconds: number): string {
   const minutes = Math.max(1, Math.ceil(seconds / 60));
   const at = new Date(Date.now() + seconds * 1000).toLocaleTimeString(undefined, {
     hour: '2-digit',
@@ -42,9 +41,11 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
   return (
     <form noValidate onSubmit={submit} className="space-y-4">
       {rateLimited ? (
-        <Alert tone="warning" title="Too many sign-in attempts" announce>
+        <Alert tone="warning" title="Wait before you try again" announce>
           <p>{rateLimited.message}</p>
-          <p className="mt-1">{waitMessage(rateLimited.retryAfterSeconds)}</p>
+          {rateLimited.retryAfterSeconds !== null && (
+            <p className="mt-1">{waitMessage(rateLimited.retryAfterSeconds)}</p>
+          )}
         </Alert>
       ) : (
         <FormErrorSummary

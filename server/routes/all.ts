@@ -1,6 +1,7 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
 import { registerAccountRoutes } from './account.routes';
+import { registerAnalysisRoutes } from './analysis.routes';
 import { registerAuthRoutes } from './auth.routes';
 import { registerSystemRoutes } from './system.routes';
 import { registerUserRoutes } from './users.routes';
@@ -11,4 +12,5 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerAuthRoutes(api, context);
   registerAccountRoutes(api, context);
   registerUserRoutes(api, context);
+  registerAnalysisRoutes(api, context);
 }

@@ -26,6 +26,7 @@ const allowed: Record<string, Caller[]> = {
   'GET /api/users': ['admin'],
   'POST /api/users': ['admin'],
   'PATCH /api/users/:id': ['admin'],
+  'POST /api/analysis/preview': ['tester', 'editor'],
 };
 
 interface RouteLayer {

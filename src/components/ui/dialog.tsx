@@ -38,6 +38,8 @@ export function Dialog({ open, onClose, title, description, children, footer, si
       aria-labelledby={titleId}
       aria-describedby={description ? descriptionId : undefined}
       onCancel={(event) => {
+        // React passes a nested dialog's cancel up the component tree; only this dialog's own Escape closes it.
+        if (event.target !== event.currentTarget) return;
         event.preventDefault();
         onClose();
       }}

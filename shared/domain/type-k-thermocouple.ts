@@ -78,7 +78,15 @@ export function typeKCelsiusFromMillivolts(millivolts: number): number {
  * between the hot junction and its terminals at T_cj, so E_total = E_measured + E(T_cj) and T = t(E_total).
  */
 export function typeKCelsiusWithColdJunction(measuredMillivolts: number, coldJunctionC: number): number {
-  return typeKCelsiusFromMillivolts(measuredMillivolts + typeKMillivoltsFromCelsius(coldJunctionC));
+  const totalMillivolts = measuredMillivolts + typeKMillivoltsFromCelsius(coldJunctionC);
+  try {
+    return typeKCelsiusFromMillivolts(totalMillivolts);
+  } catch (error) {
+    if (!(error instanceof ThermocoupleRangeError)) throw error;
+    throw new ThermocoupleRangeError(
+      `${measuredMillivolts} mV with the cold junction at ${coldJunctionC} °C is ${totalMillivolts.toFixed(3)} mV, outside the type K inverse function (${typeKInverseRangeMv.min}…${typeKInverseRangeMv.max} mV, −200…1372 °C).`,
+    );
+  }
 }
 
 /** The voltage a logger with its terminals at `coldJunctionC` reads for a hot junction at `celsius`. */

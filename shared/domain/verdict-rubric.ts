@@ -12,12 +12,11 @@ export interface VerdictFacts {
   unstable: boolean;
 }
 
-const throttleEvidence: Record<VerdictFacts['throttleSource'], string> = {
-  clock: 'the CPU clock fell and stayed down',
-  power: 'package power fell and stayed down (no clock was logged)',
-  manual: 'the tester recorded a throttle',
-  none: '',
-};
+function throttleEvidence(source: VerdictFacts['throttleSource'], when: string): string {
+  if (source === 'manual') return `The tester recorded a throttle${when}`;
+  if (source === 'power') return `Package power fell and stayed down${when} (no clock was logged)`;
+  return `The CPU clock fell and stayed down${when}`;
+}
 
 /**
  * Maps a run to its verdict with the roundup's rubric and says which rule decided, for the UI to show. Throttling or
@@ -41,11 +40,8 @@ export function judgeRun(facts: VerdictFacts, rubric: VerdictRubric): Verdict {
   });
 
   if (facts.throttled) {
-    const when = facts.firstThrottleAtS === null ? '' : ` at ${formatRunTime(facts.firstThrottleAtS)}`;
-    return verdict(
-      'throttled',
-      `Throttled${when}: ${throttleEvidence[facts.throttleSource]}. A run that throttles fails.`,
-    );
+    const when = facts.firstThrottleAtS === null ? '' : ` from ${formatRunTime(facts.firstThrottleAtS)}`;
+    return verdict('throttled', `${throttleEvidence(facts.throttleSource, when)}. A run that throttles fails.`);
   }
   if (facts.unstable) {
     return verdict('throttled', 'The tester marked the system unstable during the soak. An unstable run fails.');

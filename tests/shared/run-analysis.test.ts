@@ -125,7 +125,7 @@ describe('analysis stories with known answers', () => {
     );
     expect(analysis.throttle).toMatchObject({ detected: true, source: 'clock', firstAtS: 1800, shareThrottled: 0.5 });
     expect(analysis.verdict).toMatchObject({ code: 'throttled', label: 'Throttled' });
-    expect(analysis.verdict.rule).toContain('at 30:00');
+    expect(analysis.verdict.rule).toContain('from 30:00');
   });
 
   it('when no clock is logged, then a package-power cut reveals the throttle', () => {

@@ -1,6 +1,34 @@
 // Listed explicitly so bundled builds and the CLI see the same entity set.
 import { AuditEntryEntity } from './audit-entry.entity';
+import { BenchBookingCellEntity } from './bench-booking-cell.entity';
+import { BenchBookingEntity } from './bench-booking.entity';
+import { BenchProfileEntity } from './bench-profile.entity';
+import { BenchEntity } from './bench.entity';
+import { LoadConfigurationEntity } from './load-configuration.entity';
+import { MatrixCellEntity } from './matrix-cell.entity';
+import { ProductPriceEntity } from './product-price.entity';
+import { ProductEntity } from './product.entity';
+import { RoundupEntryEntity } from './roundup-entry.entity';
+import { RoundupLoadConfigurationEntity } from './roundup-load-configuration.entity';
+import { RoundupEntity } from './roundup.entity';
+import { SampleEntity } from './sample.entity';
 import { SessionEntity } from './session.entity';
 import { UserEntity } from './user.entity';
 
-export const entities = [UserEntity, SessionEntity, AuditEntryEntity];
+export const entities = [
+  UserEntity,
+  SessionEntity,
+  AuditEntryEntity,
+  ProductEntity,
+  ProductPriceEntity,
+  BenchProfileEntity,
+  LoadConfigurationEntity,
+  RoundupEntity,
+  RoundupLoadConfigurationEntity,
+  RoundupEntryEntity,
+  MatrixCellEntity,
+  SampleEntity,
+  BenchEntity,
+  BenchBookingEntity,
+  BenchBookingCellEntity,
+];

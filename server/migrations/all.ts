@@ -1,4 +1,30 @@
 // Every migration, in order. A new schema change adds its class here.
 import { CreateUsersSessionsAudit1764600000000 } from './1764600000000-create-users-sessions-audit';
+import { CreateProducts1765100001000 } from './1765100001000-create-products';
+import { CreateProductPrices1765100002000 } from './1765100002000-create-product-prices';
+import { CreateBenchProfiles1765100003000 } from './1765100003000-create-bench-profiles';
+import { CreateLoadConfigurations1765100004000 } from './1765100004000-create-load-configurations';
+import { CreateRoundups1765100005000 } from './1765100005000-create-roundups';
+import { CreateRoundupLoadConfigurations1765100006000 } from './1765100006000-create-roundup-load-configurations';
+import { CreateRoundupEntries1765100007000 } from './1765100007000-create-roundup-entries';
+import { CreateMatrixCells1765100008000 } from './1765100008000-create-matrix-cells';
+import { CreateSamples1765100009000 } from './1765100009000-create-samples';
+import { CreateBenches1765100010000 } from './1765100010000-create-benches';
+import { CreateBenchBookings1765100011000 } from './1765100011000-create-bench-bookings';
+import { CreateBenchBookingCells1765100012000 } from './1765100012000-create-bench-booking-cells';
 
-export const migrations = [CreateUsersSessionsAudit1764600000000];
+export const migrations = [
+  CreateUsersSessionsAudit1764600000000,
+  CreateProducts1765100001000,
+  CreateProductPrices1765100002000,
+  CreateBenchProfiles1765100003000,
+  CreateLoadConfigurations1765100004000,
+  CreateRoundups1765100005000,
+  CreateRoundupLoadConfigurations1765100006000,
+  CreateRoundupEntries1765100007000,
+  CreateMatrixCells1765100008000,
+  CreateSamples1765100009000,
+  CreateBenches1765100010000,
+  CreateBenchBookings1765100011000,
+  CreateBenchBookingCells1765100012000,
+];

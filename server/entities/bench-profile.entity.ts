@@ -1,0 +1,55 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+
+/** A reusable description of the test system and the conditions a roundup is measured under. */
+@Entity({ name: 'bench_profiles' })
+export class BenchProfileEntity {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'varchar', length: 120, unique: true })
+  name: string;
+
+  @Column({ type: 'varchar', length: 300, name: 'case_and_fans' })
+  caseAndFans: string;
+
+  @Column({ type: 'varchar', length: 200 })
+  cooler: string;
+
+  @Column({ type: 'varchar', length: 200 })
+  psu: string;
+
+  @Column({ type: 'varchar', length: 300 })
+  memory: string;
+
+  /** °C, DECIMAL(4,1). */
+  @Column({ type: 'decimal', precision: 4, scale: 1, name: 'room_temp_target_c' })
+  roomTempTargetC: string;
+
+  /** ± °C, DECIMAL(3,1). */
+  @Column({ type: 'decimal', precision: 3, scale: 1, name: 'room_temp_tolerance_c' })
+  roomTempToleranceC: string;
+
+  @Column({ type: 'varchar', length: 120, name: 'probe_type' })
+  probeType: string;
+
+  @Column({ type: 'varchar', length: 300, name: 'probe_placement' })
+  probePlacement: string;
+
+  @Column({ type: 'smallint', unsigned: true, name: 'required_soak_minutes' })
+  requiredSoakMinutes: number;
+
+  @Column({ type: 'text', nullable: true })
+  notes: string | null;
+
+  @Column({ type: 'datetime', precision: 3, name: 'archived_at', nullable: true })
+  archivedAt: Date | null;
+
+  @Column({ type: 'int', unsigned: true, name: 'created_by', nullable: true })
+  createdBy: number | null;
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
+  updatedAt: Date;
+}

@@ -1,0 +1,56 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import type { RoundupState } from '../../shared/domain/planning/roundup-states';
+import { roundupStates } from '../../shared/domain/planning/roundup-states';
+
+/** A roundup: its plan (band, dates, bench profile) and its state, which later issues extend. */
+@Entity({ name: 'roundups' })
+export class RoundupEntity {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'varchar', length: 200 })
+  title: string;
+
+  @Column({ type: 'varchar', length: 32 })
+  category: string;
+
+  @Column({ type: 'varchar', length: 80 })
+  platform: string;
+
+  @Column({ type: 'enum', enum: roundupStates, default: 'planning' })
+  state: RoundupState;
+
+  @Column({ type: 'int', unsigned: true, name: 'price_min_minor' })
+  priceMinMinor: number;
+
+  @Column({ type: 'int', unsigned: true, name: 'price_max_minor' })
+  priceMaxMinor: number;
+
+  @Column({ type: 'char', length: 3 })
+  currency: string;
+
+  @Column({ type: 'varchar', length: 8 })
+  region: string;
+
+  @Column({ type: 'date', name: 'target_publish_date', nullable: true, utc: true })
+  targetPublishDate: string | null;
+
+  /** IANA zone of the outlet for this roundup: due and return-by dates end at its midnight. */
+  @Column({ type: 'varchar', length: 64, name: 'time_zone' })
+  timeZone: string;
+
+  @Column({ type: 'int', unsigned: true, name: 'bench_profile_id', nullable: true })
+  benchProfileId: number | null;
+
+  @Column({ type: 'int', unsigned: true, name: 'created_by', nullable: true })
+  createdBy: number | null;
+
+  @Column({ type: 'datetime', precision: 3, name: 'state_changed_at' })
+  stateChangedAt: Date;
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
+  updatedAt: Date;
+}

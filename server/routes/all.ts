@@ -5,6 +5,15 @@ import { registerAnalysisRoutes } from './analysis.routes';
 import { registerAuthRoutes } from './auth.routes';
 import { registerSystemRoutes } from './system.routes';
 import { registerUserRoutes } from './users.routes';
+import { registerBenchProfileRoutes } from './bench-profiles.routes';
+import { registerBenchRoutes } from './benches.routes';
+import { registerCatalogRoutes } from './catalog.routes';
+import { registerLoadConfigurationRoutes } from './load-configurations.routes';
+import { registerMatrixRoutes } from './matrix.routes';
+import { registerMyBenchRoutes } from './my-bench.routes';
+import { registerRoundupEntryRoutes } from './roundup-entries.routes';
+import { registerRoundupRoutes } from './roundups.routes';
+import { registerSampleRoutes } from './samples.routes';
 
 /** Every feature's routes. A new feature adds one line here. */
 export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
@@ -13,4 +22,13 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerAccountRoutes(api, context);
   registerUserRoutes(api, context);
   registerAnalysisRoutes(api, context);
+  registerCatalogRoutes(api, context);
+  registerBenchProfileRoutes(api, context);
+  registerLoadConfigurationRoutes(api, context);
+  registerRoundupRoutes(api, context);
+  registerRoundupEntryRoutes(api, context);
+  registerMatrixRoutes(api, context);
+  registerSampleRoutes(api, context);
+  registerBenchRoutes(api, context);
+  registerMyBenchRoutes(api, context);
 }

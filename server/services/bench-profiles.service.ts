@@ -1,0 +1,177 @@
+import { In, IsNull, Not, type DataSource, type EntityManager } from 'typeorm';
+import type { z } from 'zod';
+import { BenchProfileEntity } from '../entities/bench-profile.entity';
+import { RoundupEntity } from '../entities/roundup.entity';
+import { conflict, notFound } from '../errors';
+import { recordAudit } from './audit.service';
+import { isDuplicateKey } from './database-errors';
+import { decimalToNumber } from './dto-values';
+import { recordPlanChange } from './roundup-audit';
+import { planEditableStates } from '../../shared/domain/planning/roundup-states';
+import type {
+  BenchProfile,
+  benchProfileListQuerySchema,
+  createBenchProfileRequestSchema,
+  updateBenchProfileRequestSchema,
+} from '../../shared/schemas/bench-profiles';
+import type { CurrentUser } from '../../shared/schemas/auth';
+
+type CreateInput = z.output<typeof createBenchProfileRequestSchema>;
+type UpdateInput = z.output<typeof updateBenchProfileRequestSchema>;
+type ListQuery = z.output<typeof benchProfileListQuerySchema>;
+
+const nameTaken = () =>
+  conflict('name_taken', 'Another bench profile already has this name.', {
+    name: 'Another bench profile already has this name.',
+  });
+
+export function toBenchProfileDto(profile: BenchProfileEntity, roundupCount: number): BenchProfile {
+  return {
+    id: profile.id,
+    name: profile.name,
+    caseAndFans: profile.caseAndFans,
+    cooler: profile.cooler,
+    psu: profile.psu,
+    memory: profile.memory,
+    roomTempTargetC: decimalToNumber(profile.roomTempTargetC),
+    roomTempToleranceC: decimalToNumber(profile.roomTempToleranceC),
+    probeType: profile.probeType,
+    probePlacement: profile.probePlacement,
+    requiredSoakMinutes: profile.requiredSoakMinutes,
+    notes: profile.notes,
+    archived: profile.archivedAt != null,
+    createdAt: profile.createdAt.toISOString(),
+    updatedAt: profile.updatedAt.toISOString(),
+    roundupCount,
+  };
+}
+
+async function roundupCounts(manager: EntityManager, ids: number[]): Promise<Map<number, number>> {
+  const counts = new Map<number, number>();
+  if (ids.length === 0) return counts;
+  const rows: { id: number; n: string }[] = await manager.query(
+    `SELECT bench_profile_id AS id, COUNT(*) AS n FROM roundups WHERE bench_profile_id IN (${ids.map(() => '?').join(',')}) GROUP BY bench_profile_id`,
+    ids,
+  );
+  for (const row of rows) counts.set(Number(row.id), Number(row.n));
+  return counts;
+}
+
+const fieldNames = [
+  'name',
+  'caseAndFans',
+  'cooler',
+  'psu',
+  'memory',
+  'roomTempTargetC',
+  'roomTempToleranceC',
+  'probeType',
+  'probePlacement',
+  'requiredSoakMinutes',
+  'notes',
+] as const;
+
+export class BenchProfilesService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  async list(query: ListQuery): Promise<BenchProfile[]> {
+    const manager = this.dataSource.manager;
+    const where =
+      query.archived === 'exclude'
+        ? { archivedAt: IsNull() }
+        : query.archived === 'only'
+          ? { archivedAt: Not(IsNull()) }
+          : {};
+    const profiles = await manager.getRepository(BenchProfileEntity).find({ where, order: { name: 'ASC' } });
+    const counts = await roundupCounts(
+      manager,
+      profiles.map((p) => p.id),
+    );
+    return profiles.map((p) => toBenchProfileDto(p, counts.get(p.id) ?? 0));
+  }
+
+  async get(id: number, manager: EntityManager = this.dataSource.manager): Promise<BenchProfile> {
+    const profile = await manager.getRepository(BenchProfileEntity).findOneBy({ id });
+    if (!profile) throw notFound('That bench profile');
+    return toBenchProfileDto(profile, (await roundupCounts(manager, [id])).get(id) ?? 0);
+  }
+
+  async create(actor: CurrentUser, input: CreateInput): Promise<BenchProfile> {
+    try {
+      return await this.dataSource.transaction(async (manager) => {
+        const { identifiers } = await manager.getRepository(BenchProfileEntity).insert({
+          ...input,
+          roomTempTargetC: input.roomTempTargetC.toFixed(1),
+          roomTempToleranceC: input.roomTempToleranceC.toFixed(1),
+          createdBy: actor.id,
+        });
+        const id = Number(identifiers[0].id);
+        await recordAudit(manager, {
+          actorId: actor.id,
+          action: 'bench_profile.created',
+          subjectType: 'bench_profile',
+          subjectId: id,
+          details: { name: input.name },
+        });
+        return this.get(id, manager);
+      });
+    } catch (error) {
+      if (isDuplicateKey(error)) throw nameTaken();
+      throw error;
+    }
+  }
+
+  /**
+   * Edits a profile. The profile is part of the plan of every roundup that uses it, so each such roundup still
+   * in planning or on the bench gets a history entry too.
+   */
+  async update(actor: CurrentUser, id: number, input: UpdateInput): Promise<BenchProfile> {
+    try {
+      return await this.dataSource.transaction(async (manager) => {
+        const repo = manager.getRepository(BenchProfileEntity);
+        const profile = await repo.findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+        if (!profile) throw notFound('That bench profile');
+        const before = toBenchProfileDto(profile, 0);
+        const changes: Record<string, { from: unknown; to: unknown }> = {};
+        for (const key of fieldNames) {
+          const value = input[key];
+          if (value !== undefined && value !== before[key]) changes[key] = { from: before[key], to: value };
+        }
+        const patch: Partial<BenchProfileEntity> = {};
+        for (const key of Object.keys(changes) as (typeof fieldNames)[number][]) {
+          const value = input[key];
+          (patch as Record<string, unknown>)[key] =
+            key === 'roomTempTargetC' || key === 'roomTempToleranceC' ? (value as number).toFixed(1) : value;
+        }
+        if (input.archived !== undefined && input.archived !== before.archived) {
+          patch.archivedAt = input.archived ? new Date() : null;
+          changes.archived = { from: before.archived, to: input.archived };
+        }
+        if (Object.keys(patch).length > 0) {
+          await repo.update({ id }, patch);
+          await recordAudit(manager, {
+            actorId: actor.id,
+            action: 'bench_profile.updated',
+            subjectType: 'bench_profile',
+            subjectId: id,
+            details: changes,
+          });
+          const affected = await manager.getRepository(RoundupEntity).find({
+            where: { benchProfileId: id, state: In([...planEditableStates]) },
+            select: { id: true },
+          });
+          for (const roundup of affected) {
+            await recordPlanChange(manager, actor, roundup.id, 'roundup.bench_profile_edited', {
+              benchProfileId: id,
+              changes,
+            });
+          }
+        }
+        return this.get(id, manager);
+      });
+    } catch (error) {
+      if (isDuplicateKey(error)) throw nameTaken();
+      throw error;
+    }
+  }
+}

@@ -1,0 +1,302 @@
+import { In, LessThan, MoreThan, type DataSource, type EntityManager } from 'typeorm';
+import type { z } from 'zod';
+import { BenchBookingCellEntity } from '../entities/bench-booking-cell.entity';
+import { BenchBookingEntity } from '../entities/bench-booking.entity';
+import { BenchProfileEntity } from '../entities/bench-profile.entity';
+import { BenchEntity } from '../entities/bench.entity';
+import { MatrixCellEntity } from '../entities/matrix-cell.entity';
+import { AppError, conflict, forbidden, invalid, notFound } from '../errors';
+import { recordAudit } from './audit.service';
+import { isDuplicateKey } from './database-errors';
+import { loadPeople, personOrNull } from './people';
+import { queueItems } from './roundup-read-model';
+import { bookableStates, cellStateLabels } from '../../shared/domain/planning/matrix-cell-states';
+import type { CurrentUser } from '../../shared/schemas/auth';
+import type {
+  Bench,
+  Booking,
+  createBenchRequestSchema,
+  createBookingRequestSchema,
+  updateBenchRequestSchema,
+} from '../../shared/schemas/benches';
+import type { PersonRef } from '../../shared/schemas/planning-fields';
+
+type CreateBenchInput = z.output<typeof createBenchRequestSchema>;
+type UpdateBenchInput = z.output<typeof updateBenchRequestSchema>;
+type CreateBookingInput = z.output<typeof createBookingRequestSchema>;
+
+const nameTaken = () =>
+  conflict('name_taken', 'Another bench already has this name.', { name: 'Another bench already has this name.' });
+
+const DAY_MS = 86_400_000;
+
+/** "2025-06-02 09:00–12:00 UTC" for messages; the client shows times in the user's zone. */
+function slotText(startsAt: Date, endsAt: Date): string {
+  const start = startsAt.toISOString().slice(0, 16).replace('T', ' ');
+  const sameDay = startsAt.toISOString().slice(0, 10) === endsAt.toISOString().slice(0, 10);
+  const end = sameDay ? endsAt.toISOString().slice(11, 16) : endsAt.toISOString().slice(0, 16).replace('T', ' ');
+  return `${start}–${end} UTC`;
+}
+
+/** Benches and their booking calendars. */
+export class BenchesService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  private async toBenchDtos(manager: EntityManager, benches: BenchEntity[]): Promise<Bench[]> {
+    const profileIds = [...new Set(benches.map((b) => b.benchProfileId).filter((id): id is number => id != null))];
+    const profiles = profileIds.length
+      ? await manager
+          .getRepository(BenchProfileEntity)
+          .find({ where: { id: In(profileIds) }, select: { id: true, name: true } })
+      : [];
+    const profileById = new Map(profiles.map((p) => [p.id, p]));
+    return benches.map((bench) => {
+      const profile = bench.benchProfileId != null ? profileById.get(bench.benchProfileId) : undefined;
+      return {
+        id: bench.id,
+        name: bench.name,
+        location: bench.location,
+        benchProfile: profile ? { id: profile.id, name: profile.name } : null,
+        notes: bench.notes,
+        active: Boolean(bench.active),
+        createdAt: bench.createdAt.toISOString(),
+        updatedAt: bench.updatedAt.toISOString(),
+      };
+    });
+  }
+
+  async list(): Promise<Bench[]> {
+    const benches = await this.dataSource.getRepository(BenchEntity).find({ order: { name: 'ASC' } });
+    return this.toBenchDtos(this.dataSource.manager, benches);
+  }
+
+  async get(id: number, manager: EntityManager = this.dataSource.manager): Promise<Bench> {
+    const bench = await manager.getRepository(BenchEntity).findOneBy({ id });
+    if (!bench) throw notFound('That bench');
+    return (await this.toBenchDtos(manager, [bench]))[0];
+  }
+
+  private async checkProfile(manager: EntityManager, id: number | null | undefined) {
+    if (id == null) return;
+    if (!(await manager.getRepository(BenchProfileEntity).existsBy({ id }))) {
+      throw invalid('That bench profile does not exist.', { benchProfileId: 'That bench profile does not exist.' });
+    }
+  }
+
+  async create(actor: CurrentUser, input: CreateBenchInput): Promise<Bench> {
+    try {
+      return await this.dataSource.transaction(async (manager) => {
+        await this.checkProfile(manager, input.benchProfileId);
+        const { identifiers } = await manager.getRepository(BenchEntity).insert({ ...input, active: true });
+        const id = Number(identifiers[0].id);
+        await recordAudit(manager, {
+          actorId: actor.id,
+          action: 'bench.created',
+          subjectType: 'bench',
+          subjectId: id,
+          details: { name: input.name },
+        });
+        return this.get(id, manager);
+      });
+    } catch (error) {
+      if (isDuplicateKey(error)) throw nameTaken();
+      throw error;
+    }
+  }
+
+  async update(actor: CurrentUser, id: number, input: UpdateBenchInput): Promise<Bench> {
+    try {
+      return await this.dataSource.transaction(async (manager) => {
+        const repo = manager.getRepository(BenchEntity);
+        const bench = await repo.findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+        if (!bench) throw notFound('That bench');
+        await this.checkProfile(manager, input.benchProfileId);
+        const changes: Record<string, { from: unknown; to: unknown }> = {};
+        for (const key of ['name', 'location', 'benchProfileId', 'notes', 'active'] as const) {
+          const before = key === 'active' ? Boolean(bench.active) : bench[key];
+          if (input[key] !== undefined && input[key] !== before) changes[key] = { from: before, to: input[key] };
+        }
+        if (Object.keys(changes).length > 0) {
+          await repo.update({ id }, Object.fromEntries(Object.entries(changes).map(([k, v]) => [k, v.to])));
+          await recordAudit(manager, {
+            actorId: actor.id,
+            action: 'bench.updated',
+            subjectType: 'bench',
+            subjectId: id,
+            details: changes,
+          });
+        }
+        return this.get(id, manager);
+      });
+    } catch (error) {
+      if (isDuplicateKey(error)) throw nameTaken();
+      throw error;
+    }
+  }
+
+  /** Bookings overlapping [from, to), default from one day ago to two weeks ahead. `benchId` null = all benches. */
+  async bookings(
+    user: CurrentUser,
+    options: { benchId?: number; testerId?: number; from?: string; to?: string },
+  ): Promise<Booking[]> {
+    const manager = this.dataSource.manager;
+    if (options.benchId != null && !(await manager.getRepository(BenchEntity).existsBy({ id: options.benchId }))) {
+      throw notFound('That bench');
+    }
+    const now = Date.now();
+    const from = options.from ? new Date(options.from) : new Date(now - DAY_MS);
+    const to = options.to ? new Date(options.to) : new Date(now + 14 * DAY_MS);
+    if (!(to > from))
+      throw invalid('The window must end after it starts.', { to: 'The window must end after it starts.' });
+    if (to.getTime() - from.getTime() > 400 * DAY_MS)
+      throw invalid('Ask for at most 400 days at a time.', { to: 'Ask for at most 400 days at a time.' });
+    const bookings = await manager.getRepository(BenchBookingEntity).find({
+      where: {
+        ...(options.benchId != null ? { benchId: options.benchId } : {}),
+        ...(options.testerId != null ? { testerId: options.testerId } : {}),
+        startsAt: LessThan(to),
+        endsAt: MoreThan(from),
+      },
+      order: { startsAt: 'ASC', id: 'ASC' },
+    });
+    return this.toBookingDtos(manager, bookings, user);
+  }
+
+  async toBookingDtos(manager: EntityManager, bookings: BenchBookingEntity[], user: CurrentUser): Promise<Booking[]> {
+    if (bookings.length === 0) return [];
+    const benches = await manager
+      .getRepository(BenchEntity)
+      .find({ where: { id: In([...new Set(bookings.map((b) => b.benchId))]) }, select: { id: true, name: true } });
+    const benchById = new Map(benches.map((b) => [b.id, b]));
+    const links = await manager
+      .getRepository(BenchBookingCellEntity)
+      .findBy({ bookingId: In(bookings.map((b) => b.id)) });
+    const cells = links.length
+      ? await manager.getRepository(MatrixCellEntity).findBy({ id: In(links.map((l) => l.cellId)) })
+      : [];
+    const items = await queueItems(manager, cells, user, new Date());
+    const itemByCell = new Map(items.map((item) => [item.cell.id, item]));
+    const people: Map<number, PersonRef> = await loadPeople(
+      manager,
+      bookings.map((b) => b.testerId),
+    );
+    return bookings.map((booking) => {
+      const bench = benchById.get(booking.benchId) as BenchEntity;
+      return {
+        id: booking.id,
+        bench: { id: bench.id, name: bench.name },
+        tester: personOrNull(people, booking.testerId) ?? { id: booking.testerId, displayName: 'Former staff member' },
+        startsAt: booking.startsAt.toISOString(),
+        endsAt: booking.endsAt.toISOString(),
+        note: booking.note,
+        cells: links
+          .filter((l) => l.bookingId === booking.id)
+          .map((l) => itemByCell.get(l.cellId))
+          .filter((item) => item !== undefined),
+        cancellable: user.role === 'editor' || booking.testerId === user.id,
+        createdAt: booking.createdAt.toISOString(),
+      };
+    });
+  }
+
+  /**
+   * Books a slot on a bench for the tester's own assigned cells. Overlaps are refused inside the database
+   * transaction: the bench row is locked with SELECT … FOR UPDATE first, so a second request for the same
+   * bench waits until the first commits and then sees its booking in the overlap check (READ COMMITTED, so
+   * the check reads the latest committed rows rather than an older snapshot).
+   */
+  async book(actor: CurrentUser, benchId: number, input: CreateBookingInput): Promise<Booking> {
+    const startsAt = new Date(input.startsAt);
+    const endsAt = new Date(input.endsAt);
+    if (endsAt.getTime() <= Date.now()) {
+      throw invalid('That slot is already over; book a slot that ends in the future.', {
+        endsAt: 'The slot has already ended.',
+      });
+    }
+    return this.dataSource.transaction('READ COMMITTED', async (manager) => {
+      const bench = await manager
+        .getRepository(BenchEntity)
+        .findOne({ where: { id: benchId }, lock: { mode: 'pessimistic_write' } });
+      if (!bench) throw notFound('That bench');
+      if (!bench.active)
+        throw new AppError('bench_inactive', 422, `${bench.name} is out of service and takes no bookings.`);
+
+      const cells = await manager.getRepository(MatrixCellEntity).findBy({ id: In(input.cellIds) });
+      const missing = input.cellIds.filter((id) => !cells.some((c) => c.id === id));
+      if (missing.length > 0)
+        throw invalid('Some cells do not exist.', { cellIds: `Cells ${missing.join(', ')} do not exist.` });
+      const others = cells.filter((c) => c.testerId !== actor.id);
+      if (others.length > 0) throw forbidden('You can book bench time only for cells assigned to you.');
+      const closed = cells.filter((c) => !bookableStates.includes(c.state));
+      if (closed.length > 0) {
+        throw new AppError(
+          'cells_not_bookable',
+          422,
+          `Book time only for cells still to be tested; ${closed.length} chosen cell(s) are ${[
+            ...new Set(closed.map((c) => cellStateLabels[c.state].toLowerCase())),
+          ].join(' or ')}.`,
+          { cellIds: closed.map((c) => c.id).join(', ') },
+        );
+      }
+
+      const clash = await manager
+        .getRepository(BenchBookingEntity)
+        .createQueryBuilder('b')
+        .where('b.benchId = :benchId', { benchId })
+        .andWhere('b.startsAt < :endsAt', { endsAt })
+        .andWhere('b.endsAt > :startsAt', { startsAt })
+        .orderBy('b.startsAt', 'ASC')
+        .setLock('pessimistic_write')
+        .getOne();
+      if (clash) {
+        const holder = (await loadPeople(manager, [clash.testerId])).get(clash.testerId)?.displayName ?? 'someone';
+        throw conflict(
+          'booking_overlap',
+          `${bench.name} is already booked ${slotText(clash.startsAt, clash.endsAt)} by ${holder}, which overlaps ${slotText(startsAt, endsAt)}. Choose another time or bench.`,
+          { startsAt: `Overlaps the booking ${slotText(clash.startsAt, clash.endsAt)}.` },
+        );
+      }
+
+      const { identifiers } = await manager
+        .getRepository(BenchBookingEntity)
+        .insert({ benchId, testerId: actor.id, startsAt, endsAt, note: input.note ?? null });
+      const bookingId = Number(identifiers[0].id);
+      await manager
+        .getRepository(BenchBookingCellEntity)
+        .insert(input.cellIds.map((cellId) => ({ bookingId, cellId })));
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'bench.booked',
+        subjectType: 'bench',
+        subjectId: benchId,
+        details: { bookingId, startsAt: startsAt.toISOString(), endsAt: endsAt.toISOString(), cellIds: input.cellIds },
+      });
+      const booking = await manager.getRepository(BenchBookingEntity).findOneByOrFail({ id: bookingId });
+      return (await this.toBookingDtos(manager, [booking], actor))[0];
+    });
+  }
+
+  /** Cancels a booking: testers their own, editors any. */
+  async cancel(actor: CurrentUser, benchId: number, bookingId: number): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const repo = manager.getRepository(BenchBookingEntity);
+      const booking = await repo.findOne({ where: { id: bookingId, benchId }, lock: { mode: 'pessimistic_write' } });
+      if (!booking) throw notFound('That booking');
+      if (actor.role !== 'editor' && booking.testerId !== actor.id)
+        throw forbidden('You can cancel only your own bookings.');
+      await repo.delete({ id: bookingId });
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'bench.booking_cancelled',
+        subjectType: 'bench',
+        subjectId: benchId,
+        details: {
+          bookingId,
+          testerId: booking.testerId,
+          startsAt: booking.startsAt.toISOString(),
+          endsAt: booking.endsAt.toISOString(),
+        },
+      });
+    });
+  }
+}

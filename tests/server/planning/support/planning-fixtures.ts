@@ -1,0 +1,158 @@
+import { randomBytes } from 'node:crypto';
+import { expect } from 'vitest';
+import type { Client } from '../../support/test-app';
+import type { CreateProductRequest } from '../../../../shared/schemas/catalog';
+
+/** A short random tag, so each test's names (platform, maker, bench) are its own in the shared test database. */
+export function tag(): string {
+  return randomBytes(4).toString('hex');
+}
+
+/** A calendar date `days` from today (UTC), YYYY-MM-DD. */
+export function dayFromToday(days: number): string {
+  return new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
+}
+
+export function productBody(platform: string, overrides: Partial<CreateProductRequest> = {}): CreateProductRequest {
+  return {
+    maker: `Korvath ${tag()}`,
+    model: `HX4 Test ${tag()}`,
+    platform,
+    socket: 'HX4',
+    chipset: 'HX-B50',
+    formFactor: 'atx',
+    releaseDate: '2025-03-14',
+    powerDesign: {
+      controller: 'KV-PWM8',
+      controllerPhases: 8,
+      phaseMultiplication: 'doubled',
+      stagesPerPhase: 1,
+      vcoreStageType: 'integrated-power-stage',
+      vcoreStagePart: 'KVS-60',
+      vcoreStageCurrentA: 60,
+      socRailStages: 2,
+      otherRails: '1 stage auxiliary',
+      heatsinkNotes: 'Two finned blocks joined by a heat pipe',
+    },
+    features: {
+      rearUsb: { usb2: 4, usb5g: 2, usb10g: 2, usb20g: 1, usb40g: 0 },
+      frontUsbCHeader: 'usb-10g',
+      lanSpeedMbps: 2500,
+      wifi: 'wifi-6e',
+      m2Slots: 3,
+      sataPorts: 4,
+      audio: '7.1 HD audio',
+      ioShieldPrefitted: true,
+    },
+    ...overrides,
+  };
+}
+
+/** Creates a product through the API and returns its id. */
+export async function createProduct(agent: Client, platform: string, overrides: Partial<CreateProductRequest> = {}) {
+  const response = await agent.post('/api/catalog/products').send(productBody(platform, overrides));
+  expect(response.status, response.text).toBe(201);
+  return response.body.id as number;
+}
+
+export async function addPrice(
+  agent: Client,
+  productId: number,
+  price: { region: string; currency: string; amountMinor: number; observedOn: string; source?: string },
+) {
+  const response = await agent
+    .post(`/api/catalog/products/${productId}/prices`)
+    .send({ source: 'Brightmoor Direct web shop', ...price });
+  expect(response.status, response.text).toBe(201);
+  return response.body.id as number;
+}
+
+export async function createBenchProfile(editor: Client) {
+  const response = await editor.post('/api/bench-profiles').send({
+    name: `Open bench ${tag()}`,
+    caseAndFans: 'Open test bench, one 120 mm fan at 800 rpm aimed at the board',
+    cooler: 'Quillon Arctide 360 liquid cooler',
+    psu: 'Ostrel Works 1000 W Platinum',
+    memory: '2 × 16 GB at 6000 MT/s, profile timings',
+    roomTempTargetC: 21,
+    roomTempToleranceC: 1,
+    probeType: 'Type K thermocouple, 0.1 mm bead',
+    probePlacement: 'Board rear under the V-core stages, taped',
+    requiredSoakMinutes: 60,
+  });
+  expect(response.status, response.text).toBe(201);
+  return response.body.id as number;
+}
+
+export async function createLoadConfiguration(editor: Client, overrides: Record<string, unknown> = {}) {
+  const response = await editor.post('/api/load-configurations').send({
+    name: `Stock all-core ${tag()}`,
+    cpuDescription: 'Helix HX-16 sample, 16 cores',
+    settingsMode: 'stock',
+    expectedPackagePowerW: 230,
+    coreVoltageV: 1.25,
+    soakMinutes: 60,
+    ...overrides,
+  });
+  expect(response.status, response.text).toBe(201);
+  return response.body.id as number;
+}
+
+export interface RoundupSetup {
+  roundupId: number;
+  platform: string;
+  loadConfigurationIds: number[];
+  benchProfileId: number;
+}
+
+/** A roundup in Planning with a bench profile and `configurations` load configurations. */
+export async function createRoundup(
+  editor: Client,
+  options: { platform?: string; configurations?: number; band?: Record<string, unknown>; timeZone?: string } = {},
+): Promise<RoundupSetup> {
+  const platform = options.platform ?? `Helix-1700 ${tag()}`;
+  const benchProfileId = await createBenchProfile(editor);
+  const loadConfigurationIds: number[] = [];
+  for (let i = 0; i < (options.configurations ?? 2); i++)
+    loadConfigurationIds.push(await createLoadConfiguration(editor));
+  const response = await editor.post('/api/roundups').send({
+    title: `Helix-1700 boards ${tag()}`,
+    platform,
+    priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE', ...options.band },
+    targetPublishDate: dayFromToday(60),
+    timeZone: options.timeZone ?? 'Europe/Berlin',
+    benchProfileId,
+    loadConfigurationIds,
+  });
+  expect(response.status, response.text).toBe(201);
+  return { roundupId: response.body.id, platform, loadConfigurationIds, benchProfileId };
+}
+
+export async function addEntry(
+  editor: Client,
+  roundupId: number,
+  productId: number,
+  kind: 'tested' | 'reference' = 'tested',
+) {
+  const response = await editor.post(`/api/roundups/${roundupId}/entries`).send({ productId, kind });
+  expect(response.status, response.text).toBe(201);
+  return response.body as { entry: { id: number; sample: { id: number } | null }; warnings: string[] };
+}
+
+export async function moveToBench(editor: Client, roundupId: number) {
+  const response = await editor.post(`/api/roundups/${roundupId}/state`).send({ to: 'on-the-bench' });
+  expect(response.status, response.text).toBe(200);
+}
+
+export async function matrixOf(agent: Client, roundupId: number) {
+  const response = await agent.get(`/api/roundups/${roundupId}/matrix`);
+  expect(response.status, response.text).toBe(200);
+  return response.body as {
+    rows: {
+      entryId: number;
+      kind: string;
+      cells: { id: number; state: string; tester: { id: number } | null; actions: string[] }[];
+    }[];
+    progress: { cellCount: number; acceptedCount: number; percentAccepted: number; unassignedCount: number };
+  };
+}

@@ -60,7 +60,8 @@ export function createAppRouter(queryClient: QueryClient) {
   // come back to the same page.
   setUnauthorizedHandler(() => {
     queryClient.setQueryData(sessionKey, null);
-    const { pathname, search } = router.state.location;
+    // During a navigation the page being opened is where the user wanted to go.
+    const { pathname, search } = router.state.navigation.location ?? router.state.location;
     if (pathname !== '/sign-in') void router.navigate(paths.signIn(pathname + search), { replace: true });
   });
 

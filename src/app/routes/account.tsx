@@ -21,7 +21,7 @@ export function Component() {
       <PageHeader title="Account" description="Your own details, password and signed-in devices." />
       <div className="grid grid-cols-1 gap-5 lg:grid-cols-2">
         <AccountDetails user={user} />
-        <ChangePasswordForm />
+        <ChangePasswordForm email={user.email} />
         <SessionsPanel className="lg:col-span-2" />
       </div>
     </>

@@ -38,7 +38,7 @@ export function ConfirmDialog({
       size="sm"
       footer={
         <>
-          <Button onClick={onCancel} disabled={pending}>
+          <Button onClick={onCancel} disabled={pending} data-autofocus>
             {cancelLabel}
           </Button>
           <Button variant={tone} onClick={onConfirm} pending={pending}>

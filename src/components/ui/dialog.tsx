@@ -28,7 +28,15 @@ export function Dialog({ open, onClose, title, description, children, footer, si
   useEffect(() => {
     const dialog = ref.current;
     if (!dialog) return;
-    if (open && !dialog.open) dialog.showModal();
+    if (open && !dialog.open) {
+      dialog.showModal();
+      // Start where the work is: a marked element, else the first field, else the browser's choice (the close button).
+      const own = (selector: string) =>
+        [...dialog.querySelectorAll<HTMLElement>(selector)].find((element) => element.closest('dialog') === dialog);
+      const preferred =
+        own('[data-autofocus]') ?? own('[data-dialog-body] :is(input, select, textarea):not([disabled])');
+      preferred?.focus();
+    }
     if (!open && dialog.open) dialog.close();
   }, [open]);
 
@@ -71,7 +79,9 @@ export function Dialog({ open, onClose, title, description, children, footer, si
           <span aria-hidden="true">×</span>
         </button>
       </header>
-      <div className="min-h-0 flex-1 overflow-y-auto px-5 py-4">{children}</div>
+      <div data-dialog-body className="min-h-0 flex-1 overflow-y-auto px-5 py-4">
+        {children}
+      </div>
       {footer && (
         <footer className="flex flex-wrap justify-end gap-2 border-t border-rule bg-paper/60 px-5 py-3">
           {footer}

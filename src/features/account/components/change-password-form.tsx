@@ -10,7 +10,12 @@ import { useChangePassword } from '../api/change-password';
 
 const emptyForm = { currentPassword: '', newPassword: '', confirmPassword: '' };
 
-export function ChangePasswordForm() {
+export interface ChangePasswordFormProps {
+  /** The signed-in user's e-mail, so password managers file the new password under the right account. */
+  email: string;
+}
+
+export function ChangePasswordForm({ email }: ChangePasswordFormProps) {
   const changePassword = useChangePassword();
   const [changed, setChanged] = useState(false);
   const form = useZodForm({
@@ -47,6 +52,7 @@ export function ChangePasswordForm() {
           message={form.formError}
           attempt={form.attempt}
         />
+        <input type="text" name="username" autoComplete="username" value={email} readOnly hidden />
         <PasswordField {...form.field('currentPassword')} autoComplete="current-password" />
         <PasswordField
           {...form.field('newPassword')}

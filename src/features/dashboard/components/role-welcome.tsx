@@ -19,6 +19,7 @@ export function RoleWelcome({ user, places }: RoleWelcomeProps) {
     <>
       <PageHeader
         eyebrow="Dashboard"
+        documentTitle="Dashboard"
         title={`Welcome, ${user.displayName}`}
         description={
           <>

@@ -52,6 +52,7 @@ export function ResetPasswordForm({ user, isSelf, onSaved }: ResetPasswordFormPr
         message={form.formError}
         attempt={form.attempt}
       />
+      <input type="text" name="username" autoComplete="username" value={user.email} readOnly hidden />
       <PasswordField
         {...form.field('password')}
         autoComplete="new-password"

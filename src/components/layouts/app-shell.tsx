@@ -23,15 +23,16 @@ export interface AppShellProps {
 
 /** The staff frame: header, side navigation (a menu on phones), skip link and the main landmark. */
 export function AppShell({ user, navigation, onSignOut, signingOut = false, busy = false, children }: AppShellProps) {
-  const [menuOpen, setMenuOpen] = useState(false);
   const navId = useId();
   const mainRef = useRef<HTMLElement>(null);
   const { pathname } = useLocation();
   const firstPath = useRef(pathname);
+  // The phone menu belongs to the page it was opened on, so moving to another page closes it.
+  const [menuOpenOn, setMenuOpenOn] = useState<string | null>(null);
+  const menuOpen = menuOpenOn === pathname;
 
-  // After moving to another page, start reading from its content, as a full page load would; close the phone menu.
+  // After moving to another page, start reading from its content, as a full page load would.
   useEffect(() => {
-    setMenuOpen(false);
     if (pathname !== firstPath.current) {
       firstPath.current = pathname;
       mainRef.current?.focus({ preventScroll: true });
@@ -47,7 +48,7 @@ export function AppShell({ user, navigation, onSignOut, signingOut = false, busy
           event.preventDefault();
           mainRef.current?.focus();
         }}
-        className="sr-only z-50 rounded-[3px] bg-ink px-3 py-2 text-paper focus:not-sr-only focus:fixed focus:top-2 focus:left-2"
+        className="sr-only z-50 rounded-[3px] bg-ink text-paper focus:not-sr-only focus:fixed focus:top-2 focus:left-2 focus:px-3 focus:py-2"
       >
         Skip to content
       </a>
@@ -59,7 +60,7 @@ export function AppShell({ user, navigation, onSignOut, signingOut = false, busy
             className="-ml-1 inline-flex min-h-9 items-center gap-2 rounded-[3px] px-2 text-sm font-medium hover:bg-wash md:hidden"
             aria-expanded={menuOpen}
             aria-controls={navId}
-            onClick={() => setMenuOpen((open) => !open)}
+            onClick={() => setMenuOpenOn(menuOpen ? null : pathname)}
           >
             <MenuGlyph open={menuOpen} />
             Menu

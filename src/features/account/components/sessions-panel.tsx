@@ -66,7 +66,7 @@ export function SessionsPanel({ className }: { className?: string }) {
         header: 'Actions',
         cell: (session) =>
           session.current ? (
-            <span className="text-xs text-muted">Use Sign out</span>
+            <span className="text-xs text-muted">Sign out ends it</span>
           ) : (
             <Button
               size="sm"

@@ -56,7 +56,7 @@ export function createApp({ dataSource, env, clientDir }: CreateAppOptions) {
 
   if (clientDir && existsSync(resolve(clientDir, 'index.html'))) {
     app.use(express.static(clientDir, { index: false, maxAge: '1h', setHeaders: immutableAssets }));
-    app.get('/*splat', (_req, res) =>
+    app.get('/{*splat}', (_req, res) =>
       res.sendFile(resolve(clientDir, 'index.html'), { headers: { 'Cache-Control': 'no-cache' } }),
     );
   }

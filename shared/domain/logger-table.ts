@@ -123,7 +123,8 @@ function noHeaderError(sampleRows: readonly string[][]): ParseError {
 export function parseLoggerTable(input: string): LoggerTableOutcome {
   let text = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
   if (text.indexOf('\n') < 0 && text.indexOf('\r') >= 0) text = text.replace(/\r/g, '\n');
-  if (text.trim() === '') {
+  // A regular-expression test stops at the first printable character; trim() would copy the whole file.
+  if (!/\S/.test(text)) {
     return { ok: false, errors: [{ row: null, column: null, code: 'empty-file', message: 'The file is empty.' }] };
   }
 
@@ -165,7 +166,8 @@ export function parseLoggerTable(input: string): LoggerTableOutcome {
   const rowNumbers = new Int32Array(body.data.length);
   for (let index = 0; index < body.data.length; index++) {
     const row = body.data[index];
-    if (row[0].trim() === '' && isBlank(row)) continue;
+    // A row whose first cell starts with a printable character is not blank; only the rest need the full check.
+    if ((row[0].length === 0 || row[0].charCodeAt(0) <= 32) && isBlank(row)) continue;
     if (row.length > width) {
       const extra = filledWidth(row);
       if (extra > width) {

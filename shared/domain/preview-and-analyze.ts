@@ -8,7 +8,8 @@ import {
 import { guessColumnMapping, guessColumnRole, unitFromColumnName } from './log-column-guess';
 import { detectTimeFormat } from './log-time-value';
 import { parseLoggerTable, type LoggerTable } from './logger-table';
-import { guessTimeColumn, readMappedLog } from './read-mapped-log';
+import { readMappedLog } from './read-mapped-log';
+import { guessTimeColumn } from './read-time-column';
 import { analyzeRun } from './run-analysis';
 
 /** Data rows shown in the preview. */

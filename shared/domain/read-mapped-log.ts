@@ -1,9 +1,9 @@
 import type { AnalysisOptions, ColumnMapping, ParseError, TemperatureUnit, TimeFormat } from '../schemas/analysis';
 import { isNumericSentinel, readCell, readPlainDecimal } from './log-cell-value';
-import { guessColumnRole, unitFromColumnName } from './log-column-guess';
-import { createTimeReader, detectDayFirst, detectTimeFormat, readDateTime } from './log-time-value';
+import { unitFromColumnName } from './log-column-guess';
 import type { LoggerTable } from './logger-table';
 import { ParseErrorList, cellLabel } from './parse-error-list';
+import { guessTimeColumn, readTimeColumn } from './read-time-column';
 import { celsiusFrom, temperatureUnitLabels } from './temperature-units';
 import { typeKCelsiusFromMillivolts, typeKInverseRangeMv, typeKMillivoltsFromCelsius } from './type-k-thermocouple';
 
@@ -61,146 +61,86 @@ export function resolveColumn(columns: readonly string[], reference: string): nu
   return -1;
 }
 
-/** The first column named like a time whose first cell reads as a time, else the first column if it does. */
-export function guessTimeColumn(table: LoggerTable): number {
-  const firstRow = table.rows[0] ?? [];
-  const named = table.columns.flatMap((name, index) => (guessColumnRole(name) === 'time' ? [index] : []));
-  for (const index of [...named, 0]) {
-    const cell = firstRow[index];
-    if (cell !== undefined && detectTimeFormat(cell, table.columns[index]) !== null) return index;
-  }
-  return -1;
-}
-
-const timeFormatExpectations: Record<TimeFormat, string> = {
-  seconds: 'elapsed seconds such as 12.5',
-  milliseconds: 'elapsed milliseconds such as 12500',
-  minutes: 'elapsed minutes such as 1.5',
-  clock: 'a time such as 01:02:03 (hh:mm:ss) or 62:03 (mm:ss)',
-  'date-time': 'a date-time stamp such as 2024-05-01T10:00:00 or 01.05.2024 10:00:00',
-};
-
-const halfDayS = 43_200;
-const dayS = 86_400;
-
-function readTimeColumn(
-  table: LoggerTable,
-  index: number,
-  errors: ParseErrorList,
-): { timeS: Float64Array; format: TimeFormat; startedAt: string | null } | null {
-  const column = table.columns[index];
-  const { rows, rowNumbers } = table;
-  const firstFilled = rows.findIndex((row) => (row[index] ?? '').trim() !== '');
-  const format = firstFilled < 0 ? null : detectTimeFormat(rows[firstFilled][index], column);
-  if (format === null) {
-    const row = firstFilled < 0 ? rowNumbers[0] : rowNumbers[firstFilled];
-    const cell = firstFilled < 0 ? '' : rows[firstFilled][index];
-    errors.add(
-      row,
-      column,
-      'unparseable-time',
-      `${cellLabel(row, column)}: "${cell}" is not a time. Expected elapsed seconds, mm:ss, hh:mm:ss or a date-time stamp such as 2024-05-01T10:00:00.`,
-    );
-    return null;
-  }
-  const stampCells =
-    format === 'date-time' ? [...rows.slice(0, 50), ...rows.slice(-50)].map((row) => row[index] ?? '') : [];
-  const dayFirst = detectDayFirst(stampCells);
-  const read = createTimeReader({ format, decimalComma: table.decimalComma, dayFirst });
-  const seconds = new Float64Array(rows.length);
-  let dayOffset = 0;
-  let previous = Number.NaN;
-  for (let i = 0; i < rows.length; i++) {
-    const cell = rows[i][index] ?? '';
-    let value = read(cell);
-    if (value !== value) {
-      const reason = cell.trim() === '' ? 'the time is missing' : `"${cell}" is not a time`;
-      errors.add(
-        rowNumbers[i],
-        column,
-        'unparseable-time',
-        `${cellLabel(rowNumbers[i], column)}: ${reason}. Expected ${timeFormatExpectations[format]}, like the first row.`,
-      );
-      if (errors.full) return null;
-      continue;
-    }
-    // A time-of-day column passes midnight once in a while; elapsed hh:mm:ss never falls by half a day.
-    if (format === 'clock' && value + dayOffset < previous - halfDayS) dayOffset += dayS;
-    value += dayOffset;
-    if (value <= previous) {
-      const what = value === previous ? 'repeats the time of the row before' : 'is earlier than the row before';
-      errors.add(
-        rowNumbers[i],
-        column,
-        'non-monotonic-time',
-        `${cellLabel(rowNumbers[i], column)}: "${cell.trim()}" ${what} (row ${rowNumbers[i - 1]}); times must increase from row to row.`,
-      );
-      if (errors.full) return null;
-    }
-    seconds[i] = value;
-    previous = value;
-  }
-  const first = seconds[0];
-  for (let i = 0; i < seconds.length; i++) seconds[i] -= first;
-  let startedAt: string | null = null;
-  if (format === 'date-time') {
-    const stamp = readDateTime(rows[0][index] ?? '', dayFirst);
-    if (stamp?.hasOffset) startedAt = new Date(stamp.seconds * 1000).toISOString();
-  }
-  return { timeS: seconds, format, startedAt };
-}
-
 interface RawColumn {
   values: Float64Array;
   suffixUnit: TemperatureUnit | null;
   suffixRow: number | null;
 }
 
-function readRawColumn(table: LoggerTable, index: number, errors: ParseErrorList): RawColumn {
-  const { rows, rowNumbers, decimalComma } = table;
+function readSlowCell(
+  table: LoggerTable,
+  i: number,
+  index: number,
+  cell: string,
+  raw: RawColumn,
+  errors: ParseErrorList,
+): number {
+  const reading = readCell(cell, table.decimalComma);
+  if (reading.kind === 'gap') return Number.NaN;
+  const row = table.rowNumbers[i];
   const column = table.columns[index];
-  const values = new Float64Array(rows.length);
-  let suffixUnit: TemperatureUnit | null = null;
-  let suffixRow: number | null = null;
-  for (let i = 0; i < rows.length; i++) {
-    const cell = rows[i][index];
-    if (cell === undefined || cell === '') {
-      values[i] = Number.NaN;
-      continue;
-    }
-    const plain = readPlainDecimal(cell, decimalComma);
-    if (plain === plain) {
-      values[i] = plain;
-      continue;
-    }
-    const reading = readCell(cell, decimalComma);
-    values[i] = Number.NaN;
-    if (reading.kind === 'gap') continue;
-    if (reading.kind === 'invalid') {
-      const example = decimalComma ? '45,2 (decimal comma)' : '45.2';
+  if (reading.kind === 'invalid') {
+    const example = table.decimalComma ? '45,2 (decimal comma)' : '45.2';
+    errors.add(
+      row,
+      column,
+      'not-a-number',
+      `${cellLabel(row, column)}: "${cell.trim()}" is not a number. Expected a number such as ${example}, a blank cell or an error marker such as OPEN, ERR or ----.`,
+    );
+    return Number.NaN;
+  }
+  if (reading.unit !== null) {
+    if (raw.suffixUnit === null) {
+      raw.suffixUnit = reading.unit;
+      raw.suffixRow = row;
+    } else if (reading.unit !== raw.suffixUnit) {
       errors.add(
-        rowNumbers[i],
-        column,
-        'not-a-number',
-        `${cellLabel(rowNumbers[i], column)}: "${cell.trim()}" is not a number. Expected a number such as ${example}, a blank cell or an error marker such as OPEN, ERR or ----.`,
-      );
-      continue;
-    }
-    values[i] = reading.value;
-    if (reading.unit === null) continue;
-    if (suffixUnit === null) {
-      suffixUnit = reading.unit;
-      suffixRow = rowNumbers[i];
-    } else if (reading.unit !== suffixUnit) {
-      errors.add(
-        rowNumbers[i],
+        row,
         column,
         'mixed-units',
-        `${cellLabel(rowNumbers[i], column)}: the value is in ${temperatureUnitLabels[reading.unit]}, but row ${suffixRow} of the same column is in ${temperatureUnitLabels[suffixUnit]}. Export one unit per column.`,
+        `${cellLabel(row, column)}: the value is in ${temperatureUnitLabels[reading.unit]}, but row ${raw.suffixRow} of the same column is in ${temperatureUnitLabels[raw.suffixUnit]}. Export one unit per column.`,
       );
     }
   }
-  return { values, suffixUnit, suffixRow };
+  return reading.value;
+}
+
+/**
+ * Reads the numeric columns in one pass over the rows, which touches each row once instead of once per column; plain
+ * decimals take the allocation-free path, anything else (markers, unit suffixes, bad cells) the slow one.
+ */
+function readRawColumns(table: LoggerTable, indexes: readonly number[], errors: ParseErrorList): RawColumn[] {
+  const { rows, decimalComma } = table;
+  const unique = [...new Set(indexes)];
+  const raws = unique.map((): RawColumn => ({
+    values: new Float64Array(rows.length),
+    suffixUnit: null,
+    suffixRow: null,
+  }));
+  const arrays = raws.map((raw) => raw.values);
+  const count = unique.length;
+  for (let i = 0; i < rows.length; i++) {
+    const row = rows[i];
+    for (let k = 0; k < count; k++) {
+      const cell = row[unique[k]];
+      let value = Number.NaN;
+      if (cell !== undefined && cell !== '') {
+        value = readPlainDecimal(cell, decimalComma);
+        if (value !== value) value = readSlowCell(table, i, unique[k], cell, raws[k], errors);
+      }
+      arrays[k][i] = value;
+    }
+  }
+  // One column mapped to two roles gets its own copy for each, since conversions work in place.
+  const handedOut = new Set<number>();
+  return indexes.map((index) => {
+    const raw = raws[unique.indexOf(index)];
+    if (!handedOut.has(index)) {
+      handedOut.add(index);
+      return raw;
+    }
+    return { ...raw, values: new Float64Array(raw.values) };
+  });
 }
 
 function mappedUnit(mapping: ColumnMapping, column: string): TemperatureUnit | undefined {
@@ -258,6 +198,7 @@ function absurd(
 
 const temperatureRangeText = `${plausibleReadings.temperatureC.min}…${plausibleReadings.temperatureC.max} °C`;
 
+/** Converts a raw column to °C in place, turning implausible readings into errors (or gaps for sentinels). */
 function toCelsius(
   table: LoggerTable,
   index: number,
@@ -267,7 +208,7 @@ function toCelsius(
   errors: ParseErrorList,
 ): Float64Array {
   const { min, max } = plausibleReadings.temperatureC;
-  const out = new Float64Array(raw.length);
+  const out = raw;
   const fixedJunctionMv = typeof coldJunctionC === 'number' ? typeKMillivoltsFromCelsius(coldJunctionC) : 0;
   for (let i = 0; i < raw.length; i++) {
     const value = raw[i];
@@ -387,11 +328,30 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
   const time = readTimeColumn(table, timeIndex, errors);
   if (!time) return { ok: false, errors: errors.list() };
 
+  const vrmColumns = vrmIndexes as number[];
+  const optional = (index: number | null) => (index === null ? [] : [index]);
+  const raws = readRawColumns(
+    table,
+    [
+      ...optional(junctionIndex),
+      ...vrmColumns,
+      ...optional(ambientIndex),
+      ...optional(clockIndex),
+      ...optional(powerIndex),
+    ],
+    errors,
+  );
+  let cursor = 0;
+  const junctionRaw = junctionIndex === null ? null : raws[cursor++];
+  const vrmRaws = vrmColumns.map(() => raws[cursor++]);
+  const ambientRaw = ambientIndex === null ? null : raws[cursor++];
+  const clockRaw = clockIndex === null ? null : raws[cursor++];
+  const powerRaw = powerIndex === null ? null : raws[cursor++];
+
   let junctionC: Float64Array | number | null = junction && 'fixedC' in junction ? junction.fixedC : null;
-  if (junctionIndex !== null) {
+  if (junctionIndex !== null && junctionRaw !== null) {
     const column = columns[junctionIndex];
-    const raw = readRawColumn(table, junctionIndex, errors);
-    const unit = resolveUnit(table, column, raw, mappedUnit(mapping, column), 'C', errors);
+    const unit = resolveUnit(table, column, junctionRaw, mappedUnit(mapping, column), 'C', errors);
     if (unit === 'mV') {
       errors.add(
         table.headerRow,
@@ -400,13 +360,12 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
         `${cellLabel(null, column)}: a cold junction is a temperature, not millivolts.`,
       );
     } else {
-      junctionC = toCelsius(table, junctionIndex, raw.values, unit, null, errors);
+      junctionC = toCelsius(table, junctionIndex, junctionRaw.values, unit, null, errors);
     }
   }
 
-  const readTemperature = (index: number): MappedTemperatureChannel => {
+  const readTemperature = (index: number, raw: RawColumn): MappedTemperatureChannel => {
     const column = columns[index];
-    const raw = readRawColumn(table, index, errors);
     const unit = resolveUnit(table, column, raw, mappedUnit(mapping, column), options.unit ?? 'C', errors);
     if (unit === 'mV' && junctionC === null) {
       errors.add(
@@ -419,25 +378,22 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
     }
     return { column, unit, valuesC: toCelsius(table, index, raw.values, unit, junctionC, errors) };
   };
+  const vrm = vrmColumns.map((index, k) => readTemperature(index, vrmRaws[k]));
+  const ambient = ambientIndex === null || ambientRaw === null ? null : readTemperature(ambientIndex, ambientRaw);
 
-  const vrm = (vrmIndexes as number[]).map(readTemperature);
-  const ambient = ambientIndex === null ? null : readTemperature(ambientIndex);
-
-  let clockMHz: MappedSeries | null = null;
-  if (clockIndex !== null) {
-    const column = columns[clockIndex];
-    const values = readRawColumn(table, clockIndex, errors).values;
-    if (/\bghz\b/i.test(column)) for (let i = 0; i < values.length; i++) values[i] *= 1000;
-    checkRange(table, clockIndex, values, plausibleReadings.clockMHz, 'MHz', errors);
-    clockMHz = { column, values };
-  }
-  let powerW: MappedSeries | null = null;
-  if (powerIndex !== null) {
-    const column = columns[powerIndex];
-    const values = readRawColumn(table, powerIndex, errors).values;
-    checkRange(table, powerIndex, values, plausibleReadings.powerW, 'W', errors);
-    powerW = { column, values };
-  }
+  const readSeries = (index: number, raw: RawColumn, range: { min: number; max: number }, unit: string, scale = 1) => {
+    const { values } = raw;
+    if (scale !== 1) for (let i = 0; i < values.length; i++) values[i] *= scale;
+    checkRange(table, index, values, range, unit, errors);
+    return { column: columns[index], values };
+  };
+  const clockScale = clockIndex !== null && /\bghz\b/i.test(columns[clockIndex]) ? 1000 : 1;
+  const clockMHz =
+    clockIndex === null || clockRaw === null
+      ? null
+      : readSeries(clockIndex, clockRaw, plausibleReadings.clockMHz, 'MHz', clockScale);
+  const powerW =
+    powerIndex === null || powerRaw === null ? null : readSeries(powerIndex, powerRaw, plausibleReadings.powerW, 'W');
 
   if (errors.isEmpty && vrm.every((channel) => channel.valuesC.every((value) => value !== value))) {
     errors.add(

@@ -178,8 +178,10 @@ export function analyzeRun(
   }
   const peakC = hottest.figures.peakC as number;
   const peakAtS = hottest.figures.peakAtS as number;
-  const steadyMeans = channels.map((channel) => channel.figures.steadyStateMeanC ?? -Infinity);
-  const steadyStateMeanC = Math.max(...steadyMeans);
+  const steadyMeans = channels.flatMap((channel) =>
+    channel.figures.steadyStateMeanC === null ? [] : [channel.figures.steadyStateMeanC],
+  );
+  const steadyStateMeanC = steadyMeans.length > 0 ? Math.max(...steadyMeans) : null;
 
   let ambientMeanC: number | null = null;
   let ambientMinC: number | null = null;

@@ -289,7 +289,8 @@ export const analysisResultSchema = z.object({
   peakC: z.number(),
   peakAtS: z.number(),
   peakChannel: z.string(),
-  steadyStateMeanC: z.number(),
+  /** Highest final-window mean over the VRM probes; null when no probe has a reading in the final window. */
+  steadyStateMeanC: z.number().nullable(),
   reachedSteadyState: z.boolean(),
   steadyStateRule: z.string(),
   ambientMeanC: z.number().nullable(),

@@ -94,6 +94,12 @@ describe('logger import: the shapes loggers write', () => {
     expect(mapped.log.vrm.map((channel) => channel.unit)).toEqual(['F', 'K']);
   });
 
+  it('converts a column mapped to two roles once for each role', () => {
+    const text = ['Time,Probe [°F]', '0,212', '1,212'].join('\n');
+    const mapped = readMappedLog(table(text), { vrm: ['Probe [°F]'], ambient: 'Probe [°F]' }, {});
+    expect(mapped.ok && [mapped.log.vrm[0].valuesC[0], mapped.log.ambient?.valuesC[0]]).toEqual([100, 100]);
+  });
+
   it('takes the unit from the mapping or the upload options when the header names none', () => {
     const text = ['Time,CH1,CH2', '0,212,50', '1,212,50'].join('\n');
     const mapped = readMappedLog(table(text), { vrm: ['CH1', 'CH2'], units: { ch1: 'F' } }, { unit: 'C' });

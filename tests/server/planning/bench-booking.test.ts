@@ -1,0 +1,153 @@
+import { describe, expect, it } from 'vitest';
+import { BenchBookingEntity } from '../../../server/entities/bench-booking.entity';
+import { signedIn, testApp, testDataSource, type Client } from '../support/test-app';
+import {
+  addEntry,
+  createProduct,
+  createRoundup,
+  dayFromToday,
+  matrixOf,
+  moveToBench,
+  tag,
+} from './support/planning-fixtures';
+
+/** An hour slot `hoursAhead` from a whole hour tomorrow, as ISO instants. */
+function slot(hoursAhead: number, hours = 1) {
+  const base = Date.parse(`${dayFromToday(1)}T08:00:00.000Z`);
+  return {
+    startsAt: new Date(base + hoursAhead * 3_600_000).toISOString(),
+    endsAt: new Date(base + (hoursAhead + hours) * 3_600_000).toISOString(),
+  };
+}
+
+async function setUp() {
+  const app = await testApp();
+  const editor = await signedIn(app, 'editor');
+  const tester = await signedIn(app, 'tester');
+  const otherTester = await signedIn(app, 'tester');
+  const { roundupId, platform } = await createRoundup(editor.agent, { configurations: 2 });
+  const { entry } = await addEntry(editor.agent, roundupId, await createProduct(editor.agent, platform));
+  await moveToBench(editor.agent, roundupId);
+  const cells = (await matrixOf(editor.agent, roundupId)).rows[0].cells;
+  await editor.agent
+    .post(`/api/roundups/${roundupId}/assignments`)
+    .send({ cellIds: [cells[0].id], testerId: tester.user.id, dueDate: dayFromToday(3) });
+  await editor.agent
+    .post(`/api/roundups/${roundupId}/assignments`)
+    .send({ cellIds: [cells[1].id], testerId: otherTester.user.id, dueDate: dayFromToday(3) });
+  const bench = await editor.agent.post('/api/benches').send({ name: `Bench ${tag()}`, location: 'Back room' });
+  expect(bench.status, bench.text).toBe(201);
+  return { app, editor, tester, otherTester, roundupId, entryId: entry.id, cells, benchId: bench.body.id as number };
+}
+
+function book(agent: Client, benchId: number, body: Record<string, unknown>) {
+  return agent.post(`/api/benches/${benchId}/bookings`).send(body);
+}
+
+/**
+ * Waits until `count` statements on bench tables have been waiting for at least 100 ms (they are blocked on a
+ * row lock), or 10 s have passed.
+ */
+async function waitForBlockedBenchStatements(count: number) {
+  const ds = await testDataSource();
+  const deadline = Date.now() + 10_000;
+  while (Date.now() < deadline) {
+    const [row] = await ds.query(
+      "SELECT COUNT(*) AS n FROM information_schema.PROCESSLIST WHERE COMMAND = 'Query' AND TIME_MS >= 100 AND INFO LIKE '%bench%'",
+    );
+    if (Number(row.n) >= count) return;
+    await new Promise((resolve) => setTimeout(resolve, 20));
+  }
+}
+
+describe('bench booking', () => {
+  it('when two testers ask for overlapping slots at the same moment, then exactly one booking is made', async () => {
+    const { tester, otherTester, cells, benchId } = await setUp();
+    // Make the race certain rather than lucky: hold both testers' user rows locked from outside, so each
+    // request's INSERT (whose foreign-key check needs that row) waits inside its transaction. Without the bench
+    // row lock both requests would pass the overlap check, wait here, and then both commit. With it, the
+    // second request waits on the bench row until the first commits, then sees the first booking.
+    const ds = await testDataSource();
+    const blocker = ds.createQueryRunner();
+    await blocker.connect();
+    await blocker.startTransaction();
+    let responses: Awaited<ReturnType<typeof book>>[];
+    try {
+      await blocker.query('SELECT id FROM users WHERE id IN (?, ?) FOR UPDATE', [tester.user.id, otherTester.user.id]);
+      const inFlight = Promise.all([
+        book(tester.agent, benchId, { ...slot(0, 2), cellIds: [cells[0].id] }),
+        book(otherTester.agent, benchId, { ...slot(1, 2), cellIds: [cells[1].id] }),
+      ]);
+      await waitForBlockedBenchStatements(2);
+      await blocker.commitTransaction();
+      responses = await inFlight;
+    } finally {
+      if (blocker.isTransactionActive) await blocker.rollbackTransaction();
+      await blocker.release();
+    }
+    const [first, second] = responses;
+    expect([first.status, second.status].sort()).toEqual([201, 409]);
+    const refused = first.status === 409 ? first : second;
+    expect(refused.body.error.code).toBe('booking_overlap');
+    expect(refused.body.error.message).toMatch(
+      /is already booked .* UTC by Test tester .*, which overlaps .* Choose another time or bench\./,
+    );
+    expect(await ds.getRepository(BenchBookingEntity).countBy({ benchId })).toBe(1);
+  });
+
+  it('many simultaneous requests for the same slot still leave a single booking', async () => {
+    const { tester, cells, benchId } = await setUp();
+    const responses = await Promise.all(
+      Array.from({ length: 6 }, () => book(tester.agent, benchId, { ...slot(4), cellIds: [cells[0].id] })),
+    );
+    expect(responses.filter((r) => r.status === 201)).toHaveLength(1);
+    expect(responses.filter((r) => r.status === 409)).toHaveLength(5);
+    expect(await (await testDataSource()).getRepository(BenchBookingEntity).countBy({ benchId })).toBe(1);
+  });
+
+  it('slots that only touch are fine; an overlap, someone else’s cells or an unassigned cell are refused', async () => {
+    const { editor, tester, otherTester, cells, benchId, roundupId } = await setUp();
+    expect((await book(tester.agent, benchId, { ...slot(0), cellIds: [cells[0].id] })).status).toBe(201);
+    // [09:00, 10:00) after [08:00, 09:00): touching, not overlapping (first principles, half-open intervals).
+    expect((await book(otherTester.agent, benchId, { ...slot(1), cellIds: [cells[1].id] })).status).toBe(201);
+    const overlap = await book(tester.agent, benchId, { ...slot(0.5), cellIds: [cells[0].id] });
+    expect(overlap.status).toBe(409);
+    expect((await book(tester.agent, benchId, { ...slot(5), cellIds: [cells[1].id] })).status).toBe(403);
+    await editor.agent.post(`/api/roundups/${roundupId}/cells/${cells[0].id}/transitions`).send({ action: 'unassign' });
+    expect((await book(tester.agent, benchId, { ...slot(6), cellIds: [cells[0].id] })).status).toBe(403);
+    const backwards = await book(tester.agent, benchId, {
+      startsAt: slot(3).endsAt,
+      endsAt: slot(3).startsAt,
+      cellIds: [cells[0].id],
+    });
+    expect(backwards.status).toBe(400);
+    expect(backwards.body.error.fields.endsAt).toMatch(/end after it starts/);
+  });
+
+  it('a booking accepts times with an explicit zone and answers in UTC; testers cancel only their own', async () => {
+    const { editor, tester, otherTester, cells, benchId } = await setUp();
+    const day = dayFromToday(2);
+    const made = await book(tester.agent, benchId, {
+      startsAt: `${day}T10:00:00+02:00`,
+      endsAt: `${day}T12:30:00+02:00`,
+      cellIds: [cells[0].id],
+      note: 'Soak both configurations',
+    });
+    expect(made.status, made.text).toBe(201);
+    expect(made.body).toMatchObject({
+      startsAt: `${day}T08:00:00.000Z`,
+      endsAt: `${day}T10:30:00.000Z`,
+      cancellable: true,
+    });
+    expect(made.body.cells[0].cell.id).toBe(cells[0].id);
+
+    const calendar = await otherTester.agent.get(
+      `/api/benches/${benchId}/bookings?from=${day}T00:00:00Z&to=${dayFromToday(3)}T00:00:00Z`,
+    );
+    expect(calendar.body.bookings).toEqual([expect.objectContaining({ id: made.body.id, cancellable: false })]);
+    expect((await otherTester.agent.delete(`/api/benches/${benchId}/bookings/${made.body.id}`)).status).toBe(403);
+    const mine = await tester.agent.get('/api/my-bench');
+    expect(mine.body.upcomingBookings.map((b: { id: number }) => b.id)).toEqual([made.body.id]);
+    expect((await editor.agent.delete(`/api/benches/${benchId}/bookings/${made.body.id}`)).status).toBe(204);
+  });
+});

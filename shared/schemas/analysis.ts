@@ -270,6 +270,7 @@ export const throttleSchema = z.object({
   source: z.enum(['clock', 'power', 'manual', 'none']),
   firstAtS: z.number().nullable(),
   shareThrottled: z.number().min(0).max(1).nullable(),
+  /** Loaded level drops are measured against: the loaded median, or the first five loaded minutes' when higher. */
   loadedMedian: z.number().nullable(),
   threshold: z.number().nullable(),
   episodes: z.array(z.object({ startS: z.number(), endS: z.number() })),

@@ -12,10 +12,18 @@ describe('throttle detection: a sustained drop below a share of the loaded media
   it('finds a clock cut from 4600 to 2800 MHz at minute 30 that lasts to the end (first principles)', () => {
     const { timeS, signal } = clock(3600, (t) => (t >= 1800 ? 2800 : 4600));
     const result = detectThrottle(timeS, signal, 0, settings);
-    // Median of 1800 samples at 4600 and 1800 at 2800 is 3700 MHz; 0.85 × 3700 = 3145 MHz.
-    expect(result.loadedMedian).toBe(3700);
-    expect(result.threshold).toBeCloseTo(3145, 9);
+    // The run's median is 3700 MHz, the first five loaded minutes' 4600 MHz; the higher is the reference, and
+    // 0.85 × 4600 = 3910 MHz.
+    expect(result.loadedMedian).toBe(4600);
+    expect(result.threshold).toBeCloseTo(3910, 9);
     expect(result).toMatchObject({ detected: true, firstAtS: 1800, shareThrottled: 0.5 });
+  });
+
+  it('finds a throttle that lasts most of the run, which the run median alone would hide', () => {
+    const { timeS, signal } = clock(3600, (t) => (t >= 600 ? 3000 : 4600));
+    const result = detectThrottle(timeS, signal, 0, settings);
+    expect(result).toMatchObject({ detected: true, firstAtS: 600, loadedMedian: 4600 });
+    expect(result.shareThrottled).toBeCloseTo(3000 / 3600, 12);
   });
 
   it('ignores a dip shorter than the minimum duration', () => {
@@ -45,7 +53,14 @@ describe('throttle detection: a sustained drop below a share of the loaded media
 
   it('judges only the loaded part: an idle clock before the load start is no throttle', () => {
     const { timeS, signal } = clock(1200, (t) => (t < 120 ? 800 : 4600));
-    expect(detectThrottle(timeS, signal, 0, settings).detected).toBe(true);
+    expect(detectThrottle(timeS, signal, 0, settings).detected).toBe(false);
     expect(detectThrottle(timeS, signal, 120, settings).detected).toBe(false);
+  });
+
+  it('still finds a throttle after an idle start', () => {
+    const { timeS, signal } = clock(1200, (t) => (t < 120 ? 800 : t >= 600 ? 2500 : 4600));
+    // Loaded from 120 s: 480 s at 4600 MHz, 600 s at 2500 MHz; the drop is 600 / 1080 of it (first principles).
+    expect(detectThrottle(timeS, signal, 0, settings)).toMatchObject({ detected: true, firstAtS: 600 });
+    expect(detectThrottle(timeS, signal, 0, settings).shareThrottled).toBeCloseTo(600 / 1080, 12);
   });
 });

@@ -33,6 +33,12 @@ export const navigation: readonly NavigationEntry[] = [
     description: 'Staff accounts: add colleagues, set roles, deactivate accounts, reset passwords.',
   },
   {
+    to: paths.logCheck,
+    label: 'Log check',
+    roles: ['tester', 'editor'],
+    description: 'Upload a logger file from a soak: check how it reads, map the columns, get the figures and verdict.',
+  },
+  {
     to: paths.account,
     label: 'Account',
     roles: everyone,

@@ -47,6 +47,7 @@ export function createAppRouter(queryClient: QueryClient) {
                 { index: true, lazy: lazy(() => import('./routes/dashboard')) },
                 { path: 'users', lazy: lazy(() => import('./routes/users')) },
                 { path: 'account', lazy: lazy(() => import('./routes/account')) },
+                { path: 'log-check', lazy: lazy(() => import('./routes/log-check')) },
                 { path: '*', lazy: lazy(() => import('./routes/not-found')) },
               ],
             },

@@ -3,6 +3,7 @@ export const paths = {
   dashboard: '/',
   users: '/users',
   account: '/account',
+  logCheck: '/log-check',
   signIn: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
 } as const;
 

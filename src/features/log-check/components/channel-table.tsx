@@ -1,0 +1,77 @@
+import { useMemo } from 'react';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import type { ChannelFigures } from '../../../../shared/schemas/analysis';
+import { formatC, formatDeltaC, formatMinutes, unitLabel } from './format-figures';
+
+/** One row per VRM probe: its own peak, minimum, steady-state mean and change, gaps and spikes. */
+export function ChannelTable({ channels, peakChannel }: { channels: readonly ChannelFigures[]; peakChannel: string }) {
+  const columns = useMemo<DataTableColumn<ChannelFigures>[]>(
+    () => [
+      {
+        id: 'column',
+        header: 'Probe',
+        rowHeader: true,
+        sortValue: (channel) => channel.column,
+        cell: (channel) => (
+          <span className="font-mono text-[0.8125rem]">
+            {channel.column}
+            {channel.column === peakChannel && <span className="ml-1.5 font-sans text-xs text-copper">hottest</span>}
+          </span>
+        ),
+      },
+      { id: 'unit', header: 'Logged in', cell: (channel) => unitLabel(channel.unit), hideBelow: 'md' },
+      { id: 'peak', header: 'Peak', numeric: true, sortValue: (c) => c.peakC, cell: (c) => formatC(c.peakC) },
+      {
+        id: 'peakAt',
+        header: 'Peak at',
+        numeric: true,
+        sortValue: (c) => c.peakAtS,
+        cell: (c) => formatMinutes(c.peakAtS),
+        hideBelow: 'sm',
+      },
+      { id: 'min', header: 'Lowest', numeric: true, cell: (c) => formatC(c.minC), hideBelow: 'md' },
+      {
+        id: 'steady',
+        header: 'Final mean',
+        numeric: true,
+        sortValue: (c) => c.steadyStateMeanC,
+        cell: (c) => formatC(c.steadyStateMeanC),
+      },
+      {
+        id: 'change',
+        header: 'Final change',
+        numeric: true,
+        cell: (c) => formatDeltaC(c.steadyStateChangeC, true),
+        hideBelow: 'sm',
+      },
+      {
+        id: 'reached',
+        header: 'Steady',
+        cell: (c) =>
+          c.reachedSteadyState ? (
+            <span className="text-teal">
+              <span aria-hidden="true">✓ </span>Yes
+            </span>
+          ) : (
+            <span className="text-amber">
+              <span aria-hidden="true">! </span>No
+            </span>
+          ),
+      },
+      { id: 'gaps', header: 'Gaps', numeric: true, cell: (c) => c.gapSamples, hideBelow: 'md' },
+      { id: 'spikes', header: 'Spikes', numeric: true, cell: (c) => c.spikeCount, hideBelow: 'md' },
+    ],
+    [peakChannel],
+  );
+  return (
+    <DataTable
+      caption="Figures per VRM probe"
+      rows={channels}
+      columns={columns}
+      rowKey={(channel) => channel.column}
+      filter={false}
+      noun={['probe', 'probes']}
+      footnote="Final mean and change are over the final window of the soak; gaps and spikes count samples."
+    />
+  );
+}

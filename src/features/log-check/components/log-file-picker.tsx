@@ -1,0 +1,111 @@
+import { useId, useRef, useState, type DragEvent } from 'react';
+import { cx } from '../../../lib/class-names';
+import { formatBytes } from './format-figures';
+
+export interface LogFilePickerProps {
+  file: File | null;
+  onChoose: (file: File) => void;
+  /** Why the last file was refused (type, size, an empty file): shown beside the input. */
+  error?: string | null;
+  disabled?: boolean;
+}
+
+const accept = '.csv,.tsv,.txt,.log,.dat,text/csv,text/plain,text/tab-separated-values';
+
+/**
+ * A drop area around an ordinary file input: dragging a file from the desktop works, and so does the keyboard (Tab to
+ * the input, Enter or Space opens the browser's file chooser).
+ */
+export function LogFilePicker({ file, onChoose, error, disabled = false }: LogFilePickerProps) {
+  const inputId = useId();
+  const hintId = useId();
+  const errorId = useId();
+  const [dragging, setDragging] = useState(false);
+  const dragDepth = useRef(0);
+
+  const hasFiles = (event: DragEvent) => Array.from(event.dataTransfer.types).includes('Files');
+
+  const onDragEnter = (event: DragEvent<HTMLDivElement>) => {
+    if (disabled || !hasFiles(event)) return;
+    event.preventDefault();
+    dragDepth.current += 1;
+    setDragging(true);
+  };
+  const onDragLeave = () => {
+    dragDepth.current = Math.max(0, dragDepth.current - 1);
+    if (dragDepth.current === 0) setDragging(false);
+  };
+  const onDragOver = (event: DragEvent<HTMLDivElement>) => {
+    if (disabled || !hasFiles(event)) return;
+    event.preventDefault();
+    event.dataTransfer.dropEffect = 'copy';
+  };
+  const onDrop = (event: DragEvent<HTMLDivElement>) => {
+    event.preventDefault();
+    dragDepth.current = 0;
+    setDragging(false);
+    if (disabled) return;
+    const dropped = event.dataTransfer.files[0];
+    if (dropped) onChoose(dropped);
+  };
+
+  return (
+    <div
+      onDragEnter={onDragEnter}
+      onDragLeave={onDragLeave}
+      onDragOver={onDragOver}
+      onDrop={onDrop}
+      className={cx(
+        'rounded-[3px] border-2 border-dashed px-4 py-5 transition-colors',
+        dragging ? 'border-copper bg-wash' : error ? 'border-red bg-surface' : 'border-edge bg-surface',
+      )}
+    >
+      <p className="text-sm font-semibold text-ink" aria-hidden="true">
+        {dragging ? 'Let go to read this file' : 'Drop a logger file here'}
+      </p>
+      <p className="mt-0.5 text-[0.8125rem] text-muted" aria-hidden="true">
+        or choose it below.
+      </p>
+      <div className="mt-3">
+        <label htmlFor={inputId} className="mb-1 block text-sm font-semibold text-ink">
+          Logger file
+        </label>
+        <input
+          id={inputId}
+          type="file"
+          accept={accept}
+          disabled={disabled}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={cx(error ? errorId : undefined, hintId) || undefined}
+          onChange={(event) => {
+            const chosen = event.target.files?.[0];
+            // Cleared so choosing the same file again (after fixing it on disk) reads it again.
+            event.target.value = '';
+            if (chosen) onChoose(chosen);
+          }}
+          className={cx(
+            'block w-full max-w-md text-sm text-ink',
+            'file:mr-3 file:min-h-9 file:cursor-pointer file:rounded-[3px] file:border file:border-edge file:bg-surface file:px-3.5 file:text-sm file:font-medium file:text-ink hover:file:bg-wash',
+            'disabled:cursor-not-allowed disabled:opacity-55',
+          )}
+        />
+        {error && (
+          <p id={errorId} className="mt-1 flex gap-1.5 text-sm font-medium text-red">
+            <span aria-hidden="true">✕</span>
+            <span>{error}</span>
+          </p>
+        )}
+        <p id={hintId} className="mt-1 text-[0.8125rem] text-muted">
+          A CSV, TSV or text export of the logger, up to 25{'\u2009'}MB. Nothing is saved: the file is read and
+          analysed, then forgotten.
+        </p>
+      </div>
+      {file && (
+        <p className="mt-3 text-sm text-ink">
+          Chosen: <span className="font-mono text-[0.8125rem] break-all">{file.name}</span>{' '}
+          <span className="numeric text-muted">({formatBytes(file.size)})</span>
+        </p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,234 @@
+import {
+  analysisOptionsSchema,
+  analysisRequestSchema,
+  type AnalysisRequestInput,
+  type ColumnRole,
+  type LogPreview,
+  type TemperatureUnit,
+  type ToleranceClass,
+} from '../../../../shared/schemas/analysis';
+
+/**
+ * What the tester has chosen in the mapping form, as the form holds it (numbers as typed). It survives every failed
+ * request, and a second file with the same header keeps it.
+ */
+export interface MappingDraft {
+  time: string;
+  vrm: string[];
+  ambient: string;
+  clock: string;
+  power: string;
+  /** Only the units the tester set; other columns use the unit their header names, else °C. */
+  units: Record<string, TemperatureUnit>;
+  coldJunction: 'none' | 'fixed' | 'column';
+  coldJunctionFixedC: string;
+  coldJunctionColumn: string;
+  soakMinutes: string;
+  ambientTargetC: string;
+  ambientToleranceC: string;
+  ambientDriftLimitC: string;
+  toleranceClass: ToleranceClass;
+  useNormalizedPeak: boolean;
+  manualThrottleMinute: string;
+  throttlePercent: string;
+  throttleMinSeconds: string;
+  comfortableBelowC: string;
+  warmUpToC: string;
+  testerMarkedUnstable: boolean;
+}
+
+export type DraftField = Exclude<keyof MappingDraft, 'units'> | `unit:${string}`;
+
+/** The schema's own defaults, so the form never carries numbers of its own. */
+export const defaultOptions = analysisOptionsSchema.parse({});
+
+export const roleLabels: Record<ColumnRole, string> = {
+  time: 'Time',
+  vrm: 'VRM probe',
+  ambient: 'Ambient',
+  clock: 'Clock (MHz)',
+  power: 'Package power (W)',
+  'cold-junction': 'Cold junction',
+  other: 'Not used',
+};
+
+function optionFields(): Omit<MappingDraft, 'time' | 'vrm' | 'ambient' | 'clock' | 'power' | 'units'> {
+  return {
+    coldJunction: 'none',
+    coldJunctionFixedC: '',
+    coldJunctionColumn: '',
+    soakMinutes: String(defaultOptions.soakMinutes),
+    ambientTargetC: String(defaultOptions.ambientTargetC),
+    ambientToleranceC: String(defaultOptions.ambientToleranceC),
+    ambientDriftLimitC: String(defaultOptions.ambientDriftLimitC),
+    toleranceClass: defaultOptions.toleranceClass,
+    useNormalizedPeak: defaultOptions.useNormalizedPeak,
+    manualThrottleMinute: '',
+    throttlePercent: String(Math.round(defaultOptions.throttleFraction * 100)),
+    throttleMinSeconds: String(defaultOptions.throttleMinSeconds),
+    comfortableBelowC: String(defaultOptions.rubric.comfortableBelowC),
+    warmUpToC: String(defaultOptions.rubric.warmUpToC),
+    testerMarkedUnstable: defaultOptions.testerMarkedUnstable,
+  };
+}
+
+/** The unit a column is read in: the tester's choice, else its header's, else °C. */
+export function unitOf(draft: MappingDraft, preview: LogPreview, column: string): TemperatureUnit {
+  return draft.units[column] ?? preview.columns.find((entry) => entry.name === column)?.guessedUnit ?? 'C';
+}
+
+/** Columns read as temperatures under the draft, in header order. */
+export function temperatureColumns(draft: MappingDraft, preview: LogPreview): string[] {
+  const chosen = new Set([...draft.vrm, draft.ambient]);
+  if (draft.coldJunction === 'column') chosen.add(draft.coldJunctionColumn);
+  return preview.columns.map((column) => column.name).filter((name) => name && chosen.has(name));
+}
+
+/**
+ * The mapping the server guessed from the header, as a draft. Options the tester already set are kept, and so is the
+ * whole mapping when the new file has the same columns as the last one.
+ */
+export function draftFromPreview(
+  preview: LogPreview,
+  previous: { draft: MappingDraft; preview: LogPreview } | null,
+): MappingDraft {
+  const names = preview.columns.map((column) => column.name);
+  if (previous && previous.preview.columns.map((column) => column.name).join('\u0000') === names.join('\u0000')) {
+    return previous.draft;
+  }
+  const guessed = preview.guessedMapping;
+  const junctionColumn = preview.columns.find((column) => column.guessedRole === 'cold-junction')?.name ?? '';
+  const draft: MappingDraft = {
+    ...(previous ? previous.draft : optionFields()),
+    time: guessed?.time ?? preview.timeColumn ?? '',
+    vrm: guessed?.vrm ?? [],
+    ambient: guessed?.ambient ?? '',
+    clock: guessed?.clock ?? '',
+    power: guessed?.power ?? '',
+    units: {},
+    coldJunction: 'none',
+    coldJunctionColumn: junctionColumn,
+  };
+  const millivolts = temperatureColumns(draft, preview).some((column) => unitOf(draft, preview, column) === 'mV');
+  if (millivolts) draft.coldJunction = junctionColumn ? 'column' : 'fixed';
+  return draft;
+}
+
+export type DraftErrors = Partial<Record<DraftField, string>>;
+
+const fieldByIssuePath: Record<string, DraftField> = {
+  'mapping.time': 'time',
+  'mapping.vrm': 'vrm',
+  'mapping.ambient': 'ambient',
+  'mapping.clock': 'clock',
+  'mapping.power': 'power',
+  'options.coldJunction.fixedC': 'coldJunctionFixedC',
+  'options.coldJunction.column': 'coldJunctionColumn',
+  'options.soakMinutes': 'soakMinutes',
+  'options.ambientTargetC': 'ambientTargetC',
+  'options.ambientToleranceC': 'ambientToleranceC',
+  'options.ambientDriftLimitC': 'ambientDriftLimitC',
+  'options.toleranceClass': 'toleranceClass',
+  'options.manualThrottleMinute': 'manualThrottleMinute',
+  'options.throttleFraction': 'throttlePercent',
+  'options.throttleMinSeconds': 'throttleMinSeconds',
+  'options.rubric.comfortableBelowC': 'comfortableBelowC',
+  'options.rubric.warmUpToC': 'warmUpToC',
+};
+
+function readNumber(text: string): number | null {
+  const trimmed = text.trim().replace(',', '.');
+  if (trimmed === '') return null;
+  const value = Number(trimmed);
+  return Number.isFinite(value) ? value : Number.NaN;
+}
+
+/**
+ * Turns the draft into the request the server validates, checked with the same shared schema first; field problems
+ * come back keyed by form field.
+ */
+export function requestFromDraft(
+  draft: MappingDraft,
+  preview: LogPreview,
+): { request: AnalysisRequestInput; errors: null } | { request: null; errors: DraftErrors } {
+  const errors: DraftErrors = {};
+  const number = (field: DraftField, text: string, required = true): number | null => {
+    const value = readNumber(text);
+    if (value === null) {
+      if (required) errors[field] = 'Enter a number.';
+      return null;
+    }
+    if (Number.isNaN(value)) {
+      errors[field] = 'Enter a number, such as 21.5.';
+      return null;
+    }
+    return value;
+  };
+
+  if (!draft.time) errors.time = 'Choose the time column.';
+  if (draft.vrm.includes(draft.time)) errors.vrm = 'The time column cannot also be a VRM probe.';
+  for (const role of ['ambient', 'clock', 'power'] as const) {
+    if (draft[role] && (draft[role] === draft.time || draft.vrm.includes(draft[role]))) {
+      errors[role] = 'This column already has another role.';
+    }
+  }
+
+  const units: Record<string, TemperatureUnit> = {};
+  for (const column of temperatureColumns(draft, preview)) units[column] = unitOf(draft, preview, column);
+  const millivolts = Object.entries(units).some(
+    ([column, unit]) => unit === 'mV' && column !== draft.coldJunctionColumn,
+  );
+
+  let coldJunction: { fixedC: number } | { column: string } | undefined;
+  if (draft.coldJunction === 'fixed') {
+    const fixedC = number('coldJunctionFixedC', draft.coldJunctionFixedC);
+    if (fixedC !== null) coldJunction = { fixedC };
+  } else if (draft.coldJunction === 'column') {
+    if (!draft.coldJunctionColumn) errors.coldJunctionColumn = 'Choose the cold-junction column.';
+    else coldJunction = { column: draft.coldJunctionColumn };
+  } else if (millivolts) {
+    errors.coldJunction = 'Millivolt channels need a cold junction: a fixed temperature or a logged column.';
+  }
+
+  const throttlePercent = number('throttlePercent', draft.throttlePercent);
+  const manualThrottleMinute = draft.clock ? null : number('manualThrottleMinute', draft.manualThrottleMinute, false);
+
+  const request: AnalysisRequestInput = {
+    mapping: {
+      time: draft.time || undefined,
+      vrm: draft.vrm,
+      ambient: draft.ambient || null,
+      clock: draft.clock || null,
+      power: draft.power || null,
+      units,
+    },
+    options: {
+      ...(coldJunction ? { coldJunction } : {}),
+      soakMinutes: number('soakMinutes', draft.soakMinutes) ?? undefined,
+      ambientTargetC: number('ambientTargetC', draft.ambientTargetC) ?? undefined,
+      ambientToleranceC: number('ambientToleranceC', draft.ambientToleranceC) ?? undefined,
+      ambientDriftLimitC: number('ambientDriftLimitC', draft.ambientDriftLimitC) ?? undefined,
+      toleranceClass: draft.toleranceClass,
+      useNormalizedPeak: draft.useNormalizedPeak,
+      manualThrottleMinute,
+      throttleFraction: throttlePercent === null ? undefined : throttlePercent / 100,
+      throttleMinSeconds: number('throttleMinSeconds', draft.throttleMinSeconds) ?? undefined,
+      testerMarkedUnstable: draft.testerMarkedUnstable,
+      rubric: {
+        comfortableBelowC: number('comfortableBelowC', draft.comfortableBelowC) ?? undefined,
+        warmUpToC: number('warmUpToC', draft.warmUpToC) ?? undefined,
+      },
+    },
+  };
+
+  const checked = analysisRequestSchema.safeParse(request);
+  if (!checked.success) {
+    for (const issue of checked.error.issues) {
+      const field = fieldByIssuePath[issue.path.map(String).join('.')];
+      if (field && !errors[field]) errors[field] = issue.message;
+    }
+    if (Object.keys(errors).length === 0) errors.time = checked.error.issues[0]?.message ?? 'Check the mapping.';
+  }
+  if (Object.keys(errors).length > 0) return { request: null, errors };
+  return { request, errors: null };
+}

@@ -1,0 +1,76 @@
+import { useMemo } from 'react';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import type { ParseError } from '../../../../shared/schemas/analysis';
+
+export interface ParseErrorTableProps {
+  errors: readonly ParseError[];
+  /** The server's one-line summary. */
+  message: string;
+  /** Whether the file is being read for the first time or with the tester's mapping. */
+  stage: 'reading' | 'analysing';
+}
+
+interface NumberedError extends ParseError {
+  key: number;
+}
+
+/** The 422 answer: every problem the server found, with the line of the file and the column it is in. */
+export function ParseErrorTable({ errors, message, stage }: ParseErrorTableProps) {
+  const rows = useMemo<NumberedError[]>(() => errors.map((error, key) => ({ ...error, key })), [errors]);
+  const columns = useMemo<DataTableColumn<NumberedError>[]>(
+    () => [
+      {
+        id: 'row',
+        header: 'Row',
+        numeric: true,
+        sortValue: (error) => error.row,
+        cell: (error) => error.row ?? '—',
+      },
+      {
+        id: 'column',
+        header: 'Column',
+        sortValue: (error) => error.column ?? '',
+        cell: (error) =>
+          error.column ? (
+            <span className="font-mono text-[0.8125rem] break-all">{error.column}</span>
+          ) : (
+            <span className="text-muted">—</span>
+          ),
+      },
+      {
+        id: 'message',
+        header: 'What is wrong',
+        filterValue: (error) => `${error.message} ${error.code}`,
+        cell: (error) => (
+          <span className="block min-w-64">
+            {error.message} <span className="font-mono text-xs text-muted">({error.code})</span>
+          </span>
+        ),
+      },
+    ],
+    [],
+  );
+
+  return (
+    <div className="rounded-[3px] border border-l-4 border-rule border-l-red bg-surface px-4 py-3">
+      {/* Only the summary is announced; the table is there to read at the tester's pace. */}
+      <div role="alert" className="mb-3">
+        <p className="font-semibold text-ink">
+          {stage === 'reading' ? 'The file could not be read' : 'The file could not be analysed with this mapping'}
+        </p>
+        <p className="mt-0.5 text-sm text-ink">
+          {message} {errors.length === 1 ? 'One problem' : `${errors.length} problems`} below. Fix the file and choose
+          it again, or change the mapping; your choices stay as they are.
+        </p>
+      </div>
+      <DataTable
+        caption="Problems found in the logger file"
+        rows={rows}
+        columns={columns}
+        rowKey={(error) => error.key}
+        filter={rows.length > 8 ? { label: 'Filter problems', placeholder: 'Column or message' } : false}
+        noun={['problem', 'problems']}
+      />
+    </div>
+  );
+}

@@ -230,17 +230,15 @@ export class RoundupEntriesService {
             .find({ where: { roundupId }, order: { position: 'ASC' } });
           const now = new Date();
           if (configs.length > 0) {
-            await manager
-              .getRepository(MatrixCellEntity)
-              .insert(
-                configs.map((c) => ({
-                  roundupId,
-                  entryId,
-                  loadConfigurationId: c.loadConfigurationId,
-                  state: 'not-started' as const,
-                  stateChangedAt: now,
-                })),
-              );
+            await manager.getRepository(MatrixCellEntity).insert(
+              configs.map((c) => ({
+                roundupId,
+                entryId,
+                loadConfigurationId: c.loadConfigurationId,
+                state: 'not-started' as const,
+                stateChangedAt: now,
+              })),
+            );
           }
           await manager.getRepository(SampleEntity).insert({ entryId, status: 'ordered' });
         }
@@ -249,7 +247,7 @@ export class RoundupEntriesService {
         ) as RoundupEntry;
         const warnings: string[] = [];
         if (entry.priceCheck.warning) warnings.push(entry.priceCheck.warning);
-        if (product.platform !== roundup.platform) {
+        if (input.kind === 'tested' && product.platform !== roundup.platform) {
           warnings.push(
             `${product.maker} ${product.model} is a ${product.platform} product; this roundup covers ${roundup.platform}.`,
           );

@@ -56,6 +56,11 @@ export function priceCheckFor(
   };
 }
 
+/** Reference entries are shown for comparison only: the band does not apply to them, so they carry no warning. */
+function referencePriceCheck(entry: RoundupEntryEntity, check: PriceCheck): PriceCheck {
+  return entry.kind === 'reference' ? { ...check, warning: null } : check;
+}
+
 /** Cells that are done (or waiting for the editor) are never overdue. */
 const finishedStates = new Set<CellState>(['recorded', 'accepted']);
 
@@ -276,7 +281,7 @@ export async function roundupEntries(
       kind: entry.kind,
       position: entry.position,
       product,
-      priceCheck: priceCheckFor(roundup, prices.get(entry.productId) ?? [], people, now),
+      priceCheck: referencePriceCheck(entry, priceCheckFor(roundup, prices.get(entry.productId) ?? [], people, now)),
       referenceRoundup: reference ? { id: reference.id, title: reference.title } : null,
       sample: sample ? toSampleDto(sample, entry, product, roundup.timeZone, now) : null,
       addedBy: personOrNull(people, entry.addedBy),
@@ -305,12 +310,10 @@ export async function queueItems(
     manager,
     entries.map((e) => e.productId),
   );
-  const configs = await manager
-    .getRepository(LoadConfigurationEntity)
-    .find({
-      where: { id: In([...new Set(cells.map((c) => c.loadConfigurationId))]) },
-      select: { id: true, name: true },
-    });
+  const configs = await manager.getRepository(LoadConfigurationEntity).find({
+    where: { id: In([...new Set(cells.map((c) => c.loadConfigurationId))]) },
+    select: { id: true, name: true },
+  });
   const configById = new Map(configs.map((c) => [c.id, c]));
   const people = await loadPeople(
     manager,

@@ -130,6 +130,7 @@ export const roundupEntrySchema = z.object({
   kind: entryKindSchema,
   position: z.number().int(),
   product: productBriefSchema,
+  /** The latest regional price against the band; reference entries get no warning (the band does not apply). */
   priceCheck: priceCheckSchema,
   /** For reference entries: the earlier roundup whose results are shown. */
   referenceRoundup: z.object({ id: z.number().int(), title: z.string() }).nullable(),

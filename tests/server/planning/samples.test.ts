@@ -71,15 +71,13 @@ describe('samples and loan returns', () => {
     const loanWithoutDate = await editor.patch(url).send({ source: 'vendor-loan', vendorContact: 'press desk' });
     expect(loanWithoutDate.status).toBe(422);
     expect(loanWithoutDate.body.error.fields.returnBy).toMatch(/return-by/);
-    const receivedWithoutDate = await editor
-      .patch(url)
-      .send({
-        source: 'retail',
-        orderReference: 'BM-20931',
-        costMinor: 18990,
-        costCurrency: 'EUR',
-        status: 'received',
-      });
+    const receivedWithoutDate = await editor.patch(url).send({
+      source: 'retail',
+      orderReference: 'BM-20931',
+      costMinor: 18990,
+      costCurrency: 'EUR',
+      status: 'received',
+    });
     expect(receivedWithoutDate.status).toBe(422);
     expect(receivedWithoutDate.body.error.fields.receivedOn).toBeTruthy();
 

@@ -46,7 +46,7 @@ export function toBenchProfileDto(profile: BenchProfileEntity, roundupCount: num
   };
 }
 
-async function roundupCounts(manager: EntityManager, ids: number[]): Promise<Map<number, number>> {
+export async function benchProfileRoundupCounts(manager: EntityManager, ids: number[]): Promise<Map<number, number>> {
   const counts = new Map<number, number>();
   if (ids.length === 0) return counts;
   const rows: { id: number; n: string }[] = await manager.query(
@@ -83,7 +83,7 @@ export class BenchProfilesService {
           ? { archivedAt: Not(IsNull()) }
           : {};
     const profiles = await manager.getRepository(BenchProfileEntity).find({ where, order: { name: 'ASC' } });
-    const counts = await roundupCounts(
+    const counts = await benchProfileRoundupCounts(
       manager,
       profiles.map((p) => p.id),
     );
@@ -93,7 +93,7 @@ export class BenchProfilesService {
   async get(id: number, manager: EntityManager = this.dataSource.manager): Promise<BenchProfile> {
     const profile = await manager.getRepository(BenchProfileEntity).findOneBy({ id });
     if (!profile) throw notFound('That bench profile');
-    return toBenchProfileDto(profile, (await roundupCounts(manager, [id])).get(id) ?? 0);
+    return toBenchProfileDto(profile, (await benchProfileRoundupCounts(manager, [id])).get(id) ?? 0);
   }
 
   async create(actor: CurrentUser, input: CreateInput): Promise<BenchProfile> {

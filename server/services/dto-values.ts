@@ -16,13 +16,6 @@ export function isoOrNull(value: Date | null | undefined): string | null {
   return value ? value.toISOString() : null;
 }
 
-/** A DATE column read through a raw query (mysql2 gives a Date at UTC midnight, as the pool runs in UTC). */
-export function calendarDateFromRaw(value: Date | string | null): string | null {
-  if (value == null) return null;
-  if (typeof value === 'string') return value.slice(0, 10);
-  return value.toISOString().slice(0, 10);
-}
-
 /** Escapes LIKE wildcards so a search for "50%" matches the text, not a pattern. */
 export function likeContains(text: string): string {
   return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;

@@ -111,13 +111,11 @@ export class LoadConfigurationsService {
   async create(actor: CurrentUser, input: CreateInput): Promise<LoadConfiguration> {
     try {
       return await this.dataSource.transaction(async (manager) => {
-        const { identifiers } = await manager
-          .getRepository(LoadConfigurationEntity)
-          .insert({
-            ...toColumns(input),
-            fixedClockMhz: input.settingsMode === 'fixed' ? input.fixedClockMhz : null,
-            createdBy: actor.id,
-          });
+        const { identifiers } = await manager.getRepository(LoadConfigurationEntity).insert({
+          ...toColumns(input),
+          fixedClockMhz: input.settingsMode === 'fixed' ? input.fixedClockMhz : null,
+          createdBy: actor.id,
+        });
         const id = Number(identifiers[0].id);
         await recordAudit(manager, {
           actorId: actor.id,

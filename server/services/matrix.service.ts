@@ -84,13 +84,11 @@ export class MatrixService {
   }
 
   async testers(): Promise<PersonRef[]> {
-    const testers = await this.dataSource
-      .getRepository(UserEntity)
-      .find({
-        where: { role: 'tester', active: true },
-        order: { displayName: 'ASC' },
-        select: { id: true, displayName: true },
-      });
+    const testers = await this.dataSource.getRepository(UserEntity).find({
+      where: { role: 'tester', active: true },
+      order: { displayName: 'ASC' },
+      select: { id: true, displayName: true },
+    });
     return testers.map((t) => ({ id: t.id, displayName: t.displayName }));
   }
 

@@ -8,7 +8,7 @@ import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configuration.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
 import { AppError, conflict, invalid, notFound } from '../errors';
-import { toBenchProfileDto } from './bench-profiles.service';
+import { benchProfileRoundupCounts, toBenchProfileDto } from './bench-profiles.service';
 import { loadConfigurationRoundupCounts, toLoadConfigurationDto } from './load-configurations.service';
 import { loadPeople, personOrNull } from './people';
 import { recordPlanChange } from './roundup-audit';
@@ -145,7 +145,9 @@ export class RoundupsService {
     const problems = next ? roundupTransitionProblems(await this.facts(manager, roundup), next) : [];
     return {
       ...summary,
-      benchProfile: profile ? toBenchProfileDto(profile, 0) : null,
+      benchProfile: profile
+        ? toBenchProfileDto(profile, (await benchProfileRoundupCounts(manager, [profile.id])).get(profile.id) ?? 0)
+        : null,
       loadConfigurations,
       entries,
       planWarnings,
@@ -175,15 +177,13 @@ export class RoundupsService {
       });
       const id = Number(identifiers[0].id);
       if (input.loadConfigurationIds.length > 0) {
-        await manager
-          .getRepository(RoundupLoadConfigurationEntity)
-          .insert(
-            input.loadConfigurationIds.map((loadConfigurationId, position) => ({
-              roundupId: id,
-              loadConfigurationId,
-              position,
-            })),
-          );
+        await manager.getRepository(RoundupLoadConfigurationEntity).insert(
+          input.loadConfigurationIds.map((loadConfigurationId, position) => ({
+            roundupId: id,
+            loadConfigurationId,
+            position,
+          })),
+        );
       }
       await recordPlanChange(manager, actor, id, 'roundup.created', {
         title: input.title,
@@ -331,13 +331,11 @@ export class RoundupsService {
   async history(id: number): Promise<History['entries']> {
     const manager = this.dataSource.manager;
     if (!(await manager.getRepository(RoundupEntity).existsBy({ id }))) throw notFound('That roundup');
-    const entries = await manager
-      .getRepository(AuditEntryEntity)
-      .find({
-        where: { subjectType: 'roundup', subjectId: String(id) },
-        order: { createdAt: 'DESC', id: 'DESC' },
-        take: 500,
-      });
+    const entries = await manager.getRepository(AuditEntryEntity).find({
+      where: { subjectType: 'roundup', subjectId: String(id) },
+      order: { createdAt: 'DESC', id: 'DESC' },
+      take: 500,
+    });
     const people = await loadPeople(
       manager,
       entries.map((e) => e.actorId),

@@ -27,6 +27,13 @@ export const navigation: readonly NavigationEntry[] = [
     description: 'Where you start: what your role does and where to go next.',
   },
   {
+    to: paths.roundups,
+    label: 'Roundups',
+    // Admins look after accounts and are not part of planning: the server gives them no roundup data.
+    roles: ['editor', 'writer', 'tester'],
+    description: 'Roundups from Planning to Live: products, test matrix, samples and the test plan.',
+  },
+  {
     to: paths.users,
     label: 'Users',
     roles: ['admin'],

@@ -4,6 +4,10 @@ export const paths = {
   users: '/users',
   account: '/account',
   logCheck: '/log-check',
+  roundups: '/roundups',
+  newRoundup: '/roundups/new',
+  roundup: (id: number) => `/roundups/${id}`,
+  myBench: '/my-bench',
   signIn: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
 } as const;
 

@@ -1,0 +1,140 @@
+import { Suspense } from 'react';
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, useLocation, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { Alert } from '../../components/ui/alert';
+import { LoadingState } from '../../components/ui/loading-state';
+import { paths } from '../../lib/paths';
+import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
+import { benchProfilesQueryOptions } from '../../features/roundups/api/get-bench-profiles';
+import { loadConfigurationsQueryOptions } from '../../features/roundups/api/get-load-configurations';
+import { roundupQueryOptions, useRoundup } from '../../features/roundups/api/get-roundup';
+import { DetailTabs } from '../../features/roundups/components/detail-tabs';
+import { ProductsPanel } from '../../features/roundups/components/products-panel';
+import { RoundupHeader } from '../../features/roundups/components/roundup-header';
+import { TestPlanPanel } from '../../features/roundups/components/test-plan-panel';
+import { matrixQueryOptions } from '../../features/matrix/api/get-matrix';
+import { MatrixGrid } from '../../features/matrix/components/matrix-grid';
+import { SamplesTable } from '../../features/samples/components/samples-table';
+import { canOpen } from '../navigation';
+import { RoleGate } from '../role-gate';
+
+function roundupIdFrom(value: string | undefined): number {
+  const id = Number(value);
+  if (!Number.isInteger(id) || id <= 0) throw new Response('Not found', { status: 404 });
+  return id;
+}
+
+export function loader(queryClient: QueryClient) {
+  return async ({ params }: LoaderFunctionArgs) => {
+    const id = roundupIdFrom(params.id);
+    const user = await queryClient.ensureQueryData(sessionQueryOptions());
+    if (!user || !canOpen(paths.roundups, user.role)) return null;
+    const wanted: Promise<unknown>[] = [
+      queryClient.ensureQueryData(roundupQueryOptions(id)),
+      queryClient.ensureQueryData(matrixQueryOptions(id)),
+    ];
+    if (user.role === 'editor') {
+      // Warm, not awaited: only the test-plan editor needs them.
+      void queryClient.prefetchQuery(benchProfilesQueryOptions());
+      void queryClient.prefetchQuery(loadConfigurationsQueryOptions());
+    }
+    await Promise.all(wanted);
+    return null;
+  };
+}
+
+export function Component() {
+  return (
+    <RoleGate path={paths.roundups} pageName="Roundup">
+      <RoundupPage />
+    </RoleGate>
+  );
+}
+
+const tabIds = ['products', 'matrix', 'samples', 'plan'] as const;
+
+function RoundupPage() {
+  const params = useParams();
+  const roundupId = roundupIdFrom(params.id);
+  const user = useSession();
+  const roundup = useRoundup(roundupId);
+  const location = useLocation();
+  const [search, setSearch] = useSearchParams();
+  if (!user) return null;
+
+  const requested = search.get('tab');
+  const tab = tabIds.find((id) => id === requested) ?? 'products';
+  const isEditor = user.role === 'editor';
+  const justCreated = (location.state as { created?: boolean } | null)?.created === true;
+
+  return (
+    <>
+      <p className="mb-2 text-sm">
+        <Link to={paths.roundups} className="text-copper underline-offset-2 hover:underline">
+          ← All roundups
+        </Link>
+      </p>
+      <RoundupHeader roundup={roundup} canChangeState={isEditor} />
+      {justCreated && roundup.entries.length === 0 && (
+        <Alert tone="success" title="The roundup is planned" className="mb-5">
+          Next, add the products to compare: the catalog suggests boards inside the price band.
+        </Alert>
+      )}
+      <DetailTabs
+        label="Roundup sections"
+        selected={tab}
+        onSelect={(id) => setSearch(id === 'products' ? {} : { tab: id }, { replace: true, preventScrollReset: true })}
+        tabs={[
+          {
+            id: 'products',
+            label: 'Products',
+            badge: <span className="numeric font-normal text-muted">{roundup.entries.length}</span>,
+            content: <ProductsPanel roundup={roundup} canEdit={isEditor} />,
+          },
+          {
+            id: 'matrix',
+            label: 'Matrix',
+            badge: (
+              <span className="numeric font-normal text-muted">{`${roundup.progress.percentAccepted}\u2009%`}</span>
+            ),
+            content: (
+              <Suspense fallback={<LoadingState label="Loading the matrix…" />}>
+                <MatrixGrid roundupId={roundup.id} canAssign={isEditor} />
+              </Suspense>
+            ),
+          },
+          {
+            id: 'samples',
+            label: 'Samples',
+            badge:
+              roundup.overdueSampleCount > 0 ? (
+                <span className="text-xs font-semibold text-red">{roundup.overdueSampleCount} overdue</span>
+              ) : undefined,
+            content: (
+              <Suspense fallback={<LoadingState label="Loading samples…" />}>
+                <SamplesTable
+                  roundupId={roundup.id}
+                  canEdit={user.role === 'editor' || user.role === 'tester'}
+                  defaultCurrency={roundup.priceBand.currency}
+                />
+              </Suspense>
+            ),
+          },
+          {
+            id: 'plan',
+            label: 'Test plan',
+            badge:
+              roundup.planWarnings.length > 0 ? (
+                <span className="text-xs font-semibold text-amber">! {roundup.planWarnings.length}</span>
+              ) : undefined,
+            content: (
+              <Suspense fallback={<LoadingState label="Loading the test plan…" />}>
+                <TestPlanPanel roundup={roundup} canEdit={isEditor} />
+              </Suspense>
+            ),
+          },
+        ]}
+      />
+    </>
+  );
+}

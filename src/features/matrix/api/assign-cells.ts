@@ -1,0 +1,22 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { z } from 'zod';
+import { apiClient } from '../../../lib/api-client';
+import { assignCellsResponseSchema, type AssignCellsRequest } from '../../../../shared/schemas/matrix';
+import { invalidatePlanning } from './matrix-keys';
+
+export interface AssignCellsInput {
+  roundupId: number;
+  assignment: AssignCellsRequest;
+}
+
+export type AssignCellsResult = z.infer<typeof assignCellsResponseSchema>;
+
+/** Assigns chosen cells and whole rows to one tester with a due date. */
+export function assignCells({ roundupId, assignment }: AssignCellsInput): Promise<AssignCellsResult> {
+  return apiClient.post(`/api/roundups/${roundupId}/assignments`, assignment, { schema: assignCellsResponseSchema });
+}
+
+export function useAssignCells() {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn: assignCells, onSuccess: () => invalidatePlanning(queryClient) });
+}

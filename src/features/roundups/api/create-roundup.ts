@@ -1,0 +1,17 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import {
+  roundupDetailSchema,
+  type CreateRoundupRequest,
+  type RoundupDetail,
+} from '../../../../shared/schemas/roundups';
+import { invalidatePlanning } from './roundup-keys';
+
+export function createRoundup(input: CreateRoundupRequest): Promise<RoundupDetail> {
+  return apiClient.post('/api/roundups', input, { schema: roundupDetailSchema });
+}
+
+export function useCreateRoundup() {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn: createRoundup, onSuccess: () => invalidatePlanning(queryClient) });
+}

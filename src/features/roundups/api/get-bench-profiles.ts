@@ -1,0 +1,21 @@
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { benchProfileListSchema, type BenchProfile } from '../../../../shared/schemas/bench-profiles';
+import { roundupKeys } from './roundup-keys';
+
+/** Bench profiles that may be chosen (archived ones are left out). */
+export async function getBenchProfiles(signal?: AbortSignal): Promise<BenchProfile[]> {
+  const { benchProfiles } = await apiClient.get('/api/bench-profiles', { signal, schema: benchProfileListSchema });
+  return benchProfiles;
+}
+
+export function benchProfilesQueryOptions() {
+  return queryOptions({
+    queryKey: roundupKeys.item('bench-profiles'),
+    queryFn: ({ signal }) => getBenchProfiles(signal),
+  });
+}
+
+export function useBenchProfiles() {
+  return useSuspenseQuery(benchProfilesQueryOptions()).data;
+}

@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { invalidatePlanning } from './roundup-keys';
+
+export interface RemoveEntryInput {
+  roundupId: number;
+  entryId: number;
+}
+
+/** Removes a product with its cells and sample; refused (409) once one of its cells has work. */
+export function removeEntry({ roundupId, entryId }: RemoveEntryInput): Promise<void> {
+  return apiClient.delete(`/api/roundups/${roundupId}/entries/${entryId}`);
+}
+
+export function useRemoveEntry() {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn: removeEntry, onSuccess: () => invalidatePlanning(queryClient) });
+}

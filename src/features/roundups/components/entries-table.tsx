@@ -1,0 +1,115 @@
+import { useMemo } from 'react';
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { formFactorLabels } from '../../../../shared/schemas/catalog';
+import { sampleStatusLabels } from '../../../../shared/schemas/samples';
+import type { RoundupEntry } from '../../../../shared/schemas/roundups';
+import { productName } from './planning-format';
+import { PriceCheckCell } from './price-check-cell';
+
+export interface EntriesTableProps {
+  entries: readonly RoundupEntry[];
+  /** Editors may remove entries while the plan is editable. */
+  onRemove?: (entry: RoundupEntry) => void;
+}
+
+export function EntriesTable({ entries, onRemove }: EntriesTableProps) {
+  const columns = useMemo<DataTableColumn<RoundupEntry>[]>(() => {
+    const list: DataTableColumn<RoundupEntry>[] = [
+      {
+        id: 'position',
+        header: '#',
+        numeric: true,
+        sortValue: (e) => e.position,
+        cell: (e) => e.position + 1,
+      },
+      {
+        id: 'product',
+        header: 'Product',
+        rowHeader: true,
+        sortValue: (e) => productName(e.product),
+        cell: (e) => (
+          <span>
+            {productName(e.product)}
+            <span className="block text-xs font-normal text-muted">
+              {e.product.chipset} · {formFactorLabels[e.product.formFactor]}
+              {e.product.archived && ' · archived in the catalog'}
+            </span>
+          </span>
+        ),
+      },
+      {
+        id: 'kind',
+        header: 'Role',
+        sortValue: (e) => e.kind,
+        cell: (e) =>
+          e.kind === 'tested' ? (
+            <Badge tone="accent">Tested here</Badge>
+          ) : (
+            <span>
+              <Badge tone="muted">Reference</Badge>
+              {e.referenceRoundup && (
+                <span className="mt-0.5 block text-xs text-muted">Results from {e.referenceRoundup.title}</span>
+              )}
+            </span>
+          ),
+      },
+      {
+        id: 'price',
+        header: 'Latest price',
+        sortValue: (e) => e.priceCheck.latestPrice?.amountMinor ?? null,
+        cell: (e) => <PriceCheckCell check={e.priceCheck} />,
+      },
+      {
+        id: 'sample',
+        header: 'Sample',
+        hideBelow: 'md',
+        sortValue: (e) => (e.sample ? sampleStatusLabels[e.sample.status] : null),
+        cell: (e) =>
+          e.sample ? (
+            <span>
+              {sampleStatusLabels[e.sample.status]}
+              {e.sample.overdue && (
+                <span className="mt-0.5 block">
+                  <Badge tone="negative">Loan overdue</Badge>
+                </span>
+              )}
+            </span>
+          ) : (
+            <span className="text-muted">None (not re-tested)</span>
+          ),
+      },
+    ];
+    if (onRemove) {
+      list.push({
+        id: 'actions',
+        header: 'Actions',
+        cell: (e) => (
+          <Button size="sm" variant="quiet" onClick={() => onRemove(e)} aria-label={`Remove ${productName(e.product)}`}>
+            Remove
+          </Button>
+        ),
+      });
+    }
+    return list;
+  }, [onRemove]);
+
+  return (
+    <DataTable
+      caption="Products in this roundup"
+      rows={entries}
+      columns={columns}
+      rowKey={(e) => e.id}
+      initialSort={{ columnId: 'position', direction: 'ascending' }}
+      filter={entries.length > 8 ? { label: 'Filter products', placeholder: 'Maker or model' } : false}
+      noun={['product', 'products']}
+      empty={
+        <EmptyState title="No products yet">
+          Add boards from the catalog: each tested product becomes a row of the test matrix.
+        </EmptyState>
+      }
+    />
+  );
+}

@@ -1,0 +1,160 @@
+import { useId, type FormEvent } from 'react';
+import { z } from 'zod';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { FormErrorSummary } from '../../../components/ui/form-error-summary';
+import { Select } from '../../../components/ui/select';
+import { TextField } from '../../../components/ui/text-field';
+import { useZodForm } from '../../../lib/use-zod-form';
+import {
+  createLoadConfigurationRequestSchema,
+  loadSettingsModeLabels,
+  type CreateLoadConfigurationRequest,
+  loadSettingsModes,
+  type LoadConfiguration,
+} from '../../../../shared/schemas/load-configurations';
+import { useCreateLoadConfiguration } from '../api/create-load-configuration';
+import { numberFromText, optionalNumberFromText } from './form-numbers';
+
+const shape = createLoadConfigurationRequestSchema.shape;
+
+/** Text fields read into numbers, then the shared schema (with its fixed-needs-a-clock rule) checks the whole. */
+const loadConfigurationFormSchema = z
+  .object({
+    ...shape,
+    fixedClockMhz: optionalNumberFromText(z.number().int().min(100).max(10000)),
+    expectedPackagePowerW: numberFromText(shape.expectedPackagePowerW),
+    coreVoltageV: numberFromText(shape.coreVoltageV),
+    soakMinutes: numberFromText(shape.soakMinutes),
+  })
+  // A clock typed before switching back to stock is not part of a stock configuration.
+  .transform((value): CreateLoadConfigurationRequest =>
+    value.settingsMode === 'stock' ? { ...value, fixedClockMhz: null } : value,
+  )
+  .pipe(createLoadConfigurationRequestSchema);
+
+const emptyForm = {
+  name: '',
+  cpuDescription: '',
+  settingsMode: 'stock',
+  fixedClockMhz: '',
+  settingsNotes: '',
+  expectedPackagePowerW: '',
+  coreVoltageV: '',
+  soakMinutes: '',
+};
+
+const labels = {
+  name: 'Configuration name',
+  cpuDescription: 'CPU',
+  settingsMode: 'Settings',
+  fixedClockMhz: 'All-core clock (MHz)',
+  settingsNotes: 'Further settings',
+  expectedPackagePowerW: 'Expected package power (W)',
+  coreVoltageV: 'Core voltage (V)',
+  soakMinutes: 'Soak (minutes)',
+};
+
+const modeOptions = loadSettingsModes.map((mode) => ({ value: mode, label: loadSettingsModeLabels[mode] }));
+
+export interface LoadConfigurationDialogProps {
+  open: boolean;
+  onClose: () => void;
+  onCreated: (configuration: LoadConfiguration) => void;
+}
+
+/** A new reusable load configuration: one CPU, one set of settings, the load it puts on the board. */
+export function LoadConfigurationDialog({ open, onClose, onCreated }: LoadConfigurationDialogProps) {
+  const formId = useId();
+  const create = useCreateLoadConfiguration();
+  const form = useZodForm({
+    schema: loadConfigurationFormSchema,
+    initialValues: emptyForm,
+    labels,
+    messages: { settingsMode: 'Choose stock or fixed settings.' },
+  });
+  const fixed = form.values.settingsMode === 'fixed';
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    event.stopPropagation();
+    const input = form.validate();
+    if (!input) return;
+    create.mutate(input, {
+      onSuccess: (configuration) => {
+        form.reset();
+        onCreated(configuration);
+      },
+      onError: (error) => form.fail(error),
+    });
+  };
+
+  return (
+    <Dialog
+      open={open}
+      onClose={onClose}
+      size="lg"
+      title="New load configuration"
+      description="Saved for reuse; in this roundup it becomes one column of the test matrix."
+      footer={
+        <>
+          <Button onClick={onClose}>Cancel</Button>
+          <Button type="submit" form={formId} variant="primary" pending={create.isPending}>
+            Save configuration
+          </Button>
+        </>
+      }
+    >
+      <form id={formId} noValidate onSubmit={submit} className="space-y-4">
+        <FormErrorSummary
+          title="The configuration was not saved"
+          items={form.summaryItems}
+          message={form.formError}
+          attempt={form.attempt}
+        />
+        <div className="grid gap-4 sm:grid-cols-2">
+          <TextField {...form.field('name')} autoComplete="off" placeholder="Stock all-core" />
+          <TextField {...form.field('cpuDescription')} autoComplete="off" description="The CPU used, in words." />
+          <Select {...form.field('settingsMode')} options={modeOptions} />
+          {fixed ? (
+            <TextField {...form.field('fixedClockMhz')} inputMode="numeric" autoComplete="off" placeholder="5200" />
+          ) : (
+            <div aria-hidden="true" className="hidden sm:block" />
+          )}
+          <TextField
+            {...form.field('expectedPackagePowerW')}
+            inputMode="decimal"
+            autoComplete="off"
+            placeholder="230.0"
+          />
+          <TextField
+            {...form.field('coreVoltageV')}
+            inputMode="decimal"
+            autoComplete="off"
+            placeholder="1.250"
+            description={fixed ? 'The voltage you set.' : 'The voltage expected under this load.'}
+          />
+          <TextField
+            {...form.field('soakMinutes')}
+            inputMode="numeric"
+            autoComplete="off"
+            description="How long the load runs before readings count."
+          />
+        </div>
+        <TextField
+          {...form.field('settingsNotes')}
+          optional
+          autoComplete="off"
+          description="Power limits, load-line calibration, the load program."
+        />
+        {fixed && (
+          <Alert tone="caution">
+            Fixed clocks and raised voltages can shorten component life and void warranties. Stay within the maker’s
+            limits.
+          </Alert>
+        )}
+      </form>
+    </Dialog>
+  );
+}

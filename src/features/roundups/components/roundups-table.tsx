@@ -1,0 +1,147 @@
+import { useMemo, useState, type ReactNode } from 'react';
+import { Link } from 'react-router';
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { Select } from '../../../components/ui/select';
+import {
+  roundupStateLabels,
+  roundupStates,
+  type RoundupState,
+} from '../../../../shared/domain/planning/roundup-states';
+import type { RoundupSummary } from '../../../../shared/schemas/roundups';
+import { formatBand, formatCalendarDate } from './planning-format';
+import { ProgressMeter } from './progress-meter';
+import { RoundupStateBadge } from './roundup-state-badge';
+
+export interface RoundupsTableProps {
+  roundups: readonly RoundupSummary[];
+  /** Builds the link to one roundup. */
+  roundupPath: (id: number) => string;
+  /** Shown when there are no roundups at all, e.g. a "New roundup" button for editors. */
+  emptyAction?: ReactNode;
+}
+
+const stateOptions = [
+  { value: '', label: 'All states' },
+  ...roundupStates.map((state) => ({ value: state, label: roundupStateLabels[state] })),
+];
+
+export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTableProps) {
+  const [state, setState] = useState<RoundupState | ''>('');
+  const rows = useMemo(() => roundups.filter((r) => !state || r.state === state), [roundups, state]);
+
+  const columns = useMemo<DataTableColumn<RoundupSummary>[]>(
+    () => [
+      {
+        id: 'title',
+        header: 'Roundup',
+        rowHeader: true,
+        className: 'min-w-48',
+        sortValue: (r) => r.title,
+        filterValue: (r) => `${r.title} ${r.platform} ${roundupStateLabels[r.state]}`,
+        cell: (r) => (
+          <Link to={roundupPath(r.id)} className="font-semibold text-copper underline-offset-2 hover:underline">
+            {r.title}
+          </Link>
+        ),
+      },
+      {
+        id: 'state',
+        header: 'State',
+        sortValue: (r) => roundupStates.indexOf(r.state),
+        cell: (r) => <RoundupStateBadge state={r.state} />,
+      },
+      {
+        id: 'platform',
+        header: 'Platform',
+        sortValue: (r) => r.platform,
+        hideBelow: 'md',
+        cell: (r) => <span className="whitespace-nowrap">{r.platform}</span>,
+      },
+      {
+        id: 'band',
+        header: 'Price band',
+        hideBelow: 'lg',
+        sortValue: (r) => r.priceBand.minMinor,
+        cell: (r) => <span className="numeric whitespace-nowrap">{formatBand(r.priceBand)}</span>,
+      },
+      {
+        id: 'target',
+        header: 'Target publish',
+        numeric: true,
+        sortValue: (r) => r.targetPublishDate,
+        cell: (r) =>
+          r.targetPublishDate ? formatCalendarDate(r.targetPublishDate) : <span className="text-muted">Not set</span>,
+      },
+      {
+        id: 'products',
+        header: 'Products',
+        numeric: true,
+        hideBelow: 'sm',
+        sortValue: (r) => r.testedEntryCount,
+        cell: (r) => (
+          <span title={`${r.testedEntryCount} tested, ${r.referenceEntryCount} reference`}>
+            {r.testedEntryCount}
+            {r.referenceEntryCount > 0 && <span className="text-muted"> +{r.referenceEntryCount} ref.</span>}
+          </span>
+        ),
+      },
+      {
+        id: 'progress',
+        header: 'Accepted',
+        sortValue: (r) => r.progress.percentAccepted,
+        cell: (r) => <ProgressMeter progress={r.progress} />,
+      },
+      {
+        id: 'loans',
+        header: 'Loans',
+        hideBelow: 'md',
+        sortValue: (r) => r.overdueSampleCount,
+        cell: (r) =>
+          r.overdueSampleCount > 0 ? (
+            <Badge tone="negative">{r.overdueSampleCount} overdue</Badge>
+          ) : (
+            <span className="text-muted">On time</span>
+          ),
+      },
+    ],
+    [roundupPath],
+  );
+
+  return (
+    <DataTable
+      caption="Roundups"
+      rows={rows}
+      columns={columns}
+      rowKey={(r) => r.id}
+      initialSort={{ columnId: 'target', direction: 'ascending' }}
+      filter={{ label: 'Filter roundups', placeholder: 'Title, platform or state' }}
+      noun={['roundup', 'roundups']}
+      toolbar={
+        <Select
+          label="State"
+          options={stateOptions}
+          value={state}
+          onChange={(event) => setState(event.target.value as RoundupState | '')}
+          className="w-full sm:w-48"
+        />
+      }
+      empty={
+        roundups.length === 0 ? (
+          <EmptyState title="No roundups yet" action={emptyAction}>
+            A roundup gathers boards of one platform in one price band, tests them on one bench profile and publishes
+            the results.
+          </EmptyState>
+        ) : (
+          <EmptyState
+            title={`No roundup is ${state ? roundupStateLabels[state] : ''} right now`}
+            action={<Button onClick={() => setState('')}>Show all states</Button>}
+          />
+        )
+      }
+      footnote="Accepted: matrix cells (product × load configuration) an editor has accepted, as a share of all cells."
+    />
+  );
+}

@@ -1,0 +1,199 @@
+import { useId, type FormEvent } from 'react';
+import { z } from 'zod';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { FormErrorSummary } from '../../../components/ui/form-error-summary';
+import { Select } from '../../../components/ui/select';
+import { TextField } from '../../../components/ui/text-field';
+import { useZodForm } from '../../../lib/use-zod-form';
+import { minorToMajorString, parseMajorAmount } from '../../../../shared/domain/planning/money';
+import {
+  sampleSourceLabels,
+  sampleSources,
+  sampleStatusLabels,
+  sampleStatuses,
+  updateSampleRequestSchema,
+  type Sample,
+  type SampleStatus,
+  type UpdateSampleRequest,
+} from '../../../../shared/schemas/samples';
+import { useUpdateSample } from '../api/update-sample';
+import { productName } from './samples-format';
+
+const labels = {
+  source: 'Source',
+  orderReference: 'Order reference',
+  costMinor: 'Cost',
+  costCurrency: 'Currency',
+  vendorContact: 'Vendor contact',
+  returnBy: 'Return by',
+  status: 'Status',
+  receivedOn: 'Received on',
+  returnedOn: 'Returned on',
+  serialNumber: 'Serial number',
+  firmwareOnArrival: 'Firmware/BIOS on arrival',
+  conditionNotes: 'Condition notes',
+};
+type FormValues = Record<keyof typeof labels, string>;
+
+const sampleFormSchema = z
+  .object(
+    Object.fromEntries(Object.keys(labels).map((key) => [key, z.string()])) as Record<keyof FormValues, z.ZodString>,
+  )
+  .transform((values, ctx): UpdateSampleRequest => {
+    const source = values.source === 'retail' || values.source === 'vendor-loan' ? values.source : null;
+    const currency = values.costCurrency.trim().toUpperCase();
+    let costMinor: number | null = null;
+    if (source === 'retail' && values.costMinor.trim()) {
+      const parsed = parseMajorAmount(values.costMinor, /^[A-Z]{3}$/.test(currency) ? currency : 'EUR');
+      if (!parsed.ok) ctx.addIssue({ code: 'custom', path: ['costMinor'], message: parsed.message });
+      else costMinor = parsed.amountMinor;
+    }
+    const date = (text: string) => text.trim() || null;
+    return {
+      source,
+      // Only the chosen source's fields are sent; the other source's are cleared.
+      orderReference: source === 'retail' ? values.orderReference : null,
+      costMinor,
+      costCurrency: source === 'retail' && (costMinor !== null || values.costMinor.trim()) ? currency : null,
+      vendorContact: source === 'vendor-loan' ? values.vendorContact : null,
+      returnBy: source === 'vendor-loan' ? date(values.returnBy) : null,
+      receivedOn: date(values.receivedOn),
+      returnedOn: date(values.returnedOn),
+      serialNumber: values.serialNumber,
+      conditionNotes: values.conditionNotes,
+      firmwareOnArrival: values.firmwareOnArrival,
+      status: values.status as SampleStatus,
+    };
+  })
+  .pipe(updateSampleRequestSchema);
+
+function valuesOf(sample: Sample, defaultCurrency: string): FormValues {
+  return {
+    source: sample.source ?? '',
+    orderReference: sample.orderReference ?? '',
+    costMinor: sample.cost ? minorToMajorString(sample.cost.amountMinor, sample.cost.currency) : '',
+    costCurrency: sample.cost?.currency ?? defaultCurrency,
+    vendorContact: sample.vendorContact ?? '',
+    returnBy: sample.returnBy ?? '',
+    status: sample.status,
+    receivedOn: sample.receivedOn ?? '',
+    returnedOn: sample.returnedOn ?? '',
+    serialNumber: sample.serialNumber ?? '',
+    firmwareOnArrival: sample.firmwareOnArrival ?? '',
+    conditionNotes: sample.conditionNotes ?? '',
+  };
+}
+
+const sourceOptions = sampleSources.map((source) => ({ value: source, label: sampleSourceLabels[source] }));
+const statusOptions = sampleStatuses.map((status) => ({ value: status, label: sampleStatusLabels[status] }));
+
+export interface SampleDialogProps {
+  open: boolean;
+  roundupId: number;
+  sample: Sample;
+  timeZone: string;
+  /** The roundup band's currency, offered for a retail cost. */
+  defaultCurrency: string;
+  onClose: () => void;
+  onSaved: (sample: Sample) => void;
+}
+
+/** One sample record: where the board came from, when it arrived, what it arrived with, where it is now. */
+export function SampleDialog({
+  open,
+  roundupId,
+  sample,
+  timeZone,
+  defaultCurrency,
+  onClose,
+  onSaved,
+}: SampleDialogProps) {
+  const formId = useId();
+  const update = useUpdateSample();
+  const form = useZodForm({
+    schema: sampleFormSchema,
+    initialValues: valuesOf(sample, defaultCurrency),
+    labels,
+  });
+  const source = form.values.source;
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    const changes = form.validate();
+    if (!changes) return;
+    update.mutate(
+      { roundupId, sampleId: sample.id, changes },
+      { onSuccess: onSaved, onError: (error) => form.fail(error) },
+    );
+  };
+
+  return (
+    <Dialog
+      open={open}
+      onClose={onClose}
+      size="lg"
+      title={`Sample: ${productName(sample.product)}`}
+      description={`Dates are calendar days in ${timeZone}.`}
+      footer={
+        <>
+          <Button onClick={onClose}>Cancel</Button>
+          <Button type="submit" form={formId} variant="primary" pending={update.isPending}>
+            Save sample
+          </Button>
+        </>
+      }
+    >
+      <form id={formId} noValidate onSubmit={submit} className="space-y-4">
+        <FormErrorSummary
+          title="The sample was not saved"
+          items={form.summaryItems}
+          message={form.formError}
+          attempt={form.attempt}
+        />
+        <div className="grid gap-4 sm:grid-cols-2">
+          <Select {...form.field('source')} options={sourceOptions} placeholder="Not known yet" optional />
+          <Select {...form.field('status')} options={statusOptions} />
+        </div>
+        {source === 'retail' && (
+          <div className="grid gap-4 sm:grid-cols-[minmax(0,2fr)_minmax(0,1fr)_minmax(0,1fr)]">
+            <TextField {...form.field('orderReference')} autoComplete="off" />
+            <TextField {...form.field('costMinor')} inputMode="decimal" autoComplete="off" placeholder="189.99" />
+            <TextField {...form.field('costCurrency')} autoComplete="off" maxLength={3} inputClassName="uppercase" />
+          </div>
+        )}
+        {source === 'vendor-loan' && (
+          <div className="grid gap-4 sm:grid-cols-2">
+            <TextField
+              {...form.field('vendorContact')}
+              autoComplete="off"
+              description="Who lent it: name, e-mail or phone."
+            />
+            <TextField
+              {...form.field('returnBy')}
+              type="date"
+              description={`Overdue once this day has ended in ${timeZone}.`}
+            />
+          </div>
+        )}
+        <div className="grid gap-4 sm:grid-cols-2">
+          <TextField {...form.field('receivedOn')} type="date" optional />
+          <TextField
+            {...form.field('returnedOn')}
+            type="date"
+            optional
+            description="Only for a loan that has gone back."
+          />
+          <TextField {...form.field('serialNumber')} optional autoComplete="off" />
+          <TextField {...form.field('firmwareOnArrival')} optional autoComplete="off" placeholder="1.02" />
+        </div>
+        <TextField
+          {...form.field('conditionNotes')}
+          optional
+          autoComplete="off"
+          description="Box, accessories, marks, bent pins — anything worth knowing before it goes on the bench."
+        />
+      </form>
+    </Dialog>
+  );
+}

@@ -1,0 +1,170 @@
+import { useCallback, useMemo, useState } from 'react';
+import { Alert } from '../../../components/ui/alert';
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { sampleSourceLabels, sampleStatuses, type Sample } from '../../../../shared/schemas/samples';
+import { useSamples } from '../api/get-samples';
+import { formatCalendarDate, formatCost, overdueText, productName } from './samples-format';
+import { SampleDialog } from './sample-dialog';
+import { SampleStatusBadge } from './sample-status-badge';
+
+export interface SamplesTableProps {
+  roundupId: number;
+  /** Editors and testers keep the records; writers read them. */
+  canEdit: boolean;
+  defaultCurrency: string;
+}
+
+/** Where each tested board came from and where it is now; overdue loans stand out in words and colour. */
+export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTableProps) {
+  const { samples, timeZone } = useSamples(roundupId);
+  const [editing, setEditing] = useState<{ id: number; open: boolean } | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
+  const edited = editing ? (samples.find((s) => s.id === editing.id) ?? null) : null;
+  const overdue = samples.filter((s) => s.overdue);
+
+  const startEditing = useCallback((sample: Sample) => {
+    setNotice(null);
+    setEditing({ id: sample.id, open: true });
+  }, []);
+
+  const columns = useMemo<DataTableColumn<Sample>[]>(() => {
+    const list: DataTableColumn<Sample>[] = [
+      {
+        id: 'product',
+        header: 'Product',
+        rowHeader: true,
+        className: 'min-w-40',
+        sortValue: (s) => productName(s.product),
+        cell: (s) => productName(s.product),
+      },
+      {
+        id: 'source',
+        header: 'Source',
+        sortValue: (s) => (s.source ? sampleSourceLabels[s.source] : null),
+        cell: (s) =>
+          s.source ? (
+            <span>
+              {sampleSourceLabels[s.source]}
+              <span className="block text-xs text-muted">
+                {s.source === 'retail'
+                  ? [s.orderReference, s.cost && formatCost(s.cost)].filter(Boolean).join(' · ')
+                  : s.vendorContact}
+              </span>
+            </span>
+          ) : (
+            <span className="text-muted">Not known yet</span>
+          ),
+      },
+      {
+        id: 'status',
+        header: 'Status',
+        sortValue: (s) => sampleStatuses.indexOf(s.status),
+        filterValue: (s) => s.status,
+        cell: (s) => <SampleStatusBadge status={s.status} />,
+      },
+      {
+        id: 'received',
+        header: 'Received',
+        numeric: true,
+        hideBelow: 'md',
+        sortValue: (s) => s.receivedOn,
+        cell: (s) => (s.receivedOn ? formatCalendarDate(s.receivedOn) : <span className="text-muted">—</span>),
+      },
+      {
+        id: 'returnBy',
+        header: 'Return by',
+        numeric: true,
+        sortValue: (s) => s.returnBy,
+        cell: (s) =>
+          s.returnBy ? (
+            <span className={s.overdue ? 'font-semibold text-red' : undefined}>
+              {formatCalendarDate(s.returnBy)}
+              {s.overdue && (
+                <span className="mt-0.5 block">
+                  <Badge tone="negative">{overdueText(s.daysOverdue)}</Badge>
+                </span>
+              )}
+            </span>
+          ) : (
+            <span className="text-muted">—</span>
+          ),
+      },
+      {
+        id: 'serial',
+        header: 'Serial',
+        hideBelow: 'lg',
+        sortValue: (s) => s.serialNumber,
+        cell: (s) => <span className="numeric whitespace-nowrap">{s.serialNumber ?? '—'}</span>,
+      },
+      {
+        id: 'firmware',
+        header: 'Firmware on arrival',
+        hideBelow: 'lg',
+        sortValue: (s) => s.firmwareOnArrival,
+        cell: (s) => <span className="numeric">{s.firmwareOnArrival ?? '—'}</span>,
+      },
+    ];
+    if (canEdit) {
+      list.push({
+        id: 'actions',
+        header: 'Actions',
+        cell: (s) => (
+          <Button size="sm" onClick={() => startEditing(s)} aria-label={`Edit sample: ${productName(s.product)}`}>
+            Edit
+          </Button>
+        ),
+      });
+    }
+    return list;
+  }, [canEdit, startEditing]);
+
+  return (
+    <div className="space-y-3">
+      {overdue.length > 0 && (
+        <Alert tone="danger" title={`${overdue.length} loan${overdue.length === 1 ? ' is' : 's are'} overdue`}>
+          {overdue.map((s) => `${productName(s.product)} (${overdueText(s.daysOverdue).toLowerCase()})`).join('; ')}.
+          Return them or mark them kept.
+        </Alert>
+      )}
+      {notice && (
+        <Alert tone="success" announce>
+          {notice}
+        </Alert>
+      )}
+      <DataTable
+        caption="Samples"
+        rows={samples}
+        columns={columns}
+        rowKey={(s) => s.id}
+        initialSort={{ columnId: 'product', direction: 'ascending' }}
+        filter={{ label: 'Filter samples', placeholder: 'Product, source or status' }}
+        noun={['sample', 'samples']}
+        rowClassName={(s) => (s.overdue ? 'bg-red/5' : undefined)}
+        empty={
+          <EmptyState title="No samples yet">
+            Each product tested in this roundup gets a sample record when it is added.
+          </EmptyState>
+        }
+        footnote={`Dates are calendar days in ${timeZone}, the roundup’s time zone. Reference products have no sample: they are not re-tested.`}
+      />
+      {edited && editing && (
+        <SampleDialog
+          key={edited.id}
+          open={editing.open}
+          roundupId={roundupId}
+          sample={edited}
+          timeZone={timeZone}
+          defaultCurrency={defaultCurrency}
+          onClose={() => setEditing((current) => (current ? { ...current, open: false } : null))}
+          onSaved={(saved) => {
+            setEditing((current) => (current ? { ...current, open: false } : null));
+            setNotice(`Saved the sample record of ${productName(saved.product)}.`);
+          }}
+        />
+      )}
+    </div>
+  );
+}

@@ -13,9 +13,12 @@ export interface LoggerTable {
   /** 1-based line of the header in the file. */
   headerRow: number;
   columns: string[];
+  /**
+   * Every line after the header as papaparse split it, blank lines included (trailing ones dropped): row i is file
+   * line firstRowNumber + i. Readers skip blank rows in their own pass, so the rows are walked once, not twice.
+   */
   rows: string[][];
-  /** 1-based file line of each data row. */
-  rowNumbers: Int32Array;
+  firstRowNumber: number;
 }
 
 export type LoggerTableOutcome = { ok: true; table: LoggerTable } | { ok: false; errors: ParseError[] };
@@ -26,13 +29,22 @@ const headerSearchLines = 200;
 /** Data rows checked after a candidate header. */
 const headerConfirmRows = 5;
 const decimalCommaPattern = /^\s*[+-]?\d+,\d+\s*$/;
+const decimalCommaSampleRows = 50;
 
 function isBlank(row: readonly string[]): boolean {
   for (const cell of row) if (cell.trim() !== '') return false;
   return true;
 }
 
-function filledWidth(row: readonly string[]): number {
+/** A blank line, or one of delimiters only. The first cell decides for almost every data row without a full check. */
+export function isBlankRow(row: readonly string[]): boolean {
+  const first = row[0];
+  if (first !== undefined && first.length > 0 && first.charCodeAt(0) > 32) return false;
+  return isBlank(row);
+}
+
+/** Cells up to the last non-empty one. */
+export function filledWidth(row: readonly string[]): number {
   let width = row.length;
   while (width > 0 && row[width - 1].trim() === '') width--;
   return width;
@@ -142,9 +154,7 @@ export function parseLoggerTable(input: string): LoggerTableOutcome {
   if (!best) return { ok: false, errors: [noHeaderError(fallbackRows)] };
 
   const { delimiter, headerIndex } = best;
-  const header = best.rows[headerIndex];
-  const width = header.length;
-  const columns = uniqueColumnNames(header);
+  const columns = uniqueColumnNames(best.rows[headerIndex]);
   const preambleLines = text
     .slice(0, lineStartOffset(text, headerIndex))
     .split('\n')
@@ -162,33 +172,13 @@ export function parseLoggerTable(input: string): LoggerTableOutcome {
     errors.add(row, null, 'malformed-row', `${cellLabel(row, null)}: ${error.message}.`);
   }
 
-  const rows: string[][] = [];
-  const rowNumbers = new Int32Array(body.data.length);
-  for (let index = 0; index < body.data.length; index++) {
-    const row = body.data[index];
-    // A row whose first cell starts with a printable character is not blank; only the rest need the full check.
-    if ((row[0].length === 0 || row[0].charCodeAt(0) <= 32) && isBlank(row)) continue;
-    if (row.length > width) {
-      const extra = filledWidth(row);
-      if (extra > width) {
-        const line = firstBodyLine + index;
-        errors.add(
-          line,
-          null,
-          'extra-cells',
-          `${cellLabel(line, null)}: ${extra} cells, but the header (row ${headerIndex + 1}) names ${width} columns.`,
-        );
-        continue;
-      }
-    }
-    rowNumbers[rows.length] = firstBodyLine + index;
-    rows.push(row);
-  }
   if (!errors.isEmpty) return { ok: false, errors: errors.list() };
+  const rows = body.data;
+  while (rows.length > 0 && isBlankRow(rows[rows.length - 1])) rows.pop();
 
   let decimalComma = false;
   if (delimiter !== ',') {
-    for (let index = 0; index < Math.min(rows.length, 50) && !decimalComma; index++) {
+    for (let index = 0; index < Math.min(rows.length, decimalCommaSampleRows) && !decimalComma; index++) {
       decimalComma = rows[index].some((cell) => decimalCommaPattern.test(cell));
     }
   }
@@ -202,7 +192,7 @@ export function parseLoggerTable(input: string): LoggerTableOutcome {
       headerRow: headerIndex + 1,
       columns,
       rows,
-      rowNumbers: rowNumbers.subarray(0, rows.length),
+      firstRowNumber: firstBodyLine,
     },
   };
 }

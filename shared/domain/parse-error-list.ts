@@ -13,10 +13,6 @@ export class ParseErrorList {
     else this.overflow++;
   }
 
-  get full(): boolean {
-    return this.errors.length >= parseErrorLimit;
-  }
-
   get isEmpty(): boolean {
     return this.errors.length === 0;
   }

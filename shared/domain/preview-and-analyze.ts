@@ -7,9 +7,9 @@ import {
 } from '../schemas/analysis';
 import { guessColumnMapping, guessColumnRole, unitFromColumnName } from './log-column-guess';
 import { detectTimeFormat } from './log-time-value';
-import { parseLoggerTable, type LoggerTable } from './logger-table';
+import { isBlankRow, parseLoggerTable, type LoggerTable } from './logger-table';
 import { readMappedLog } from './read-mapped-log';
-import { guessTimeColumn } from './read-time-column';
+import { firstDataRowIndex, guessTimeColumn } from './read-time-column';
 import { analyzeRun } from './run-analysis';
 
 /** Data rows shown in the preview. */
@@ -21,6 +21,15 @@ export type LogPreviewOutcome =
 export type PreviewAndAnalyzeOutcome =
   | { ok: true; preview: LogPreview; analysis: AnalysisResult }
   | { ok: false; preview: LogPreview | null; errors: ParseError[] };
+
+function previewRows(table: LoggerTable): string[][] {
+  const rows: string[][] = [];
+  for (const row of table.rows) {
+    if (rows.length === previewRowCount) break;
+    if (!isBlankRow(row)) rows.push(row);
+  }
+  return rows;
+}
 
 function buildPreview(table: LoggerTable): LogPreview {
   const timeIndex = guessTimeColumn(table);
@@ -37,8 +46,9 @@ function buildPreview(table: LoggerTable): LogPreview {
       guessedUnit: unitFromColumnName(name),
     })),
     timeColumn,
-    timeFormat: timeColumn === null ? null : detectTimeFormat(table.rows[0][timeIndex], timeColumn),
-    rows: table.rows.slice(0, previewRowCount),
+    timeFormat:
+      timeColumn === null ? null : detectTimeFormat(table.rows[firstDataRowIndex(table)][timeIndex], timeColumn),
+    rows: previewRows(table),
     dataRowCount: table.rows.length,
     guessedMapping: guessColumnMapping(table.columns, timeColumn),
   };

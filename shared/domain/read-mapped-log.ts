@@ -1,9 +1,9 @@
 import type { AnalysisOptions, ColumnMapping, ParseError, TemperatureUnit, TimeFormat } from '../schemas/analysis';
 import { isNumericSentinel, readCell, readPlainDecimal } from './log-cell-value';
 import { unitFromColumnName } from './log-column-guess';
-import type { LoggerTable } from './logger-table';
+import { filledWidth, isBlankRow, type LoggerTable } from './logger-table';
 import { ParseErrorList, cellLabel } from './parse-error-list';
-import { guessTimeColumn, readTimeColumn } from './read-time-column';
+import { guessTimeColumn, openTimeColumn, type TimeColumnReader } from './read-time-column';
 import { celsiusFrom, temperatureUnitLabels } from './temperature-units';
 import { typeKCelsiusFromMillivolts, typeKInverseRangeMv, typeKMillivoltsFromCelsius } from './type-k-thermocouple';
 
@@ -67,9 +67,22 @@ interface RawColumn {
   suffixRow: number | null;
 }
 
+/** The data rows that carry a reading, compacted: blank lines dropped, each with its file line. */
+interface LogRows {
+  count: number;
+  timeS: Float64Array;
+  rowNumbers: Int32Array;
+  raws: RawColumn[];
+}
+
+/** The cell as written, for the k-th kept row. */
+function sourceCell(table: LoggerTable, rowNumbers: Int32Array, k: number, index: number): string {
+  return table.rows[rowNumbers[k] - table.firstRowNumber][index] ?? '';
+}
+
 function readSlowCell(
   table: LoggerTable,
-  i: number,
+  row: number,
   index: number,
   cell: string,
   raw: RawColumn,
@@ -77,7 +90,6 @@ function readSlowCell(
 ): number {
   const reading = readCell(cell, table.decimalComma);
   if (reading.kind === 'gap') return Number.NaN;
-  const row = table.rowNumbers[i];
   const column = table.columns[index];
   if (reading.kind === 'invalid') {
     const example = table.decimalComma ? '45,2 (decimal comma)' : '45.2';
@@ -106,11 +118,21 @@ function readSlowCell(
 }
 
 /**
- * Reads the numeric columns in one pass over the rows, which touches each row once instead of once per column; plain
- * decimals take the allocation-free path, anything else (markers, unit suffixes, bad cells) the slow one.
+ * One pass over the rows: skips blank lines, refuses rows wider than the header, reads the time and every mapped
+ * numeric column. Touching each row once matters: the rows are fresh papaparse output, and a second walk costs about
+ * as much as the arithmetic. Plain decimals take the allocation-free path, anything else (markers, unit suffixes, bad
+ * cells) the slow one. The returned raw columns follow `indexes`; a column mapped twice gets its own copy, since unit
+ * conversions work in place.
  */
-function readRawColumns(table: LoggerTable, indexes: readonly number[], errors: ParseErrorList): RawColumn[] {
-  const { rows, decimalComma } = table;
+function readLogRows(
+  table: LoggerTable,
+  time: TimeColumnReader,
+  timeIndex: number,
+  indexes: readonly number[],
+  errors: ParseErrorList,
+): LogRows {
+  const { rows, decimalComma, firstRowNumber } = table;
+  const width = table.columns.length;
   const unique = [...new Set(indexes)];
   const raws = unique.map((): RawColumn => ({
     values: new Float64Array(rows.length),
@@ -118,29 +140,47 @@ function readRawColumns(table: LoggerTable, indexes: readonly number[], errors: 
     suffixRow: null,
   }));
   const arrays = raws.map((raw) => raw.values);
-  const count = unique.length;
+  const columnCount = unique.length;
+  const timeS = new Float64Array(rows.length);
+  const rowNumbers = new Int32Array(rows.length);
+  let count = 0;
   for (let i = 0; i < rows.length; i++) {
     const row = rows[i];
-    for (let k = 0; k < count; k++) {
+    if (isBlankRow(row)) continue;
+    const line = firstRowNumber + i;
+    if (row.length > width && filledWidth(row) > width) {
+      errors.add(
+        line,
+        null,
+        'extra-cells',
+        `${cellLabel(line, null)}: ${filledWidth(row)} cells, but the header (row ${table.headerRow}) names ${width} columns.`,
+      );
+      continue;
+    }
+    const seconds = time.next(row[timeIndex] ?? '', line);
+    if (seconds !== seconds) continue;
+    timeS[count] = seconds;
+    rowNumbers[count] = line;
+    for (let k = 0; k < columnCount; k++) {
       const cell = row[unique[k]];
       let value = Number.NaN;
       if (cell !== undefined && cell !== '') {
         value = readPlainDecimal(cell, decimalComma);
-        if (value !== value) value = readSlowCell(table, i, unique[k], cell, raws[k], errors);
+        if (value !== value) value = readSlowCell(table, line, unique[k], cell, raws[k], errors);
       }
-      arrays[k][i] = value;
+      arrays[k][count] = value;
     }
+    count++;
   }
-  // One column mapped to two roles gets its own copy for each, since conversions work in place.
   const handedOut = new Set<number>();
-  return indexes.map((index) => {
+  const columns = indexes.map((index) => {
     const raw = raws[unique.indexOf(index)];
-    if (!handedOut.has(index)) {
-      handedOut.add(index);
-      return raw;
-    }
-    return { ...raw, values: new Float64Array(raw.values) };
+    const values = raw.values.subarray(0, count);
+    if (handedOut.has(index)) return { ...raw, values: new Float64Array(values) };
+    handedOut.add(index);
+    return { ...raw, values };
   });
+  return { count, timeS: timeS.subarray(0, count), rowNumbers: rowNumbers.subarray(0, count), raws: columns };
 }
 
 function mappedUnit(mapping: ColumnMapping, column: string): TemperatureUnit | undefined {
@@ -180,13 +220,14 @@ function resolveUnit(
 
 function absurd(
   table: LoggerTable,
+  rowNumbers: Int32Array,
   i: number,
   index: number,
   errors: ParseErrorList,
   described: string,
   expected: string,
 ): void {
-  const row = table.rowNumbers[i];
+  const row = rowNumbers[i];
   const column = table.columns[index];
   errors.add(
     row,
@@ -201,6 +242,7 @@ const temperatureRangeText = `${plausibleReadings.temperatureC.min}…${plausibl
 /** Converts a raw column to °C in place, turning implausible readings into errors (or gaps for sentinels). */
 function toCelsius(
   table: LoggerTable,
+  rowNumbers: Int32Array,
   index: number,
   raw: Float64Array,
   unit: TemperatureUnit,
@@ -229,12 +271,13 @@ function toCelsius(
       }
       const totalMv = value + junctionMv;
       if (totalMv < typeKInverseRangeMv.min || totalMv > typeKInverseRangeMv.max) {
-        if (isNumericSentinel(table.rows[i][index])) {
+        if (isNumericSentinel(sourceCell(table, rowNumbers, i, index))) {
           out[i] = Number.NaN;
           continue;
         }
         absurd(
           table,
+          rowNumbers,
           i,
           index,
           errors,
@@ -250,8 +293,8 @@ function toCelsius(
     }
     if (celsius < min || celsius > max) {
       out[i] = Number.NaN;
-      if (!isNumericSentinel(table.rows[i][index])) {
-        absurd(table, i, index, errors, `${value} ${temperatureUnitLabels[unit]}`, temperatureRangeText);
+      if (!isNumericSentinel(sourceCell(table, rowNumbers, i, index))) {
+        absurd(table, rowNumbers, i, index, errors, `${value} ${temperatureUnitLabels[unit]}`, temperatureRangeText);
       }
       continue;
     }
@@ -262,6 +305,7 @@ function toCelsius(
 
 function checkRange(
   table: LoggerTable,
+  rowNumbers: Int32Array,
   index: number,
   values: Float64Array,
   range: { min: number; max: number },
@@ -272,8 +316,8 @@ function checkRange(
     const value = values[i];
     if (value !== value || (value >= range.min && value <= range.max)) continue;
     values[i] = Number.NaN;
-    if (isNumericSentinel(table.rows[i][index])) continue;
-    absurd(table, i, index, errors, `${value} ${unitLabel}`, `${range.min}…${range.max} ${unitLabel}`);
+    if (isNumericSentinel(sourceCell(table, rowNumbers, i, index))) continue;
+    absurd(table, rowNumbers, i, index, errors, `${value} ${unitLabel}`, `${range.min}…${range.max} ${unitLabel}`);
   }
 }
 
@@ -300,14 +344,6 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
     return index;
   };
 
-  if (table.rows.length < 2) {
-    errors.add(
-      table.rowNumbers[0] ?? table.headerRow,
-      null,
-      'too-few-rows',
-      'The log has fewer than two data rows; a soak needs a series of readings.',
-    );
-  }
   const timeIndex = mapping.time ? resolve(mapping.time, 'time') : guessTimeColumn(table);
   if (timeIndex === -1) {
     errors.add(
@@ -325,22 +361,33 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
   const junctionIndex = junction && 'column' in junction ? resolve(junction.column, 'cold-junction') : null;
   if (!errors.isEmpty || timeIndex === null || timeIndex < 0) return { ok: false, errors: errors.list() };
 
-  const time = readTimeColumn(table, timeIndex, errors);
+  const time = openTimeColumn(table, timeIndex, errors);
   if (!time) return { ok: false, errors: errors.list() };
 
   const vrmColumns = vrmIndexes as number[];
   const optional = (index: number | null) => (index === null ? [] : [index]);
-  const raws = readRawColumns(
-    table,
-    [
-      ...optional(junctionIndex),
-      ...vrmColumns,
-      ...optional(ambientIndex),
-      ...optional(clockIndex),
-      ...optional(powerIndex),
-    ],
-    errors,
-  );
+  const numericIndexes = [
+    ...optional(junctionIndex),
+    ...vrmColumns,
+    ...optional(ambientIndex),
+    ...optional(clockIndex),
+    ...optional(powerIndex),
+  ];
+  const { count, timeS, rowNumbers, raws } = readLogRows(table, time, timeIndex, numericIndexes, errors);
+  if (!errors.isEmpty) return { ok: false, errors: errors.list() };
+  if (count < 2) {
+    errors.add(
+      rowNumbers[0] ?? table.firstRowNumber,
+      null,
+      'too-few-rows',
+      'The log has fewer than two data rows; a soak needs a series of readings.',
+    );
+    return { ok: false, errors: errors.list() };
+  }
+  const startedAt = time.startedAt(sourceCell(table, rowNumbers, 0, timeIndex));
+  const firstSeconds = timeS[0];
+  for (let i = 0; i < count; i++) timeS[i] -= firstSeconds;
+
   let cursor = 0;
   const junctionRaw = junctionIndex === null ? null : raws[cursor++];
   const vrmRaws = vrmColumns.map(() => raws[cursor++]);
@@ -360,7 +407,7 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
         `${cellLabel(null, column)}: a cold junction is a temperature, not millivolts.`,
       );
     } else {
-      junctionC = toCelsius(table, junctionIndex, junctionRaw.values, unit, null, errors);
+      junctionC = toCelsius(table, rowNumbers, junctionIndex, junctionRaw.values, unit, null, errors);
     }
   }
 
@@ -376,7 +423,7 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
       );
       return { column, unit, valuesC: raw.values.fill(Number.NaN) };
     }
-    return { column, unit, valuesC: toCelsius(table, index, raw.values, unit, junctionC, errors) };
+    return { column, unit, valuesC: toCelsius(table, rowNumbers, index, raw.values, unit, junctionC, errors) };
   };
   const vrm = vrmColumns.map((index, k) => readTemperature(index, vrmRaws[k]));
   const ambient = ambientIndex === null || ambientRaw === null ? null : readTemperature(ambientIndex, ambientRaw);
@@ -384,7 +431,7 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
   const readSeries = (index: number, raw: RawColumn, range: { min: number; max: number }, unit: string, scale = 1) => {
     const { values } = raw;
     if (scale !== 1) for (let i = 0; i < values.length; i++) values[i] *= scale;
-    checkRange(table, index, values, range, unit, errors);
+    checkRange(table, rowNumbers, index, values, range, unit, errors);
     return { column: columns[index], values };
   };
   const clockScale = clockIndex !== null && /\bghz\b/i.test(columns[clockIndex]) ? 1000 : 1;
@@ -408,11 +455,11 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
   return {
     ok: true,
     log: {
-      timeS: time.timeS,
-      startedAt: time.startedAt,
+      timeS,
+      startedAt,
       timeColumn: columns[timeIndex],
       timeFormat: time.format,
-      rowNumbers: table.rowNumbers,
+      rowNumbers,
       vrm,
       ambient,
       clockMHz,

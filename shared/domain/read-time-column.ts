@@ -1,12 +1,17 @@
 import type { TimeFormat } from '../schemas/analysis';
 import { guessColumnRole } from './log-column-guess';
 import { createTimeReader, detectDayFirst, detectTimeFormat, readDateTime } from './log-time-value';
-import type { LoggerTable } from './logger-table';
+import { isBlankRow, type LoggerTable } from './logger-table';
 import { ParseErrorList, cellLabel } from './parse-error-list';
+
+/** Index of the first data row that is not blank, -1 when there is none. */
+export function firstDataRowIndex(table: LoggerTable): number {
+  return table.rows.findIndex((row) => !isBlankRow(row));
+}
 
 /** The first column named like a time whose first cell reads as a time, else the first column if it does. */
 export function guessTimeColumn(table: LoggerTable): number {
-  const firstRow = table.rows[0] ?? [];
+  const firstRow = table.rows[firstDataRowIndex(table)] ?? [];
   const named = table.columns.flatMap((name, index) => (guessColumnRole(name) === 'time' ? [index] : []));
   for (const index of [...named, 0]) {
     const cell = firstRow[index];
@@ -25,22 +30,75 @@ const timeFormatExpectations: Record<TimeFormat, string> = {
 
 const halfDayS = 43_200;
 const dayS = 86_400;
+/** Stamps read from each end of the log to decide day-first or month-first dates. */
+const dayOrderSampleRows = 50;
 
 /**
- * Reads the time column as seconds from the first sample. Times must increase strictly; a time-of-day column that
- * passes midnight is carried into the next day.
+ * Reads one time cell after another, in file order: times must increase strictly, and a time-of-day column that
+ * passes midnight is carried into the next day. Each refusal is listed with its row and column.
  */
-export function readTimeColumn(
-  table: LoggerTable,
-  index: number,
-  errors: ParseErrorList,
-): { timeS: Float64Array; format: TimeFormat; startedAt: string | null } | null {
+export class TimeColumnReader {
+  private readonly read: (cell: string) => number;
+  private dayOffset = 0;
+  private previous = Number.NaN;
+  private previousRow = 0;
+
+  constructor(
+    private readonly column: string,
+    readonly format: TimeFormat,
+    private readonly dayFirst: boolean,
+    decimalComma: boolean,
+    private readonly errors: ParseErrorList,
+  ) {
+    this.read = createTimeReader({ format, decimalComma, dayFirst });
+  }
+
+  /** Seconds as written (since 1970 for date-time stamps), or NaN when the cell is refused. */
+  next(cell: string, row: number): number {
+    let value = this.read(cell);
+    if (value !== value) {
+      const reason = cell.trim() === '' ? 'the time is missing' : `"${cell}" is not a time`;
+      this.errors.add(
+        row,
+        this.column,
+        'unparseable-time',
+        `${cellLabel(row, this.column)}: ${reason}. Expected ${timeFormatExpectations[this.format]}, like the first row.`,
+      );
+      return Number.NaN;
+    }
+    // A time-of-day column passes midnight once in a while; elapsed hh:mm:ss never falls by half a day.
+    if (this.format === 'clock' && value + this.dayOffset < this.previous - halfDayS) this.dayOffset += dayS;
+    value += this.dayOffset;
+    if (value <= this.previous) {
+      const what = value === this.previous ? 'repeats the time of the row before' : 'is earlier than the row before';
+      this.errors.add(
+        row,
+        this.column,
+        'non-monotonic-time',
+        `${cellLabel(row, this.column)}: "${cell.trim()}" ${what} (row ${this.previousRow}); times must increase from row to row.`,
+      );
+    }
+    this.previous = value;
+    this.previousRow = row;
+    return value;
+  }
+
+  /** UTC instant of a stamp that carries a zone offset, else null. */
+  startedAt(firstCell: string): string | null {
+    if (this.format !== 'date-time') return null;
+    const stamp = readDateTime(firstCell, this.dayFirst);
+    return stamp?.hasOffset ? new Date(stamp.seconds * 1000).toISOString() : null;
+  }
+}
+
+/** Decides the time column's format from its first filled cell; null (with the error listed) when it is no time. */
+export function openTimeColumn(table: LoggerTable, index: number, errors: ParseErrorList): TimeColumnReader | null {
   const column = table.columns[index];
-  const { rows, rowNumbers } = table;
+  const { rows } = table;
   const firstFilled = rows.findIndex((row) => (row[index] ?? '').trim() !== '');
   const format = firstFilled < 0 ? null : detectTimeFormat(rows[firstFilled][index], column);
   if (format === null) {
-    const row = firstFilled < 0 ? rowNumbers[0] : rowNumbers[firstFilled];
+    const row = table.firstRowNumber + Math.max(0, firstFilled);
     const cell = firstFilled < 0 ? '' : rows[firstFilled][index];
     errors.add(
       row,
@@ -51,48 +109,8 @@ export function readTimeColumn(
     return null;
   }
   const stampCells =
-    format === 'date-time' ? [...rows.slice(0, 50), ...rows.slice(-50)].map((row) => row[index] ?? '') : [];
-  const dayFirst = detectDayFirst(stampCells);
-  const read = createTimeReader({ format, decimalComma: table.decimalComma, dayFirst });
-  const seconds = new Float64Array(rows.length);
-  let dayOffset = 0;
-  let previous = Number.NaN;
-  for (let i = 0; i < rows.length; i++) {
-    const cell = rows[i][index] ?? '';
-    let value = read(cell);
-    if (value !== value) {
-      const reason = cell.trim() === '' ? 'the time is missing' : `"${cell}" is not a time`;
-      errors.add(
-        rowNumbers[i],
-        column,
-        'unparseable-time',
-        `${cellLabel(rowNumbers[i], column)}: ${reason}. Expected ${timeFormatExpectations[format]}, like the first row.`,
-      );
-      if (errors.full) return null;
-      continue;
-    }
-    // A time-of-day column passes midnight once in a while; elapsed hh:mm:ss never falls by half a day.
-    if (format === 'clock' && value + dayOffset < previous - halfDayS) dayOffset += dayS;
-    value += dayOffset;
-    if (value <= previous) {
-      const what = value === previous ? 'repeats the time of the row before' : 'is earlier than the row before';
-      errors.add(
-        rowNumbers[i],
-        column,
-        'non-monotonic-time',
-        `${cellLabel(rowNumbers[i], column)}: "${cell.trim()}" ${what} (row ${rowNumbers[i - 1]}); times must increase from row to row.`,
-      );
-      if (errors.full) return null;
-    }
-    seconds[i] = value;
-    previous = value;
-  }
-  const first = seconds[0];
-  for (let i = 0; i < seconds.length; i++) seconds[i] -= first;
-  let startedAt: string | null = null;
-  if (format === 'date-time') {
-    const stamp = readDateTime(rows[0][index] ?? '', dayFirst);
-    if (stamp?.hasOffset) startedAt = new Date(stamp.seconds * 1000).toISOString();
-  }
-  return { timeS: seconds, format, startedAt };
+    format === 'date-time'
+      ? [...rows.slice(0, dayOrderSampleRows), ...rows.slice(-dayOrderSampleRows)].map((row) => row[index] ?? '')
+      : [];
+  return new TimeColumnReader(column, format, detectDayFirst(stampCells), table.decimalComma, errors);
 }

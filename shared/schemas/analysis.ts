@@ -194,6 +194,7 @@ export const logPreviewSchema = z.object({
   timeFormat: timeFormatSchema.nullable(),
   /** The first data rows as written in the file. */
   rows: z.array(z.array(z.string())),
+  /** Lines after the header, blank lines within the data included; the analysis counts the samples exactly. */
   dataRowCount: z.number().int().nonnegative(),
   /** Best guess from header names, null when no VRM column could be guessed. Always needs the tester's confirmation. */
   guessedMapping: columnMappingSchema.nullable(),

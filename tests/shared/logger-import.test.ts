@@ -26,7 +26,9 @@ describe('logger import: the shapes loggers write', () => {
     expect(result.headerRow).toBe(4);
     expect(result.delimiter).toBe(';');
     expect(result.decimalComma).toBe(true);
-    expect(Array.from(result.rowNumbers)).toEqual([5, 6]);
+    expect(result.firstRowNumber).toBe(5);
+    const mapped = readMappedLog(result, { vrm: ['VRM 1'] }, {});
+    expect(mapped.ok && Array.from(mapped.log.rowNumbers)).toEqual([5, 6]);
   });
 
   it.each([
@@ -152,10 +154,10 @@ describe('logger import: the shapes loggers write', () => {
     expect(mapped.ok && Array.from(mapped.log.clockMHz?.values ?? [])).toEqual([4500, 4400]);
   });
 
-  it('ignores a trailing delimiter and blank lines between rows', () => {
-    const text = 'Time,VRM 1,\n0,50,\n\n1,51,\n';
-    const parsed = table(text);
-    expect(parsed.rows.length).toBe(2);
-    expect(Array.from(parsed.rowNumbers)).toEqual([2, 4]);
+  it('ignores a trailing delimiter and blank lines or delimiter-only lines between rows', () => {
+    const text = 'Time,VRM 1,\n0,50,\n\n,,\n1,51,\n';
+    const mapped = readMappedLog(table(text), { vrm: ['VRM 1'] }, {});
+    expect(mapped.ok && Array.from(mapped.log.rowNumbers)).toEqual([2, 5]);
+    expect(mapped.ok && Array.from(mapped.log.vrm[0].valuesC)).toEqual([50, 51]);
   });
 });

@@ -10,6 +10,7 @@ import { idParamSchema } from '../../shared/schemas/common';
 import {
   createPriceRequestSchema,
   createProductRequestSchema,
+  priceListQuerySchema,
   priceListSchema,
   priceSchema,
   productDetailSchema,
@@ -26,8 +27,6 @@ import {
   catalogImportPreviewSchema,
   catalogImportResultSchema,
 } from '../../shared/schemas/catalog-import';
-import { regionSchema } from '../../shared/schemas/planning-fields';
-import { z } from 'zod';
 
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: CATALOG_IMPORT_MAX_BYTES, files: 1 } });
 
@@ -110,7 +109,7 @@ export function registerCatalogRoutes(api: ApiRegistry, { dataSource }: AppConte
     tag: 'Catalog',
     summary: 'Price history of a product, newest first; optionally one region.',
     params: idParamSchema,
-    query: z.object({ region: z.preprocess((v) => (v === '' ? undefined : v), regionSchema.optional()) }),
+    query: priceListQuerySchema,
     response: priceListSchema,
     handler: async ({ params, query }) => ({ prices: await catalog.listPrices(params.id, query.region) }),
   });

@@ -8,10 +8,9 @@ import {
   addRoundupEntryResponseSchema,
   entryParamsSchema,
   referenceCandidatesSchema,
-  roundupEntrySchema,
+  roundupEntryListSchema,
   roundupSuggestionsSchema,
 } from '../../shared/schemas/roundups';
-import { z } from 'zod';
 
 export function registerRoundupEntryRoutes(api: ApiRegistry, { dataSource }: AppContext) {
   const entries = new RoundupEntriesService(dataSource);
@@ -23,7 +22,7 @@ export function registerRoundupEntryRoutes(api: ApiRegistry, { dataSource }: App
     tag: 'Roundups',
     summary: 'The roundup’s products in order, with price checks against the band and samples.',
     params: idParamSchema,
-    response: z.object({ entries: z.array(roundupEntrySchema) }),
+    response: roundupEntryListSchema,
     handler: async ({ params }) => ({ entries: await entries.list(params.id) }),
   });
 

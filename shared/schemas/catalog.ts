@@ -192,6 +192,10 @@ export const priceSchema = z.object({
 });
 export type Price = z.infer<typeof priceSchema>;
 export const priceListSchema = z.object({ prices: z.array(priceSchema) });
+/** Price history query: optionally one region. */
+export const priceListQuerySchema = z.object({
+  region: z.preprocess((v) => (v === '' ? undefined : v), regionSchema.optional()),
+});
 
 // ---------------------------------------------------------------------------------------------------------------
 // Product output

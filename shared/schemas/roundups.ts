@@ -140,6 +140,7 @@ export const roundupEntrySchema = z.object({
   addedAt: instantSchema,
 });
 export type RoundupEntry = z.infer<typeof roundupEntrySchema>;
+export const roundupEntryListSchema = z.object({ entries: z.array(roundupEntrySchema) });
 
 export const roundupTransitionOptionSchema = z.object({
   to: roundupStateSchema,
@@ -193,14 +194,13 @@ export const roundupSuggestionsSchema = z.object({
 export type RoundupSuggestions = z.infer<typeof roundupSuggestionsSchema>;
 
 /** Products with accepted results in earlier roundups, which this roundup can show as reference entries. */
-export const referenceCandidatesSchema = z.object({
-  candidates: z.array(
-    z.object({
-      product: productBriefSchema,
-      testedIn: z.array(z.object({ roundupId: z.number().int(), title: z.string(), state: roundupStateSchema })),
-    }),
-  ),
+export const referenceCandidateSchema = z.object({
+  product: productBriefSchema,
+  /** Earlier roundups with accepted results for the product, newest first. */
+  testedIn: z.array(z.object({ roundupId: z.number().int(), title: z.string(), state: roundupStateSchema })),
 });
+export type ReferenceCandidate = z.infer<typeof referenceCandidateSchema>;
+export const referenceCandidatesSchema = z.object({ candidates: z.array(referenceCandidateSchema) });
 
 export const roundupHistoryEntrySchema = z.object({
   id: z.string(),
@@ -209,4 +209,6 @@ export const roundupHistoryEntrySchema = z.object({
   at: instantSchema,
   details: z.record(z.string(), z.unknown()).nullable(),
 });
+export type RoundupHistoryEntry = z.infer<typeof roundupHistoryEntrySchema>;
+/** Audit entries of the roundup (actions such as roundup.created, roundup.entry_added, roundup.cell_moved). */
 export const roundupHistorySchema = z.object({ entries: z.array(roundupHistoryEntrySchema) });

@@ -27,6 +27,13 @@ export const navigation: readonly NavigationEntry[] = [
     description: 'Where you start: what your role does and where to go next.',
   },
   {
+    to: paths.catalog,
+    label: 'Catalog',
+    // Admins look after accounts and are not part of planning: the server gives them no catalog data.
+    roles: ['editor', 'writer', 'tester'],
+    description: 'Boards with their power design, features and prices; CSV import and export.',
+  },
+  {
     to: paths.roundups,
     label: 'Roundups',
     // Admins look after accounts and are not part of planning: the server gives them no roundup data.

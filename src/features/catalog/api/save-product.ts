@@ -1,0 +1,60 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import {
+  productDetailSchema,
+  type CreateProductRequest,
+  type ProductDetail,
+  type UpdateProductRequest,
+} from '../../../../shared/schemas/catalog';
+import { catalogKeys } from './catalog-keys';
+
+export function createProduct(input: CreateProductRequest): Promise<ProductDetail> {
+  return apiClient.post('/api/catalog/products', input, { schema: productDetailSchema });
+}
+
+export interface UpdateProductInput {
+  id: number;
+  /** powerDesign and features are replaced as a whole when sent; `archived` archives or restores. */
+  changes: UpdateProductRequest;
+}
+
+export function updateProduct({ id, changes }: UpdateProductInput): Promise<ProductDetail> {
+  return apiClient.patch(`/api/catalog/products/${id}`, changes, { schema: productDetailSchema });
+}
+
+export function deleteProduct(id: number): Promise<void> {
+  return apiClient.delete(`/api/catalog/products/${id}`);
+}
+
+export function useCreateProduct() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createProduct,
+    onSuccess: (product) => {
+      queryClient.setQueryData(catalogKeys.detail(product.id), product);
+      return queryClient.invalidateQueries({ queryKey: catalogKeys.lists() });
+    },
+  });
+}
+
+export function useUpdateProduct() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateProduct,
+    onSuccess: (product) => {
+      queryClient.setQueryData(catalogKeys.detail(product.id), product);
+      return queryClient.invalidateQueries({ queryKey: catalogKeys.lists() });
+    },
+  });
+}
+
+export function useDeleteProduct() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: deleteProduct,
+    onSuccess: (_result, id) => {
+      queryClient.removeQueries({ queryKey: catalogKeys.detail(id) });
+      return queryClient.invalidateQueries({ queryKey: catalogKeys.lists() });
+    },
+  });
+}

@@ -1,0 +1,157 @@
+import { useId, useState, type FormEvent } from 'react';
+import { z } from 'zod';
+import { Button } from '../../../components/ui/button';
+import { FormErrorSummary } from '../../../components/ui/form-error-summary';
+import { TextField } from '../../../components/ui/text-field';
+import { ApiError, isApiError } from '../../../lib/api-client';
+import { useZodForm } from '../../../lib/use-zod-form';
+import { parseMajorAmount } from '../../../../shared/domain/planning/money';
+import { createPriceRequestSchema, type CreatePriceRequest, type Price } from '../../../../shared/schemas/catalog';
+import { calendarDateSchema, currencySchema, regionSchema } from '../../../../shared/schemas/planning-fields';
+import { useAddPrice } from '../api/prices';
+import { formatPrice } from './catalog-format';
+
+/**
+ * The form works in major units ("189.99"), as a price tag shows it; the request carries integer minor units, parsed
+ * without floating point by the shared money rules, then checked by the same schema the server uses.
+ */
+const priceFormSchema = z
+  .object({
+    region: regionSchema,
+    currency: currencySchema,
+    amount: z.string().trim().min(1, 'Enter the price.'),
+    observedOn: calendarDateSchema,
+    source: z.string(),
+  })
+  .transform((values, ctx): CreatePriceRequest => {
+    const parsed = parseMajorAmount(values.amount, values.currency);
+    if (!parsed.ok) {
+      ctx.addIssue({ code: 'custom', path: ['amount'], message: parsed.message });
+      return z.NEVER;
+    }
+    const request = { ...values, amountMinor: parsed.amountMinor };
+    const checked = createPriceRequestSchema.safeParse(request);
+    if (!checked.success) {
+      for (const issue of checked.error.issues) {
+        const field = issue.path[0] === 'amountMinor' ? 'amount' : issue.path[0];
+        ctx.addIssue({ code: 'custom', path: [String(field)], message: issue.message });
+      }
+      return z.NEVER;
+    }
+    return checked.data;
+  });
+
+const today = () => new Date().toLocaleDateString('en-CA');
+
+/** The server names the amount field amountMinor; this form calls it amount. */
+function renameAmountField(error: unknown) {
+  if (!isApiError(error) || !error.fields.amountMinor) return error;
+  const { amountMinor, ...fields } = error.fields;
+  return new ApiError(error.status, error.code, error.message, { ...fields, amount: amountMinor });
+}
+
+export interface AddPriceFormProps {
+  productId: number;
+  /** Regions and currencies already used, offered as suggestions. */
+  knownRegions: readonly string[];
+  knownCurrencies: readonly string[];
+  onAdded?: (price: Price) => void;
+}
+
+export function AddPriceForm({ productId, knownRegions, knownCurrencies, onAdded }: AddPriceFormProps) {
+  const addPrice = useAddPrice();
+  const regionListId = useId();
+  const currencyListId = useId();
+  const [saved, setSaved] = useState<string | null>(null);
+  const form = useZodForm({
+    schema: priceFormSchema,
+    initialValues: { region: '', currency: '', amount: '', observedOn: today(), source: '' },
+    labels: {
+      region: 'Region',
+      currency: 'Currency',
+      amount: 'Price',
+      observedOn: 'Seen on',
+      source: 'Source',
+    },
+  });
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    setSaved(null);
+    const input = form.validate();
+    if (!input) return;
+    addPrice.mutate(
+      { productId, price: input },
+      {
+        onSuccess: (price) => {
+          form.reset({ ...form.values, amount: '', source: '' });
+          setSaved(`Added ${formatPrice(price)} in ${price.region}.`);
+          onAdded?.(price);
+        },
+        onError: (error) => form.fail(renameAmountField(error)),
+      },
+    );
+  };
+
+  return (
+    <form noValidate onSubmit={submit} className="space-y-3" aria-label="Add a price">
+      <FormErrorSummary
+        title="The price was not added"
+        items={form.summaryItems}
+        message={form.formError}
+        attempt={form.attempt}
+      />
+      <div className="grid grid-cols-2 gap-3">
+        <TextField
+          {...form.field('region')}
+          list={regionListId}
+          autoComplete="off"
+          autoCapitalize="characters"
+          description="e.g. DE, GB, US"
+          inputClassName="uppercase"
+        />
+        <TextField
+          {...form.field('currency')}
+          list={currencyListId}
+          autoComplete="off"
+          autoCapitalize="characters"
+          description="ISO 4217, e.g. EUR"
+          inputClassName="uppercase"
+        />
+        <TextField
+          {...form.field('amount')}
+          inputMode="decimal"
+          autoComplete="off"
+          description="e.g. 189.99"
+          inputClassName="numeric"
+        />
+        <TextField {...form.field('observedOn')} type="date" />
+      </div>
+      <TextField
+        {...form.field('source')}
+        autoComplete="off"
+        description="Shop name, or a note such as “maker’s list price”."
+      />
+      <datalist id={regionListId}>
+        {knownRegions.map((region) => (
+          <option key={region} value={region} />
+        ))}
+      </datalist>
+      <datalist id={currencyListId}>
+        {knownCurrencies.map((currency) => (
+          <option key={currency} value={currency} />
+        ))}
+      </datalist>
+      <div className="flex flex-wrap items-center gap-3">
+        <Button type="submit" variant="primary" pending={addPrice.isPending}>
+          Add price
+        </Button>
+        {saved && (
+          <p role="status" className="text-sm text-teal">
+            {saved}
+          </p>
+        )}
+      </div>
+    </form>
+  );
+}

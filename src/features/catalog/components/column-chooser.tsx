@@ -1,0 +1,60 @@
+import { useRef, type KeyboardEvent } from 'react';
+import { Button } from '../../../components/ui/button';
+import { Checkbox } from '../../../components/ui/checkbox';
+import type { CatalogColumn } from './catalog-columns';
+
+export interface ColumnChooserProps {
+  columns: readonly CatalogColumn[];
+  isVisible: (id: string, defaultVisible: boolean) => boolean;
+  setVisible: (id: string, defaultVisible: boolean, visible: boolean) => void;
+  onReset: () => void;
+}
+
+/** A disclosure with one checkbox per column; the choice is remembered on this device. */
+export function ColumnChooser({ columns, isVisible, setVisible, onReset }: ColumnChooserProps) {
+  const detailsRef = useRef<HTMLDetailsElement>(null);
+  const choosable = columns.filter((column) => !column.fixed);
+  const visibleCount = choosable.filter((column) => isVisible(column.id, column.defaultVisible)).length;
+
+  const closeOnEscape = (event: KeyboardEvent<HTMLDetailsElement>) => {
+    if (event.key !== 'Escape' || !detailsRef.current?.open) return;
+    event.preventDefault();
+    detailsRef.current.open = false;
+    detailsRef.current.querySelector('summary')?.focus();
+  };
+
+  return (
+    <details ref={detailsRef} onKeyDown={closeOnEscape} className="group relative">
+      <summary className="inline-flex min-h-9 cursor-pointer list-none items-center gap-2 rounded-[3px] border border-edge bg-surface px-3.5 text-sm font-medium text-ink hover:bg-wash [&::-webkit-details-marker]:hidden">
+        Columns
+        <span className="numeric text-muted">
+          {visibleCount}/{choosable.length}
+        </span>
+        <span aria-hidden="true" className="font-mono text-[0.625rem] group-open:rotate-180">
+          ▼
+        </span>
+      </summary>
+      <div className="absolute right-0 z-20 mt-1 w-[min(20rem,calc(100vw-2rem))] rounded-[3px] border border-edge bg-surface p-3 shadow-[0_12px_30px_-12px_rgb(16_22_31/0.45)]">
+        <fieldset>
+          <legend className="mb-2 text-sm font-semibold text-ink">Show these columns</legend>
+          <div className="max-h-[min(24rem,60vh)] space-y-1.5 overflow-y-auto pr-1">
+            {choosable.map((column) => (
+              <Checkbox
+                key={column.id}
+                label={column.label}
+                checked={isVisible(column.id, column.defaultVisible)}
+                onChange={(event) => setVisible(column.id, column.defaultVisible, event.target.checked)}
+              />
+            ))}
+          </div>
+        </fieldset>
+        <div className="mt-3 flex justify-between gap-2 border-t border-rule pt-2.5">
+          <p className="text-xs text-muted">Remembered on this device.</p>
+          <Button size="sm" variant="quiet" onClick={onReset}>
+            Reset
+          </Button>
+        </div>
+      </div>
+    </details>
+  );
+}

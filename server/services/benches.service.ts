@@ -221,7 +221,10 @@ export class BenchesService {
       if (!bench.active)
         throw new AppError('bench_inactive', 422, `${bench.name} is out of service and takes no bookings.`);
 
-      const cells = await manager.getRepository(MatrixCellEntity).findBy({ id: In(input.cellIds) });
+      // Shared locks keep the cells assigned to this tester until the booking commits (an unassign waits).
+      const cells = await manager
+        .getRepository(MatrixCellEntity)
+        .find({ where: { id: In(input.cellIds) }, lock: { mode: 'pessimistic_read' } });
       const missing = input.cellIds.filter((id) => !cells.some((c) => c.id === id));
       if (missing.length > 0)
         throw invalid('Some cells do not exist.', { cellIds: `Cells ${missing.join(', ')} do not exist.` });

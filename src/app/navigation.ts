@@ -41,6 +41,12 @@ export const navigation: readonly NavigationEntry[] = [
     description: 'Roundups from Planning to Live: products, test matrix, samples and the test plan.',
   },
   {
+    to: paths.myBench,
+    label: 'My bench',
+    roles: ['tester'],
+    description: 'Your assigned cells by due date, your bench bookings, and booking a bench.',
+  },
+  {
     to: paths.users,
     label: 'Users',
     roles: ['admin'],

@@ -1,0 +1,18 @@
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { benchListSchema, type Bench } from '../../../../shared/schemas/benches';
+import { myBenchKeys } from './my-bench-keys';
+
+/** The physical test systems, to choose one for a booking. */
+export async function getBenches(signal?: AbortSignal): Promise<Bench[]> {
+  const { benches } = await apiClient.get('/api/benches', { signal, schema: benchListSchema });
+  return benches;
+}
+
+export function benchesQueryOptions() {
+  return queryOptions({ queryKey: myBenchKeys.item('benches'), queryFn: ({ signal }) => getBenches(signal) });
+}
+
+export function useBenches() {
+  return useSuspenseQuery(benchesQueryOptions()).data;
+}

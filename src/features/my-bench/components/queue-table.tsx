@@ -1,0 +1,149 @@
+import { useMemo } from 'react';
+import { Link } from 'react-router';
+import { Button } from '../../../components/ui/button';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { cx } from '../../../lib/class-names';
+import { cellActionRules, cellStates, type CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
+import type { Booking } from '../../../../shared/schemas/benches';
+import type { QueueItem } from '../../../../shared/schemas/matrix';
+import { formatCalendarDate, formatSlot, productName } from './bench-format';
+import { CellStateBadge } from './cell-state-badge';
+
+export interface QueueTableProps {
+  caption: string;
+  items: readonly QueueItem[];
+  bookings: readonly Booking[];
+  /** Link to the roundup's matrix. */
+  matrixPath: (roundupId: number) => string;
+  /** Shows the tester's moves (start, back to queue, record); leave out for a read-only list. */
+  onMove?: (item: QueueItem, action: CellAction) => void;
+  pendingCellId?: number;
+  empty: { title: string; text: string };
+}
+
+/** Assigned cells, earliest due date first, each with its roundup, product, configuration and booked time. */
+export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendingCellId, empty }: QueueTableProps) {
+  const slotByCell = useMemo(() => {
+    const map = new Map<number, Booking>();
+    for (const booking of bookings) for (const item of booking.cells) map.set(item.cell.id, booking);
+    return map;
+  }, [bookings]);
+
+  const columns = useMemo<DataTableColumn<QueueItem>[]>(() => {
+    const list: DataTableColumn<QueueItem>[] = [
+      {
+        id: 'due',
+        header: 'Due',
+        numeric: true,
+        sortValue: (item) => item.cell.dueDate,
+        cell: (item) =>
+          item.cell.dueDate ? (
+            <span className={cx(item.cell.overdue && 'font-semibold text-red')}>
+              {item.cell.overdue && <span className="mr-1">Overdue ·</span>}
+              {formatCalendarDate(item.cell.dueDate)}
+            </span>
+          ) : (
+            <span className="text-muted">No date</span>
+          ),
+      },
+      {
+        id: 'product',
+        header: 'Product',
+        rowHeader: true,
+        className: 'min-w-40',
+        sortValue: (item) => productName(item.product),
+        cell: (item) => productName(item.product),
+      },
+      {
+        id: 'configuration',
+        header: 'Configuration',
+        sortValue: (item) => item.loadConfiguration.name,
+        cell: (item) => item.loadConfiguration.name,
+      },
+      {
+        id: 'roundup',
+        header: 'Roundup',
+        hideBelow: 'md',
+        className: 'min-w-44',
+        sortValue: (item) => item.roundup.title,
+        cell: (item) => (
+          <Link to={matrixPath(item.roundup.id)} className="text-copper underline-offset-2 hover:underline">
+            {item.roundup.title}
+          </Link>
+        ),
+      },
+      {
+        id: 'state',
+        header: 'State',
+        sortValue: (item) => cellStates.indexOf(item.cell.state),
+        filterValue: (item) => item.cell.state,
+        cell: (item) => (
+          <span>
+            <CellStateBadge state={item.cell.state} />
+            {item.cell.state === 'needs-retest' && item.cell.note && (
+              <span className="mt-0.5 block max-w-60 text-xs">Retest: {item.cell.note}</span>
+            )}
+          </span>
+        ),
+      },
+      {
+        id: 'slot',
+        header: 'Bench time',
+        hideBelow: 'lg',
+        sortValue: (item) => slotByCell.get(item.cell.id)?.startsAt ?? null,
+        cell: (item) => {
+          const booking = slotByCell.get(item.cell.id);
+          return booking ? (
+            <span className="whitespace-nowrap">
+              {booking.bench.name}
+              <span className="block text-xs text-muted">{formatSlot(booking.startsAt, booking.endsAt)}</span>
+            </span>
+          ) : (
+            <span className="text-muted">Not booked</span>
+          );
+        },
+      },
+    ];
+    if (onMove) {
+      list.push({
+        id: 'actions',
+        header: 'Actions',
+        cell: (item) => {
+          const name = `${productName(item.product)} · ${item.loadConfiguration.name}`;
+          return (
+            <div className="flex flex-wrap gap-1.5">
+              {item.cell.actions.map((action) => (
+                <Button
+                  key={action}
+                  size="sm"
+                  variant={action === 'record' ? 'primary' : 'secondary'}
+                  pending={pendingCellId === item.cell.id}
+                  aria-label={`${cellActionRules[action].label}: ${name}`}
+                  onClick={() => onMove(item, action)}
+                >
+                  {cellActionRules[action].label}
+                </Button>
+              ))}
+            </div>
+          );
+        },
+      });
+    }
+    return list;
+  }, [matrixPath, onMove, pendingCellId, slotByCell]);
+
+  return (
+    <DataTable
+      caption={caption}
+      rows={items}
+      columns={columns}
+      rowKey={(item) => item.cell.id}
+      initialSort={{ columnId: 'due', direction: 'ascending' }}
+      filter={items.length > 6 ? { label: 'Filter cells', placeholder: 'Product, configuration or roundup' } : false}
+      noun={['cell', 'cells']}
+      rowClassName={(item) => (item.cell.overdue ? 'bg-red/5' : undefined)}
+      empty={<EmptyState title={empty.title}>{empty.text}</EmptyState>}
+    />
+  );
+}

@@ -22,7 +22,7 @@ function Figure({ term, children, note }: { term: string; children: ReactNode; n
     <div className="border-b border-rule py-1.5 last:border-b-0">
       <div className="flex items-baseline justify-between gap-4">
         <dt className="text-sm text-muted">{term}</dt>
-        <dd className="numeric text-right text-ink">{children}</dd>
+        <dd className="numeric text-right whitespace-nowrap text-ink">{children}</dd>
       </div>
       {note && <p className="mt-0.5 text-[0.8125rem] text-muted">{note}</p>}
     </div>
@@ -56,10 +56,12 @@ export interface AnalysisResultsProps {
   /** True when the mapping or options changed after this analysis: the figures no longer match the form. */
   outdated: boolean;
   headingRef?: Ref<HTMLHeadingElement>;
+  /** The chart of the log, when the file could be drawn. */
+  chart?: ReactNode;
 }
 
 /** The analysis of one soak, in the order a tester checks it: verdict, peak, steady state, room, log, throttle, QA. */
-export function AnalysisResults({ analysis, fileName, outdated, headingRef }: AnalysisResultsProps) {
+export function AnalysisResults({ analysis, fileName, outdated, headingRef, chart }: AnalysisResultsProps) {
   const { verdict, prediction, throttle, uncertainty } = analysis;
   const soakShort = analysis.soakS < analysis.requiredSoakS;
   const missingSamples = analysis.gaps.reduce((sum, gap) => sum + gap.missingSamples, 0);
@@ -207,6 +209,8 @@ export function AnalysisResults({ analysis, fileName, outdated, headingRef }: An
           <QaFlagList flags={analysis.flags} />
         </Panel>
       </div>
+
+      {chart}
 
       <Panel title="Per probe">
         <ChannelTable channels={analysis.channels} peakChannel={analysis.peakChannel} />

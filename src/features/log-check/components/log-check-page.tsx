@@ -20,6 +20,8 @@ import { LogFilePicker } from './log-file-picker';
 import { LogPreviewPanel } from './log-preview';
 import { draftFromPreview, requestFromDraft, type MappingDraft } from './mapping-draft';
 import { ParseErrorTable } from './parse-error-table';
+import { readChartSeries, type ChartSeries } from './read-chart-series';
+import { TemperatureChart } from './temperature-chart';
 import { UploadProgressBar } from './upload-progress';
 
 type Stage = 'reading' | 'analysing';
@@ -42,6 +44,7 @@ interface Failure {
   stage: Stage;
   errors: ParseError[];
   message: string;
+  hasPreview: boolean;
 }
 interface Result {
   file: File;
@@ -72,6 +75,7 @@ export function LogCheckPage({ signInPath }: LogCheckPageProps) {
   const [progress, setProgress] = useState<{ stage: Stage; progress: UploadProgress } | null>(null);
   const [cancelled, setCancelled] = useState(false);
   const [result, setResult] = useState<Result | null>(null);
+  const [chart, setChart] = useState<{ file: File; requestJson: string; series: ChartSeries | null } | null>(null);
   const inFlight = useRef<AbortController | null>(null);
   const lastSent = useRef<Sending | null>(null);
   const resultHeading = useRef<HTMLHeadingElement>(null);
@@ -81,6 +85,7 @@ export function LogCheckPage({ signInPath }: LogCheckPageProps) {
   const shownReading = current(reading);
   const shownFailure = current(failure);
   const shownResult = current(result);
+  const shownChart = current(chart);
 
   // Moves focus to the new result so keyboard and screen-reader users land on it.
   useEffect(() => {
@@ -128,12 +133,22 @@ export function LogCheckPage({ signInPath }: LogCheckPageProps) {
             }
           }
           if (outcome.kind === 'unreadable') {
-            setFailure({ file: sending.file, stage: sending.stage, errors: outcome.errors, message: outcome.message });
+            setFailure({
+              file: sending.file,
+              stage: sending.stage,
+              errors: outcome.errors,
+              message: outcome.message,
+              hasPreview: outcome.preview !== null,
+            });
             return;
           }
           // The first answer analyses with the guessed mapping; it is never shown as a result.
-          if (sending.stage === 'analysing') {
-            setResult({ file: sending.file, outcome, requestJson: JSON.stringify(sending.request) });
+          if (sending.stage === 'analysing' && sending.request) {
+            const requestJson = JSON.stringify(sending.request);
+            setResult({ file: sending.file, outcome, requestJson });
+            void readChartSeries(sending.file, sending.request).then((series) =>
+              setChart({ file: sending.file, requestJson, series }),
+            );
           }
         },
         onError: (error) => {
@@ -197,7 +212,7 @@ export function LogCheckPage({ signInPath }: LogCheckPageProps) {
       />
 
       <div className="space-y-6">
-        <Panel title="1 · Logger file" description="One soak of one load configuration: time, VRM probes, ambient.">
+        <Panel title="1 · The soak log" description="One soak of one load configuration: time, VRM probes, ambient.">
           <LogFilePicker file={file} onChoose={choose} error={fileError} />
           {progress && (
             <div className="mt-3">
@@ -237,7 +252,12 @@ export function LogCheckPage({ signInPath }: LogCheckPageProps) {
         </Panel>
 
         {shownFailure?.stage === 'reading' && (
-          <ParseErrorTable errors={shownFailure.errors} message={shownFailure.message} stage="reading" />
+          <ParseErrorTable
+            errors={shownFailure.errors}
+            message={shownFailure.message}
+            stage="reading"
+            hasPreview={shownFailure.hasPreview}
+          />
         )}
 
         {file && shownReading && draft && (
@@ -259,7 +279,12 @@ export function LogCheckPage({ signInPath }: LogCheckPageProps) {
         )}
 
         {shownFailure?.stage === 'analysing' && (
-          <ParseErrorTable errors={shownFailure.errors} message={shownFailure.message} stage="analysing" />
+          <ParseErrorTable
+            errors={shownFailure.errors}
+            message={shownFailure.message}
+            stage="analysing"
+            hasPreview={shownFailure.hasPreview}
+          />
         )}
 
         {file && shownResult && (
@@ -268,6 +293,11 @@ export function LogCheckPage({ signInPath }: LogCheckPageProps) {
             fileName={file.name}
             outdated={currentRequestJson !== shownResult.requestJson}
             headingRef={resultHeading}
+            chart={
+              shownChart?.requestJson === shownResult.requestJson && shownChart.series ? (
+                <TemperatureChart series={shownChart.series} analysis={shownResult.outcome.analysis} />
+              ) : null
+            }
           />
         )}
       </div>

@@ -22,6 +22,7 @@ export function LogFilePicker({ file, onChoose, error, disabled = false }: LogFi
   const errorId = useId();
   const [dragging, setDragging] = useState(false);
   const dragDepth = useRef(0);
+  const input = useRef<HTMLInputElement>(null);
 
   const hasFiles = (event: DragEvent) => Array.from(event.dataTransfer.types).includes('Files');
 
@@ -46,7 +47,10 @@ export function LogFilePicker({ file, onChoose, error, disabled = false }: LogFi
     setDragging(false);
     if (disabled) return;
     const dropped = event.dataTransfer.files[0];
-    if (dropped) onChoose(dropped);
+    if (!dropped) return;
+    // The input then names the dropped file too, as if it had been chosen there.
+    if (input.current) input.current.files = event.dataTransfer.files;
+    onChoose(dropped);
   };
 
   return (
@@ -71,6 +75,7 @@ export function LogFilePicker({ file, onChoose, error, disabled = false }: LogFi
           Logger file
         </label>
         <input
+          ref={input}
           id={inputId}
           type="file"
           accept={accept}
@@ -79,8 +84,6 @@ export function LogFilePicker({ file, onChoose, error, disabled = false }: LogFi
           aria-describedby={cx(error ? errorId : undefined, hintId) || undefined}
           onChange={(event) => {
             const chosen = event.target.files?.[0];
-            // Cleared so choosing the same file again (after fixing it on disk) reads it again.
-            event.target.value = '';
             if (chosen) onChoose(chosen);
           }}
           className={cx(

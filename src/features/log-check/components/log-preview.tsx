@@ -58,7 +58,7 @@ export function LogPreviewPanel({ preview, fileName }: LogPreviewPanelProps) {
           <Fact term="Lines before the header">
             <span className="numeric">{preview.preambleLines.length}</span>
           </Fact>
-          <Fact term="Data rows">
+          <Fact term="Lines after the header">
             <span className="numeric">{formatCount(preview.dataRowCount)}</span>
           </Fact>
           <Fact term="Time column">

@@ -8,6 +8,8 @@ export interface ParseErrorTableProps {
   message: string;
   /** Whether the file is being read for the first time or with the tester's mapping. */
   stage: 'reading' | 'analysing';
+  /** Whether the table itself could be read, so a different mapping might help. */
+  hasPreview: boolean;
 }
 
 interface NumberedError extends ParseError {
@@ -15,7 +17,7 @@ interface NumberedError extends ParseError {
 }
 
 /** The 422 answer: every problem the server found, with the line of the file and the column it is in. */
-export function ParseErrorTable({ errors, message, stage }: ParseErrorTableProps) {
+export function ParseErrorTable({ errors, message, stage, hasPreview }: ParseErrorTableProps) {
   const rows = useMemo<NumberedError[]>(() => errors.map((error, key) => ({ ...error, key })), [errors]);
   const columns = useMemo<DataTableColumn<NumberedError>[]>(
     () => [
@@ -56,11 +58,17 @@ export function ParseErrorTable({ errors, message, stage }: ParseErrorTableProps
       {/* Only the summary is announced; the table is there to read at the tester's pace. */}
       <div role="alert" className="mb-3">
         <p className="font-semibold text-ink">
-          {stage === 'reading' ? 'The file could not be read' : 'The file could not be analysed with this mapping'}
+          {stage === 'analysing'
+            ? 'The file could not be analysed with your mapping'
+            : hasPreview
+              ? 'The file could not be read with the guessed mapping'
+              : 'The file could not be read'}
         </p>
         <p className="mt-0.5 text-sm text-ink">
-          {message} {errors.length === 1 ? 'One problem' : `${errors.length} problems`} below. Fix the file and choose
-          it again, or change the mapping; your choices stay as they are.
+          {message} {errors.length === 1 ? 'One problem' : `${errors.length} problems`} below.{' '}
+          {hasPreview
+            ? 'Fix the file and choose it again, or change the mapping below; your choices stay as they are.'
+            : 'Fix the file and choose it again; your choices stay as they are.'}
         </p>
       </div>
       <DataTable

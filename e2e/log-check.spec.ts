@@ -1,0 +1,103 @@
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { expect, test } from '@playwright/test';
+import { mainNavigation, signInAs } from './support/sign-in';
+
+const thin = '\u2009';
+
+/**
+ * A soak whose answer is known from first principles, not from the engine: a first-order (Newtonian) rise
+ * T(t) = 21.0 + 50·(1 − e^(−t/300)) °C, logged every 10 s for 60 minutes, with the room steady at 21.0 °C and the clock
+ * holding 5000 MHz. After 3600 s = 12 τ the rise is within 50·e^(−12) ≈ 0.0003 °C of 71.0 °C, so the peak prints as
+ * 71.0 °C; that is below the default comfortable limit of 80 °C and nothing throttles, so the verdict is Comfortable.
+ */
+function firstOrderSoakCsv(): string {
+  const lines = ['Time [s],VRM 1 [°C],Ambient [°C],CPU clock [MHz]'];
+  for (let t = 0; t < 3600; t += 10) {
+    const vrmC = 21 + 50 * (1 - Math.exp(-t / 300));
+    lines.push(`${t},${vrmC.toFixed(2)},21.00,5000`);
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+/** The same soak with one VRM reading typed over: the sample at t = 300 s, on line 1 (header) + 31 = 32. */
+function soakWithBadCell(): string {
+  const lines = firstOrderSoakCsv().split('\n');
+  const cells = lines[31].split(',');
+  expect(cells[0]).toBe('300');
+  cells[1] = 'n/a?';
+  lines[31] = cells.join(',');
+  return lines.join('\n');
+}
+
+let folder: string;
+
+test.beforeAll(async () => {
+  folder = await mkdtemp(path.join(tmpdir(), 'benchwire-log-check-'));
+});
+
+test.afterAll(async () => {
+  await rm(folder, { recursive: true, force: true });
+});
+
+test('a tester uploads a soak, confirms the guessed mapping and gets the verdict; a broken file shows its row and column', async ({
+  page,
+}) => {
+  const goodFile = path.join(folder, 'soak-first-order.csv');
+  const brokenFile = path.join(folder, 'soak-typed-over.csv');
+  await writeFile(goodFile, firstOrderSoakCsv());
+  await writeFile(brokenFile, soakWithBadCell());
+
+  await signInAs(page, 'tester');
+  await mainNavigation(page).getByRole('link', { name: 'Log check' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Log check' })).toBeVisible();
+
+  await page.getByLabel('Logger file').setInputFiles(goodFile);
+
+  // The preview: how the file was read, before any analysis.
+  const preview = page.getByRole('region', { name: 'How Benchwire read the file' });
+  await expect(preview).toContainText('comma');
+  await expect(preview).toContainText('row 1');
+  await expect(preview).toContainText('360');
+  const columns = preview.getByRole('table', { name: /Columns in the file/ });
+  await expect(columns.getByRole('row', { name: /VRM 1 \[°C\]/ })).toContainText('VRM probe');
+
+  // The guess is shown as a guess; the tester checks it and only then analyses.
+  await expect(page.getByText('Guessed from the header names — check it')).toBeVisible();
+  await expect(page.getByLabel(/^Time column/)).toHaveValue('Time [s]');
+  await expect(page.getByLabel(/^Ambient column/)).toHaveValue('Ambient [°C]');
+  await expect(page.getByLabel(/^Clock column/)).toHaveValue('CPU clock [MHz]');
+  await expect(page.getByRole('checkbox', { name: 'VRM 1 [°C]' })).toBeChecked();
+  await expect(page.getByRole('heading', { name: 'Result' })).toHaveCount(0);
+  await page.getByLabel('Room target').fill('21');
+  await page.getByRole('button', { name: 'Analyse' }).click();
+
+  const results = page.getByRole('region', { name: 'Result' });
+  await expect(results.getByText('Comfortable', { exact: true })).toBeVisible();
+  await expect(results).toContainText(`The peak, 71.0${thin}°C, is below 80.0${thin}°C.`);
+  await expect(results.getByRole('region', { name: 'Peak' })).toContainText(`71.0${thin}°C ±2.5${thin}°C`);
+  await expect(results.getByRole('region', { name: 'Room (ambient probe)' })).toContainText(`21.0${thin}°C`);
+  await expect(results).toContainText('one open test system in a controlled room');
+
+  // A file with a typed-over cell: the error names the line and the column, and the tester's choices stay.
+  await page.getByLabel('Room target').fill('21.5');
+  await page.getByLabel('Logger file').setInputFiles(brokenFile);
+  await expect(page.getByText('The file could not be read with the guessed mapping')).toBeVisible();
+  const problem = page.getByRole('table', { name: 'Problems found in the logger file' }).getByRole('row').nth(1);
+  await expect(problem.getByRole('cell').nth(0)).toHaveText('32');
+  await expect(problem).toContainText('VRM 1 [°C]');
+  await expect(problem).toContainText('is not a number');
+  await expect(page.getByText('soak-typed-over.csv').first()).toBeVisible();
+  await expect(page.getByLabel('Room target')).toHaveValue('21.5');
+  await expect(page.getByRole('heading', { name: 'Result' })).toHaveCount(0);
+});
+
+test('a writer has no Log check entry and the page explains why', async ({ page }) => {
+  await signInAs(page, 'writer');
+  await expect(mainNavigation(page).getByRole('link', { name: 'Account' })).toBeVisible();
+  await expect(mainNavigation(page).getByRole('link', { name: 'Log check' })).toHaveCount(0);
+  await page.goto('/log-check');
+  await expect(page.getByText('Your role cannot open this page')).toBeVisible();
+  await expect(page.getByLabel('Logger file')).toHaveCount(0);
+});

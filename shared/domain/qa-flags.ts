@@ -1,4 +1,4 @@
-import type { AnalysisOptions, ChannelFigures, QaFlag, QaFlagCode, RiseFit, Throttle } from '../schemas/analysis';
+import type { AnalysisOptions, ChannelFigures, QaFlag, QaFlagCode, RiseFit } from '../schemas/analysis';
 import { formatCelsius, formatRunTime } from './run-time-format';
 import type { Dropout, TimeGap } from './sample-gaps';
 
@@ -13,7 +13,6 @@ export interface QaFacts {
   gaps: TimeGap[];
   dropouts: Dropout[];
   spikeTimes: Map<string, number[]>;
-  throttle: Throttle;
   clockLogged: boolean;
 }
 

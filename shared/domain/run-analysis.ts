@@ -51,6 +51,7 @@ function analyzeChannel(
   const raw = channel.valuesC;
   const filtered = movingMedian(raw, window);
   let peakIndex = -1;
+  let minC = Number.POSITIVE_INFINITY;
   let gapSamples = 0;
   const spikeTimes: number[] = [];
   const spikes: AnalysisResult['spikes'] = [];
@@ -63,9 +64,10 @@ function analyzeChannel(
         spikes.push({ channel: channel.column, atS: timeS[i], rawC: raw[i], medianC: value });
       }
     }
-    if (value === value && (peakIndex < 0 || value > filtered[peakIndex])) peakIndex = i;
+    if (value !== value) continue;
+    if (peakIndex < 0 || value > filtered[peakIndex]) peakIndex = i;
+    if (value < minC) minC = value;
   }
-  const summary = summarizeSeries(filtered);
   const steady = checkSteadyState(timeS, filtered, steadyWindowS, steadyLimitC, intervalS);
   const finite = (value: number) => (Number.isFinite(value) ? value : null);
   return {
@@ -74,7 +76,7 @@ function analyzeChannel(
       unit: channel.unit,
       peakC: peakIndex < 0 ? null : filtered[peakIndex],
       peakAtS: peakIndex < 0 ? null : timeS[peakIndex],
-      minC: finite(summary.min),
+      minC: finite(minC),
       steadyStateMeanC: finite(steady.meanC),
       steadyStateChangeC: finite(steady.changeC),
       reachedSteadyState: steady.reached,
@@ -263,7 +265,6 @@ export function analyzeRun(
     gaps,
     dropouts,
     spikeTimes: new Map(channels.map((channel) => [channel.figures.column, channel.spikeTimes])),
-    throttle,
     clockLogged: log.clockMHz !== null,
   });
 

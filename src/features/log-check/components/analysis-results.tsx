@@ -29,11 +29,13 @@ function Figure({ term, children, note }: { term: string; children: ReactNode; n
   );
 }
 
-function YesNo({ value, good = true }: { value: boolean; good?: boolean }) {
+/** A yes or no with its mark: ✓ when it is the good answer, ! when it needs a look, ✕ when it fails the run. */
+function YesNo({ value, good = true, failing = false }: { value: boolean; good?: boolean; failing?: boolean }) {
   const fine = value === good;
+  const style = fine ? 'text-teal' : failing ? 'text-red' : 'text-amber';
   return (
-    <span className={fine ? 'text-teal' : 'text-amber'}>
-      <span aria-hidden="true">{fine ? '✓ ' : '! '}</span>
+    <span className={style}>
+      <span aria-hidden="true">{fine ? '✓ ' : failing ? '✕ ' : '! '}</span>
       {value ? 'yes' : 'no'}
     </span>
   );
@@ -191,7 +193,7 @@ export function AnalysisResults({ analysis, fileName, outdated, headingRef, char
         <Panel title="Throttle">
           <dl>
             <Figure term="Throttled">
-              <YesNo value={throttle.detected} good={false} />
+              <YesNo value={throttle.detected} good={false} failing />
             </Figure>
             <Figure term="Judged from">{throttleSources[throttle.source]}</Figure>
             <Figure term="First at">{throttle.firstAtS === null ? '—' : formatMinutes(throttle.firstAtS)}</Figure>

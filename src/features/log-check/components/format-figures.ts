@@ -23,8 +23,10 @@ export function formatMinutes(seconds: number | null | undefined, digits = 1): s
   return seconds === null || seconds === undefined ? '—' : withUnit((seconds / 60).toFixed(digits), 'min');
 }
 
-export function formatSeconds(seconds: number, digits = 1): string {
-  return withUnit(Number.isInteger(seconds) ? String(seconds) : seconds.toFixed(digits), 's');
+/** Whole seconds as they are, fractions with two significant figures (0.050 s at 20 Hz). */
+export function formatSeconds(seconds: number): string {
+  if (Number.isInteger(seconds) || seconds >= 10) return withUnit(seconds.toFixed(0), 's');
+  return withUnit(seconds >= 1 ? seconds.toFixed(1) : seconds.toPrecision(2), 's');
 }
 
 export function formatHertz(hertz: number): string {

@@ -15,7 +15,7 @@ import {
 } from '../api/analyse-log';
 import { AnalysisResults } from './analysis-results';
 import { ColumnMappingForm } from './column-mapping-form';
-import { formatBytes } from './format-figures';
+import { formatBytes, formatCount } from './format-figures';
 import { LogFilePicker } from './log-file-picker';
 import { LogPreviewPanel } from './log-preview';
 import { draftFromPreview, requestFromDraft, type MappingDraft } from './mapping-draft';
@@ -224,8 +224,28 @@ export function LogCheckPage({ signInPath }: LogCheckPageProps) {
             </div>
           )}
           {cancelled && !busy && (
-            <p role="status" className="mt-3 text-sm text-muted">
-              Upload cancelled. Your file and mapping are still here.
+            <div className="mt-3 flex flex-wrap items-center gap-3">
+              <p role="status" className="text-sm text-muted">
+                Upload cancelled. Your file and mapping are still here.
+              </p>
+              <Button
+                size="sm"
+                variant="secondary"
+                onClick={() => {
+                  if (lastSent.current) send(lastSent.current);
+                }}
+              >
+                Send it again
+              </Button>
+            </div>
+          )}
+          {file && shownReading && !busy && !cancelled && shownFailure?.stage !== 'reading' && (
+            <p role="status" className="mt-3 text-sm text-ink">
+              <span aria-hidden="true" className="mr-1.5 font-mono text-teal">
+                ✓
+              </span>
+              Read {shownReading.preview.columns.length} columns and {formatCount(shownReading.preview.dataRowCount)}{' '}
+              lines. Check how the file was read and the mapping below, then press Analyse.
             </p>
           )}
           {requestError && (

@@ -67,7 +67,7 @@ export function ParseErrorTable({ errors, message, stage, hasPreview }: ParseErr
         <p className="mt-0.5 text-sm text-ink">
           {message} {errors.length === 1 ? 'One problem' : `${errors.length} problems`} below.{' '}
           {hasPreview
-            ? 'Fix the file and choose it again, or change the mapping below; your choices stay as they are.'
+            ? `Fix the file and choose it again, or change the mapping ${stage === 'analysing' ? 'above' : 'below'}; your choices stay as they are.`
             : 'Fix the file and choose it again; your choices stay as they are.'}
         </p>
       </div>

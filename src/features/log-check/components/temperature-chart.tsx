@@ -131,6 +131,27 @@ export function TemperatureChart({ series, analysis }: TemperatureChartProps) {
               </text>
             </g>
           ))}
+          {analysis.throttle.source === 'manual' && analysis.throttle.firstAtS !== null && (
+            <g>
+              <line
+                x1={x(analysis.throttle.firstAtS)}
+                x2={x(analysis.throttle.firstAtS)}
+                y1={margin.top}
+                y2={margin.top + plotHeight}
+                stroke="var(--color-red)"
+                strokeWidth="1.5"
+                strokeDasharray="4 3"
+              />
+              <text
+                x={x(analysis.throttle.firstAtS) - 4}
+                y={margin.top + plotHeight - 6}
+                textAnchor="end"
+                fill="var(--color-red)"
+              >
+                throttle noted
+              </text>
+            </g>
+          )}
           {ticks(yMin, yMax, yStep).map((value) => (
             <g key={`y${value}`}>
               <line

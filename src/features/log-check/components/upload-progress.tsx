@@ -45,7 +45,7 @@ export function UploadProgressBar({ progress, label, onCancel }: UploadProgressB
           <div className="h-full w-1/3 animate-[benchwire-progress_1.1s_ease-in-out_infinite] bg-copper motion-reduce:w-full motion-reduce:animate-none" />
         )}
       </div>
-      <p className="numeric mt-1.5 text-muted">{text}</p>
+      <p className="mt-1.5 text-[0.8125rem] text-muted tabular-nums">{text}</p>
       {/* Only the change of phase is read out, not every progress event. */}
       <p className="sr-only" aria-live="polite">
         {uploading ? 'Uploading the file.' : 'Uploaded. The server is reading the log.'}

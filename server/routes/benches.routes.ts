@@ -95,6 +95,7 @@ export function registerBenchRoutes(api: ApiRegistry, { dataSource }: AppContext
     tag: 'Benches',
     summary: 'Cancel a booking: testers their own, editors any.',
     params: bookingParamsSchema,
+    successStatus: 204,
     handler: async ({ user, params }) => {
       await benches.cancel(user, params.id, params.bookingId);
     },

@@ -97,6 +97,7 @@ export function registerCatalogRoutes(api: ApiRegistry, { dataSource }: AppConte
     tag: 'Catalog',
     summary: 'Delete a product that no roundup uses (409 product_in_use otherwise: archive it instead).',
     params: idParamSchema,
+    successStatus: 204,
     handler: async ({ user, params }) => {
       await catalog.remove(user, params.id);
     },
@@ -133,6 +134,7 @@ export function registerCatalogRoutes(api: ApiRegistry, { dataSource }: AppConte
     tag: 'Catalog',
     summary: 'Remove a mistaken price entry (kept in the audit log).',
     params: productPriceParamsSchema,
+    successStatus: 204,
     handler: async ({ user, params }) => {
       await catalog.removePrice(user, params.id, params.priceId);
     },

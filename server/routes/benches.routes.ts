@@ -1,7 +1,7 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
 import { BenchesService } from '../services/benches.service';
-import { benchWorkers, bookers, planEditors } from './planning-access';
+import { benchWorkers, bookers, planEditors, planningReaders } from './planning-access';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
   benchListSchema,
@@ -21,7 +21,7 @@ export function registerBenchRoutes(api: ApiRegistry, { dataSource }: AppContext
   api.add({
     method: 'get',
     path: '/api/benches',
-    access: benchWorkers,
+    access: planningReaders,
     tag: 'Benches',
     summary: 'Physical test systems.',
     response: benchListSchema,
@@ -54,7 +54,7 @@ export function registerBenchRoutes(api: ApiRegistry, { dataSource }: AppContext
   api.add({
     method: 'get',
     path: '/api/bookings',
-    access: benchWorkers,
+    access: planningReaders,
     tag: 'Benches',
     summary: 'Bookings on all benches in a window (the calendar overview).',
     query: bookingListQuerySchema,
@@ -65,7 +65,7 @@ export function registerBenchRoutes(api: ApiRegistry, { dataSource }: AppContext
   api.add({
     method: 'get',
     path: '/api/benches/:id/bookings',
-    access: benchWorkers,
+    access: planningReaders,
     tag: 'Benches',
     summary: 'One bench’s calendar in a window (default: yesterday to two weeks ahead).',
     params: idParamSchema,

@@ -1,10 +1,10 @@
 import type { Access } from '../api-registry';
 
-// Who may do what in roundup planning (issue 4). Admins manage accounts and are not part of planning; they
-// see the overview dashboard only.
+// Who may do what in roundup planning (issue 4). Admins manage accounts; in planning they read everything and
+// change nothing.
 
-/** Read the catalog, roundups, plans and matrices. */
-export const planningReaders: Access = ['editor', 'writer', 'tester'];
+/** Read the catalog, roundups, plans, matrices, benches and their calendars. */
+export const planningReaders: Access = ['admin', 'editor', 'writer', 'tester'];
 /** Edit catalog products and prices, and import. */
 export const catalogEditors: Access = ['editor', 'tester'];
 /** Plan roundups: create, edit, add products, assign, accept, manage benches and test plans. */

@@ -1,9 +1,11 @@
-import { useId, type FormEvent } from 'react';
+import { useId, useState, type FormEvent } from 'react';
+import { Alert } from '../../../components/ui/alert';
 import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
+import { isApiError } from '../../../lib/api-client';
 import { userTimeZone } from '../../../lib/format-time';
 import { useZodForm } from '../../../lib/use-zod-form';
 import {
@@ -64,6 +66,8 @@ export function BookBenchForm({ benches, cells, onBooked }: BookBenchFormProps) 
   const cellsHeadingId = useId();
   const book = useBookBench();
   const form = useZodForm({ schema: bookingFormSchema, initialValues: emptyForm, labels });
+  // The server's whole sentence for a refused slot (who holds the bench, when); the field error is shorter.
+  const [refusal, setRefusal] = useState<string | null>(null);
   const zone = userTimeZone();
   const activeBenches = benches.filter((bench) => bench.active);
   const chosen = new Set(form.values.cellIds ? form.values.cellIds.split(',').map(Number) : []);
@@ -77,6 +81,7 @@ export function BookBenchForm({ benches, cells, onBooked }: BookBenchFormProps) 
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
+    setRefusal(null);
     const input = form.validate();
     if (!input) return;
     const { benchId, ...booking } = input;
@@ -87,7 +92,10 @@ export function BookBenchForm({ benches, cells, onBooked }: BookBenchFormProps) 
           form.reset();
           onBooked(saved);
         },
-        onError: (error) => form.fail(error),
+        onError: (error) => {
+          form.fail(error);
+          if (isApiError(error) && error.status === 409) setRefusal(error.message);
+        },
       },
     );
   };
@@ -164,6 +172,11 @@ export function BookBenchForm({ benches, cells, onBooked }: BookBenchFormProps) 
       </fieldset>
 
       <TextField {...form.field('note')} optional autoComplete="off" maxLength={300} />
+      {refusal && (
+        <Alert tone="danger" title="That slot is taken">
+          {refusal}
+        </Alert>
+      )}
       <Button type="submit" variant="primary" pending={book.isPending}>
         Book the bench
       </Button>

@@ -20,6 +20,7 @@ import {
 import { unitLabel } from './format-figures';
 import {
   defaultOptions,
+  guessedRoleOf,
   requestFromDraft,
   roleLabels,
   temperatureColumns,
@@ -248,7 +249,7 @@ export function ColumnMappingForm({
                   key={column.index}
                   id={id(`vrm-${column.name}`)}
                   label={<span className="font-mono text-[0.8125rem] font-normal">{column.name || '(no name)'}</span>}
-                  description={`Guessed: ${roleLabels[column.guessedRole]}`}
+                  description={`Guessed: ${roleLabels[guessedRoleOf(preview, column)]}`}
                   checked={draft.vrm.includes(column.name)}
                   disabled={disabled}
                   onChange={(event) => {

@@ -3,7 +3,7 @@ import { Panel } from '../../../components/ui/panel';
 import { cx } from '../../../lib/class-names';
 import type { LogPreview } from '../../../../shared/schemas/analysis';
 import { formatCount, unitLabel } from './format-figures';
-import { roleLabels } from './mapping-draft';
+import { guessedRoleOf, roleLabels } from './mapping-draft';
 
 const delimiterNames: Record<LogPreview['delimiter'], string> = {
   ',': 'comma ( , )',
@@ -99,8 +99,8 @@ export function LogPreviewPanel({ preview, fileName }: LogPreviewPanelProps) {
                   <th scope="row" className="px-3 py-1.5 text-left font-mono text-[0.8125rem] font-normal">
                     {column.name || <span className="text-muted">(no name)</span>}
                   </th>
-                  <td className={cx('px-3 py-1.5', column.guessedRole === 'other' && 'text-muted')}>
-                    {roleLabels[column.guessedRole]}
+                  <td className={cx('px-3 py-1.5', guessedRoleOf(preview, column) === 'other' && 'text-muted')}>
+                    {roleLabels[guessedRoleOf(preview, column)]}
                   </td>
                   <td className="numeric px-3 py-1.5">
                     {column.guessedUnit ? unitLabel(column.guessedUnit) : <span className="text-muted">none</span>}

@@ -4,6 +4,7 @@ import {
   type AnalysisRequestInput,
   type ColumnRole,
   type LogPreview,
+  type PreviewColumn,
   type TemperatureUnit,
   type ToleranceClass,
 } from '../../../../shared/schemas/analysis';
@@ -72,6 +73,22 @@ function optionFields(): Omit<MappingDraft, 'time' | 'vrm' | 'ambient' | 'clock'
   };
 }
 
+/**
+ * The role the server's guess gives a column: its guessed mapping first (which also takes generic channels such as
+ * "CH1" as VRM probes), else the role read from the column's name alone.
+ */
+export function guessedRoleOf(preview: LogPreview, column: PreviewColumn): ColumnRole {
+  const mapping = preview.guessedMapping;
+  if (mapping) {
+    if (mapping.time === column.name) return 'time';
+    if (mapping.vrm.includes(column.name)) return 'vrm';
+    if (mapping.ambient === column.name) return 'ambient';
+    if (mapping.clock === column.name) return 'clock';
+    if (mapping.power === column.name) return 'power';
+  }
+  return column.guessedRole;
+}
+
 /** The unit a column is read in: the tester's choice, else its header's, else °C. */
 export function unitOf(draft: MappingDraft, preview: LogPreview, column: string): TemperatureUnit {
   return draft.units[column] ?? preview.columns.find((entry) => entry.name === column)?.guessedUnit ?? 'C';
@@ -134,6 +151,20 @@ const fieldByIssuePath: Record<string, DraftField> = {
   'options.throttleMinSeconds': 'throttleMinSeconds',
   'options.rubric.comfortableBelowC': 'comfortableBelowC',
   'options.rubric.warmUpToC': 'warmUpToC',
+};
+
+/** Plain words for the schema's range checks, which read technical (as useZodForm's `messages` do elsewhere). */
+const rangeMessages: Partial<Record<DraftField, string>> = {
+  coldJunctionFixedC: 'Enter a temperature from −50 to 150 °C.',
+  soakMinutes: 'Enter more than 0 and at most 1440 minutes.',
+  ambientTargetC: 'Enter a room target from −20 to 60 °C.',
+  ambientToleranceC: 'Enter a tolerance from 0 to 20 °C.',
+  ambientDriftLimitC: 'Enter a drift limit from 0 to 20 °C.',
+  manualThrottleMinute: 'Enter a minute of 0 or more, or leave it empty.',
+  throttlePercent: 'Enter a share above 0 and below 100 %.',
+  throttleMinSeconds: 'Enter more than 0 and at most 3600 seconds.',
+  comfortableBelowC: 'Enter a limit from 0 to 200 °C.',
+  warmUpToC: 'Enter a limit from 0 to 250 °C.',
 };
 
 function readNumber(text: string): number | null {
@@ -225,7 +256,10 @@ export function requestFromDraft(
   if (!checked.success) {
     for (const issue of checked.error.issues) {
       const field = fieldByIssuePath[issue.path.map(String).join('.')];
-      if (field && !errors[field]) errors[field] = issue.message;
+      if (field && !errors[field]) {
+        const friendly = issue.code === 'too_small' || issue.code === 'too_big' ? rangeMessages[field] : undefined;
+        errors[field] = friendly ?? issue.message;
+      }
     }
     if (Object.keys(errors).length === 0) errors.time = checked.error.issues[0]?.message ?? 'Check the mapping.';
   }

@@ -302,13 +302,13 @@ export function ColumnMappingForm({
         )}
 
         {(usesMillivolts || draft.coldJunction !== 'none') && (
-          <fieldset className="mt-5">
+          <fieldset className="mt-5" aria-describedby={errors.coldJunction ? `${id('coldJunction')}-error` : undefined}>
             <legend className="text-sm font-semibold text-ink">{fieldLabels.coldJunction}</legend>
             <p className="mt-0.5 text-[0.8125rem] text-muted">
               A thermocouple reads the difference to its cold junction, usually the logger’s terminals.
             </p>
             {errors.coldJunction && (
-              <p className="mt-1 flex gap-1.5 text-sm font-medium text-red">
+              <p id={`${id('coldJunction')}-error`} className="mt-1 flex gap-1.5 text-sm font-medium text-red">
                 <span aria-hidden="true">✕</span>
                 <span>{errors.coldJunction}</span>
               </p>

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import { Alert } from '../../../components/ui/alert';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -10,10 +11,12 @@ export interface RoleWelcomeProps {
   user: CurrentUser;
   /** The places this role can open, from the app's navigation. */
   places: readonly { to: string; label: string; description: string }[];
+  /** The role's work (from the dashboard API), between the greeting and the guide. */
+  children?: ReactNode;
 }
 
-/** The first dashboard: who you are here, what your role does, where to go. Later builds replace it with work. */
-export function RoleWelcome({ user, places }: RoleWelcomeProps) {
+/** The dashboard frame: who you are here, your role's work, then what the role does and where to go. */
+export function RoleWelcome({ user, places, children }: RoleWelcomeProps) {
   const guide = roleGuides[user.role];
   return (
     <>
@@ -38,6 +41,8 @@ export function RoleWelcome({ user, places }: RoleWelcomeProps) {
         </Alert>
       )}
 
+      {children && <div className="mb-6">{children}</div>}
+
       <div className="grid grid-cols-1 gap-5 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <Panel title={`What a${/^[aeiou]/i.test(roleLabels[user.role]) ? 'n' : ''} ${roleLabels[user.role]} does`}>
           <p className="max-w-[70ch] text-sm">{guide.summary}</p>
@@ -51,9 +56,6 @@ export function RoleWelcome({ user, places }: RoleWelcomeProps) {
               </li>
             ))}
           </ul>
-          <p className="mt-4 text-[0.8125rem] text-muted">
-            This is the first build of Benchwire: the bench, writing and publishing screens arrive in later builds.
-          </p>
         </Panel>
 
         <Panel title="Open now">

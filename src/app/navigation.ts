@@ -47,6 +47,13 @@ export const navigation: readonly NavigationEntry[] = [
     description: 'Your assigned cells by due date, your bench bookings, and booking a bench.',
   },
   {
+    to: paths.benches,
+    label: 'Benches',
+    // The server lets editors and bench testers see benches and bookings (benchWorkers in planning-access.ts).
+    roles: ['editor', 'tester'],
+    description: 'The lab’s test systems, the week’s bookings, and booking a slot; with the bench safety notes.',
+  },
+  {
     to: paths.users,
     label: 'Users',
     roles: ['admin'],

@@ -8,6 +8,7 @@ export const paths = {
   catalogImport: '/catalog/import',
   catalogProduct: (id: number) => `/catalog/${id}`,
   catalogProductEdit: (id: number) => `/catalog/${id}/edit`,
+  benches: '/benches',
   logCheck: '/log-check',
   roundups: '/roundups',
   newRoundup: '/roundups/new',

@@ -1,0 +1,17 @@
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { benchListSchema, type Bench } from '../../../../shared/schemas/benches';
+import { benchKeys } from './bench-keys';
+
+export async function getBenches(signal?: AbortSignal): Promise<Bench[]> {
+  const { benches } = await apiClient.get('/api/benches', { signal, schema: benchListSchema });
+  return benches;
+}
+
+export function benchesQueryOptions() {
+  return queryOptions({ queryKey: benchKeys.list(), queryFn: ({ signal }) => getBenches(signal) });
+}
+
+export function useBenches() {
+  return useSuspenseQuery(benchesQueryOptions()).data;
+}

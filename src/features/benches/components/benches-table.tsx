@@ -1,0 +1,100 @@
+import { useMemo } from 'react';
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import type { Bench, Booking } from '../../../../shared/schemas/benches';
+import { formatClock, formatDayHeading } from './bench-time';
+
+export interface BenchesTableProps {
+  benches: readonly Bench[];
+  /** This week's bookings, to show each bench's next slot. */
+  bookings: readonly Booking[];
+  /** Editors edit benches and take them out of service. */
+  onEdit?: (bench: Bench) => void;
+  /** The moment "next" is measured from (passed in, so rendering stays pure). */
+  now: number;
+}
+
+export function BenchesTable({ benches, bookings, onEdit, now }: BenchesTableProps) {
+  const columns = useMemo<DataTableColumn<Bench>[]>(() => {
+    const nextBooking = (bench: Bench) =>
+      bookings.find((booking) => booking.bench.id === bench.id && Date.parse(booking.endsAt) > now) ?? null;
+    const list: DataTableColumn<Bench>[] = [
+      {
+        id: 'name',
+        header: 'Bench',
+        rowHeader: true,
+        sortValue: (bench) => bench.name,
+        cell: (bench) => <span className="whitespace-nowrap">{bench.name}</span>,
+      },
+      {
+        id: 'status',
+        header: 'Status',
+        sortValue: (bench) => (bench.active ? 'In service' : 'Out of service'),
+        cell: (bench) =>
+          bench.active ? <Badge tone="positive">In service</Badge> : <Badge tone="muted">Out of service</Badge>,
+      },
+      {
+        id: 'location',
+        header: 'Location',
+        sortValue: (bench) => bench.location,
+        cell: (bench) => bench.location ?? <span className="text-muted">—</span>,
+      },
+      {
+        id: 'profile',
+        header: 'Built to profile',
+        hideBelow: 'md',
+        sortValue: (bench) => bench.benchProfile?.name ?? null,
+        cell: (bench) => bench.benchProfile?.name ?? <span className="text-muted">None</span>,
+      },
+      {
+        id: 'next',
+        header: 'Next booking this week',
+        numeric: true,
+        sortValue: (bench) => {
+          const next = nextBooking(bench);
+          return next ? Date.parse(next.startsAt) : null;
+        },
+        cell: (bench) => {
+          const next = nextBooking(bench);
+          if (!next) return <span className="text-muted">Free</span>;
+          const start = new Date(next.startsAt);
+          return `${formatDayHeading(start)}, ${formatClock(start)}`;
+        },
+      },
+      {
+        id: 'notes',
+        header: 'Notes',
+        hideBelow: 'lg',
+        filterValue: (bench) => bench.notes ?? '',
+        cell: (bench) => (
+          <span className="text-[0.8125rem]">{bench.notes ?? <span className="text-muted">—</span>}</span>
+        ),
+      },
+    ];
+    if (onEdit) {
+      list.push({
+        id: 'actions',
+        header: 'Actions',
+        cell: (bench) => (
+          <Button size="sm" onClick={() => onEdit(bench)} aria-label={`Edit ${bench.name}`}>
+            Edit
+          </Button>
+        ),
+      });
+    }
+    return list;
+  }, [bookings, onEdit, now]);
+
+  return (
+    <DataTable
+      caption="Benches"
+      rows={benches}
+      columns={columns}
+      rowKey={(bench) => bench.id}
+      initialSort={{ columnId: 'name', direction: 'ascending' }}
+      filter={false}
+      rowClassName={(bench) => (bench.active ? undefined : 'text-muted')}
+    />
+  );
+}

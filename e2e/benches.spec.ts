@@ -1,0 +1,149 @@
+import { expect, test, type APIRequestContext, type PlaywrightWorkerArgs } from '@playwright/test';
+import { demoAccounts } from './support/demo-accounts';
+import { mainNavigation, signInAs } from './support/sign-in';
+import { uniqueSuffix } from './support/unique';
+
+interface BenchSetup {
+  benchName: string;
+  cellLabel: string;
+}
+
+/** The JSON of a successful answer (most set-up calls need only the new record's id); fails with the body otherwise. */
+async function ok<T = { id: number }>(response: Awaited<ReturnType<APIRequestContext['post']>>): Promise<T> {
+  expect(response.ok(), await response.text()).toBe(true);
+  return (await response.json()) as T;
+}
+
+/**
+ * As the demo editor, through the API: a roundup on the bench with one product and one load configuration whose
+ * cell is assigned to the demo tester, and a bench of its own, all with names no other run uses.
+ */
+async function prepareBench(playwright: PlaywrightWorkerArgs['playwright'], baseURL: string): Promise<BenchSetup> {
+  const api = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { Origin: baseURL } });
+  try {
+    const suffix = uniqueSuffix();
+    const editor = demoAccounts.editor;
+    await ok<unknown>(
+      await api.post('/api/auth/sign-in', { data: { email: editor.email, password: editor.password } }),
+    );
+    const platform = `Helix-1700 ${suffix}`;
+    const day = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
+
+    const profile = await ok(
+      await api.post('/api/bench-profiles', {
+        data: {
+          name: `Open bench ${suffix}`,
+          caseAndFans: 'Open test bench, one 120 mm fan at 800 rpm aimed at the board',
+          cooler: 'Tidewell 360 liquid cooler',
+          psu: 'Ostrel Works 1000 W',
+          memory: '2 × 16 GB at 6000 MT/s',
+          roomTempTargetC: 21,
+          roomTempToleranceC: 1,
+          probeType: 'Type K thermocouple, 0.1 mm bead',
+          probePlacement: 'Board rear under the V-core stages, taped',
+          requiredSoakMinutes: 60,
+        },
+      }),
+    );
+    const loadName = `Stock all-core ${suffix}`;
+    const load = await ok(
+      await api.post('/api/load-configurations', {
+        data: {
+          name: loadName,
+          cpuDescription: 'Helix HX-16 sample, 16 cores',
+          settingsMode: 'stock',
+          expectedPackagePowerW: 230,
+          coreVoltageV: 1.25,
+          soakMinutes: 60,
+        },
+      }),
+    );
+    const maker = `Quillon ${suffix}`;
+    const model = 'Q50 Steady';
+    const product = await ok(
+      await api.post('/api/catalog/products', {
+        data: { maker, model, platform, socket: 'HX4', chipset: 'HX-B50', formFactor: 'atx' },
+      }),
+    );
+    const roundup = await ok(
+      await api.post('/api/roundups', {
+        data: {
+          title: `Helix-1700 boards ${suffix}`,
+          platform,
+          priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE' },
+          targetPublishDate: day(60),
+          timeZone: 'Europe/Berlin',
+          benchProfileId: profile.id,
+          loadConfigurationIds: [load.id],
+        },
+      }),
+    );
+    const { entry } = await ok<{ entry: { id: number } }>(
+      await api.post(`/api/roundups/${roundup.id}/entries`, { data: { productId: product.id, kind: 'tested' } }),
+    );
+    expect((await api.post(`/api/roundups/${roundup.id}/state`, { data: { to: 'on-the-bench' } })).ok()).toBe(true);
+    const { testers } = (await (await api.get('/api/testers')).json()) as {
+      testers: { id: number; displayName: string }[];
+    };
+    const tester = testers.find((person) => person.displayName === demoAccounts.tester.displayName);
+    expect(tester).toBeTruthy();
+    await ok<unknown>(
+      await api.post(`/api/roundups/${roundup.id}/assignments`, {
+        data: { entryIds: [entry.id], testerId: tester?.id, dueDate: day(5) },
+      }),
+    );
+    const benchName = `Bench ${suffix}`;
+    await ok(await api.post('/api/benches', { data: { name: benchName } }));
+    return { benchName, cellLabel: `${maker} ${model} · ${loadName}` };
+  } finally {
+    await api.dispose();
+  }
+}
+
+/** A datetime-local value (local time) `days` from today at `hour`:00. */
+function localSlot(days: number, hour: number): string {
+  const date = new Date();
+  date.setDate(date.getDate() + days);
+  date.setHours(hour, 0, 0, 0);
+  const pad = (value: number) => String(value).padStart(2, '0');
+  return `${date.getFullYear()}-${pad(date.getMonth() + 1)}-${pad(date.getDate())}T${pad(hour)}:00`;
+}
+
+test('a bench tester books a slot, and an overlapping second booking is refused with the reason', async ({
+  page,
+  playwright,
+  baseURL,
+}) => {
+  const { benchName, cellLabel } = await prepareBench(playwright, baseURL as string);
+  await signInAs(page, 'tester');
+  await mainNavigation(page).getByRole('link', { name: 'Benches' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Benches' })).toBeVisible();
+  // The safety note is on the page wherever benches are worked on.
+  await expect(page.getByText('get hot enough to burn')).toBeVisible();
+  await expect(page.getByRole('row').filter({ hasText: benchName })).toContainText('In service');
+
+  const form = page.getByRole('form', { name: 'Book a bench' });
+  await form.getByLabel('Bench').selectOption({ label: benchName });
+  await form.getByLabel('Starts').fill(localSlot(2, 9));
+  await form.getByLabel('Ends').fill(localSlot(2, 12));
+  await form.getByRole('checkbox', { name: cellLabel }).check();
+  await form.getByLabel('Note').fill('Soak, then log for an hour');
+  await form.getByRole('button', { name: 'Book this slot' }).click();
+  await expect(form.getByRole('status').filter({ hasText: 'Booked' })).toContainText(benchName);
+
+  // Same bench, 11:00–13:00: overlaps 09:00–12:00 by an hour.
+  await form.getByLabel('Starts').fill(localSlot(2, 11));
+  await form.getByLabel('Ends').fill(localSlot(2, 13));
+  await form.getByRole('checkbox', { name: cellLabel }).check();
+  await form.getByRole('button', { name: 'Book this slot' }).click();
+  const refusal = form.getByRole('alert').filter({ hasText: 'This slot was not booked' });
+  await expect(refusal).toBeVisible();
+  await expect(refusal).toContainText(`${benchName} is already booked`);
+  await expect(refusal).toContainText('Choose another time or bench');
+  await expect(form.getByLabel('Starts')).toHaveAttribute('aria-invalid', 'true');
+  // Nothing typed is lost.
+  await expect(form.getByLabel('Bench')).toHaveValue(/\d+/);
+  await expect(form.getByLabel('Starts')).toHaveValue(localSlot(2, 11));
+  await expect(form.getByLabel('Ends')).toHaveValue(localSlot(2, 13));
+  await expect(form.getByRole('checkbox', { name: cellLabel })).toBeChecked();
+});

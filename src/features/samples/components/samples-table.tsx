@@ -43,6 +43,7 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
       {
         id: 'source',
         header: 'Source',
+        className: 'min-w-44',
         sortValue: (s) => (s.source ? sampleSourceLabels[s.source] : null),
         cell: (s) =>
           s.source ? (
@@ -94,17 +95,16 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
       },
       {
         id: 'serial',
-        header: 'Serial',
+        header: 'Serial · firmware',
         hideBelow: 'lg',
         sortValue: (s) => s.serialNumber,
-        cell: (s) => <span className="numeric whitespace-nowrap">{s.serialNumber ?? '—'}</span>,
-      },
-      {
-        id: 'firmware',
-        header: 'Firmware on arrival',
-        hideBelow: 'lg',
-        sortValue: (s) => s.firmwareOnArrival,
-        cell: (s) => <span className="numeric">{s.firmwareOnArrival ?? '—'}</span>,
+        filterValue: (s) => `${s.serialNumber ?? ''} ${s.firmwareOnArrival ?? ''}`,
+        cell: (s) => (
+          <span className="numeric whitespace-nowrap">
+            {s.serialNumber ?? '—'}
+            <span className="block text-muted">{s.firmwareOnArrival ? `fw ${s.firmwareOnArrival}` : 'fw —'}</span>
+          </span>
+        ),
       },
     ];
     if (canEdit) {

@@ -161,7 +161,12 @@ export function ProductDetailView({ productId, canEdit, canDelete }: ProductDeta
               <ul className="space-y-1.5 text-sm">
                 {product.roundups.map((use) => (
                   <li key={`${use.roundupId}-${use.kind}`} className="flex flex-wrap items-center gap-2">
-                    <span className="font-medium">{use.title}</span>
+                    <Link
+                      to={paths.roundup(use.roundupId)}
+                      className="font-medium underline decoration-edge underline-offset-2 hover:decoration-copper"
+                    >
+                      {use.title}
+                    </Link>
                     <Badge tone="neutral">{roundupStateLabels[use.state]}</Badge>
                     <span className="text-muted">{use.kind === 'tested' ? 'tested' : 'reference'}</span>
                   </li>

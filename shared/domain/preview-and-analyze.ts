@@ -1,14 +1,16 @@
 import {
   analysisRequestSchema,
+  type AnalysisOptions,
   type AnalysisRequestInput,
   type AnalysisResult,
+  type ColumnMapping,
   type LogPreview,
   type ParseError,
 } from '../schemas/analysis';
 import { guessColumnMapping, guessColumnRole, unitFromColumnName } from './log-column-guess';
 import { detectTimeFormat } from './log-time-value';
 import { isBlankRow, parseLoggerTable, type LoggerTable } from './logger-table';
-import { readMappedLog } from './read-mapped-log';
+import { readMappedLog, type MappedLog } from './read-mapped-log';
 import { firstDataRowIndex, guessTimeColumn } from './read-time-column';
 import { analyzeRun } from './run-analysis';
 
@@ -61,17 +63,19 @@ export function previewLog(text: string): LogPreviewOutcome {
   return { ok: true, preview: buildPreview(parsed.table), table: parsed.table };
 }
 
+type ReadOutcome =
+  { ok: true; preview: LogPreview; log: MappedLog } | { ok: false; preview: LogPreview | null; errors: ParseError[] };
+
 /**
- * The whole engine behind POST /api/analysis/preview: read the logger file, apply the tester's mapping (or the
- * guessed one, flagged), analyse the run. Pure; bad input comes back as parse errors with row and column.
+ * Reads the file and the mapped columns. Kept apart from the analysis so that the raw table (every cell as a string)
+ * is out of reach once the columns are read, and the collector can drop it while the analysis runs.
  */
-export function previewAndAnalyze(text: string, requestInput: AnalysisRequestInput): PreviewAndAnalyzeOutcome {
-  const request = analysisRequestSchema.parse(requestInput);
+function readLog(text: string, mapping: ColumnMapping | undefined, options: AnalysisOptions): ReadOutcome {
   const previewed = previewLog(text);
   if (!previewed.ok) return previewed;
   const { preview, table } = previewed;
-  const mapping = request.mapping ?? preview.guessedMapping;
-  if (!mapping) {
+  const chosen = mapping ?? preview.guessedMapping;
+  if (!chosen) {
     return {
       ok: false,
       preview,
@@ -85,8 +89,18 @@ export function previewAndAnalyze(text: string, requestInput: AnalysisRequestInp
       ],
     };
   }
-  const mapped = readMappedLog(table, mapping, request.options);
-  if (!mapped.ok) return { ok: false, preview, errors: mapped.errors };
-  const analysis = analyzeRun(mapped.log, request.options, { mappingGuessed: request.mapping === undefined });
-  return { ok: true, preview, analysis };
+  const mapped = readMappedLog(table, chosen, options);
+  return mapped.ok ? { ok: true, preview, log: mapped.log } : { ok: false, preview, errors: mapped.errors };
+}
+
+/**
+ * The whole engine behind POST /api/analysis/preview: read the logger file, apply the tester's mapping (or the
+ * guessed one, flagged), analyse the run. Pure; bad input comes back as parse errors with row and column.
+ */
+export function previewAndAnalyze(text: string, requestInput: AnalysisRequestInput): PreviewAndAnalyzeOutcome {
+  const request = analysisRequestSchema.parse(requestInput);
+  const read = readLog(text, request.mapping, request.options);
+  if (!read.ok) return read;
+  const analysis = analyzeRun(read.log, request.options, { mappingGuessed: request.mapping === undefined });
+  return { ok: true, preview: read.preview, analysis };
 }

@@ -1,4 +1,4 @@
-import { medianOfSeries } from './series-statistics';
+import { medianInPlace } from './series-statistics';
 
 export interface TimeGap {
   startS: number;
@@ -21,7 +21,7 @@ export function nominalSampleInterval(timeS: Float64Array): number {
   if (timeS.length < 2) return Number.NaN;
   const steps = new Float64Array(timeS.length - 1);
   for (let i = 1; i < timeS.length; i++) steps[i - 1] = timeS[i] - timeS[i - 1];
-  return medianOfSeries(steps);
+  return medianInPlace(steps, steps.length);
 }
 
 /** Missing samples: steps longer than 1.5 nominal intervals, with the number of samples that should have been there. */

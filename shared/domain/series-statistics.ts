@@ -51,17 +51,22 @@ function selectInPlace(values: Float64Array, count: number, k: number): number {
   return values[k];
 }
 
+/** Median of values[0..count), reordering them; for scratch arrays the caller owns. No gaps allowed. */
+export function medianInPlace(values: Float64Array, count: number): number {
+  if (count === 0) return Number.NaN;
+  const middle = count >> 1;
+  const upper = selectInPlace(values, count, middle);
+  if (count % 2 === 1) return upper;
+  let lower = Number.NEGATIVE_INFINITY;
+  for (let i = 0; i < middle; i++) if (values[i] > lower) lower = values[i];
+  return (lower + upper) / 2;
+}
+
 export function medianOfSeries(values: ArrayLike<number>, from = 0, to = values.length): number {
   const valid = new Float64Array(Math.max(0, to - from));
   let count = 0;
   for (let i = from; i < to; i++) if (values[i] === values[i]) valid[count++] = values[i];
-  if (count === 0) return Number.NaN;
-  const middle = count >> 1;
-  const upper = selectInPlace(valid, count, middle);
-  if (count % 2 === 1) return upper;
-  let lower = Number.NEGATIVE_INFINITY;
-  for (let i = 0; i < middle; i++) if (valid[i] > lower) lower = valid[i];
-  return (lower + upper) / 2;
+  return medianInPlace(valid, count);
 }
 
 /** First index whose time is at or after `seconds` (binary search; times increase). */

@@ -22,6 +22,7 @@ export function EntriesTable({ entries, onRemove }: EntriesTableProps) {
         id: 'position',
         header: '#',
         numeric: true,
+        hideBelow: 'sm',
         sortValue: (e) => e.position,
         cell: (e) => e.position + 1,
       },
@@ -29,6 +30,7 @@ export function EntriesTable({ entries, onRemove }: EntriesTableProps) {
         id: 'product',
         header: 'Product',
         rowHeader: true,
+        className: 'min-w-40',
         sortValue: (e) => productName(e.product),
         cell: (e) => (
           <span>

@@ -34,7 +34,7 @@ export function ColumnChooser({ columns, isVisible, setVisible, onReset }: Colum
           ▼
         </span>
       </summary>
-      <div className="absolute right-0 z-20 mt-1 w-[min(20rem,calc(100vw-2rem))] rounded-[3px] border border-edge bg-surface p-3 shadow-[0_12px_30px_-12px_rgb(16_22_31/0.45)]">
+      <div className="absolute left-0 z-20 mt-1 w-[min(20rem,calc(100vw-2rem))] rounded-[3px] border border-edge bg-surface p-3 shadow-[0_12px_30px_-12px_rgb(16_22_31/0.45)]">
         <fieldset>
           <legend className="mb-2 text-sm font-semibold text-ink">Show these columns</legend>
           <div className="max-h-[min(24rem,60vh)] space-y-1.5 overflow-y-auto pr-1">

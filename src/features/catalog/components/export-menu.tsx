@@ -37,7 +37,7 @@ export function ExportMenu({ regions, archived, platform }: ExportMenuProps) {
           ▼
         </span>
       </summary>
-      <div className="absolute right-0 z-20 mt-1 w-[min(19rem,calc(100vw-2rem))] space-y-3 rounded-[3px] border border-edge bg-surface p-3 shadow-[0_12px_30px_-12px_rgb(16_22_31/0.45)]">
+      <div className="absolute left-0 z-20 sm:right-0 sm:left-auto mt-1 w-[min(19rem,calc(100vw-2rem))] space-y-3 rounded-[3px] border border-edge bg-surface p-3 shadow-[0_12px_30px_-12px_rgb(16_22_31/0.45)]">
         <Select
           label="Prices from region"
           required={false}

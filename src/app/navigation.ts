@@ -36,8 +36,8 @@ export const navigation: readonly NavigationEntry[] = [
   {
     to: paths.roundups,
     label: 'Roundups',
-    // Admins look after accounts and are not part of planning: the server gives them no roundup data.
-    roles: ['editor', 'writer', 'tester'],
+    // Everyone reads roundups; the server keeps planning changes to editors and bench moves to testers.
+    roles: everyone,
     description: 'Roundups from Planning to Live: products, test matrix, samples and the test plan.',
   },
   {

@@ -115,3 +115,81 @@ test('a writer reads the catalog and a product page without any editing controls
   await expect(page.getByRole('button', { name: 'Delete' })).toHaveCount(0);
   await expect(page.getByRole('form', { name: 'Add a price' })).toHaveCount(0);
 });
+
+test('deleting a product that a roundup uses is refused with the reason, and archiving is offered instead', async ({
+  page,
+  playwright,
+  baseURL,
+}) => {
+  const suffix = uniqueSuffix();
+  const maker = `Brightmoor ${suffix}`;
+  const api = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { Origin: baseURL as string } });
+  try {
+    const editor = demoAccounts.editor;
+    const post = async (path: string, data: unknown) => {
+      const response = await api.post(path, { data });
+      expect(response.ok(), await response.text()).toBe(true);
+      return (await response.json()) as { id: number };
+    };
+    await post('/api/auth/sign-in', { email: editor.email, password: editor.password });
+    const platform = `Helix-1700 ${suffix}`;
+    const product = await post('/api/catalog/products', {
+      maker,
+      model: 'BM Anchor',
+      platform,
+      socket: 'HX4',
+      chipset: 'HX-B50',
+      formFactor: 'atx',
+    });
+    const profile = await post('/api/bench-profiles', {
+      name: `Open bench ${suffix}`,
+      caseAndFans: 'Open test bench, one 120 mm fan',
+      cooler: 'Tidewell 360 liquid cooler',
+      psu: 'Ostrel Works 1000 W',
+      memory: '2 × 16 GB at 6000 MT/s',
+      roomTempTargetC: 21,
+      roomTempToleranceC: 1,
+      probeType: 'Type K thermocouple',
+      probePlacement: 'Board rear under the V-core stages',
+      requiredSoakMinutes: 60,
+    });
+    const load = await post('/api/load-configurations', {
+      name: `Stock all-core ${suffix}`,
+      cpuDescription: 'Helix HX-16 sample',
+      settingsMode: 'stock',
+      expectedPackagePowerW: 230,
+      coreVoltageV: 1.25,
+      soakMinutes: 60,
+    });
+    const roundup = await post('/api/roundups', {
+      title: `Helix-1700 boards ${suffix}`,
+      platform,
+      priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE' },
+      targetPublishDate: new Date(Date.now() + 60 * 86_400_000).toISOString().slice(0, 10),
+      timeZone: 'Europe/Berlin',
+      benchProfileId: profile.id,
+      loadConfigurationIds: [load.id],
+    });
+    await post(`/api/roundups/${roundup.id}/entries`, { productId: product.id, kind: 'tested' });
+  } finally {
+    await api.dispose();
+  }
+
+  await signInAs(page, 'editor');
+  await openCatalog(page);
+  await searchCatalog(page, maker);
+  await page.getByRole('link', { name: 'BM Anchor', exact: true }).click();
+  await page.getByRole('button', { name: 'Delete' }).click();
+  await page
+    .getByRole('dialog', { name: `Delete ${maker} BM Anchor?` })
+    .getByRole('button', { name: 'Delete product' })
+    .click();
+
+  const refused = page.getByRole('dialog', { name: 'This product cannot be deleted' });
+  await expect(refused).toContainText('is in 1 roundup');
+  await expect(refused).toContainText('Archive it instead');
+  await refused.getByRole('button', { name: 'Archive instead' }).click();
+  await expect(refused).toBeHidden();
+  await expect(page.getByRole('status').filter({ hasText: 'is archived' })).toBeVisible();
+  await expect(page.getByRole('button', { name: 'Restore to catalog' })).toBeVisible();
+});

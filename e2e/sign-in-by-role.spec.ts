@@ -25,7 +25,7 @@ for (const role of roles) {
     }
 
     if (role === 'tester') {
-      await expect(page.getByText('Bench safety')).toBeVisible();
+      await expect(page.getByText('Bench safety', { exact: true })).toBeVisible();
     }
 
     await signOut(page);

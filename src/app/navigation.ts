@@ -29,8 +29,8 @@ export const navigation: readonly NavigationEntry[] = [
   {
     to: paths.catalog,
     label: 'Catalog',
-    // Admins look after accounts and are not part of planning: the server gives them no catalog data.
-    roles: ['editor', 'writer', 'tester'],
+    // Everyone reads the catalog; the server keeps changes to editors and bench testers.
+    roles: everyone,
     description: 'Boards with their power design, features and prices; CSV import and export.',
   },
   {
@@ -49,8 +49,8 @@ export const navigation: readonly NavigationEntry[] = [
   {
     to: paths.benches,
     label: 'Benches',
-    // The server lets editors and bench testers see benches and bookings (benchWorkers in planning-access.ts).
-    roles: ['editor', 'tester'],
+    // Everyone reads benches and their calendars; editors manage benches, bench testers book them.
+    roles: everyone,
     description: 'The lab’s test systems, the week’s bookings, and booking a slot; with the bench safety notes.',
   },
   {

@@ -1,14 +1,18 @@
 /**
  * Benchmark of the measurement engine (issue 3): a one-hour log at 10 Hz with eight channels (36,000 rows), timed as
- * papaparse alone and as the whole engine (parse + mapping + analysis), medians over interleaved rounds in one run.
+ * papaparse alone and as the whole engine (parse + mapping + analysis), medians over several blocks in one run.
  * Targets: the engine adds less than 1× the raw parse time, and the whole stays well under half a second.
  */
+import { availableParallelism, loadavg } from 'node:os';
 import Papa from 'papaparse';
 import { previewAndAnalyze } from '../shared/domain/preview-and-analyze';
 import { syntheticLoggerLog } from '../shared/domain/synthetic-logger-log';
 
-const rounds = 15;
-const warmUpRounds = 3;
+/** Alternating blocks of timings of one kind; the first runs of each block are not counted (see below). */
+const blocks = 3;
+const countedPerBlock = 7;
+const settlingRuns = 2;
+const rounds = blocks * countedPerBlock;
 
 const text = syntheticLoggerLog({
   durationS: 3600,
@@ -52,6 +56,24 @@ function timePapaparse(): number {
   return elapsed;
 }
 
+/** papaparse as the engine streams it: the same chunks, each row dropped after a glance. */
+function timePapaparseStreamed(): number {
+  let seen = 0;
+  const started = performance.now();
+  Papa.parse<string[]>(text, {
+    delimiter: ',',
+    skipEmptyLines: false,
+    chunkSize: 256 * 1024,
+    complete: () => undefined,
+    chunk: (results: Papa.ParseResult<string[]>) => {
+      seen += results.data.length;
+    },
+  });
+  const elapsed = performance.now() - started;
+  if (seen < rows) throw new Error('papaparse streamed too few rows');
+  return elapsed;
+}
+
 function timeEngine(): number {
   const started = performance.now();
   const outcome = previewAndAnalyze(text, request);
@@ -60,31 +82,47 @@ function timeEngine(): number {
   return elapsed;
 }
 
-// Each result is dropped before the next timing, and the order alternates, so neither side pays for collecting the
-// other's garbage more often.
+// Timed in alternating blocks. The two sides leave very different garbage behind (papaparse alone returns every row
+// as strings; the engine keeps only numbers), so the first runs after each switch, which collect the other side's
+// garbage, are not counted. Each median then holds the side's own cost, its own collections included.
 const parseTimes: number[] = [];
+const streamedTimes: number[] = [];
 const engineTimes: number[] = [];
-for (let round = 0; round < warmUpRounds + rounds; round++) {
-  const engineFirst = round % 2 === 1;
-  const engineMs = engineFirst ? timeEngine() : Number.NaN;
-  const parseMs = timePapaparse();
-  const engineMsAfter = engineFirst ? engineMs : timeEngine();
-  if (round >= warmUpRounds) {
-    parseTimes.push(parseMs);
-    engineTimes.push(engineMsAfter);
+for (let block = 0; block < blocks; block++) {
+  for (const [timings, timeOnce] of [
+    [parseTimes, timePapaparse],
+    [streamedTimes, timePapaparseStreamed],
+    [engineTimes, timeEngine],
+  ] as const) {
+    for (let run = 0; run < settlingRuns + countedPerBlock; run++) {
+      const elapsed = timeOnce();
+      if (run >= settlingRuns) timings.push(elapsed);
+    }
   }
 }
 
 const parseMs = median(parseTimes);
+const streamedMs = median(streamedTimes);
 const engineMs = median(engineTimes);
 const addedRatio = (engineMs - parseMs) / parseMs;
 const meetsTargets = addedRatio < 1 && engineMs < 500;
+const line = (label: string, value: string) => console.log(`  ${label.padEnd(44)}${value}`);
 console.log(
-  `Benchwire analysis benchmark: ${rows.toLocaleString('en')} rows × 8 channels, ${(text.length / 1e6).toFixed(2)} MB, median of ${rounds} rounds`,
+  `Benchwire analysis benchmark: ${rows.toLocaleString('en')} rows × 8 channels, ${(text.length / 1e6).toFixed(2)} MB, median of ${rounds} runs each`,
 );
-console.log(`  papaparse alone            ${parseMs.toFixed(1).padStart(7)} ms`);
-console.log(`  parse + full analysis      ${engineMs.toFixed(1).padStart(7)} ms`);
-console.log(`  ratio (engine / parse)     ${(engineMs / parseMs).toFixed(2).padStart(7)}×`);
-console.log(`  analysis adds              ${addedRatio.toFixed(2).padStart(7)}× the parse time (target < 1×)`);
-console.log(`  ${meetsTargets ? 'PASS' : 'FAIL'}: target is added < 1× parse and whole < 500 ms`);
+line('papaparse alone (every row kept as strings)', `${parseMs.toFixed(1).padStart(7)} ms`);
+line('parse + full analysis', `${engineMs.toFixed(1).padStart(7)} ms`);
+line('ratio, engine / papaparse alone', `${(engineMs / parseMs).toFixed(2).padStart(7)}×`);
+line('analysis adds', `${addedRatio.toFixed(2).padStart(7)}× the parse time (target < 1×)`);
+// The engine streams the rows instead of keeping them, which is why it can beat papaparse alone; its own parse and
+// what the analysis costs on top of it are shown too, so the saving is not mistaken for a free analysis.
+line('for reference: papaparse streamed as the engine', `${streamedMs.toFixed(1).padStart(7)} ms`);
+line('for reference: engine over its streamed parse', `${(engineMs / streamedMs).toFixed(2).padStart(7)}×`);
+line(
+  'load average',
+  `${loadavg()[0].toFixed(1).padStart(7)} on ${availableParallelism()} cores (other work slows every side)`,
+);
+console.log(
+  `  ${meetsTargets ? 'PASS' : 'FAIL'}: analysis adds < 1× the papaparse time and the whole stays under 500 ms`,
+);
 process.exitCode = meetsTargets ? 0 : 1;

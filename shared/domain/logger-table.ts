@@ -5,7 +5,11 @@ import { ParseErrorList, cellLabel } from './parse-error-list';
 
 export type Delimiter = ',' | ';' | '\t';
 
-/** A logger export split into preamble, header and raw data cells; nothing is interpreted yet. */
+/**
+ * A logger export located: preamble, delimiter, decimal separator, header, and the first rows as strings. The data
+ * rows themselves are not kept: forEachDataRow streams them from the text, so a 25 MB upload never becomes hundreds of
+ * megabytes of cell strings, and each row is read while it is fresh.
+ */
 export interface LoggerTable {
   delimiter: Delimiter;
   decimalComma: boolean;
@@ -13,12 +17,14 @@ export interface LoggerTable {
   /** 1-based line of the header in the file. */
   headerRow: number;
   columns: string[];
-  /**
-   * Every line after the header as papaparse split it, blank lines included (trailing ones dropped): row i is file
-   * line firstRowNumber + i. Readers skip blank rows in their own pass, so the rows are walked once, not twice.
-   */
-  rows: string[][];
+  /** The first lines after the header as papaparse split them (blank lines included): sample row i is line firstRowNumber + i. */
+  sampleRows: string[][];
   firstRowNumber: number;
+  /** Lines after the header, blank lines inside the data included, trailing ones not. */
+  lineCount: number;
+  text: string;
+  /** Offset of the first line after the header in `text`. */
+  bodyOffset: number;
 }
 
 export type LoggerTableOutcome = { ok: true; table: LoggerTable } | { ok: false; errors: ParseError[] };
@@ -131,7 +137,7 @@ function noHeaderError(sampleRows: readonly string[][]): ParseError {
   };
 }
 
-/** Finds preamble, delimiter, decimal separator and header, then splits the data rows with papaparse. */
+/** Finds preamble, delimiter, decimal separator and header from the first lines; the data rows are streamed later. */
 export function parseLoggerTable(input: string): LoggerTableOutcome {
   let text = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
   if (text.indexOf('\n') < 0 && text.indexOf('\r') >= 0) text = text.replace(/\r/g, '\n');
@@ -154,32 +160,20 @@ export function parseLoggerTable(input: string): LoggerTableOutcome {
   if (!best) return { ok: false, errors: [noHeaderError(fallbackRows)] };
 
   const { delimiter, headerIndex } = best;
+  const bodyOffset = lineStartOffset(text, headerIndex + 1);
   const columns = uniqueColumnNames(best.rows[headerIndex]);
   const preambleLines = text
     .slice(0, lineStartOffset(text, headerIndex))
     .split('\n')
     .map((line) => line.trimEnd())
     .filter((line) => line !== '');
-
-  const body = Papa.parse<string[]>(text.slice(lineStartOffset(text, headerIndex + 1)), {
-    delimiter,
-    skipEmptyLines: false,
-  });
-  const errors = new ParseErrorList();
-  const firstBodyLine = headerIndex + 2;
-  for (const error of body.errors) {
-    const row = error.row === undefined ? null : firstBodyLine + error.row;
-    errors.add(row, null, 'malformed-row', `${cellLabel(row, null)}: ${error.message}.`);
-  }
-
-  if (!errors.isEmpty) return { ok: false, errors: errors.list() };
-  const rows = body.data;
-  while (rows.length > 0 && isBlankRow(rows[rows.length - 1])) rows.pop();
+  const sampleRows = best.rows.slice(headerIndex + 1);
+  while (sampleRows.length > 0 && isBlankRow(sampleRows[sampleRows.length - 1])) sampleRows.pop();
 
   let decimalComma = false;
   if (delimiter !== ',') {
-    for (let index = 0; index < Math.min(rows.length, decimalCommaSampleRows) && !decimalComma; index++) {
-      decimalComma = rows[index].some((cell) => decimalCommaPattern.test(cell));
+    for (let index = 0; index < Math.min(sampleRows.length, decimalCommaSampleRows) && !decimalComma; index++) {
+      decimalComma = sampleRows[index].some((cell) => decimalCommaPattern.test(cell));
     }
   }
 
@@ -191,8 +185,50 @@ export function parseLoggerTable(input: string): LoggerTableOutcome {
       preambleLines,
       headerRow: headerIndex + 1,
       columns,
-      rows,
-      firstRowNumber: firstBodyLine,
+      sampleRows,
+      firstRowNumber: headerIndex + 2,
+      lineCount: countLines(text, bodyOffset),
+      text,
+      bodyOffset,
     },
   };
+}
+
+/** Lines from `offset` to the end, not counting trailing blank lines; indexOf keeps it free of allocations. */
+function countLines(text: string, offset: number): number {
+  let end = text.length;
+  while (end > offset && text.charCodeAt(end - 1) <= 32) end--;
+  if (end <= offset) return 0;
+  let lines = 1;
+  for (let next = text.indexOf('\n', offset); next >= 0 && next < end; next = text.indexOf('\n', next + 1)) lines++;
+  return lines;
+}
+
+/** Chunk of text papaparse splits at a time while streaming: small enough that each chunk's rows die young. */
+const streamChunkChars = 256 * 1024;
+
+/**
+ * Streams the data rows to `visit` in file order with their 1-based line, blank lines included; returns the rows
+ * papaparse could not split (unbalanced quotes).
+ */
+export function forEachDataRow(table: LoggerTable, visit: (row: string[], line: number) => void): ParseError[] {
+  const errors = new ParseErrorList();
+  let line = table.firstRowNumber;
+  Papa.parse<string[]>(table.text.slice(table.bodyOffset), {
+    delimiter: table.delimiter,
+    skipEmptyLines: false,
+    chunkSize: streamChunkChars,
+    // Streaming a string runs synchronously, chunk after chunk; the typings want a completion callback.
+    complete: () => undefined,
+    chunk: (results: Papa.ParseResult<string[]>) => {
+      const chunkFirstLine = line;
+      for (const error of results.errors) {
+        const row = error.row === undefined ? null : chunkFirstLine + error.row;
+        errors.add(row, null, 'malformed-row', `${cellLabel(row, null)}: ${error.message}.`);
+      }
+      const rows = results.data;
+      for (let index = 0; index < rows.length; index++) visit(rows[index], line++);
+    },
+  });
+  return errors.list();
 }

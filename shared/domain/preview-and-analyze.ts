@@ -26,7 +26,7 @@ export type PreviewAndAnalyzeOutcome =
 
 function previewRows(table: LoggerTable): string[][] {
   const rows: string[][] = [];
-  for (const row of table.rows) {
+  for (const row of table.sampleRows) {
     if (rows.length === previewRowCount) break;
     if (!isBlankRow(row)) rows.push(row);
   }
@@ -49,9 +49,9 @@ function buildPreview(table: LoggerTable): LogPreview {
     })),
     timeColumn,
     timeFormat:
-      timeColumn === null ? null : detectTimeFormat(table.rows[firstDataRowIndex(table)][timeIndex], timeColumn),
+      timeColumn === null ? null : detectTimeFormat(table.sampleRows[firstDataRowIndex(table)][timeIndex], timeColumn),
     rows: previewRows(table),
-    dataRowCount: table.rows.length,
+    dataRowCount: table.lineCount,
     guessedMapping: guessColumnMapping(table.columns, timeColumn),
   };
 }

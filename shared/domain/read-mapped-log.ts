@@ -1,7 +1,7 @@
 import type { AnalysisOptions, ColumnMapping, ParseError, TemperatureUnit, TimeFormat } from '../schemas/analysis';
 import { isNumericSentinel, readCell, readPlainDecimal } from './log-cell-value';
 import { unitFromColumnName } from './log-column-guess';
-import { filledWidth, isBlankRow, type LoggerTable } from './logger-table';
+import { filledWidth, forEachDataRow, isBlankRow, type LoggerTable } from './logger-table';
 import { ParseErrorList, cellLabel } from './parse-error-list';
 import { guessTimeColumn, openTimeColumn, type TimeColumnReader } from './read-time-column';
 import { celsiusFrom, temperatureUnitLabels } from './temperature-units';
@@ -65,6 +65,8 @@ interface RawColumn {
   values: Float64Array;
   suffixUnit: TemperatureUnit | null;
   suffixRow: number | null;
+  /** Kept rows whose cell was written as a numeric sentinel (−999.9, 9999 …): a gap if out of range after conversion. */
+  sentinels: Set<number>;
 }
 
 /** The data rows that carry a reading, compacted: blank lines dropped, each with its file line. */
@@ -73,11 +75,6 @@ interface LogRows {
   timeS: Float64Array;
   rowNumbers: Int32Array;
   raws: RawColumn[];
-}
-
-/** The cell as written, for the k-th kept row. */
-function sourceCell(table: LoggerTable, rowNumbers: Int32Array, k: number, index: number): string {
-  return table.rows[rowNumbers[k] - table.firstRowNumber][index] ?? '';
 }
 
 function readSlowCell(
@@ -117,12 +114,14 @@ function readSlowCell(
   return reading.value;
 }
 
+/** Smallest magnitude a numeric sentinel (999, −999.9, 9999 …) can have; below it no cell needs the pattern test. */
+const sentinelMagnitude = 999;
+
 /**
- * One pass over the rows: skips blank lines, refuses rows wider than the header, reads the time and every mapped
- * numeric column. Touching each row once matters: the rows are fresh papaparse output, and a second walk costs about
- * as much as the arithmetic. Plain decimals take the allocation-free path, anything else (markers, unit suffixes, bad
- * cells) the slow one. The returned raw columns follow `indexes`; a column mapped twice gets its own copy, since unit
- * conversions work in place.
+ * One pass over the streamed rows: skips blank lines, refuses rows wider than the header, reads the time and every
+ * mapped numeric column while the row is fresh, and keeps nothing of the row but numbers. Plain decimals take the
+ * allocation-free path, anything else (markers, unit suffixes, bad cells) the slow one. The returned raw columns
+ * follow `indexes`; a column mapped twice gets its own copy, since unit conversions work in place.
  */
 function readLogRows(
   table: LoggerTable,
@@ -130,24 +129,25 @@ function readLogRows(
   timeIndex: number,
   indexes: readonly number[],
   errors: ParseErrorList,
-): LogRows {
-  const { rows, decimalComma, firstRowNumber } = table;
+): LogRows & { startCell: string } {
+  const { decimalComma } = table;
   const width = table.columns.length;
+  const capacity = table.lineCount;
   const unique = [...new Set(indexes)];
   const raws = unique.map((): RawColumn => ({
-    values: new Float64Array(rows.length),
+    values: new Float64Array(capacity),
     suffixUnit: null,
     suffixRow: null,
+    sentinels: new Set(),
   }));
   const arrays = raws.map((raw) => raw.values);
   const columnCount = unique.length;
-  const timeS = new Float64Array(rows.length);
-  const rowNumbers = new Int32Array(rows.length);
+  const timeS = new Float64Array(capacity);
+  const rowNumbers = new Int32Array(capacity);
   let count = 0;
-  for (let i = 0; i < rows.length; i++) {
-    const row = rows[i];
-    if (isBlankRow(row)) continue;
-    const line = firstRowNumber + i;
+  let startCell = '';
+  const structural = forEachDataRow(table, (row, line) => {
+    if (isBlankRow(row) || count >= capacity) return;
     if (row.length > width && filledWidth(row) > width) {
       errors.add(
         line,
@@ -155,10 +155,12 @@ function readLogRows(
         'extra-cells',
         `${cellLabel(line, null)}: ${filledWidth(row)} cells, but the header (row ${table.headerRow}) names ${width} columns.`,
       );
-      continue;
+      return;
     }
-    const seconds = time.next(row[timeIndex] ?? '', line);
-    if (seconds !== seconds) continue;
+    const timeCell = row[timeIndex] ?? '';
+    const seconds = time.next(timeCell, line);
+    if (seconds !== seconds) return;
+    if (count === 0) startCell = timeCell;
     timeS[count] = seconds;
     rowNumbers[count] = line;
     for (let k = 0; k < columnCount; k++) {
@@ -167,11 +169,15 @@ function readLogRows(
       if (cell !== undefined && cell !== '') {
         value = readPlainDecimal(cell, decimalComma);
         if (value !== value) value = readSlowCell(table, line, unique[k], cell, raws[k], errors);
+        if ((value >= sentinelMagnitude || value <= -sentinelMagnitude) && isNumericSentinel(cell)) {
+          raws[k].sentinels.add(count);
+        }
       }
       arrays[k][count] = value;
     }
     count++;
-  }
+  });
+  for (const error of structural) errors.add(error.row, error.column, error.code, error.message);
   const handedOut = new Set<number>();
   const columns = indexes.map((index) => {
     const raw = raws[unique.indexOf(index)];
@@ -180,7 +186,13 @@ function readLogRows(
     handedOut.add(index);
     return { ...raw, values };
   });
-  return { count, timeS: timeS.subarray(0, count), rowNumbers: rowNumbers.subarray(0, count), raws: columns };
+  return {
+    count,
+    timeS: timeS.subarray(0, count),
+    rowNumbers: rowNumbers.subarray(0, count),
+    raws: columns,
+    startCell,
+  };
 }
 
 function mappedUnit(mapping: ColumnMapping, column: string): TemperatureUnit | undefined {
@@ -244,7 +256,7 @@ function toCelsius(
   table: LoggerTable,
   rowNumbers: Int32Array,
   index: number,
-  raw: Float64Array,
+  { values: raw, sentinels }: RawColumn,
   unit: TemperatureUnit,
   coldJunctionC: Float64Array | number | null,
   errors: ParseErrorList,
@@ -271,7 +283,7 @@ function toCelsius(
       }
       const totalMv = value + junctionMv;
       if (totalMv < typeKInverseRangeMv.min || totalMv > typeKInverseRangeMv.max) {
-        if (isNumericSentinel(sourceCell(table, rowNumbers, i, index))) {
+        if (sentinels.has(i)) {
           out[i] = Number.NaN;
           continue;
         }
@@ -293,7 +305,7 @@ function toCelsius(
     }
     if (celsius < min || celsius > max) {
       out[i] = Number.NaN;
-      if (!isNumericSentinel(sourceCell(table, rowNumbers, i, index))) {
+      if (!sentinels.has(i)) {
         absurd(table, rowNumbers, i, index, errors, `${value} ${temperatureUnitLabels[unit]}`, temperatureRangeText);
       }
       continue;
@@ -307,7 +319,7 @@ function checkRange(
   table: LoggerTable,
   rowNumbers: Int32Array,
   index: number,
-  values: Float64Array,
+  { values, sentinels }: RawColumn,
   range: { min: number; max: number },
   unitLabel: string,
   errors: ParseErrorList,
@@ -316,7 +328,7 @@ function checkRange(
     const value = values[i];
     if (value !== value || (value >= range.min && value <= range.max)) continue;
     values[i] = Number.NaN;
-    if (isNumericSentinel(sourceCell(table, rowNumbers, i, index))) continue;
+    if (sentinels.has(i)) continue;
     absurd(table, rowNumbers, i, index, errors, `${value} ${unitLabel}`, `${range.min}…${range.max} ${unitLabel}`);
   }
 }
@@ -373,7 +385,7 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
     ...optional(clockIndex),
     ...optional(powerIndex),
   ];
-  const { count, timeS, rowNumbers, raws } = readLogRows(table, time, timeIndex, numericIndexes, errors);
+  const { count, timeS, rowNumbers, raws, startCell } = readLogRows(table, time, timeIndex, numericIndexes, errors);
   if (!errors.isEmpty) return { ok: false, errors: errors.list() };
   if (count < 2) {
     errors.add(
@@ -384,7 +396,7 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
     );
     return { ok: false, errors: errors.list() };
   }
-  const startedAt = time.startedAt(sourceCell(table, rowNumbers, 0, timeIndex));
+  const startedAt = time.startedAt(startCell);
   const firstSeconds = timeS[0];
   for (let i = 0; i < count; i++) timeS[i] -= firstSeconds;
 
@@ -407,7 +419,7 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
         `${cellLabel(null, column)}: a cold junction is a temperature, not millivolts.`,
       );
     } else {
-      junctionC = toCelsius(table, rowNumbers, junctionIndex, junctionRaw.values, unit, null, errors);
+      junctionC = toCelsius(table, rowNumbers, junctionIndex, junctionRaw, unit, null, errors);
     }
   }
 
@@ -423,7 +435,7 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
       );
       return { column, unit, valuesC: raw.values.fill(Number.NaN) };
     }
-    return { column, unit, valuesC: toCelsius(table, rowNumbers, index, raw.values, unit, junctionC, errors) };
+    return { column, unit, valuesC: toCelsius(table, rowNumbers, index, raw, unit, junctionC, errors) };
   };
   const vrm = vrmColumns.map((index, k) => readTemperature(index, vrmRaws[k]));
   const ambient = ambientIndex === null || ambientRaw === null ? null : readTemperature(ambientIndex, ambientRaw);
@@ -431,7 +443,7 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
   const readSeries = (index: number, raw: RawColumn, range: { min: number; max: number }, unit: string, scale = 1) => {
     const { values } = raw;
     if (scale !== 1) for (let i = 0; i < values.length; i++) values[i] *= scale;
-    checkRange(table, rowNumbers, index, values, range, unit, errors);
+    checkRange(table, rowNumbers, index, raw, range, unit, errors);
     return { column: columns[index], values };
   };
   const clockScale = clockIndex !== null && /\bghz\b/i.test(columns[clockIndex]) ? 1000 : 1;

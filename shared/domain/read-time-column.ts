@@ -4,14 +4,14 @@ import { createTimeReader, detectDayFirst, detectTimeFormat, readDateTime } from
 import { isBlankRow, type LoggerTable } from './logger-table';
 import { ParseErrorList, cellLabel } from './parse-error-list';
 
-/** Index of the first data row that is not blank, -1 when there is none. */
+/** Index of the first sample row that is not blank, -1 when there is none. */
 export function firstDataRowIndex(table: LoggerTable): number {
-  return table.rows.findIndex((row) => !isBlankRow(row));
+  return table.sampleRows.findIndex((row) => !isBlankRow(row));
 }
 
 /** The first column named like a time whose first cell reads as a time, else the first column if it does. */
 export function guessTimeColumn(table: LoggerTable): number {
-  const firstRow = table.rows[firstDataRowIndex(table)] ?? [];
+  const firstRow = table.sampleRows[firstDataRowIndex(table)] ?? [];
   const named = table.columns.flatMap((name, index) => (guessColumnRole(name) === 'time' ? [index] : []));
   for (const index of [...named, 0]) {
     const cell = firstRow[index];
@@ -30,8 +30,6 @@ const timeFormatExpectations: Record<TimeFormat, string> = {
 
 const halfDayS = 43_200;
 const dayS = 86_400;
-/** Stamps read from each end of the log to decide day-first or month-first dates. */
-const dayOrderSampleRows = 50;
 
 /**
  * Reads one time cell after another, in file order: times must increase strictly, and a time-of-day column that
@@ -91,10 +89,13 @@ export class TimeColumnReader {
   }
 }
 
-/** Decides the time column's format from its first filled cell; null (with the error listed) when it is no time. */
+/**
+ * Decides the time column's format from its first filled cell, and the order of day and month from the first lines;
+ * null (with the error listed) when the first cell is no time.
+ */
 export function openTimeColumn(table: LoggerTable, index: number, errors: ParseErrorList): TimeColumnReader | null {
   const column = table.columns[index];
-  const { rows } = table;
+  const rows = table.sampleRows;
   const firstFilled = rows.findIndex((row) => (row[index] ?? '').trim() !== '');
   const format = firstFilled < 0 ? null : detectTimeFormat(rows[firstFilled][index], column);
   if (format === null) {
@@ -108,9 +109,6 @@ export function openTimeColumn(table: LoggerTable, index: number, errors: ParseE
     );
     return null;
   }
-  const stampCells =
-    format === 'date-time'
-      ? [...rows.slice(0, dayOrderSampleRows), ...rows.slice(-dayOrderSampleRows)].map((row) => row[index] ?? '')
-      : [];
+  const stampCells = format === 'date-time' ? rows.map((row) => row[index] ?? '') : [];
   return new TimeColumnReader(column, format, detectDayFirst(stampCells), table.decimalComma, errors);
 }

@@ -110,6 +110,20 @@ describe('bad uploads get a precise error, not a crash', () => {
     expect(errorsOf('Time,VRM 1\n0,50\n').map((error) => error.code)).toContain('too-few-rows');
   });
 
+  it('when a bad cell sits deep in a large log, then its row number is still exact', () => {
+    // Over a megabyte, so the rows are streamed in several chunks; two blank lines shift the numbering.
+    const lines = ['Benchwire bench log', 'Time,VRM 1,VRM 2,VRM 3,Ambient'];
+    for (let t = 0; t < 40_000; t++) {
+      lines.push(t === 31_000 ? `${t},55.25,bad,54.75,21.00` : `${t},55.25,56.50,54.75,21.00`);
+      if (t === 100 || t === 20_000) lines.push('');
+    }
+    const text = lines.join('\n');
+    expect(text.length).toBeGreaterThan(1_000_000);
+    const [error] = errorsOf(text, { mapping: { vrm: ['VRM 1', 'VRM 2', 'VRM 3'], ambient: 'Ambient' } });
+    // Line of t = 31 000: 2 lines before the data, 31 000 rows before it, 2 blank lines, 1-based.
+    expect(error).toMatchObject({ row: 2 + 31_000 + 2 + 1, column: 'VRM 2', code: 'not-a-number' });
+  });
+
   it('when a whole column is garbage, then fifty errors are listed and the rest counted', () => {
     const rows = Array.from({ length: 80 }, (_, t) => `${t},bad`);
     const errors = errorsOf(['Time,VRM 1', ...rows].join('\n'));

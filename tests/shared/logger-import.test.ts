@@ -148,6 +148,15 @@ describe('logger import: the shapes loggers write', () => {
     expect(Array.from(mapped.log.vrm[1].valuesC)).toEqual([NaN, NaN, NaN, 52]);
   });
 
+  it('reads Windows line endings and a byte-order mark', () => {
+    const text = '\ufeffTime,VRM 1\r\n0,50\r\n1,51\r\n';
+    const mapped = readMappedLog(table(text), { vrm: ['VRM 1'] }, {});
+    expect(mapped.ok && [Array.from(mapped.log.timeS), Array.from(mapped.log.vrm[0].valuesC)]).toEqual([
+      [0, 1],
+      [50, 51],
+    ]);
+  });
+
   it('reads a clock logged in GHz as MHz', () => {
     const text = ['Time,VRM 1,Clock GHz', '0,50,4.5', '1,50,4.4'].join('\n');
     const mapped = readMappedLog(table(text), { vrm: ['VRM 1'], clock: 'Clock GHz' }, {});

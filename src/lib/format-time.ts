@@ -22,3 +22,34 @@ export function zoneAbbreviation(iso: string): string {
   const parts = new Intl.DateTimeFormat('en-GB', { timeZoneName: 'short' }).formatToParts(new Date(iso));
   return parts.find((part) => part.type === 'timeZoneName')?.value ?? '';
 }
+
+const calendarDate = new Intl.DateTimeFormat('en-GB', {
+  day: '2-digit',
+  month: 'short',
+  year: 'numeric',
+  timeZone: 'UTC',
+});
+
+/** "14 Mar 2025" for a calendar date (YYYY-MM-DD); no zone shifts it, because it has none. */
+export function formatCalendarDate(date: string): string {
+  const [year, month, day] = date.split('-').map(Number);
+  return calendarDate.format(new Date(Date.UTC(year, month - 1, day)));
+}
+
+const dayAndTime = new Intl.DateTimeFormat('en-GB', {
+  weekday: 'short',
+  day: '2-digit',
+  month: 'short',
+  hour: '2-digit',
+  minute: '2-digit',
+  hourCycle: 'h23',
+});
+const timeOnly = new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+
+/** "Tue 03 Dec, 09:00 – 13:00" (or with both days when the slot crosses midnight), in the device's zone. */
+export function formatSlot(startsAt: string, endsAt: string): string {
+  const start = new Date(startsAt);
+  const end = new Date(endsAt);
+  const sameDay = start.toDateString() === end.toDateString();
+  return `${dayAndTime.format(start)} – ${sameDay ? timeOnly.format(end) : dayAndTime.format(end)}`;
+}

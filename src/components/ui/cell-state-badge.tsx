@@ -1,5 +1,5 @@
-import { cx } from '../../../lib/class-names';
-import { cellStateLabels, type CellState } from '../../../../shared/domain/planning/matrix-cell-states';
+import { cx } from '../../lib/class-names';
+import { cellStateLabels, type CellState } from '../../../shared/domain/planning/matrix-cell-states';
 
 // Each state has its own mark and word as well as its colour, so the state reads without colour too.
 const looks: Record<CellState, { box: string; glyph: string }> = {

@@ -1,5 +1,5 @@
-import { Badge, type BadgeTone } from '../../../components/ui/badge';
-import { roundupStateLabels, type RoundupState } from '../../../../shared/domain/planning/roundup-states';
+import { Badge, type BadgeTone } from './badge';
+import { roundupStateLabels, type RoundupState } from '../../../shared/domain/planning/roundup-states';
 
 // Early states read neutral, bench work in the accent, editorial steps amber, published teal: the label always
 // says the state, the colour only groups.

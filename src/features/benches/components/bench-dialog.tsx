@@ -10,7 +10,7 @@ import { useZodForm } from '../../../lib/use-zod-form';
 import { createBenchRequestSchema, type Bench } from '../../../../shared/schemas/benches';
 import type { BenchProfileOption } from '../api/get-bench-profiles';
 import { useCreateBench, useUpdateBench } from '../api/save-bench';
-import { BenchTextArea } from './bench-text-area';
+import { TextArea } from '../../../components/ui/text-area';
 
 /** The form's text values, read into the same request the server validates (the profile picker sends an id). */
 const benchFormSchema = z
@@ -108,7 +108,7 @@ function BenchForm({ bench, profiles, onClose, onSaved }: Omit<BenchDialogProps,
         options={profileOptions}
         description="The test system description this bench is set up to."
       />
-      <BenchTextArea
+      <TextArea
         {...form.field('notes')}
         onChange={(event) => form.setValue('notes', event.target.value)}
         optional

@@ -16,7 +16,7 @@ import {
 import type { QueueItem } from '../../../../shared/schemas/matrix';
 import { useBookBench } from '../api/bookings';
 import { formatDayHeading, formatDueDate, formatSlot, instantFromLocalInput, localInputValue } from './bench-time';
-import { BenchTextArea } from './bench-text-area';
+import { TextArea } from '../../../components/ui/text-area';
 
 type Field = 'benchId' | 'startsAt' | 'endsAt' | 'cellIds' | 'note';
 const labels: Record<Field, string> = {
@@ -231,7 +231,7 @@ export function BookingForm({ benches, cells, initialBenchId, suggestedStart, zo
         )}
       </fieldset>
 
-      <BenchTextArea
+      <TextArea
         id={id('note')}
         label={labels.note}
         optional

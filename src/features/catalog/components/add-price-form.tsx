@@ -9,7 +9,7 @@ import { parseMajorAmount } from '../../../../shared/domain/planning/money';
 import { createPriceRequestSchema, type CreatePriceRequest, type Price } from '../../../../shared/schemas/catalog';
 import { calendarDateSchema, currencySchema, regionSchema } from '../../../../shared/schemas/planning-fields';
 import { useAddPrice } from '../api/prices';
-import { formatPrice } from './catalog-format';
+import { formatPrice } from '../../../lib/format-money';
 
 /**
  * The form works in major units ("189.99"), as a price tag shows it; the request carries integer minor units, parsed

@@ -5,15 +5,15 @@ import type { DataTableColumn } from '../../../components/ui/data-table';
 import { DateTime } from '../../../components/ui/date-time';
 import { paths } from '../../../lib/paths';
 import type { Product } from '../../../../shared/schemas/catalog';
+import { formatPrice } from '../../../lib/format-money';
+import { formatCalendarDate } from '../../../lib/format-time';
 import {
   featureSummary,
   formatAmps,
-  formatCalendarDate,
   formatFormFactor,
   formatFrontUsbC,
   formatLanSpeed,
   formatPhases,
-  formatPrice,
   formatRearUsb,
   formatWifi,
   formatYesNo,
@@ -115,7 +115,7 @@ export function catalogColumns(options: { regions: readonly string[]; canEdit: b
       defaultVisible: true,
       numeric: true,
       sortValue: (product) => product.releaseDate,
-      cell: (product) => muted(formatCalendarDate(product.releaseDate)),
+      cell: (product) => muted(product.releaseDate ? formatCalendarDate(product.releaseDate) : '—'),
     },
     {
       id: 'controller',

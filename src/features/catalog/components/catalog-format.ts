@@ -1,4 +1,3 @@
-import { formatMoney } from '../../../../shared/domain/planning/money';
 import { phaseMultiplicationLabels } from '../../../../shared/domain/planning/power-design';
 import {
   formFactorLabels,
@@ -7,28 +6,9 @@ import {
   wifiGenerationLabels,
   type Features,
   type PowerDesign,
-  type Price,
 } from '../../../../shared/schemas/catalog';
 
 const THIN = '\u2009';
-
-/** A price as the reader's eye expects it, e.g. "€189.99"; the currency always shows. */
-export function formatPrice(price: Pick<Price, 'amountMinor' | 'currency'>): string {
-  return formatMoney(price.amountMinor, price.currency);
-}
-
-const calendarDate = new Intl.DateTimeFormat('en-GB', {
-  day: '2-digit',
-  month: 'short',
-  year: 'numeric',
-  timeZone: 'UTC',
-});
-
-/** "14 Mar 2025" from YYYY-MM-DD; a calendar date has no zone, so it is read and shown as UTC to stay the same day. */
-export function formatCalendarDate(date: string | null): string {
-  if (!date) return '—';
-  return calendarDate.format(new Date(`${date}T00:00:00Z`));
-}
 
 /** "2.5 Gbit/s", "1 Gbit/s", "No wired LAN". */
 export function formatLanSpeed(mbps: number | null): string {

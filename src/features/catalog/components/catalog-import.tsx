@@ -20,7 +20,7 @@ import {
   type UploadProgress,
 } from '../api/import-catalog';
 import { ImportErrorTable, ImportRowTable, importCounts } from './import-preview';
-import { TextAreaField } from './text-area-field';
+import { TextArea } from '../../../components/ui/text-area';
 import { UploadProgressBar } from './upload-progress-bar';
 
 type Mode = 'file' | 'paste';
@@ -226,7 +226,7 @@ export function CatalogImport() {
               </p>
             </div>
             {mode === 'paste' && (
-              <TextAreaField
+              <TextArea
                 label="CSV text"
                 rows={8}
                 value={pasted}

@@ -1,6 +1,7 @@
 import { Badge } from '../../../components/ui/badge';
 import type { CatalogImportPreview, ImportRowPreview } from '../../../../shared/schemas/catalog-import';
-import { formatCalendarDate, formatPrice } from './catalog-format';
+import { formatPrice } from '../../../lib/format-money';
+import { formatCalendarDate } from '../../../lib/format-time';
 
 const th = 'px-3 py-1.5 text-xs font-semibold tracking-wide whitespace-nowrap text-muted uppercase';
 const td = 'px-3 py-1.5 align-top';

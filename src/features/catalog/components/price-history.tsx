@@ -5,7 +5,8 @@ import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { describeSubmitError } from '../../../lib/form-errors';
 import type { Price } from '../../../../shared/schemas/catalog';
 import { useRemovePrice } from '../api/prices';
-import { formatCalendarDate, formatPrice } from './catalog-format';
+import { formatPrice } from '../../../lib/format-money';
+import { formatCalendarDate } from '../../../lib/format-time';
 
 export interface PriceHistoryProps {
   productId: number;

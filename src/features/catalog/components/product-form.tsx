@@ -27,7 +27,7 @@ import {
 } from '../../../../shared/schemas/catalog';
 import { formatAmps, formatLanSpeed } from './catalog-format';
 import { readNumber, type ProductFormValues } from './product-form-values';
-import { TextAreaField } from './text-area-field';
+import { TextArea } from '../../../components/ui/text-area';
 import { useProductForm } from './use-product-form';
 
 export interface ProductFormProps {
@@ -157,13 +157,13 @@ export function ProductForm({ initialValues, submitLabel, cancelTo, save, onSave
         </div>
         <PowerDesignSummary values={values} />
         <div className="mt-4 grid gap-4 lg:grid-cols-2">
-          <TextAreaField
+          <TextArea
             {...form.field('powerDesign.otherRails')}
             optional
             rows={2}
             description="In words, e.g. “1 stage graphics, 1 stage auxiliary”."
           />
-          <TextAreaField
+          <TextArea
             {...form.field('powerDesign.heatsinkNotes')}
             optional
             rows={2}

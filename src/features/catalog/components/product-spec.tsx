@@ -2,9 +2,9 @@ import type { ReactNode } from 'react';
 import { Panel } from '../../../components/ui/panel';
 import { phaseMultiplicationLabels } from '../../../../shared/domain/planning/power-design';
 import type { ProductDetail } from '../../../../shared/schemas/catalog';
+import { formatCalendarDate } from '../../../lib/format-time';
 import {
   formatAmps,
-  formatCalendarDate,
   formatFormFactor,
   formatFrontUsbC,
   formatLanSpeed,

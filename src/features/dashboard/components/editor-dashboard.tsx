@@ -3,7 +3,9 @@ import { Badge } from '../../../components/ui/badge';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Panel } from '../../../components/ui/panel';
 import type { Dashboard } from '../../../../shared/schemas/dashboard';
-import { byTargetDate, formatCalendarDate, productName } from './dashboard-format';
+import { formatCalendarDate } from '../../../lib/format-time';
+import { productName } from '../../../lib/product-name';
+import { byTargetDate } from './dashboard-format';
 import { RoundupProgressList } from './roundup-progress-list';
 import { StateStrip } from './state-strip';
 

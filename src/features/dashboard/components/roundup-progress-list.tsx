@@ -1,9 +1,9 @@
 import { Link } from 'react-router';
 import { EmptyState } from '../../../components/ui/empty-state';
 import type { RoundupSummary } from '../../../../shared/schemas/roundups';
-import { formatCalendarDate } from './dashboard-format';
+import { formatCalendarDate } from '../../../lib/format-time';
 import { ProgressBar } from './progress-bar';
-import { RoundupStateBadge } from './roundup-state-badge';
+import { RoundupStateBadge } from '../../../components/ui/roundup-state-badge';
 
 export interface RoundupProgressListProps {
   roundups: readonly RoundupSummary[];

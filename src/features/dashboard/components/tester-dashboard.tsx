@@ -3,10 +3,10 @@ import { buttonStyles } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Panel } from '../../../components/ui/panel';
 import { cx } from '../../../lib/class-names';
-import { userTimeZone } from '../../../lib/format-time';
+import { formatCalendarDate, formatSlot, userTimeZone } from '../../../lib/format-time';
 import type { Dashboard } from '../../../../shared/schemas/dashboard';
-import { CellStateBadge } from './cell-state-badge';
-import { formatCalendarDate, formatSlot, productName } from './dashboard-format';
+import { CellStateBadge } from '../../../components/ui/cell-state-badge';
+import { productName } from '../../../lib/product-name';
 
 export interface TesterDashboardProps {
   dashboard: Extract<Dashboard, { view: 'tester' }>;

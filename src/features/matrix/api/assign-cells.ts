@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 import { assignCellsResponseSchema, type AssignCellsRequest } from '../../../../shared/schemas/matrix';
-import { invalidatePlanning } from './matrix-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export interface AssignCellsInput {
   roundupId: number;

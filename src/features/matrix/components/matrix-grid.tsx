@@ -17,8 +17,9 @@ import { useMatrix } from '../api/get-matrix';
 import { useTesters } from '../api/get-testers';
 import { useTransitionCell } from '../api/transition-cell';
 import { AssignBar } from './assign-bar';
-import { CellStateBadge } from './cell-state-badge';
-import { formatCalendarDate, productName } from './matrix-format';
+import { CellStateBadge } from '../../../components/ui/cell-state-badge';
+import { formatCalendarDate } from '../../../lib/format-time';
+import { productName } from '../../../lib/product-name';
 import { SendBackDialog } from './send-back-dialog';
 
 export interface MatrixGridProps {

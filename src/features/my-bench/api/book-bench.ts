@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { bookingSchema, type Booking, type CreateBookingRequest } from '../../../../shared/schemas/benches';
-import { invalidatePlanning } from './my-bench-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export interface BookBenchInput {
   benchId: number;

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidatePlanning } from './my-bench-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export interface CancelBookingInput {
   benchId: number;

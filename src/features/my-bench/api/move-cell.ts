@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { matrixCellSchema, type MatrixCell } from '../../../../shared/schemas/matrix';
 import type { CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
-import { invalidatePlanning } from './my-bench-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export interface MoveCellInput {
   roundupId: number;

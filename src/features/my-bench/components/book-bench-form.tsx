@@ -6,7 +6,7 @@ import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { isApiError } from '../../../lib/api-client';
-import { userTimeZone } from '../../../lib/format-time';
+import { formatCalendarDate, userTimeZone } from '../../../lib/format-time';
 import { useZodForm } from '../../../lib/use-zod-form';
 import {
   createBookingRequestSchema,
@@ -17,7 +17,8 @@ import {
 import { idSchema } from '../../../../shared/schemas/planning-fields';
 import type { QueueItem } from '../../../../shared/schemas/matrix';
 import { useBookBench } from '../api/book-bench';
-import { formatCalendarDate, localInputToInstant, productName } from './bench-format';
+import { productName } from '../../../lib/product-name';
+import { localInputToInstant } from './bench-format';
 
 const emptyForm = { benchId: '', startsAt: '', endsAt: '', cellIds: '', note: '' };
 const labels = {

@@ -4,10 +4,10 @@ import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { describeSubmitError } from '../../../lib/form-errors';
-import { userTimeZone } from '../../../lib/format-time';
+import { formatSlot, userTimeZone } from '../../../lib/format-time';
 import type { Booking } from '../../../../shared/schemas/benches';
 import { useCancelBooking } from '../api/cancel-booking';
-import { formatSlot, productName } from './bench-format';
+import { productName } from '../../../lib/product-name';
 
 /** The tester's upcoming slots, soonest first, each with the cells it covers. */
 export function BookingsList({ bookings }: { bookings: readonly Booking[] }) {

@@ -7,8 +7,9 @@ import { cx } from '../../../lib/class-names';
 import { cellActionRules, cellStates, type CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
 import type { Booking } from '../../../../shared/schemas/benches';
 import type { QueueItem } from '../../../../shared/schemas/matrix';
-import { formatCalendarDate, formatSlot, productName } from './bench-format';
-import { CellStateBadge } from './cell-state-badge';
+import { formatCalendarDate, formatSlot } from '../../../lib/format-time';
+import { productName } from '../../../lib/product-name';
+import { CellStateBadge } from '../../../components/ui/cell-state-badge';
 
 export interface QueueTableProps {
   caption: string;

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 import { addRoundupEntryResponseSchema, type AddRoundupEntryRequest } from '../../../../shared/schemas/roundups';
-import { invalidatePlanning } from './roundup-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export type AddEntryResult = z.infer<typeof addRoundupEntryResponseSchema>;
 

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { roundupDetailSchema, type RoundupDetail } from '../../../../shared/schemas/roundups';
 import type { RoundupState } from '../../../../shared/domain/planning/roundup-states';
-import { invalidatePlanning } from './roundup-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export interface ChangeRoundupStateInput {
   id: number;

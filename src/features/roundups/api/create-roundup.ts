@@ -5,7 +5,7 @@ import {
   type CreateRoundupRequest,
   type RoundupDetail,
 } from '../../../../shared/schemas/roundups';
-import { invalidatePlanning } from './roundup-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export function createRoundup(input: CreateRoundupRequest): Promise<RoundupDetail> {
   return apiClient.post('/api/roundups', input, { schema: roundupDetailSchema });

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidatePlanning } from './roundup-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export interface RemoveEntryInput {
   roundupId: number;

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 import { roundupDetailSchema, type RoundupDetail } from '../../../../shared/schemas/roundups';
-import { invalidatePlanning } from './roundup-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export interface SetLoadConfigurationsInput {
   id: number;

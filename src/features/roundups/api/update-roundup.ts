@@ -5,7 +5,7 @@ import {
   type RoundupDetail,
   type UpdateRoundupRequest,
 } from '../../../../shared/schemas/roundups';
-import { invalidatePlanning } from './roundup-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export interface UpdateRoundupInput {
   id: number;

@@ -9,7 +9,8 @@ import type { RoundupDetail } from '../../../../shared/schemas/roundups';
 import { useCatalogProducts } from '../api/get-catalog-products';
 import { useReferenceCandidates } from '../api/get-reference-candidates';
 import { useSuggestions } from '../api/get-suggestions';
-import { formatBand, productName } from './planning-format';
+import { productName } from '../../../lib/product-name';
+import { formatBand } from './planning-format';
 import { PriceCheckCell } from './price-check-cell';
 
 export interface AddProductsProps {

@@ -6,7 +6,7 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { formFactorLabels } from '../../../../shared/schemas/catalog';
 import { sampleStatusLabels } from '../../../../shared/schemas/samples';
 import type { RoundupEntry } from '../../../../shared/schemas/roundups';
-import { productName } from './planning-format';
+import { productName } from '../../../lib/product-name';
 import { PriceCheckCell } from './price-check-cell';
 
 export interface EntriesTableProps {

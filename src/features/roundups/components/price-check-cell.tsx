@@ -1,7 +1,7 @@
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
 import { formatMoney } from '../../../../shared/domain/planning/money';
 import type { PriceCheck } from '../../../../shared/schemas/roundups';
-import { formatCalendarDate } from './planning-format';
+import { formatCalendarDate } from '../../../lib/format-time';
 
 const fitLooks: Record<PriceCheck['fit'], { label: string; tone: BadgeTone }> = {
   'in-band': { label: 'In the band', tone: 'positive' },

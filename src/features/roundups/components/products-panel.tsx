@@ -9,7 +9,7 @@ import { useAddEntry } from '../api/add-entry';
 import { useRemoveEntry } from '../api/remove-entry';
 import { AddProducts } from './add-products';
 import { EntriesTable } from './entries-table';
-import { productName } from './planning-format';
+import { productName } from '../../../lib/product-name';
 
 export interface ProductsPanelProps {
   roundup: RoundupDetail;

@@ -7,9 +7,10 @@ import { describeSubmitError } from '../../../lib/form-errors';
 import { roundupStateLabels } from '../../../../shared/domain/planning/roundup-states';
 import type { RoundupDetail } from '../../../../shared/schemas/roundups';
 import { useChangeRoundupState } from '../api/change-roundup-state';
-import { formatBand, formatCalendarDate } from './planning-format';
+import { formatCalendarDate } from '../../../lib/format-time';
+import { formatBand } from './planning-format';
 import { ProgressMeter } from './progress-meter';
-import { RoundupStateBadge } from './roundup-state-badge';
+import { RoundupStateBadge } from '../../../components/ui/roundup-state-badge';
 
 export interface RoundupHeaderProps {
   roundup: RoundupDetail;

@@ -11,9 +11,10 @@ import {
   type RoundupState,
 } from '../../../../shared/domain/planning/roundup-states';
 import type { RoundupSummary } from '../../../../shared/schemas/roundups';
-import { formatBand, formatCalendarDate } from './planning-format';
+import { formatCalendarDate } from '../../../lib/format-time';
+import { formatBand } from './planning-format';
 import { ProgressMeter } from './progress-meter';
-import { RoundupStateBadge } from './roundup-state-badge';
+import { RoundupStateBadge } from '../../../components/ui/roundup-state-badge';
 
 export interface RoundupsTableProps {
   roundups: readonly RoundupSummary[];

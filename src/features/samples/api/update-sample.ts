@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { sampleSchema, type Sample, type UpdateSampleRequest } from '../../../../shared/schemas/samples';
-import { invalidatePlanning } from './sample-keys';
+import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export interface UpdateSampleInput {
   roundupId: number;

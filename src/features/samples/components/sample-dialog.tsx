@@ -18,7 +18,7 @@ import {
   type UpdateSampleRequest,
 } from '../../../../shared/schemas/samples';
 import { useUpdateSample } from '../api/update-sample';
-import { productName } from './samples-format';
+import { productName } from '../../../lib/product-name';
 
 const labels = {
   source: 'Source',

@@ -6,7 +6,10 @@ import { DataTable, type DataTableColumn } from '../../../components/ui/data-tab
 import { EmptyState } from '../../../components/ui/empty-state';
 import { sampleSourceLabels, sampleStatuses, type Sample } from '../../../../shared/schemas/samples';
 import { useSamples } from '../api/get-samples';
-import { formatCalendarDate, formatCost, overdueText, productName } from './samples-format';
+import { formatPrice } from '../../../lib/format-money';
+import { formatCalendarDate } from '../../../lib/format-time';
+import { productName } from '../../../lib/product-name';
+import { overdueText } from './samples-format';
 import { SampleDialog } from './sample-dialog';
 import { SampleStatusBadge } from './sample-status-badge';
 
@@ -51,7 +54,7 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
               {sampleSourceLabels[s.source]}
               <span className="block text-xs text-muted">
                 {s.source === 'retail'
-                  ? [s.orderReference, s.cost && formatCost(s.cost)].filter(Boolean).join(' · ')
+                  ? [s.orderReference, s.cost && formatPrice(s.cost)].filter(Boolean).join(' · ')
                   : s.vendorContact}
               </span>
             </span>

@@ -75,6 +75,8 @@ interface LogRows {
   timeS: Float64Array;
   rowNumbers: Int32Array;
   raws: RawColumn[];
+  /** The first kept time cell as written, for the start instant of zoned stamps. */
+  startCell: string;
 }
 
 function readSlowCell(
@@ -129,7 +131,7 @@ function readLogRows(
   timeIndex: number,
   indexes: readonly number[],
   errors: ParseErrorList,
-): LogRows & { startCell: string } {
+): LogRows {
   const { decimalComma } = table;
   const width = table.columns.length;
   const capacity = table.lineCount;

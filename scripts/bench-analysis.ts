@@ -4,9 +4,15 @@
  * Targets: the engine adds less than 1× the raw parse time, and the whole stays well under half a second.
  */
 import { availableParallelism, loadavg } from 'node:os';
+import { setFlagsFromString } from 'node:v8';
+import { runInNewContext } from 'node:vm';
 import Papa from 'papaparse';
 import { previewAndAnalyze } from '../shared/domain/preview-and-analyze';
 import { syntheticLoggerLog } from '../shared/domain/synthetic-logger-log';
+
+// A full collection between blocks (not inside any timing), so no block starts with the previous one's garbage.
+setFlagsFromString('--expose-gc');
+const collectGarbage = runInNewContext('gc') as () => void;
 
 /** Alternating blocks of timings of one kind; the first runs of each block are not counted (see below). */
 const blocks = 3;
@@ -82,9 +88,9 @@ function timeEngine(): number {
   return elapsed;
 }
 
-// Timed in alternating blocks. The two sides leave very different garbage behind (papaparse alone returns every row
-// as strings; the engine keeps only numbers), so the first runs after each switch, which collect the other side's
-// garbage, are not counted. Each median then holds the side's own cost, its own collections included.
+// Timed in alternating blocks. The sides leave very different garbage behind (papaparse alone returns every row as
+// strings; the engine keeps only numbers), so each block starts from a collected heap and its first runs are not
+// counted. Each median then holds the side's own cost, its own collections included.
 const parseTimes: number[] = [];
 const streamedTimes: number[] = [];
 const engineTimes: number[] = [];
@@ -94,6 +100,7 @@ for (let block = 0; block < blocks; block++) {
     [streamedTimes, timePapaparseStreamed],
     [engineTimes, timeEngine],
   ] as const) {
+    collectGarbage();
     for (let run = 0; run < settlingRuns + countedPerBlock; run++) {
       const elapsed = timeOnce();
       if (run >= settlingRuns) timings.push(elapsed);

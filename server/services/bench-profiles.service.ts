@@ -1,10 +1,10 @@
-import { In, IsNull, Not, type DataSource, type EntityManager } from 'typeorm';
+import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { BenchProfileEntity } from '../entities/bench-profile.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
 import { conflict, notFound } from '../errors';
 import { recordAudit } from './audit.service';
-import { isDuplicateKey } from './database-errors';
+import { archivedWhere, isDuplicateKey } from './database-errors';
 import { decimalToNumber } from './dto-values';
 import { recordPlanChange } from './roundup-audit';
 import { planEditableStates } from '../../shared/domain/planning/roundup-states';
@@ -76,12 +76,7 @@ export class BenchProfilesService {
 
   async list(query: ListQuery): Promise<BenchProfile[]> {
     const manager = this.dataSource.manager;
-    const where =
-      query.archived === 'exclude'
-        ? { archivedAt: IsNull() }
-        : query.archived === 'only'
-          ? { archivedAt: Not(IsNull()) }
-          : {};
+    const where = archivedWhere(query.archived);
     const profiles = await manager.getRepository(BenchProfileEntity).find({ where, order: { name: 'ASC' } });
     const counts = await benchProfileRoundupCounts(
       manager,

@@ -1,11 +1,11 @@
-import { In, IsNull, Not, type DataSource, type EntityManager } from 'typeorm';
+import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { LoadConfigurationEntity } from '../entities/load-configuration.entity';
 import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configuration.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
 import { conflict, invalid, notFound } from '../errors';
 import { recordAudit } from './audit.service';
-import { isDuplicateKey } from './database-errors';
+import { archivedWhere, isDuplicateKey } from './database-errors';
 import { decimalToNumber } from './dto-values';
 import { recordPlanChange } from './roundup-audit';
 import { planEditableStates } from '../../shared/domain/planning/roundup-states';
@@ -88,12 +88,7 @@ export class LoadConfigurationsService {
 
   async list(query: ListQuery): Promise<LoadConfiguration[]> {
     const manager = this.dataSource.manager;
-    const where =
-      query.archived === 'exclude'
-        ? { archivedAt: IsNull() }
-        : query.archived === 'only'
-          ? { archivedAt: Not(IsNull()) }
-          : {};
+    const where = archivedWhere(query.archived);
     const configs = await manager.getRepository(LoadConfigurationEntity).find({ where, order: { name: 'ASC' } });
     const counts = await loadConfigurationRoundupCounts(
       manager,

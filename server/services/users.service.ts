@@ -4,6 +4,7 @@ import { SessionEntity } from '../entities/session.entity';
 import { hashPassword } from '../auth/passwords';
 import { AppError, conflict, notFound } from '../errors';
 import { recordAudit } from './audit.service';
+import { isDuplicateKey } from './database-errors';
 import type { CreateUserRequest, UpdateUserRequest, User } from '../../shared/schemas/users';
 import type { CurrentUser } from '../../shared/schemas/auth';
 
@@ -24,10 +25,6 @@ const emailTaken = () =>
   conflict('email_taken', 'Another account already uses this e-mail address.', {
     email: 'Another account already uses this e-mail address.',
   });
-
-function isDuplicateKey(error: unknown) {
-  return (error as { code?: string })?.code === 'ER_DUP_ENTRY';
-}
 
 export class UsersService {
   constructor(private readonly dataSource: DataSource) {}

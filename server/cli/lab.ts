@@ -17,6 +17,7 @@ import { previewLog } from '../../shared/domain/preview-and-analyze';
 import { readMappedLog } from '../../shared/domain/read-mapped-log';
 import { analyzeRun } from '../../shared/domain/run-analysis';
 import { formatRunTime } from '../../shared/domain/run-time-format';
+import { loggerFileText } from '../../shared/domain/logger-file-text';
 import {
   ThermocoupleRangeError,
   typeKCelsiusWithColdJunction,
@@ -84,12 +85,10 @@ function numberOption(text: string | undefined, name: string): number | undefine
   return value;
 }
 
-/** Text files from loggers are UTF-8 or, from some Windows software, UTF-16 with a byte-order mark. */
 function readLogText(path: string): string {
-  const bytes = readFileSync(path);
-  if (bytes[0] === 0xff && bytes[1] === 0xfe) return new TextDecoder('utf-16le').decode(bytes.subarray(2));
-  if (bytes[0] === 0xfe && bytes[1] === 0xff) return new TextDecoder('utf-16be').decode(bytes.subarray(2));
-  return bytes.toString('utf8');
+  const text = loggerFileText(readFileSync(path));
+  if (text === null) throw new Error('it is not a text export: save the log as CSV or TSV');
+  return text;
 }
 
 function printParseErrors(errors: ParseError[]): void {

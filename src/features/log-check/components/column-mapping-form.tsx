@@ -123,6 +123,13 @@ export function ColumnMappingForm({
     error: errors[field],
     onChange: (event: { target: { value: string } }) => update({ [field]: event.target.value }, [field]),
   });
+  // Every figure field: decimal keypad on phones, right-aligned tabular digits.
+  const figure = {
+    inputMode: 'decimal',
+    autoComplete: 'off',
+    disabled,
+    inputClassName: 'text-right font-mono',
+  } as const;
   const isGuessed = (field: 'time' | 'ambient' | 'clock' | 'power') =>
     Boolean(guess && guess[field] && draft[field] === guess[field]);
   const vrmGuessed = Boolean(guess && guess.vrm.length > 0 && draft.vrm.join('\u0000') === guess.vrm.join('\u0000'));
@@ -345,10 +352,7 @@ export function ColumnMappingForm({
               {draft.coldJunction === 'fixed' && (
                 <TextField
                   {...text('coldJunctionFixedC')}
-                  inputMode="decimal"
-                  autoComplete="off"
-                  disabled={disabled}
-                  inputClassName="text-right font-mono"
+                  {...figure}
                   addon={<Unit>°C</Unit>}
                   description="Between −50 and 150 °C."
                 />
@@ -378,35 +382,15 @@ export function ColumnMappingForm({
         <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
           <TextField
             {...text('soakMinutes')}
-            inputMode="decimal"
-            autoComplete="off"
-            disabled={disabled}
-            inputClassName="text-right font-mono"
+            {...figure}
             addon={<Unit>min</Unit>}
             description={`Default ${defaultOptions.soakMinutes} min per load.`}
           />
-          <TextField
-            {...text('ambientTargetC')}
-            inputMode="decimal"
-            autoComplete="off"
-            disabled={disabled}
-            inputClassName="text-right font-mono"
-            addon={<Unit>°C</Unit>}
-          />
-          <TextField
-            {...text('ambientToleranceC')}
-            inputMode="decimal"
-            autoComplete="off"
-            disabled={disabled}
-            inputClassName="text-right font-mono"
-            addon={<Unit>°C</Unit>}
-          />
+          <TextField {...text('ambientTargetC')} {...figure} addon={<Unit>°C</Unit>} />
+          <TextField {...text('ambientToleranceC')} {...figure} addon={<Unit>°C</Unit>} />
           <TextField
             {...text('ambientDriftLimitC')}
-            inputMode="decimal"
-            autoComplete="off"
-            disabled={disabled}
-            inputClassName="text-right font-mono"
+            {...figure}
             addon={<Unit>°C</Unit>}
             description="Over the whole run."
           />
@@ -467,35 +451,15 @@ export function ColumnMappingForm({
           <div className="mt-3 grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
             <TextField
               {...text('throttlePercent')}
-              inputMode="decimal"
-              autoComplete="off"
-              disabled={disabled}
-              inputClassName="text-right font-mono"
+              {...figure}
               addon={<Unit>%</Unit>}
               description="Throttled below this share of the loaded median clock."
             />
-            <TextField
-              {...text('throttleMinSeconds')}
-              inputMode="decimal"
-              autoComplete="off"
-              disabled={disabled}
-              inputClassName="text-right font-mono"
-              addon={<Unit>s</Unit>}
-            />
-            <TextField
-              {...text('comfortableBelowC')}
-              inputMode="decimal"
-              autoComplete="off"
-              disabled={disabled}
-              inputClassName="text-right font-mono"
-              addon={<Unit>°C</Unit>}
-            />
+            <TextField {...text('throttleMinSeconds')} {...figure} addon={<Unit>s</Unit>} />
+            <TextField {...text('comfortableBelowC')} {...figure} addon={<Unit>°C</Unit>} />
             <TextField
               {...text('warmUpToC')}
-              inputMode="decimal"
-              autoComplete="off"
-              disabled={disabled}
-              inputClassName="text-right font-mono"
+              {...figure}
               addon={<Unit>°C</Unit>}
               description="Above it, a run that held its clock is Hot but held."
             />

@@ -7,8 +7,8 @@ import { availableParallelism, loadavg } from 'node:os';
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
 import Papa from 'papaparse';
-import { previewAndAnalyze } from '../shared/domain/preview-and-analyze';
-import { syntheticLoggerLog } from '../shared/domain/synthetic-logger-log';
+import { analyseLog } from '../shared/domain/analysis/analyse-log';
+import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
 
 // A full collection between blocks (not inside any timing), so no block starts with the previous one's garbage.
 setFlagsFromString('--expose-gc');
@@ -82,7 +82,7 @@ function timePapaparseStreamed(): number {
 
 function timeEngine(): number {
   const started = performance.now();
-  const outcome = previewAndAnalyze(text, request);
+  const outcome = analyseLog(text, request);
   const elapsed = performance.now() - started;
   if (!outcome.ok) throw new Error(`The benchmark log did not parse: ${outcome.errors[0].message}`);
   return elapsed;

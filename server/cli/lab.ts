@@ -1,7 +1,7 @@
 /**
  * Benchwire lab CLI: the measurement engine from a terminal.
  *
- *   npm run cli -- analyze <log file> [--vrm <col,col>] [--ambient <col>] [--clock <col>] [--power <col>]
+ *   npm run cli -- analyse <log file> [--vrm <col,col>] [--ambient <col>] [--clock <col>] [--power <col>]
  *                  [--time <col>] [--unit C|F|K|mV] [--cj <°C or col>] [--soak-min <n>] [--json]
  *   npm run cli -- tc --mv <millivolts> [--cj <°C>] [--json]
  *   npm run cli -- tc --c <°C> [--cj <°C>] [--json]
@@ -13,19 +13,19 @@ import { basename } from 'node:path';
 import { parseArgs } from 'node:util';
 import type { AnalysisResult, ColumnMapping, ParseError, TemperatureUnit } from '../../shared/schemas/analysis';
 import { analysisOptionsSchema, temperatureUnits } from '../../shared/schemas/analysis';
-import { previewLog } from '../../shared/domain/preview-and-analyze';
-import { readMappedLog } from '../../shared/domain/read-mapped-log';
-import { analyzeRun } from '../../shared/domain/run-analysis';
-import { formatRunTime } from '../../shared/domain/run-time-format';
-import { loggerFileText } from '../../shared/domain/logger-file-text';
+import { previewLog } from '../../shared/domain/analysis/analyse-log';
+import { readMappedLog } from '../../shared/domain/analysis/read-mapped-log';
+import { analyseRun } from '../../shared/domain/analysis/run-analysis';
+import { formatRunTime } from '../../shared/domain/analysis/run-time-format';
+import { loggerFileText } from '../../shared/domain/analysis/logger-file-text';
 import {
   ThermocoupleRangeError,
   typeKCelsiusWithColdJunction,
   typeKMeasuredMillivolts,
-} from '../../shared/domain/type-k-thermocouple';
+} from '../../shared/domain/analysis/type-k-thermocouple';
 
 const usage = `Usage:
-  npm run cli -- analyze <log file> [--vrm <col,col>] [--ambient <col>] [--clock <col>] [--power <col>]
+  npm run cli -- analyse <log file> [--vrm <col,col>] [--ambient <col>] [--clock <col>] [--power <col>]
                  [--time <col>] [--unit C|F|K|mV] [--cj <°C or col>] [--soak-min <n>] [--json]
   npm run cli -- tc --mv <millivolts> [--cj <°C>] [--json]     type K millivolts → °C
   npm run cli -- tc --c <°C> [--cj <°C>] [--json]              °C → type K millivolts
@@ -188,7 +188,7 @@ function printAnalysis(file: string, mapping: ColumnMapping, guessed: string[], 
   console.log(lines.join('\n'));
 }
 
-function analyzeCommand(values: ReturnType<typeof readArguments>['values'], positionals: string[]): number {
+function analyseCommand(values: ReturnType<typeof readArguments>['values'], positionals: string[]): number {
   const file = positionals[1];
   if (!file) throw new UsageError('Name the log file to analyse.');
   const unit = values.unit;
@@ -261,7 +261,7 @@ function analyzeCommand(values: ReturnType<typeof readArguments>['values'], posi
     printParseErrors(mapped.errors);
     return 1;
   }
-  const analysis = analyzeRun(mapped.log, options, { mappingGuessed: guessed.length > 0 });
+  const analysis = analyseRun(mapped.log, options, { mappingGuessed: guessed.length > 0 });
   if (values.json) console.log(JSON.stringify(analysis, null, 2));
   else printAnalysis(file, mapping, guessed, analysis);
   return 0;
@@ -305,7 +305,7 @@ function main(argv: string[]): number {
       console.log(usage);
       return values.help ? 0 : 2;
     }
-    if (positionals[0] === 'analyze') return analyzeCommand(values, positionals);
+    if (positionals[0] === 'analyse') return analyseCommand(values, positionals);
     if (positionals[0] === 'tc') return thermocoupleCommand(values);
     throw new UsageError(`Unknown command "${positionals[0]}".`);
   } catch (error) {

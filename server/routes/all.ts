@@ -1,7 +1,7 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
 import { registerAccountRoutes } from './account.routes';
-import { registerAnalysisRoutes } from './analysis.routes';
+import { registerLogCheckRoutes } from './log-check.routes';
 import { registerAuthRoutes } from './auth.routes';
 import { registerSystemRoutes } from './system.routes';
 import { registerUserRoutes } from './users.routes';
@@ -21,7 +21,7 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerAuthRoutes(api, context);
   registerAccountRoutes(api, context);
   registerUserRoutes(api, context);
-  registerAnalysisRoutes(api, context);
+  registerLogCheckRoutes(api, context);
   registerCatalogRoutes(api, context);
   registerBenchProfileRoutes(api, context);
   registerLoadConfigurationRoutes(api, context);

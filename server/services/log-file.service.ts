@@ -1,5 +1,5 @@
 import { AppError } from '../errors';
-import { loggerFileText } from '../../shared/domain/logger-file-text';
+import { loggerFileText } from '../../shared/domain/analysis/logger-file-text';
 
 const acceptedExtensions = /\.(csv|tsv|txt|log|dat)$/i;
 

@@ -1,12 +1,12 @@
 /**
  * Payloads of the measurement engine (issue 3): logger upload request, preview, analysis result, parse errors.
  *
- * How POST /api/analysis/preview should call it (multipart: `file` + `request` as a JSON string):
+ * How POST /api/log-check/analyse should call it (multipart: `file` + `request` as a JSON string):
  *   const request = analysisRequestSchema.parse(JSON.parse(req.body.request ?? '{}'));
- *   const outcome = previewAndAnalyze(file.buffer.toString('utf8'), request); // shared/domain/preview-and-analyze
+ *   const outcome = analyseLog(file.buffer.toString('utf8'), request); // shared/domain/analysis/analyse-log
  *   outcome.ok ? 200 { preview, analysis } (analysisPreviewResponseSchema)
  *              : 422 { preview, errors } (analysisPreviewFailureSchema; each error { row, column, code, message }).
- * previewAndAnalyze is pure and returns bad input as errors instead of throwing. When request.mapping is omitted the
+ * analyseLog is pure and returns bad input as errors instead of throwing. When request.mapping is omitted the
  * engine analyses with the mapping guessed from the header and adds the 'mapping-guessed' flag: the UI should show
  * preview.guessedMapping and ask the tester to confirm it, never store the guess silently.
  */
@@ -329,11 +329,11 @@ export const analysisResultSchema = z.object({
 });
 export type AnalysisResult = z.infer<typeof analysisResultSchema>;
 
-/** 200 response of POST /api/analysis/preview. */
+/** 200 response of POST /api/log-check/analyse. */
 export const analysisPreviewResponseSchema = z.object({ preview: logPreviewSchema, analysis: analysisResultSchema });
 export type AnalysisPreviewResponse = z.infer<typeof analysisPreviewResponseSchema>;
 
-/** 422 body of POST /api/analysis/preview: the preview when the table itself could be read, and every parse error. */
+/** 422 body of POST /api/log-check/analyse: the preview when the table itself could be read, and every parse error. */
 export const analysisPreviewFailureSchema = z.object({
   preview: logPreviewSchema.nullable(),
   errors: z.array(parseErrorSchema).min(1),

@@ -17,12 +17,12 @@ function firstOrderRiseLog() {
 
 const mapping = { time: 'Elapsed (s)', vrm: ['VRM rear (°C)'], ambient: 'Ambient (°C)', clock: 'CPU clock (MHz)' };
 
-describe('POST /api/analysis/preview', () => {
+describe('POST /api/log-check/analyse', () => {
   it('when a tester uploads a clean hour-long log, then the preview and the analysis come back', async () => {
     const app = await testApp();
     const { agent } = await signedIn(app, 'tester');
     const response = await agent
-      .post('/api/analysis/preview')
+      .post('/api/log-check/analyse')
       .attach('file', Buffer.from(firstOrderRiseLog()), 'soak.csv')
       .field('request', JSON.stringify({ mapping, options: { soakMinutes: 60 } }));
     expect(response.status, response.text).toBe(200);
@@ -42,7 +42,7 @@ describe('POST /api/analysis/preview', () => {
     const { agent } = await signedIn(app, 'editor');
     const utf16 = Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(firstOrderRiseLog(), 'utf16le')]);
     const response = await agent
-      .post('/api/analysis/preview')
+      .post('/api/log-check/analyse')
       .attach('file', utf16, 'soak.txt')
       .field('request', JSON.stringify({ mapping }));
     expect(response.status, response.text).toBe(200);
@@ -54,7 +54,7 @@ describe('POST /api/analysis/preview', () => {
     const { agent } = await signedIn(app, 'tester');
     const text = ['Elapsed (s),VRM rear (°C),Ambient (°C)', '0,40.0,21.0', '10,hot,21.0', '20,41.0,21.0'].join('\n');
     const response = await agent
-      .post('/api/analysis/preview')
+      .post('/api/log-check/analyse')
       .attach('file', Buffer.from(text), 'bad.csv')
       .field(
         'request',
@@ -70,20 +70,20 @@ describe('POST /api/analysis/preview', () => {
   it('a missing file, bad settings JSON and a binary file are refused with clear errors', async () => {
     const app = await testApp();
     const { agent } = await signedIn(app, 'tester');
-    const noFile = await agent.post('/api/analysis/preview').field('request', '{}');
+    const noFile = await agent.post('/api/log-check/analyse').field('request', '{}');
     expect(noFile.status).toBe(400);
     expect(noFile.body.error.fields.file).toBeTruthy();
     const badJson = await agent
-      .post('/api/analysis/preview')
+      .post('/api/log-check/analyse')
       .attach('file', Buffer.from(firstOrderRiseLog()), 'soak.csv')
       .field('request', '{not json');
     expect(badJson.status).toBe(400);
     expect(badJson.body.error.fields.request).toBeTruthy();
     const binary = await agent
-      .post('/api/analysis/preview')
+      .post('/api/log-check/analyse')
       .attach('file', Buffer.from([0x50, 0x4b, 0x03, 0x04, 0x00, 0x00]), 'soak.csv');
     expect(binary.status).toBe(415);
-    const wrongType = await agent.post('/api/analysis/preview').attach('file', Buffer.from('x'), 'photo.jpg');
+    const wrongType = await agent.post('/api/log-check/analyse').attach('file', Buffer.from('x'), 'photo.jpg');
     expect(wrongType.status).toBe(415);
   });
 });

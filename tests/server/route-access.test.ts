@@ -26,7 +26,7 @@ const allowed: Record<string, Caller[]> = {
   'GET /api/users': ['admin'],
   'POST /api/users': ['admin'],
   'PATCH /api/users/:id': ['admin'],
-  'POST /api/analysis/preview': ['tester', 'editor'],
+  'POST /api/log-check/analyse': ['tester', 'editor'],
   // Roundup planning (issue 4): admins read everything and change nothing.
   'GET /api/catalog/products': staff,
   'POST /api/catalog/products': ['editor', 'tester'],

@@ -11,7 +11,7 @@ import {
 } from '../../../../shared/schemas/analysis';
 import { logCheckKeys } from './log-check-keys';
 
-export const analysisPreviewPath = '/api/analysis/preview';
+export const analysisPreviewPath = '/api/log-check/analyse';
 
 /** The server refuses larger files (MAX_LOG_BYTES in server/routes/analysis.routes.ts); checked here first. */
 export const maxLogBytes = 25 * 1024 * 1024;
@@ -67,7 +67,7 @@ function errorFrom(status: number, body: unknown): ApiError {
 }
 
 /**
- * POST /api/analysis/preview as multipart. XMLHttpRequest rather than fetch because only XHR reports upload progress,
+ * POST /api/log-check/analyse as multipart. XMLHttpRequest rather than fetch because only XHR reports upload progress,
  * which a tester needs to see for a long soak logged at a high rate. 200 and 422 are both answers about the file;
  * anything else is thrown as an ApiError (400/415 carry the message for the file field).
  */

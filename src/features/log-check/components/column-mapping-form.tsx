@@ -8,7 +8,7 @@ import { Panel } from '../../../components/ui/panel';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import type { FormErrorItem } from '../../../lib/form-errors';
-import { thermocoupleToleranceClasses } from '../../../../shared/domain/thermocouple-tolerance';
+import { thermocoupleToleranceClasses } from '../../../../shared/domain/analysis/thermocouple-tolerance';
 import {
   temperatureUnits,
   toleranceClasses,

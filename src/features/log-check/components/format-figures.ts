@@ -1,4 +1,4 @@
-import { temperatureUnitLabels } from '../../../../shared/domain/temperature-units';
+import { temperatureUnitLabels } from '../../../../shared/domain/analysis/temperature-units';
 import type { TemperatureUnit } from '../../../../shared/schemas/analysis';
 
 /** Benchwire prints a unit after a thin space: 79.0 °C, 12.4 MB. */

@@ -1,5 +1,5 @@
-import { parseLoggerTable } from '../../../../shared/domain/logger-table';
-import { readMappedLog } from '../../../../shared/domain/read-mapped-log';
+import { parseLoggerTable } from '../../../../shared/domain/analysis/logger-table';
+import { readMappedLog } from '../../../../shared/domain/analysis/read-mapped-log';
 import { analysisRequestSchema, type AnalysisRequestInput } from '../../../../shared/schemas/analysis';
 
 export interface ChartLine {

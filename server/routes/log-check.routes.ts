@@ -5,18 +5,18 @@ import { AppError } from '../errors';
 import { decodeLogFile } from '../services/log-file.service';
 import { parseOrThrow } from '../api-registry';
 import { analysisRequestSchema, analysisPreviewResponseSchema } from '../../shared/schemas/analysis';
-import { previewAndAnalyze } from '../../shared/domain/preview-and-analyze';
+import { analyseLog } from '../../shared/domain/analysis/analyse-log';
 
 export const MAX_LOG_BYTES = 25 * 1024 * 1024;
 
-export function registerAnalysisRoutes(api: ApiRegistry, _context: AppContext) {
+export function registerLogCheckRoutes(api: ApiRegistry, _context: AppContext) {
   const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_LOG_BYTES, files: 1, fields: 4 } });
 
   api.add({
     method: 'post',
-    path: '/api/analysis/preview',
+    path: '/api/log-check/analyse',
     access: ['tester', 'editor'],
-    tag: 'Analysis',
+    tag: 'Log check',
     summary:
       'Analyse a logger file (CSV/TSV) without saving it: the parsed-column preview and the full analysis, or 422 with row-and-column parse errors.',
     multipart: { fields: { file: 'file', request: 'json' } },
@@ -39,7 +39,7 @@ export function registerAnalysisRoutes(api: ApiRegistry, _context: AppContext) {
       }
       const request = parseOrThrow(analysisRequestSchema, requestJson, 'analysis setting');
       const text = decodeLogFile(req.file.originalname, req.file.buffer);
-      const outcome = previewAndAnalyze(text, request);
+      const outcome = analyseLog(text, request);
       if (!outcome.ok) {
         res.status(422);
         return {

@@ -20,6 +20,15 @@ export default defineConfig({
           hookTimeout: 60_000,
         },
       },
+      {
+        // Component tests: React on a DOM implementation from npm (happy-dom), no server, no browser.
+        test: {
+          name: 'client',
+          include: ['tests/client/**/*.test.{ts,tsx}'],
+          environment: 'happy-dom',
+          setupFiles: ['tests/client/setup.ts'],
+        },
+      },
     ],
   },
 });

@@ -4,7 +4,7 @@ import type { AppContext } from '../app-context';
 import { AppError } from '../errors';
 import { CatalogService } from '../services/catalog.service';
 import { CatalogImportService } from '../services/catalog-import.service';
-import { formatCatalogCsv } from '../services/catalog-csv';
+import { formatCatalogCsv } from '../lib/catalog-csv';
 import { catalogEditors, planEditors, planningReaders } from './planning-access';
 import { idParamSchema } from '../../shared/schemas/common';
 import {

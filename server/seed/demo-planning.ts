@@ -13,7 +13,7 @@ import { RoundupEntity } from '../entities/roundup.entity';
 import { SampleEntity } from '../entities/sample.entity';
 import type { UserEntity } from '../entities/user.entity';
 import { recordAudit } from '../services/audit.service';
-import { productColumnsFromInput } from '../services/product-fields';
+import { productColumnsFromInput } from '../mappers/product-fields';
 import { calendarDateIn } from '../../shared/domain/planning/loan-overdue';
 import type { CellState } from '../../shared/domain/planning/matrix-cell-states';
 import type { RoundupState } from '../../shared/domain/planning/roundup-states';

@@ -4,9 +4,9 @@ import { BenchProfileEntity } from '../entities/bench-profile.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
 import { conflict, notFound } from '../errors';
 import { recordAudit } from './audit.service';
-import { archivedWhere, isDuplicateKey } from './database-errors';
-import { decimalToNumber } from './dto-values';
-import { recordPlanChange } from './roundup-audit';
+import { archivedWhere, isDuplicateKey } from '../lib/database-errors';
+import { decimalToNumber } from '../mappers/dto-values';
+import { recordPlanChange } from '../lib/roundup-audit';
 import { planEditableStates } from '../../shared/domain/planning/roundup-states';
 import type {
   BenchProfile,

@@ -4,9 +4,9 @@ import { ProductEntity } from '../entities/product.entity';
 import { ProductPriceEntity } from '../entities/product-price.entity';
 import { AppError, conflict } from '../errors';
 import { recordAudit } from './audit.service';
-import { parseCatalogCsv } from './catalog-csv';
-import { changedProductFields, productColumnsFromInput, productInputFromEntity } from './product-fields';
-import { isDuplicateKey } from './database-errors';
+import { parseCatalogCsv } from '../lib/catalog-csv';
+import { changedProductFields, productColumnsFromInput, productInputFromEntity } from '../mappers/product-fields';
+import { isDuplicateKey } from '../lib/database-errors';
 import type {
   CatalogImportPreview,
   CatalogImportResult,

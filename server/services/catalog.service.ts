@@ -5,8 +5,8 @@ import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
 import { AppError, conflict, notFound } from '../errors';
 import { recordAudit } from './audit.service';
-import { likeContains } from './dto-values';
-import { loadPeople } from './people';
+import { likeContains } from '../mappers/dto-values';
+import { loadPeople } from '../mappers/people';
 import {
   changedProductFields,
   latestPricesByProduct,
@@ -15,8 +15,8 @@ import {
   productInputFromEntity,
   toPriceDto,
   toProductDto,
-} from './product-fields';
-import { isDuplicateKey } from './database-errors';
+} from '../mappers/product-fields';
+import { isDuplicateKey } from '../lib/database-errors';
 import {
   createProductRequestSchema,
   type createPriceRequestSchema,

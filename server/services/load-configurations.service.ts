@@ -5,9 +5,9 @@ import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configu
 import { RoundupEntity } from '../entities/roundup.entity';
 import { conflict, invalid, notFound } from '../errors';
 import { recordAudit } from './audit.service';
-import { archivedWhere, isDuplicateKey } from './database-errors';
-import { decimalToNumber } from './dto-values';
-import { recordPlanChange } from './roundup-audit';
+import { archivedWhere, isDuplicateKey } from '../lib/database-errors';
+import { decimalToNumber } from '../mappers/dto-values';
+import { recordPlanChange } from '../lib/roundup-audit';
 import { planEditableStates } from '../../shared/domain/planning/roundup-states';
 import type {
   createLoadConfigurationRequestSchema,

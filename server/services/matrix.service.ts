@@ -8,8 +8,8 @@ import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configu
 import { RoundupEntity } from '../entities/roundup.entity';
 import { UserEntity } from '../entities/user.entity';
 import { AppError, forbidden, invalid, notFound } from '../errors';
-import { loadPeople } from './people';
-import { recordPlanChange } from './roundup-audit';
+import { loadPeople } from '../mappers/people';
+import { recordPlanChange } from '../lib/roundup-audit';
 import { productBriefs, progressByRoundup, toMatrixCellDto, emptyProgress } from './roundup-read-model';
 import { assertPlanEditable, lockRoundup } from './roundups.service';
 import {

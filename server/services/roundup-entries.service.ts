@@ -7,10 +7,10 @@ import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configu
 import { RoundupEntity } from '../entities/roundup.entity';
 import { SampleEntity } from '../entities/sample.entity';
 import { AppError, conflict, invalid, notFound } from '../errors';
-import { isDuplicateKey } from './database-errors';
-import { loadPeople } from './people';
-import { priceHistoryByProduct, toProductBrief } from './product-fields';
-import { recordPlanChange } from './roundup-audit';
+import { isDuplicateKey } from '../lib/database-errors';
+import { loadPeople } from '../mappers/people';
+import { priceHistoryByProduct, toProductBrief } from '../mappers/product-fields';
+import { recordPlanChange } from '../lib/roundup-audit';
 import { priceCheckFor, roundupEntries } from './roundup-read-model';
 import { assertPlanEditable, lockRoundup } from './roundups.service';
 import { cellStateLabels, statesWithWork } from '../../shared/domain/planning/matrix-cell-states';

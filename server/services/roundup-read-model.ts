@@ -8,8 +8,8 @@ import { ProductPriceEntity } from '../entities/product-price.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
 import { SampleEntity } from '../entities/sample.entity';
-import { loadPeople, personOrNull } from './people';
-import { priceHistoryByProduct, toPriceDto, toProductBrief } from './product-fields';
+import { loadPeople, personOrNull } from '../mappers/people';
+import { priceHistoryByProduct, toPriceDto, toProductBrief } from '../mappers/product-fields';
 import { availableCellActions, cellStates, type CellState } from '../../shared/domain/planning/matrix-cell-states';
 import {
   calendarDateIn,

@@ -10,8 +10,8 @@ import { RoundupEntity } from '../entities/roundup.entity';
 import { AppError, conflict, invalid, notFound } from '../errors';
 import { benchProfileRoundupCounts, toBenchProfileDto } from './bench-profiles.service';
 import { loadConfigurationRoundupCounts, toLoadConfigurationDto } from './load-configurations.service';
-import { loadPeople, personOrNull } from './people';
-import { recordPlanChange } from './roundup-audit';
+import { loadPeople, personOrNull } from '../mappers/people';
+import { recordPlanChange } from '../lib/roundup-audit';
 import { bandOf, roundupEntries, roundupSummaries } from './roundup-read-model';
 import { cellStateLabels, statesWithWork } from '../../shared/domain/planning/matrix-cell-states';
 import {

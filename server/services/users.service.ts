@@ -4,7 +4,7 @@ import { SessionEntity } from '../entities/session.entity';
 import { hashPassword } from '../auth/passwords';
 import { AppError, conflict, notFound } from '../errors';
 import { recordAudit } from './audit.service';
-import { isDuplicateKey } from './database-errors';
+import { isDuplicateKey } from '../lib/database-errors';
 import type { CreateUserRequest, UpdateUserRequest, User } from '../../shared/schemas/users';
 import type { CurrentUser } from '../../shared/schemas/auth';
 

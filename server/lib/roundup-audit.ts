@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import { recordAudit } from './audit.service';
+import { recordAudit } from '../services/audit.service';
 import type { CurrentUser } from '../../shared/schemas/auth';
 
 /**

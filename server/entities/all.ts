@@ -14,6 +14,10 @@ import { RoundupEntity } from './roundup.entity';
 import { SampleEntity } from './sample.entity';
 import { SessionEntity } from './session.entity';
 import { UserEntity } from './user.entity';
+import { StoredFileEntity } from './stored-file.entity';
+import { TestRunEntity } from './test-run.entity';
+import { RunAnalysisEntity } from './run-analysis.entity';
+import { PhotoEntity } from './photo.entity';
 
 export const entities = [
   UserEntity,
@@ -31,4 +35,8 @@ export const entities = [
   BenchEntity,
   BenchBookingEntity,
   BenchBookingCellEntity,
+  StoredFileEntity,
+  TestRunEntity,
+  RunAnalysisEntity,
+  PhotoEntity,
 ];

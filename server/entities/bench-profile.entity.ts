@@ -1,3 +1,4 @@
+import type { ColumnMapping } from '../../shared/schemas/analysis';
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 
 /** A reusable description of the test system and the conditions a roundup is measured under. */
@@ -40,6 +41,10 @@ export class BenchProfileEntity {
 
   @Column({ type: 'text', nullable: true })
   notes: string | null;
+
+  /** The logger column mapping last confirmed on this profile; the next upload starts from it. */
+  @Column({ type: 'json', name: 'log_mapping', nullable: true })
+  logMapping: ColumnMapping | null;
 
   @Column({ type: 'datetime', precision: 3, name: 'archived_at', nullable: true })
   archivedAt: Date | null;

@@ -3,8 +3,8 @@ import type { CellState } from '../../shared/domain/planning/matrix-cell-states'
 import { cellStates } from '../../shared/domain/planning/matrix-cell-states';
 
 /**
- * One roundup entry × one load configuration: its state, tester and due date. Test runs (bench capture)
- * will reference this row.
+ * One roundup entry × one load configuration: its state, tester and due date. Test runs reference this row;
+ * the editor marks one of them the run of record.
  */
 @Entity({ name: 'matrix_cells' })
 @Index('uq_matrix_cells_entry_config', ['entryId', 'loadConfigurationId'], { unique: true })
@@ -34,6 +34,10 @@ export class MatrixCellEntity {
 
   @Column({ type: 'varchar', length: 500, nullable: true })
   note: string | null;
+
+  /** The run the editor chose to stand for this cell in results and charts. */
+  @Column({ type: 'int', unsigned: true, name: 'run_of_record_id', nullable: true })
+  runOfRecordId: number | null;
 
   @Column({ type: 'datetime', precision: 3, name: 'assigned_at', nullable: true })
   assignedAt: Date | null;

@@ -1,3 +1,4 @@
+import type { VerdictRubric } from '../../shared/schemas/analysis';
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import type { RoundupState } from '../../shared/domain/planning/roundup-states';
 import { roundupStates } from '../../shared/domain/planning/roundup-states';
@@ -38,6 +39,10 @@ export class RoundupEntity {
   /** IANA zone of the outlet for this roundup: due and return-by dates end at its midnight. */
   @Column({ type: 'varchar', length: 64, name: 'time_zone' })
   timeZone: string;
+
+  /** The verdict rubric an editor set for this roundup; null means the engine's defaults. */
+  @Column({ type: 'json', name: 'verdict_rubric', nullable: true })
+  verdictRubric: VerdictRubric | null;
 
   @Column({ type: 'int', unsigned: true, name: 'bench_profile_id', nullable: true })
   benchProfileId: number | null;

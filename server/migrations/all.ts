@@ -12,6 +12,11 @@ import { CreateSamples1765100009000 } from './1765100009000-create-samples';
 import { CreateBenches1765100010000 } from './1765100010000-create-benches';
 import { CreateBenchBookings1765100011000 } from './1765100011000-create-bench-bookings';
 import { CreateBenchBookingCells1765100012000 } from './1765100012000-create-bench-booking-cells';
+import { CreateStoredFiles1765200001000 } from './1765200001000-create-stored-files';
+import { CreateTestRuns1765200002000 } from './1765200002000-create-test-runs';
+import { CreateRunAnalyses1765200003000 } from './1765200003000-create-run-analyses';
+import { CreatePhotos1765200004000 } from './1765200004000-create-photos';
+import { CaptureSettings1765200005000 } from './1765200005000-capture-settings';
 
 export const migrations = [
   CreateUsersSessionsAudit1764600000000,
@@ -27,4 +32,9 @@ export const migrations = [
   CreateBenches1765100010000,
   CreateBenchBookings1765100011000,
   CreateBenchBookingCells1765100012000,
+  CreateStoredFiles1765200001000,
+  CreateTestRuns1765200002000,
+  CreateRunAnalyses1765200003000,
+  CreatePhotos1765200004000,
+  CaptureSettings1765200005000,
 ];

@@ -1,0 +1,59 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+
+export const photoKinds = ['overview', 'power-delivery', 'heatsinks', 'thermal-image', 'other'] as const;
+
+export interface PhotoDerivativeRecord {
+  width: number;
+  height: number;
+  format: 'webp' | 'jpeg';
+  key: string;
+  bytes: number;
+}
+
+/** A photo of a product within a roundup. Only the web sizes are kept; the upload itself is not stored. */
+@Entity({ name: 'photos' })
+@Index('ix_photos_entry', ['entryId', 'position'])
+export class PhotoEntity {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Index('ix_photos_roundup')
+  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+  roundupId: number;
+
+  @Column({ type: 'int', unsigned: true, name: 'roundup_entry_id' })
+  entryId: number;
+
+  @Column({ type: 'enum', enum: photoKinds })
+  kind: (typeof photoKinds)[number];
+
+  @Column({ type: 'varchar', length: 300, default: '' })
+  caption: string;
+
+  @Column({ type: 'varchar', length: 300, name: 'alt_text' })
+  altText: string;
+
+  @Column({ type: 'int', unsigned: true })
+  position: number;
+
+  @Column({ type: 'int', unsigned: true })
+  width: number;
+
+  @Column({ type: 'int', unsigned: true })
+  height: number;
+
+  @Column({ type: 'char', length: 64, name: 'source_sha256' })
+  sourceSha256: string;
+
+  @Column({ type: 'json' })
+  derivatives: PhotoDerivativeRecord[];
+
+  @Column({ type: 'int', unsigned: true, name: 'uploaded_by' })
+  uploadedBy: number;
+
+  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
+  updatedAt: Date;
+}

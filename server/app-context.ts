@@ -1,10 +1,10 @@
 import type { DataSource } from 'typeorm';
 import type { Env } from './env';
-import type { SessionStore } from './auth/session-store';
+import type { Services } from './compose-services';
 
-/** What every feature's routes receive: the database, the session store and the validated config. */
+/** What every feature's routes receive: the database, the validated config and the services built once. */
 export interface AppContext {
   dataSource: DataSource;
-  sessions: SessionStore;
   env: Env;
+  services: Services;
 }

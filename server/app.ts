@@ -5,8 +5,8 @@ import { resolve } from 'node:path';
 import type { DataSource } from 'typeorm';
 import { ApiRegistry } from './api-registry';
 import type { AppContext } from './app-context';
-import { createSessionStore } from './auth/session-store';
-import { parseTrustProxy, type Env } from './env';
+import { createServices, type Services } from './compose-services';
+import { parseTrustProxy, secureCookieFor, type Env } from './env';
 import { authenticate } from './middleware/authenticate';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { verifyOrigin } from './middleware/verify-origin';
@@ -17,13 +17,19 @@ export interface CreateAppOptions {
   env: Env;
   /** Serve the built client from this folder (production); omitted in API tests and in development. */
   clientDir?: string;
+  /** The services built once by the caller (server start-up shares them with jobs); built here when omitted. */
+  services?: Services;
 }
 
 /** Builds the Express app (no listen): API, then the built client. Tests import this. */
-export function createApp({ dataSource, env, clientDir }: CreateAppOptions) {
-  const secureCookie = env.COOKIE_SECURE === 'auto' ? env.NODE_ENV === 'production' : env.COOKIE_SECURE === 'true';
-  const sessions = createSessionStore(dataSource, { secureCookie, sessionDays: env.SESSION_DAYS });
-  const context: AppContext = { dataSource, sessions, env };
+export function createApp({
+  dataSource,
+  env,
+  clientDir,
+  services = createServices(dataSource, env),
+}: CreateAppOptions) {
+  const secureCookie = secureCookieFor(env);
+  const context: AppContext = { dataSource, env, services };
 
   const app = express();
   app.disable('x-powered-by');
@@ -50,7 +56,7 @@ export function createApp({ dataSource, env, clientDir }: CreateAppOptions) {
   registerFeatureRoutes(api, context);
   app.locals.api = api;
 
-  app.use('/api', express.json({ limit: '1mb' }), verifyOrigin, authenticate(sessions));
+  app.use('/api', express.json({ limit: '1mb' }), verifyOrigin, authenticate(services.sessions));
   app.use(api.router);
   app.use('/api', apiNotFound);
 

@@ -53,6 +53,11 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
   return parsed.data;
 }
 
+/** Whether the session cookie is marked Secure: COOKIE_SECURE, or on in production when left at auto. */
+export function secureCookieFor(env: Env): boolean {
+  return env.COOKIE_SECURE === 'auto' ? env.NODE_ENV === 'production' : env.COOKIE_SECURE === 'true';
+}
+
 export function parseTrustProxy(value: string): boolean | number | string {
   if (value === 'true') return true;
   if (value === 'false' || value === '') return false;

@@ -1,13 +1,16 @@
 import { resolve } from 'node:path';
 import { createApp } from './app';
+import { createServices } from './compose-services';
 import { createDataSource, initializeDataSource } from './data-source';
 import { loadEnv } from './env';
 
 const env = loadEnv();
 const dataSource = await initializeDataSource(createDataSource(env.DATABASE_URL, { logging: env.DB_LOGGING }));
+const services = createServices(dataSource, env);
 const app = createApp({
   dataSource,
   env,
+  services,
   clientDir: env.NODE_ENV === 'production' ? resolve(import.meta.dirname, '..', 'dist', 'client') : undefined,
 });
 

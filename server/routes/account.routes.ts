@@ -1,12 +1,11 @@
 import { z } from 'zod';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { AuthService } from '../services/auth.service';
 import { changePasswordRequestSchema, sessionListSchema } from '../../shared/schemas/auth';
 import { okSchema } from '../../shared/schemas/common';
 
-export function registerAccountRoutes(api: ApiRegistry, { dataSource, sessions }: AppContext) {
-  const auth = new AuthService(dataSource, sessions);
+export function registerAccountRoutes(api: ApiRegistry, { services }: AppContext) {
+  const auth = services.auth;
 
   api.add({
     method: 'post',

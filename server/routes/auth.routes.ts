@@ -1,13 +1,12 @@
 import { rateLimit } from 'express-rate-limit';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { AuthService } from '../services/auth.service';
 import { AppError } from '../errors';
 import { sessionResponseSchema, signInRequestSchema } from '../../shared/schemas/auth';
 import { okSchema } from '../../shared/schemas/common';
 
-export function registerAuthRoutes(api: ApiRegistry, { dataSource, sessions, env }: AppContext) {
-  const auth = new AuthService(dataSource, sessions);
+export function registerAuthRoutes(api: ApiRegistry, { services, env }: AppContext) {
+  const { auth, sessions } = services;
   const windowMs = env.SIGN_IN_WINDOW_MINUTES * 60_000;
   const tooMany = () => {
     throw new AppError('rate_limited', 429, 'Too many sign-in attempts. Wait a few minutes and try again.');

@@ -1,6 +1,5 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { BenchProfilesService } from '../services/bench-profiles.service';
 import { planEditors, planningReaders } from './planning-access';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
@@ -11,8 +10,8 @@ import {
   updateBenchProfileRequestSchema,
 } from '../../shared/schemas/bench-profiles';
 
-export function registerBenchProfileRoutes(api: ApiRegistry, { dataSource }: AppContext) {
-  const profiles = new BenchProfilesService(dataSource);
+export function registerBenchProfileRoutes(api: ApiRegistry, { services }: AppContext) {
+  const profiles = services.benchProfiles;
 
   api.add({
     method: 'get',

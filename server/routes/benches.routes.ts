@@ -1,6 +1,5 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { BenchesService } from '../services/benches.service';
 import { benchWorkers, bookers, planEditors, planningReaders } from './planning-access';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
@@ -15,8 +14,8 @@ import {
   updateBenchRequestSchema,
 } from '../../shared/schemas/benches';
 
-export function registerBenchRoutes(api: ApiRegistry, { dataSource }: AppContext) {
-  const benches = new BenchesService(dataSource);
+export function registerBenchRoutes(api: ApiRegistry, { services }: AppContext) {
+  const benches = services.benches;
 
   api.add({
     method: 'get',

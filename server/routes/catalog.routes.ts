@@ -2,8 +2,6 @@ import multer from 'multer';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
 import { AppError } from '../errors';
-import { CatalogService } from '../services/catalog.service';
-import { CatalogImportService } from '../services/catalog-import.service';
 import { formatCatalogCsv } from '../lib/catalog-csv';
 import { catalogEditors, planEditors, planningReaders } from './planning-access';
 import { idParamSchema } from '../../shared/schemas/common';
@@ -41,9 +39,9 @@ function csvFrom(file: Express.Multer.File | undefined, body: { csv?: string }):
   return text;
 }
 
-export function registerCatalogRoutes(api: ApiRegistry, { dataSource }: AppContext) {
-  const catalog = new CatalogService(dataSource);
-  const importer = new CatalogImportService(dataSource);
+export function registerCatalogRoutes(api: ApiRegistry, { services }: AppContext) {
+  const catalog = services.catalog;
+  const importer = services.catalogImport;
 
   api.add({
     method: 'get',

@@ -1,6 +1,5 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { LoadConfigurationsService } from '../services/load-configurations.service';
 import { planEditors, planningReaders } from './planning-access';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
@@ -11,8 +10,8 @@ import {
   updateLoadConfigurationRequestSchema,
 } from '../../shared/schemas/load-configurations';
 
-export function registerLoadConfigurationRoutes(api: ApiRegistry, { dataSource }: AppContext) {
-  const configurations = new LoadConfigurationsService(dataSource);
+export function registerLoadConfigurationRoutes(api: ApiRegistry, { services }: AppContext) {
+  const configurations = services.loadConfigurations;
 
   api.add({
     method: 'get',

@@ -1,6 +1,5 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { MatrixService } from '../services/matrix.service';
 import { benchWorkers, planEditors, planningReaders } from './planning-access';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
@@ -13,8 +12,8 @@ import {
   testerListSchema,
 } from '../../shared/schemas/matrix';
 
-export function registerMatrixRoutes(api: ApiRegistry, { dataSource }: AppContext) {
-  const matrix = new MatrixService(dataSource);
+export function registerMatrixRoutes(api: ApiRegistry, { services }: AppContext) {
+  const matrix = services.matrix;
 
   api.add({
     method: 'get',

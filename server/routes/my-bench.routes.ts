@@ -1,14 +1,12 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { DashboardService } from '../services/dashboard.service';
-import { MyBenchService } from '../services/my-bench.service';
 import { bookers } from './planning-access';
 import { myBenchSchema } from '../../shared/schemas/benches';
 import { dashboardSchema } from '../../shared/schemas/dashboard';
 
-export function registerMyBenchRoutes(api: ApiRegistry, { dataSource }: AppContext) {
-  const myBench = new MyBenchService(dataSource);
-  const dashboard = new DashboardService(dataSource);
+export function registerMyBenchRoutes(api: ApiRegistry, { services }: AppContext) {
+  const myBench = services.myBench;
+  const dashboard = services.dashboard;
 
   api.add({
     method: 'get',

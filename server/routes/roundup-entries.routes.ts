@@ -1,6 +1,5 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { RoundupEntriesService } from '../services/roundup-entries.service';
 import { planEditors, planningReaders } from './planning-access';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
@@ -12,8 +11,8 @@ import {
   roundupSuggestionsSchema,
 } from '../../shared/schemas/roundups';
 
-export function registerRoundupEntryRoutes(api: ApiRegistry, { dataSource }: AppContext) {
-  const entries = new RoundupEntriesService(dataSource);
+export function registerRoundupEntryRoutes(api: ApiRegistry, { services }: AppContext) {
+  const entries = services.roundupEntries;
 
   api.add({
     method: 'get',

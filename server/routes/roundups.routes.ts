@@ -1,6 +1,5 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { RoundupsService } from '../services/roundups.service';
 import { planEditors, planningReaders } from './planning-access';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
@@ -14,8 +13,8 @@ import {
   updateRoundupRequestSchema,
 } from '../../shared/schemas/roundups';
 
-export function registerRoundupRoutes(api: ApiRegistry, { dataSource }: AppContext) {
-  const roundups = new RoundupsService(dataSource);
+export function registerRoundupRoutes(api: ApiRegistry, { services }: AppContext) {
+  const roundups = services.roundups;
 
   api.add({
     method: 'get',

@@ -1,6 +1,5 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { SamplesService } from '../services/samples.service';
 import { benchWorkers, planningReaders } from './planning-access';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
@@ -10,8 +9,8 @@ import {
   updateSampleRequestSchema,
 } from '../../shared/schemas/samples';
 
-export function registerSampleRoutes(api: ApiRegistry, { dataSource }: AppContext) {
-  const samples = new SamplesService(dataSource);
+export function registerSampleRoutes(api: ApiRegistry, { services }: AppContext) {
+  const samples = services.samples;
 
   api.add({
     method: 'get',

@@ -1,6 +1,5 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { UsersService } from '../services/users.service';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
   createUserRequestSchema,
@@ -9,8 +8,8 @@ import {
   userSchema,
 } from '../../shared/schemas/users';
 
-export function registerUserRoutes(api: ApiRegistry, { dataSource }: AppContext) {
-  const users = new UsersService(dataSource);
+export function registerUserRoutes(api: ApiRegistry, { services }: AppContext) {
+  const users = services.users;
 
   api.add({
     method: 'get',

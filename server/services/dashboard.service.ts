@@ -1,6 +1,6 @@
 import { type DataSource } from 'typeorm';
 import { RoundupEntity } from '../entities/roundup.entity';
-import { MyBenchService } from './my-bench.service';
+import type { MyBenchService } from './my-bench.service';
 import { roundupSummaries, samplesOfRoundups } from './roundup-read-model';
 import { roundupStates } from '../../shared/domain/planning/roundup-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
@@ -8,11 +8,10 @@ import type { Dashboard } from '../../shared/schemas/dashboard';
 
 /** The home page per role: editors steer, testers see their work, everyone else sees where roundups stand. */
 export class DashboardService {
-  private readonly myBench: MyBenchService;
-
-  constructor(private readonly dataSource: DataSource) {
-    this.myBench = new MyBenchService(dataSource);
-  }
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly myBench: MyBenchService,
+  ) {}
 
   async forUser(user: CurrentUser): Promise<Dashboard> {
     if (user.role === 'tester') return { view: 'tester', ...(await this.myBench.forUser(user)) };

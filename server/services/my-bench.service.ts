@@ -1,7 +1,7 @@
 import { In, MoreThan, type DataSource } from 'typeorm';
 import { BenchBookingEntity } from '../entities/bench-booking.entity';
 import { MatrixCellEntity } from '../entities/matrix-cell.entity';
-import { BenchesService } from './benches.service';
+import type { BenchesService } from './benches.service';
 import { queueItems } from './roundup-read-model';
 import { queueStates } from '../../shared/domain/planning/matrix-cell-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
@@ -22,11 +22,10 @@ export function byDueDate(a: QueueItem, b: QueueItem): number {
 
 /** A tester's own queue, recorded cells waiting for the editor, and upcoming bookings. */
 export class MyBenchService {
-  private readonly benches: BenchesService;
-
-  constructor(private readonly dataSource: DataSource) {
-    this.benches = new BenchesService(dataSource);
-  }
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly benches: BenchesService,
+  ) {}
 
   async forUser(user: CurrentUser): Promise<MyBench> {
     const manager = this.dataSource.manager;

@@ -1,0 +1,63 @@
+import type { DataSource } from 'typeorm';
+import { createSessionStore } from './auth/session-store';
+import { secureCookieFor, type Env } from './env';
+import { AuthService } from './services/auth.service';
+import { BenchProfilesService } from './services/bench-profiles.service';
+import { BenchesService } from './services/benches.service';
+import { CatalogImportService } from './services/catalog-import.service';
+import { CatalogService } from './services/catalog.service';
+import { DashboardService } from './services/dashboard.service';
+import { LoadConfigurationsService } from './services/load-configurations.service';
+import { MatrixService } from './services/matrix.service';
+import { MyBenchService } from './services/my-bench.service';
+import { RoundupEntriesService } from './services/roundup-entries.service';
+import { RoundupsService } from './services/roundups.service';
+import { SamplesService } from './services/samples.service';
+import { UsersService } from './services/users.service';
+import { createFileStore } from './storage/create-file-store';
+
+/**
+ * The one place that builds every service, each once, handing services their collaborators. Routes (through
+ * AppContext), the CLI, jobs and reader pages take what they need from here instead of building their own.
+ */
+export function createServices(dataSource: DataSource, env: Env) {
+  const sessions = createSessionStore(dataSource, {
+    secureCookie: secureCookieFor(env),
+    sessionDays: env.SESSION_DAYS,
+  });
+  const files = createFileStore(env);
+
+  const auth = new AuthService(dataSource, sessions);
+  const users = new UsersService(dataSource);
+  const catalog = new CatalogService(dataSource);
+  const catalogImport = new CatalogImportService(dataSource);
+  const benchProfiles = new BenchProfilesService(dataSource);
+  const loadConfigurations = new LoadConfigurationsService(dataSource);
+  const roundups = new RoundupsService(dataSource);
+  const roundupEntries = new RoundupEntriesService(dataSource);
+  const matrix = new MatrixService(dataSource);
+  const samples = new SamplesService(dataSource);
+  const benches = new BenchesService(dataSource);
+  const myBench = new MyBenchService(dataSource, benches);
+  const dashboard = new DashboardService(dataSource, myBench);
+
+  return {
+    sessions,
+    files,
+    auth,
+    users,
+    catalog,
+    catalogImport,
+    benchProfiles,
+    loadConfigurations,
+    roundups,
+    roundupEntries,
+    matrix,
+    samples,
+    benches,
+    myBench,
+    dashboard,
+  };
+}
+
+export type Services = ReturnType<typeof createServices>;

@@ -1,4 +1,4 @@
-import type { z } from 'zod';
+import { z } from 'zod';
 import { apiErrorSchema } from '../../shared/schemas/common';
 
 /** An API answer other than 2xx, or no answer at all (status 0), in the server's `{ error }` shape. */
@@ -8,13 +8,18 @@ export class ApiError extends Error {
   readonly fields: Record<string, string>;
   /** Seconds to wait before trying again, when the server said so (rate limits). */
   readonly retryAfterSeconds: number | null;
+  /**
+   * What the server attached beyond the message, e.g. the row-and-column problems of a file it could not read. Read it
+   * with the schema of that endpoint's error; it is unknown until then.
+   */
+  readonly details: unknown;
 
   constructor(
     status: number,
     code: string,
     message: string,
     fields: Record<string, string> = {},
-    retryAfterSeconds: number | null = null,
+    { retryAfterSeconds = null, details = null }: { retryAfterSeconds?: number | null; details?: unknown } = {},
   ) {
     super(message);
     this.name = 'ApiError';
@@ -22,6 +27,7 @@ export class ApiError extends Error {
     this.code = code;
     this.fields = fields;
     this.retryAfterSeconds = retryAfterSeconds;
+    this.details = details;
   }
 }
 
@@ -55,30 +61,69 @@ const fallbackMessages: Record<number, string> = {
   0: 'Benchwire could not reach the server. Check the connection and try again.',
   403: 'Your role may not do this.',
   404: 'That was not found.',
+  413: 'The file is larger than the server accepts.',
   500: 'Something went wrong on the server.',
 };
 
-function retryAfter(response: Response): number | null {
-  const header = response.headers.get('retry-after');
+/** No answer at all: the network, not the server. */
+export function networkError(): ApiError {
+  return new ApiError(0, 'network_error', fallbackMessages[0]);
+}
+
+/** A 2xx answer whose body does not match the endpoint's schema. */
+export function unexpectedResponseError(status: number): ApiError {
+  return new ApiError(status, 'unexpected_response', 'The server sent an answer this page does not understand.');
+}
+
+// The shared shape, plus the details an error may carry (kept whatever their shape; the caller reads them).
+const errorBodySchema = z.object({
+  error: apiErrorSchema.shape.error.extend({ details: z.unknown().optional() }),
+});
+
+/** Until every route sends `error.details`, an older answer may carry them beside `error` (the log check's 422). */
+function besideError(body: unknown): unknown {
+  if (typeof body !== 'object' || body === null) return null;
+  const { error: _error, ...rest } = body as Record<string, unknown>;
+  return Object.keys(rest).length > 0 ? rest : null;
+}
+
+function parseRetryAfter(header: string | null): number | null {
   if (!header) return null;
   const seconds = Number(header);
   return Number.isFinite(seconds) && seconds >= 0 ? seconds : null;
 }
 
-async function readError(response: Response): Promise<ApiError> {
-  let body: unknown = null;
-  try {
-    body = await response.json();
-  } catch {
-    // A proxy or a crashed server may answer with HTML or nothing; the status still tells the story.
-  }
-  const parsed = apiErrorSchema.safeParse(body);
+/**
+ * Turns a non-2xx answer into an ApiError: the server's `{ error: { code, message, fields?, details? } }` when it sent
+ * one, else a plain message for the status. Every request path (fetch and upload) reads errors through this.
+ */
+export function apiErrorFrom(status: number, body: unknown, retryAfterHeader: string | null = null): ApiError {
+  const retryAfterSeconds = parseRetryAfter(retryAfterHeader);
+  const parsed = errorBodySchema.safeParse(body);
   if (parsed.success) {
-    const { code, message, fields } = parsed.data.error;
-    return new ApiError(response.status, code, message, fields ?? {}, retryAfter(response));
+    const { code, message, fields, details } = parsed.data.error;
+    return new ApiError(status, code, message, fields ?? {}, {
+      retryAfterSeconds,
+      details: details ?? besideError(body),
+    });
   }
-  const message = fallbackMessages[response.status] ?? fallbackMessages[500];
-  return new ApiError(response.status, `http_${response.status}`, message, {}, retryAfter(response));
+  // A proxy or a crashed server may answer with HTML or nothing; the status still tells the story.
+  const message = fallbackMessages[status] ?? fallbackMessages[500];
+  return new ApiError(status, `http_${status}`, message, {}, { retryAfterSeconds });
+}
+
+/** JSON text as the server sent it, or null when it is not JSON. */
+export function parseJsonBody(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return null;
+  }
+}
+
+async function readError(response: Response): Promise<ApiError> {
+  const body = parseJsonBody(await response.text().catch(() => ''));
+  return apiErrorFrom(response.status, body, response.headers.get('retry-after'));
 }
 
 /** JSON over fetch, same-origin cookies, one error type. */
@@ -98,7 +143,7 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
     });
   } catch (error) {
     if (signal?.aborted) throw error;
-    throw new ApiError(0, 'network_error', fallbackMessages[0]);
+    throw networkError();
   }
 
   if (!response.ok) {
@@ -113,13 +158,7 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
   const data: unknown = await response.json();
   if (!schema) return data as T;
   const checked = schema.safeParse(data);
-  if (!checked.success) {
-    throw new ApiError(
-      response.status,
-      'unexpected_response',
-      'The server sent an answer this page does not understand.',
-    );
-  }
+  if (!checked.success) throw unexpectedResponseError(response.status);
   return checked.data;
 }
 

@@ -1,6 +1,7 @@
 import { useId, useRef, useState, type DragEvent } from 'react';
 import { cx } from '../../../lib/class-names';
-import { formatBytes } from './format-figures';
+import { formatBytes } from '../../../lib/upload-size';
+import { maxLogBytes } from '../api/analyse-log';
 
 export interface LogFilePickerProps {
   file: File | null;
@@ -99,8 +100,8 @@ export function LogFilePicker({ file, onChoose, error, disabled = false }: LogFi
           </p>
         )}
         <p id={hintId} className="mt-1 text-[0.8125rem] text-muted">
-          A CSV, TSV or text export of the logger, up to 25{'\u2009'}MB. Nothing is saved: the file is read and
-          analysed, then forgotten.
+          A CSV, TSV or text export of the logger, up to {formatBytes(maxLogBytes)}. Nothing is saved: the file is read
+          and analysed, then forgotten.
         </p>
       </div>
       {file && (

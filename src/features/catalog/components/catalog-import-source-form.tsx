@@ -1,0 +1,107 @@
+import { useId, type FormEvent } from 'react';
+import { Button } from '../../../components/ui/button';
+import { Panel } from '../../../components/ui/panel';
+import { TextArea } from '../../../components/ui/text-area';
+import { UploadProgress } from '../../../components/ui/upload-progress';
+import { formatBytes } from '../../../lib/upload-size';
+import type { CatalogImportFlow } from './use-catalog-import';
+
+const sourceModes = [
+  ['file', 'A file'],
+  ['paste', 'Pasted text'],
+] as const;
+
+/** Step 1: a CSV file or pasted text, checked by the server without saving anything. */
+export function CatalogImportSourceForm({ flow }: { flow: CatalogImportFlow }) {
+  const fileInputId = useId();
+  const fileHintId = useId();
+  const fileErrorId = useId();
+  const { mode, file, sourceError, sending } = flow;
+  const busy = sending !== null;
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    void flow.check();
+  };
+
+  return (
+    <Panel title="1 · Choose the file" description="Checking saves nothing; you see every row first.">
+      <form noValidate onSubmit={submit} className="space-y-4">
+        <fieldset>
+          <legend className="mb-1.5 text-sm font-semibold text-ink">Where the CSV comes from</legend>
+          <div className="flex flex-wrap gap-x-5 gap-y-1.5 text-sm">
+            {sourceModes.map(([value, label]) => (
+              <label key={value} className="inline-flex items-center gap-2">
+                <input
+                  type="radio"
+                  name="csv-source"
+                  value={value}
+                  checked={mode === value}
+                  onChange={() => flow.setMode(value)}
+                  className="size-4 accent-copper"
+                />
+                {label}
+              </label>
+            ))}
+          </div>
+        </fieldset>
+
+        <div hidden={mode !== 'file'}>
+          <label htmlFor={fileInputId} className="mb-1 block text-sm font-semibold text-ink">
+            CSV file
+          </label>
+          <input
+            key={flow.fileInputKey}
+            id={fileInputId}
+            type="file"
+            accept=".csv,text/csv"
+            aria-invalid={sourceError ? true : undefined}
+            aria-describedby={[sourceError ? fileErrorId : '', fileHintId].filter(Boolean).join(' ')}
+            onChange={(event) => flow.chooseFile(event.target.files?.[0] ?? null)}
+            className="block w-full text-sm file:mr-3 file:min-h-9 file:rounded-[3px] file:border file:border-edge file:bg-surface file:px-3.5 file:font-medium file:text-ink hover:file:bg-wash"
+          />
+          {sourceError && (
+            <p id={fileErrorId} className="mt-1 flex gap-1.5 text-sm font-medium text-red">
+              <span aria-hidden="true">✕</span>
+              <span>{sourceError}</span>
+            </p>
+          )}
+          <p id={fileHintId} className="mt-1 text-[0.8125rem] text-muted">
+            {file ? `${file.name}, ${formatBytes(file.size)}.` : 'Nothing chosen yet.'} An exported catalog file imports
+            back as it is.
+          </p>
+        </div>
+        {mode === 'paste' && (
+          <TextArea
+            label="CSV text"
+            rows={8}
+            value={flow.pasted}
+            error={sourceError ?? undefined}
+            spellCheck={false}
+            textAreaClassName="font-mono text-[0.8125rem] whitespace-pre"
+            description="Paste the rows with the header row first. You can fix rows here and check again."
+            onChange={(event) => flow.setPasted(event.target.value)}
+          />
+        )}
+
+        <div className="flex flex-wrap items-center gap-3">
+          <Button type="submit" variant="primary" pending={sending?.step === 'preview'} disabled={busy}>
+            Check the file
+          </Button>
+          {mode === 'file' && file && (
+            <Button onClick={() => void flow.editFileAsText()} disabled={busy}>
+              Edit it as text here
+            </Button>
+          )}
+        </div>
+        {sending?.step === 'preview' && (
+          <UploadProgress
+            progress={sending.progress}
+            label="Checking the file"
+            processingText="Uploaded. Checking every row against the catalog…"
+          />
+        )}
+      </form>
+    </Panel>
+  );
+}

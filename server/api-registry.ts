@@ -4,6 +4,7 @@ import type { Session } from 'lucia';
 import type { CurrentUser } from '../shared/schemas/auth';
 import type { Role } from '../shared/schemas/common';
 import { AppError } from './errors';
+import { acceptUpload, type MultipartSpec } from './middleware/upload';
 
 /** Who may call a route: anyone, any signed-in user, or the listed roles. */
 export type Access = 'public' | 'signed-in' | readonly Role[];
@@ -36,8 +37,13 @@ export interface RouteSpec<BS extends z.ZodType, QS extends z.ZodType, PS extend
   query?: QS;
   params?: PS;
   response?: z.ZodType;
-  /** multipart/form-data routes list their file fields here (the route adds its own multer middleware). */
-  multipart?: { fields: Record<string, 'file' | 'json' | 'string'> };
+  /**
+   * multipart/form-data routes list their fields and their limits (shared/upload-limits); the registry adds the one
+   * upload middleware (server/middleware/upload); `body` then validates the form's text fields.
+   */
+  multipart?: MultipartSpec;
+  /** Error statuses the route answers besides the usual ones, for the OpenAPI document (schema: the `details`). */
+  errors?: Record<number, { description: string; details?: z.ZodType }>;
   produces?: string;
   successStatus?: number;
   before?: RequestHandler[];
@@ -54,7 +60,8 @@ export interface RegisteredRoute {
   query?: z.ZodType;
   params?: z.ZodType;
   response?: z.ZodType;
-  multipart?: { fields: Record<string, 'file' | 'json' | 'string'> };
+  multipart?: MultipartSpec;
+  errors?: Record<number, { description: string; details?: z.ZodType }>;
   produces?: string;
   successStatus: number;
 }
@@ -116,6 +123,7 @@ export class ApiRegistry {
       // A handler may set its own status (e.g. 503 from the health check); otherwise the route's success status.
       else res.status(res.statusCode !== 200 ? res.statusCode : successStatus).json(result);
     };
-    this.router[spec.method](spec.path, guard, ...(spec.before ?? []), handle);
+    const upload = spec.multipart ? acceptUpload(spec.multipart) : [];
+    this.router[spec.method](spec.path, guard, ...upload, ...(spec.before ?? []), handle);
   }
 }

@@ -1,10 +1,15 @@
-/** The one error type services throw; the error handler turns it into `{ error: { code, message, fields? } }`. */
+/**
+ * The one error type services throw; the error handler turns it into `{ error: { code, message, fields?, details? } }`.
+ * `fields` names form fields and what is wrong with each; `details` carries structured data a client shows beside the
+ * message (for example the rows and columns of a logger file that could not be read).
+ */
 export class AppError extends Error {
   constructor(
     readonly code: string,
     readonly status: number,
     message: string,
     readonly fields?: Record<string, string>,
+    readonly details?: unknown,
   ) {
     super(message);
     this.name = 'AppError';

@@ -12,6 +12,11 @@ function rolesFor(route: RegisteredRoute): string[] {
   return [...route.access];
 }
 
+/** The shared error shape with the route's own `details`. */
+function errorWithDetails(details: z.ZodType) {
+  return z.object({ error: apiErrorSchema.shape.error.extend({ details }) });
+}
+
 /** OpenAPI 3.1 (whose schemas are JSON Schema 2020-12) from the same zod schemas the routes validate with. */
 export function buildOpenApiDocument(routes: RegisteredRoute[]) {
   const paths: Record<string, Record<string, unknown>> = {};
@@ -58,6 +63,26 @@ export function buildOpenApiDocument(routes: RegisteredRoute[]) {
         '400': { description: 'Invalid input', content: errorContent },
         ...(route.access === 'public' ? {} : { '401': { description: 'Not signed in', content: errorContent } }),
         ...(Array.isArray(route.access) ? { '403': { description: 'Role not allowed', content: errorContent } } : {}),
+        ...(route.multipart
+          ? {
+              '413': {
+                description: `File or field over the limit (file at most ${route.multipart.limit.maxFileBytes} bytes)`,
+                content: errorContent,
+              },
+              '415': { description: 'Not multipart/form-data', content: errorContent },
+            }
+          : {}),
+        ...Object.fromEntries(
+          Object.entries(route.errors ?? {}).map(([status, { description, details }]) => [
+            status,
+            {
+              description,
+              content: details
+                ? { 'application/json': { schema: jsonSchema(errorWithDetails(details), 'output') } }
+                : errorContent,
+            },
+          ]),
+        ),
       },
     };
     if (route.body) {
@@ -74,9 +99,11 @@ export function buildOpenApiDocument(routes: RegisteredRoute[]) {
             ? { type: 'string', contentMediaType: 'application/octet-stream' }
             : { type: 'string', description: kind === 'json' ? 'JSON text' : undefined };
       }
+      // Routes with a body schema take either that JSON or the form.
+      const json = (operation.requestBody as { content?: Record<string, unknown> } | undefined)?.content ?? {};
       operation.requestBody = {
         required: true,
-        content: { 'multipart/form-data': { schema: { type: 'object', properties } } },
+        content: { ...json, 'multipart/form-data': { schema: { type: 'object', properties } } },
       };
     }
     paths[openApiPath] ??= {};
@@ -88,7 +115,7 @@ export function buildOpenApiDocument(routes: RegisteredRoute[]) {
       title: 'Benchwire API',
       version: '1',
       description:
-        'JSON API of Benchwire. Sign in with POST /api/auth/sign-in to get the session cookie; every request that changes data must send an Origin header naming this host. Errors are { error: { code, message, fields? } }.',
+        'JSON API of Benchwire. Sign in with POST /api/auth/sign-in to get the session cookie; every request that changes data must send an Origin header naming this host. Errors are { error: { code, message, fields?, details? } }.',
     },
     components: {
       securitySchemes: { sessionCookie: { type: 'apiKey', in: 'cookie', name: 'benchwire_session' } },

@@ -1,5 +1,6 @@
-import type { ErrorRequestHandler, RequestHandler } from 'express';
+import type { ErrorRequestHandler, RequestHandler, Response } from 'express';
 import { AppError } from '../errors';
+import { uploadError } from './upload';
 
 const statusCodes: Record<number, string> = {
   400: 'bad_request',
@@ -17,25 +18,31 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(new AppError('not_found', 404, `No API route ${req.method} ${req.path}.`));
 };
 
-/** The one place errors become `{ error: { code, message, fields? } }`. */
+function sendAppError(res: Response, error: AppError) {
+  const { code, message, fields, details } = error;
+  res.status(error.status).json({ error: { code, message, fields, details } });
+}
+
+/** The one place errors become `{ error: { code, message, fields?, details? } }`. */
 export const errorHandler: ErrorRequestHandler = (error, _req, res, _next) => {
   if (res.headersSent) return;
-  if (error instanceof AppError) {
-    res.status(error.status).json({ error: { code: error.code, message: error.message, fields: error.fields } });
-    return;
-  }
-  // Errors raised by body parsers and multer carry an HTTP status of their own.
+  if (error instanceof AppError) return sendAppError(res, error);
+  // multer and busboy errors carry no HTTP status: each is mapped to its 4xx (the upload middleware does it with the
+  // route's limits in the message; this catches any that reach here another way).
+  const fromUpload = uploadError(error);
+  if (fromUpload) return sendAppError(res, fromUpload);
+  // Errors raised by body parsers carry an HTTP status of their own.
   const status =
     typeof error?.status === 'number' ? error.status : typeof error?.statusCode === 'number' ? error.statusCode : 500;
   if (status >= 400 && status < 500) {
-    const code = error?.code === 'LIMIT_FILE_SIZE' ? 'payload_too_large' : (statusCodes[status] ?? 'bad_request');
+    const code = statusCodes[status] ?? 'bad_request';
     const message =
       error?.type === 'entity.parse.failed'
         ? 'The request body is not valid JSON.'
         : error?.type === 'entity.too.large'
           ? 'The request body is too large.'
           : String(error?.message ?? 'The request was not accepted.');
-    res.status(error?.code === 'LIMIT_FILE_SIZE' ? 413 : status).json({ error: { code, message } });
+    res.status(status).json({ error: { code, message } });
     return;
   }
   console.error(error);

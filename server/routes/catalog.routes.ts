@@ -1,4 +1,3 @@
-import multer from 'multer';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
 import { AppError } from '../errors';
@@ -17,16 +16,14 @@ import {
   productPriceParamsSchema,
   updateProductRequestSchema,
 } from '../../shared/schemas/catalog';
+import { catalogImportUploadLimit } from '../../shared/upload-limits';
 import {
-  CATALOG_IMPORT_MAX_BYTES,
   catalogExportQuerySchema,
   catalogImportCommitRequestSchema,
   catalogImportPreviewRequestSchema,
   catalogImportPreviewSchema,
   catalogImportResultSchema,
 } from '../../shared/schemas/catalog-import';
-
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: CATALOG_IMPORT_MAX_BYTES, files: 1 } });
 
 /** The CSV text from a multipart file (field `file`) or the JSON body's `csv`. */
 function csvFrom(file: Express.Multer.File | undefined, body: { csv?: string }): string {
@@ -145,8 +142,7 @@ export function registerCatalogRoutes(api: ApiRegistry, { services }: AppContext
     tag: 'Catalog',
     summary: 'Check a catalog CSV row by row and show what an import would do. Saves nothing.',
     body: catalogImportPreviewRequestSchema,
-    multipart: { fields: { file: 'file' } },
-    before: [upload.single('file')],
+    multipart: { fields: { file: 'file' }, limit: catalogImportUploadLimit, orJson: true },
     response: catalogImportPreviewSchema,
     successStatus: 200,
     handler: ({ req, body }) => importer.preview(csvFrom(req.file, body)),
@@ -159,8 +155,7 @@ export function registerCatalogRoutes(api: ApiRegistry, { services }: AppContext
     tag: 'Catalog',
     summary: 'Import a previewed CSV (same text + the preview checksum): all rows in one transaction, or none (422).',
     body: catalogImportCommitRequestSchema,
-    multipart: { fields: { file: 'file', checksum: 'string' } },
-    before: [upload.single('file')],
+    multipart: { fields: { file: 'file', checksum: 'string' }, limit: catalogImportUploadLimit, orJson: true },
     response: catalogImportResultSchema,
     successStatus: 200,
     handler: ({ req, user, body }) => importer.commit(user, csvFrom(req.file, body), body.checksum),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { catalogImportUploadLimit } from '../upload-limits';
 import { calendarDateSchema } from './planning-fields';
 
 /**
@@ -47,7 +48,7 @@ export type CatalogCsvColumn = (typeof catalogCsvColumns)[number]['name'];
 
 /** Most rows one import takes; larger files are refused before parsing. */
 export const CATALOG_IMPORT_MAX_ROWS = 2000;
-export const CATALOG_IMPORT_MAX_BYTES = 900_000;
+export const CATALOG_IMPORT_MAX_BYTES = catalogImportUploadLimit.maxFileBytes;
 
 /**
  * Preview or commit a CSV. JSON body `{ csv }`, or multipart/form-data with the file in field `file` (and, for

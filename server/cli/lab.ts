@@ -11,13 +11,16 @@
 import { readFileSync } from 'node:fs';
 import { basename } from 'node:path';
 import { parseArgs } from 'node:util';
-import type { AnalysisResult, ColumnMapping, ParseError, TemperatureUnit } from '../../shared/schemas/analysis';
+import type {
+  AnalysisResult,
+  ColumnMapping,
+  LogPreview,
+  ParseError,
+  TemperatureUnit,
+} from '../../shared/schemas/analysis';
 import { analysisOptionsSchema, temperatureUnits } from '../../shared/schemas/analysis';
-import { previewLog } from '../../shared/domain/analysis/analyse-log';
-import { readMappedLog } from '../../shared/domain/analysis/read-mapped-log';
-import { analyseRun } from '../../shared/domain/analysis/run-analysis';
+import { analyseLogFile, type ChosenMapping } from '../../shared/domain/analysis/analyse-log';
 import { formatRunTime } from '../../shared/domain/analysis/run-time-format';
-import { loggerFileText } from '../../shared/domain/analysis/logger-file-text';
 import {
   ThermocoupleRangeError,
   typeKCelsiusWithColdJunction,
@@ -83,12 +86,6 @@ function numberOption(text: string | undefined, name: string): number | undefine
   const value = Number(text.replace(',', '.'));
   if (!Number.isFinite(value)) throw new UsageError(`--${name} needs a number, not "${text}".`);
   return value;
-}
-
-function readLogText(path: string): string {
-  const text = loggerFileText(readFileSync(path));
-  if (text === null) throw new Error('it is not a text export: save the log as CSV or TSV');
-  return text;
 }
 
 function printParseErrors(errors: ParseError[]): void {
@@ -209,19 +206,13 @@ function analyseCommand(values: ReturnType<typeof readArguments>['values'], posi
   }
   const options = parsedOptions.data;
 
-  let text: string;
+  let bytes: Uint8Array;
   try {
-    text = readLogText(file);
+    bytes = readFileSync(file);
   } catch (error) {
     console.error(`Cannot read ${file}: ${(error as Error).message}`);
     return 1;
   }
-  const previewed = previewLog(text);
-  if (!previewed.ok) {
-    printParseErrors(previewed.errors);
-    return 1;
-  }
-  const guess = previewed.preview.guessedMapping;
   const list = (option: unknown) =>
     typeof option === 'string'
       ? option
@@ -229,39 +220,38 @@ function analyseCommand(values: ReturnType<typeof readArguments>['values'], posi
           .map((name) => name.trim())
           .filter(Boolean)
       : undefined;
+  // Roles named on the command line are used as given; the others are guessed from the header, and said so.
   const guessed: string[] = [];
-  const pick = (role: 'ambient' | 'clock' | 'power') => {
-    const given = values[role];
-    if (given !== undefined) return given;
-    if (guess?.[role]) guessed.push(role);
-    return guess?.[role] ?? null;
+  const chooseMapping = (preview: LogPreview): ChosenMapping => {
+    const guess = preview.guessedMapping;
+    const pick = (role: 'ambient' | 'clock' | 'power') => {
+      const given = values[role];
+      if (given !== undefined) return given;
+      if (guess?.[role]) guessed.push(role);
+      return guess?.[role] ?? null;
+    };
+    const vrm = list(values.vrm) ?? guess?.vrm;
+    if (!values.vrm && vrm) guessed.unshift('vrm');
+    if (!vrm || vrm.length === 0) return { mapping: null, guessed: false };
+    const mapping: ColumnMapping = {
+      ...(values.time ? { time: values.time } : {}),
+      vrm,
+      ambient: pick('ambient'),
+      clock: pick('clock'),
+      power: pick('power'),
+    };
+    return { mapping, guessed: guessed.length > 0 };
   };
-  const vrm = list(values.vrm) ?? guess?.vrm;
-  if (!values.vrm && vrm) guessed.unshift('vrm');
-  if (!vrm || vrm.length === 0) {
-    printParseErrors([
-      {
-        row: previewed.preview.headerRow,
-        column: null,
-        code: 'mapping-incomplete',
-        message: `No VRM probe column could be guessed from the header (${previewed.preview.columns.map((column) => column.name).join(', ')}): name them with --vrm.`,
-      },
-    ]);
+  const outcome = analyseLogFile(bytes, { options }, { chooseMapping });
+  if ('notText' in outcome) {
+    console.error(`Cannot read ${file}: it is not a text export: save the log as CSV or TSV`);
     return 1;
   }
-  const mapping: ColumnMapping = {
-    ...(values.time ? { time: values.time as string } : {}),
-    vrm,
-    ambient: pick('ambient'),
-    clock: pick('clock'),
-    power: pick('power'),
-  };
-  const mapped = readMappedLog(previewed.table, mapping, options);
-  if (!mapped.ok) {
-    printParseErrors(mapped.errors);
+  if (!outcome.ok) {
+    printParseErrors(outcome.errors);
     return 1;
   }
-  const analysis = analyseRun(mapped.log, options, { mappingGuessed: guessed.length > 0 });
+  const { analysis, mapping } = outcome;
   if (values.json) console.log(JSON.stringify(analysis, null, 2));
   else printAnalysis(file, mapping, guessed, analysis);
   return 0;

@@ -1,16 +1,19 @@
-import multer from 'multer';
+import { z } from 'zod';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { AppError } from '../errors';
-import { decodeLogFile } from '../services/log-file.service';
-import { parseOrThrow } from '../api-registry';
-import { analysisRequestSchema, analysisPreviewResponseSchema } from '../../shared/schemas/analysis';
-import { analyseLog } from '../../shared/domain/analysis/analyse-log';
+import { LogCheckService } from '../services/log-check.service';
+import {
+  analysisPreviewFailureSchema,
+  analysisPreviewResponseSchema,
+  analysisRequestSchema,
+} from '../../shared/schemas/analysis';
+import { logFileUploadLimit } from '../../shared/upload-limits';
 
-export const MAX_LOG_BYTES = 25 * 1024 * 1024;
+/** The form's text field: the analysis settings as JSON (mapping and options; all optional). */
+const logCheckFormSchema = z.object({ request: analysisRequestSchema.prefault({}) });
 
 export function registerLogCheckRoutes(api: ApiRegistry, _context: AppContext) {
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_LOG_BYTES, files: 1, fields: 4 } });
+  const logCheck = new LogCheckService();
 
   api.add({
     method: 'post',
@@ -18,40 +21,14 @@ export function registerLogCheckRoutes(api: ApiRegistry, _context: AppContext) {
     access: ['tester', 'editor'],
     tag: 'Log check',
     summary:
-      'Analyse a logger file (CSV/TSV) without saving it: the parsed-column preview and the full analysis, or 422 with row-and-column parse errors.',
-    multipart: { fields: { file: 'file', request: 'json' } },
+      'Analyse a logger file (CSV/TSV) without saving it: the parsed-column preview and the full analysis, or 422 log_parse_failed with the preview and the row-and-column parse errors in error.details.',
+    multipart: { fields: { file: 'file', request: 'json' }, limit: logFileUploadLimit },
+    body: logCheckFormSchema,
     response: analysisPreviewResponseSchema,
-    successStatus: 200,
-    before: [upload.single('file')],
-    handler: ({ req, res }) => {
-      if (!req.file) {
-        throw new AppError('validation_failed', 400, 'Attach a logger file (CSV or TSV).', { file: 'Choose a file.' });
-      }
-      let requestJson: unknown = {};
-      if (typeof req.body?.request === 'string' && req.body.request.trim()) {
-        try {
-          requestJson = JSON.parse(req.body.request);
-        } catch {
-          throw new AppError('validation_failed', 400, 'The analysis settings are not valid JSON.', {
-            request: 'Not valid JSON.',
-          });
-        }
-      }
-      const request = parseOrThrow(analysisRequestSchema, requestJson, 'analysis setting');
-      const text = decodeLogFile(req.file.originalname, req.file.buffer);
-      const outcome = analyseLog(text, request);
-      if (!outcome.ok) {
-        res.status(422);
-        return {
-          error: {
-            code: 'log_parse_failed',
-            message: 'The logger file could not be read. See the listed rows and columns.',
-          },
-          preview: outcome.preview ?? null,
-          errors: outcome.errors,
-        };
-      }
-      return { preview: outcome.preview, analysis: outcome.analysis };
+    errors: {
+      422: { description: 'The file could not be read (log_parse_failed)', details: analysisPreviewFailureSchema },
     },
+    successStatus: 200,
+    handler: ({ req, body }) => logCheck.analyse(req.file, body.request),
   });
 }

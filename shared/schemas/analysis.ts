@@ -1,11 +1,11 @@
 /**
  * Payloads of the measurement engine (issue 3): logger upload request, preview, analysis result, parse errors.
  *
- * How POST /api/log-check/analyse should call it (multipart: `file` + `request` as a JSON string):
- *   const request = analysisRequestSchema.parse(JSON.parse(req.body.request ?? '{}'));
- *   const outcome = analyseLog(file.buffer.toString('utf8'), request); // shared/domain/analysis/analyse-log
- *   outcome.ok ? 200 { preview, analysis } (analysisPreviewResponseSchema)
- *              : 422 { preview, errors } (analysisPreviewFailureSchema; each error { row, column, code, message }).
+ * POST /api/log-check/analyse (multipart: `file` + `request` as a JSON string) runs analyseLog
+ * (shared/domain/analysis/analyse-log) in a worker and answers
+ *   200 { preview, analysis }                                              (analysisPreviewResponseSchema)
+ *   422 { error: { code: 'log_parse_failed', message, details: { preview, errors } } }
+ *                                  (details: analysisPreviewFailureSchema; each error { row, column, code, message }).
  * analyseLog is pure and returns bad input as errors instead of throwing. When request.mapping is omitted the
  * engine analyses with the mapping guessed from the header and adds the 'mapping-guessed' flag: the UI should show
  * preview.guessedMapping and ask the tester to confirm it, never store the guess silently.
@@ -333,7 +333,10 @@ export type AnalysisResult = z.infer<typeof analysisResultSchema>;
 export const analysisPreviewResponseSchema = z.object({ preview: logPreviewSchema, analysis: analysisResultSchema });
 export type AnalysisPreviewResponse = z.infer<typeof analysisPreviewResponseSchema>;
 
-/** 422 body of POST /api/log-check/analyse: the preview when the table itself could be read, and every parse error. */
+/**
+ * `error.details` of the 422 log_parse_failed of POST /api/log-check/analyse: the preview when the table itself could be
+ * read (else null), and every parse error.
+ */
 export const analysisPreviewFailureSchema = z.object({
   preview: logPreviewSchema.nullable(),
   errors: z.array(parseErrorSchema).min(1),

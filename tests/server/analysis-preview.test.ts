@@ -62,7 +62,9 @@ describe('POST /api/log-check/analyse', () => {
       );
     expect(response.status).toBe(422);
     expect(response.body.error.code).toBe('log_parse_failed');
-    expect(response.body.errors).toEqual(
+    // The agreed shape: the preview (null when the table itself could not be read) and every parse error in details.
+    expect(response.body.error.details.preview.columns).toHaveLength(3);
+    expect(response.body.error.details.errors).toEqual(
       expect.arrayContaining([expect.objectContaining({ row: 3, column: 'VRM rear (°C)' })]),
     );
   });

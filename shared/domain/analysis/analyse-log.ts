@@ -9,6 +9,7 @@ import {
 } from '../../schemas/analysis';
 import { guessColumnMapping, guessColumnRole, unitFromColumnName } from './log-column-guess';
 import { detectTimeFormat } from './log-time-value';
+import { loggerFileText } from './logger-file-text';
 import { isBlankRow, parseLoggerTable, type LoggerTable } from './logger-table';
 import { readMappedLog, type MappedLog } from './read-mapped-log';
 import { firstDataRowIndex, guessTimeColumn } from './read-time-column';
@@ -21,8 +22,26 @@ export type LogPreviewOutcome =
   { ok: true; preview: LogPreview; table: LoggerTable } | { ok: false; preview: null; errors: ParseError[] };
 
 export type AnalyseLogOutcome =
-  | { ok: true; preview: LogPreview; analysis: AnalysisResult }
+  /** `mapping`: the mapping the analysis used (the request's, the guessed one, or the one chooseMapping made). */
+  | { ok: true; preview: LogPreview; analysis: AnalysisResult; mapping: ColumnMapping }
   | { ok: false; preview: LogPreview | null; errors: ParseError[] };
+
+/** The same, for the bytes of a file: `notText` when they are not a text export at all (a spreadsheet, an image). */
+export type AnalyseLogFileOutcome = AnalyseLogOutcome | { ok: false; notText: true };
+
+/** The mapping the analysis uses and whether any of it was guessed (the analysis then flags 'mapping-guessed'). */
+export interface ChosenMapping {
+  mapping: ColumnMapping | null;
+  guessed: boolean;
+}
+
+export interface AnalyseLogHooks {
+  /**
+   * Chooses the mapping from the preview, for callers that let the tester name some roles and guess the rest (the lab
+   * CLI). Without it: the request's mapping, or the guessed one when the request has none.
+   */
+  chooseMapping?: (preview: LogPreview) => ChosenMapping;
+}
 
 function previewRows(table: LoggerTable): string[][] {
   const rows: string[][] = [];
@@ -64,17 +83,18 @@ export function previewLog(text: string): LogPreviewOutcome {
 }
 
 type ReadOutcome =
-  { ok: true; preview: LogPreview; log: MappedLog } | { ok: false; preview: LogPreview | null; errors: ParseError[] };
+  | { ok: true; preview: LogPreview; log: MappedLog; mapping: ColumnMapping; guessed: boolean }
+  | { ok: false; preview: LogPreview | null; errors: ParseError[] };
 
 /**
  * Reads the file and the mapped columns. Kept apart from the analysis so that the raw table (every cell as a string)
  * is out of reach once the columns are read, and the collector can drop it while the analysis runs.
  */
-function readLog(text: string, mapping: ColumnMapping | undefined, options: AnalysisOptions): ReadOutcome {
+function readLog(text: string, choose: (preview: LogPreview) => ChosenMapping, options: AnalysisOptions): ReadOutcome {
   const previewed = previewLog(text);
   if (!previewed.ok) return previewed;
   const { preview, table } = previewed;
-  const chosen = mapping ?? preview.guessedMapping;
+  const { mapping: chosen, guessed } = choose(preview);
   if (!chosen) {
     return {
       ok: false,
@@ -90,17 +110,41 @@ function readLog(text: string, mapping: ColumnMapping | undefined, options: Anal
     };
   }
   const mapped = readMappedLog(table, chosen, options);
-  return mapped.ok ? { ok: true, preview, log: mapped.log } : { ok: false, preview, errors: mapped.errors };
+  return mapped.ok
+    ? { ok: true, preview, log: mapped.log, mapping: chosen, guessed }
+    : { ok: false, preview, errors: mapped.errors };
 }
 
 /**
- * The whole engine behind POST /api/log-check/analyse: read the logger file, apply the tester's mapping (or the
- * guessed one, flagged), analyse the run. Pure; bad input comes back as parse errors with row and column.
+ * The whole engine behind Log check (POST /api/log-check/analyse, the lab CLI's `analyse`): read the logger file,
+ * apply the tester's mapping (or the guessed one, flagged), analyse the run. Pure; bad input comes back as parse
+ * errors with row and column.
  */
-export function analyseLog(text: string, requestInput: AnalysisRequestInput): AnalyseLogOutcome {
+export function analyseLog(
+  text: string,
+  requestInput: AnalysisRequestInput,
+  hooks: AnalyseLogHooks = {},
+): AnalyseLogOutcome {
   const request = analysisRequestSchema.parse(requestInput);
-  const read = readLog(text, request.mapping, request.options);
+  const choose =
+    hooks.chooseMapping ??
+    ((preview: LogPreview): ChosenMapping =>
+      request.mapping
+        ? { mapping: request.mapping, guessed: false }
+        : { mapping: preview.guessedMapping, guessed: true });
+  const read = readLog(text, choose, request.options);
   if (!read.ok) return read;
-  const analysis = analyseRun(read.log, request.options, { mappingGuessed: request.mapping === undefined });
-  return { ok: true, preview: read.preview, analysis };
+  const analysis = analyseRun(read.log, request.options, { mappingGuessed: read.guessed });
+  return { ok: true, preview: read.preview, analysis, mapping: read.mapping };
+}
+
+/** analyseLog on the bytes of an uploaded or local file, read with the one logger-file text decoder. */
+export function analyseLogFile(
+  bytes: Uint8Array,
+  requestInput: AnalysisRequestInput,
+  hooks: AnalyseLogHooks = {},
+): AnalyseLogFileOutcome {
+  const text = loggerFileText(bytes);
+  if (text === null) return { ok: false, notText: true };
+  return analyseLog(text, requestInput, hooks);
 }

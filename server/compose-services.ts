@@ -8,6 +8,7 @@ import { CatalogImportService } from './services/catalog-import.service';
 import { CatalogService } from './services/catalog.service';
 import { DashboardService } from './services/dashboard.service';
 import { LoadConfigurationsService } from './services/load-configurations.service';
+import { LogCheckService } from './services/log-check.service';
 import { MatrixService } from './services/matrix.service';
 import { MyBenchService } from './services/my-bench.service';
 import { RoundupEntriesService } from './services/roundup-entries.service';
@@ -40,6 +41,7 @@ export function createServices(dataSource: DataSource, env: Env) {
   const benches = new BenchesService(dataSource);
   const myBench = new MyBenchService(dataSource, benches);
   const dashboard = new DashboardService(dataSource, myBench);
+  const logCheck = new LogCheckService();
 
   return {
     sessions,
@@ -57,6 +59,7 @@ export function createServices(dataSource: DataSource, env: Env) {
     benches,
     myBench,
     dashboard,
+    logCheck,
   };
 }
 

@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { LogCheckService } from '../services/log-check.service';
 import {
   analysisPreviewFailureSchema,
   analysisPreviewResponseSchema,
@@ -12,8 +11,8 @@ import { logFileUploadLimit } from '../../shared/upload-limits';
 /** The form's text field: the analysis settings as JSON (mapping and options; all optional). */
 const logCheckFormSchema = z.object({ request: analysisRequestSchema.prefault({}) });
 
-export function registerLogCheckRoutes(api: ApiRegistry, _context: AppContext) {
-  const logCheck = new LogCheckService();
+export function registerLogCheckRoutes(api: ApiRegistry, { services }: AppContext) {
+  const { logCheck } = services;
 
   api.add({
     method: 'post',

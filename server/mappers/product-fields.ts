@@ -261,3 +261,10 @@ export async function priceHistoryByProduct(
   }
   return grouped;
 }
+
+export async function productBriefs(manager: EntityManager, ids: number[]): Promise<Map<number, ProductBrief>> {
+  const unique = [...new Set(ids)];
+  if (unique.length === 0) return new Map();
+  const products = await manager.getRepository(ProductEntity).findBy({ id: In(unique) });
+  return new Map(products.map((p) => [p.id, toProductBrief(p)]));
+}

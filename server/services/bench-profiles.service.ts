@@ -5,7 +5,7 @@ import { RoundupEntity } from '../entities/roundup.entity';
 import { conflict, notFound } from '../errors';
 import { recordAudit } from './audit.service';
 import { archivedWhere, isDuplicateKey } from '../lib/database-errors';
-import { decimalToNumber } from '../mappers/dto-values';
+import { benchProfileRoundupCounts, toBenchProfileDto } from '../mappers/bench-profile';
 import { recordPlanChange } from '../lib/roundup-audit';
 import { planEditableStates } from '../../shared/domain/planning/roundup-states';
 import type {
@@ -24,38 +24,6 @@ const nameTaken = () =>
   conflict('name_taken', 'Another bench profile already has this name.', {
     name: 'Another bench profile already has this name.',
   });
-
-export function toBenchProfileDto(profile: BenchProfileEntity, roundupCount: number): BenchProfile {
-  return {
-    id: profile.id,
-    name: profile.name,
-    caseAndFans: profile.caseAndFans,
-    cooler: profile.cooler,
-    psu: profile.psu,
-    memory: profile.memory,
-    roomTempTargetC: decimalToNumber(profile.roomTempTargetC),
-    roomTempToleranceC: decimalToNumber(profile.roomTempToleranceC),
-    probeType: profile.probeType,
-    probePlacement: profile.probePlacement,
-    requiredSoakMinutes: profile.requiredSoakMinutes,
-    notes: profile.notes,
-    archived: profile.archivedAt != null,
-    createdAt: profile.createdAt.toISOString(),
-    updatedAt: profile.updatedAt.toISOString(),
-    roundupCount,
-  };
-}
-
-export async function benchProfileRoundupCounts(manager: EntityManager, ids: number[]): Promise<Map<number, number>> {
-  const counts = new Map<number, number>();
-  if (ids.length === 0) return counts;
-  const rows: { id: number; n: string }[] = await manager.query(
-    `SELECT bench_profile_id AS id, COUNT(*) AS n FROM roundups WHERE bench_profile_id IN (${ids.map(() => '?').join(',')}) GROUP BY bench_profile_id`,
-    ids,
-  );
-  for (const row of rows) counts.set(Number(row.id), Number(row.n));
-  return counts;
-}
 
 const fieldNames = [
   'name',

@@ -9,7 +9,7 @@ import { AppError, conflict, forbidden, invalid, notFound } from '../errors';
 import { recordAudit } from './audit.service';
 import { isDuplicateKey } from '../lib/database-errors';
 import { loadPeople, personOrNull } from '../mappers/people';
-import { queueItems } from './roundup-read-model';
+import { queueItems } from '../mappers/queue-item';
 import { bookableStates, cellStateLabels } from '../../shared/domain/planning/matrix-cell-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type {

@@ -1,7 +1,8 @@
 import { type DataSource } from 'typeorm';
 import { RoundupEntity } from '../entities/roundup.entity';
 import type { MyBenchService } from './my-bench.service';
-import { roundupSummaries, samplesOfRoundups } from './roundup-read-model';
+import { roundupSummaries } from '../mappers/roundup';
+import { samplesOfRoundups } from '../mappers/sample';
 import { roundupStates } from '../../shared/domain/planning/roundup-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type { Dashboard } from '../../shared/schemas/dashboard';

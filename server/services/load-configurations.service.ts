@@ -6,13 +6,12 @@ import { RoundupEntity } from '../entities/roundup.entity';
 import { conflict, invalid, notFound } from '../errors';
 import { recordAudit } from './audit.service';
 import { archivedWhere, isDuplicateKey } from '../lib/database-errors';
-import { decimalToNumber } from '../mappers/dto-values';
+import { loadConfigurationRoundupCounts, toLoadConfigurationDto } from '../mappers/load-configuration';
 import { recordPlanChange } from '../lib/roundup-audit';
 import { planEditableStates } from '../../shared/domain/planning/roundup-states';
 import type {
   createLoadConfigurationRequestSchema,
   LoadConfiguration,
-  LoadSettingsMode,
   loadConfigurationListQuerySchema,
   updateLoadConfigurationRequestSchema,
 } from '../../shared/schemas/load-configurations';
@@ -26,39 +25,6 @@ const nameTaken = () =>
   conflict('name_taken', 'Another load configuration already has this name.', {
     name: 'Another load configuration already has this name.',
   });
-
-export function toLoadConfigurationDto(config: LoadConfigurationEntity, roundupCount: number): LoadConfiguration {
-  return {
-    id: config.id,
-    name: config.name,
-    cpuDescription: config.cpuDescription,
-    settingsMode: config.settingsMode as LoadSettingsMode,
-    fixedClockMhz: config.fixedClockMhz,
-    settingsNotes: config.settingsNotes,
-    expectedPackagePowerW: decimalToNumber(config.expectedPackagePowerW),
-    coreVoltageV: decimalToNumber(config.coreVoltageV),
-    soakMinutes: config.soakMinutes,
-    archived: config.archivedAt != null,
-    roundupCount,
-    createdAt: config.createdAt.toISOString(),
-    updatedAt: config.updatedAt.toISOString(),
-  };
-}
-
-export async function loadConfigurationRoundupCounts(
-  manager: EntityManager,
-  ids: number[],
-): Promise<Map<number, number>> {
-  const counts = new Map<number, number>();
-  if (ids.length === 0) return counts;
-  const rows: { id: number; n: string }[] = await manager.query(
-    `SELECT load_configuration_id AS id, COUNT(*) AS n FROM roundup_load_configurations
-     WHERE load_configuration_id IN (${ids.map(() => '?').join(',')}) GROUP BY load_configuration_id`,
-    ids,
-  );
-  for (const row of rows) counts.set(Number(row.id), Number(row.n));
-  return counts;
-}
 
 const fieldNames = [
   'name',

@@ -5,13 +5,13 @@ import { LoadConfigurationEntity } from '../entities/load-configuration.entity';
 import { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configuration.entity';
-import { RoundupEntity } from '../entities/roundup.entity';
 import { UserEntity } from '../entities/user.entity';
 import { AppError, forbidden, invalid, notFound } from '../errors';
 import { loadPeople } from '../mappers/people';
 import { recordPlanChange } from '../lib/roundup-audit';
-import { productBriefs, progressByRoundup, toMatrixCellDto, emptyProgress } from './roundup-read-model';
-import { assertPlanEditable, lockRoundup } from './roundups.service';
+import { emptyProgress, progressByRoundup, toMatrixCellDto } from '../mappers/matrix-cell';
+import { productBriefs } from '../mappers/product-fields';
+import { assertPlanEditable, findRoundup, lockRoundup } from '../lib/roundup-access';
 import {
   cellStateLabels,
   decideCellTransition,
@@ -33,8 +33,7 @@ export class MatrixService {
   async matrix(roundupId: number, user: CurrentUser): Promise<RoundupMatrix> {
     const manager = this.dataSource.manager;
     const now = new Date();
-    const roundup = await manager.getRepository(RoundupEntity).findOneBy({ id: roundupId });
-    if (!roundup) throw notFound('That roundup');
+    const roundup = await findRoundup(manager, roundupId);
     const links = await manager
       .getRepository(RoundupLoadConfigurationEntity)
       .find({ where: { roundupId }, order: { position: 'ASC' } });
@@ -193,10 +192,7 @@ export class MatrixService {
     note?: string,
   ): Promise<MatrixCell> {
     return this.dataSource.transaction(async (manager) => {
-      const roundup = await manager
-        .getRepository(RoundupEntity)
-        .findOne({ where: { id: roundupId }, lock: { mode: 'pessimistic_read' } });
-      if (!roundup) throw notFound('That roundup');
+      const roundup = await lockRoundup(manager, roundupId, 'pessimistic_read');
       const repo = manager.getRepository(MatrixCellEntity);
       const cell = await repo.findOne({ where: { id: cellId, roundupId }, lock: { mode: 'pessimistic_write' } });
       if (!cell) throw notFound('That cell');

@@ -2,7 +2,7 @@ import { In, MoreThan, type DataSource } from 'typeorm';
 import { BenchBookingEntity } from '../entities/bench-booking.entity';
 import { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import type { BenchesService } from './benches.service';
-import { queueItems } from './roundup-read-model';
+import { queueItems } from '../mappers/queue-item';
 import { queueStates } from '../../shared/domain/planning/matrix-cell-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type { MyBench } from '../../shared/schemas/benches';

@@ -11,8 +11,8 @@ import { isDuplicateKey } from '../lib/database-errors';
 import { loadPeople } from '../mappers/people';
 import { priceHistoryByProduct, toProductBrief } from '../mappers/product-fields';
 import { recordPlanChange } from '../lib/roundup-audit';
-import { priceCheckFor, roundupEntries } from './roundup-read-model';
-import { assertPlanEditable, lockRoundup } from './roundups.service';
+import { priceCheckFor, roundupEntries } from '../mappers/roundup-entry';
+import { assertPlanEditable, assertRoundupExists, findRoundup, lockRoundup } from '../lib/roundup-access';
 import { cellStateLabels, statesWithWork } from '../../shared/domain/planning/matrix-cell-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type {
@@ -83,8 +83,7 @@ export class RoundupEntriesService {
   constructor(private readonly dataSource: DataSource) {}
 
   async list(roundupId: number): Promise<RoundupEntry[]> {
-    const roundup = await this.dataSource.getRepository(RoundupEntity).findOneBy({ id: roundupId });
-    if (!roundup) throw notFound('That roundup');
+    const roundup = await findRoundup(this.dataSource.manager, roundupId);
     return roundupEntries(this.dataSource.manager, roundup, new Date());
   }
 
@@ -94,8 +93,7 @@ export class RoundupEntriesService {
    */
   async suggestions(roundupId: number): Promise<RoundupSuggestions> {
     const manager = this.dataSource.manager;
-    const roundup = await manager.getRepository(RoundupEntity).findOneBy({ id: roundupId });
-    if (!roundup) throw notFound('That roundup');
+    const roundup = await findRoundup(manager, roundupId);
     const now = new Date();
     const inRoundup = new Set(
       (await manager.getRepository(RoundupEntryEntity).find({ where: { roundupId }, select: { productId: true } })).map(
@@ -141,7 +139,7 @@ export class RoundupEntriesService {
 
   async referenceCandidates(roundupId: number): Promise<ReferenceCandidates> {
     const manager = this.dataSource.manager;
-    if (!(await manager.getRepository(RoundupEntity).existsBy({ id: roundupId }))) throw notFound('That roundup');
+    await assertRoundupExists(manager, roundupId);
     const tested = await testedElsewhere(manager, roundupId);
     const inRoundup = new Set(
       (await manager.getRepository(RoundupEntryEntity).find({ where: { roundupId }, select: { productId: true } })).map(

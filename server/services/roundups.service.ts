@@ -7,12 +7,14 @@ import { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configuration.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
-import { AppError, conflict, invalid, notFound } from '../errors';
-import { benchProfileRoundupCounts, toBenchProfileDto } from './bench-profiles.service';
-import { loadConfigurationRoundupCounts, toLoadConfigurationDto } from './load-configurations.service';
+import { AppError, conflict, invalid } from '../errors';
+import { benchProfileRoundupCounts, toBenchProfileDto } from '../mappers/bench-profile';
+import { loadConfigurationRoundupCounts, toLoadConfigurationDto } from '../mappers/load-configuration';
 import { loadPeople, personOrNull } from '../mappers/people';
 import { recordPlanChange } from '../lib/roundup-audit';
-import { bandOf, roundupEntries, roundupSummaries } from './roundup-read-model';
+import { assertPlanEditable, assertRoundupExists, findRoundup, lockRoundup } from '../lib/roundup-access';
+import { bandOf, roundupSummaries } from '../mappers/roundup';
+import { roundupEntries } from '../mappers/roundup-entry';
 import { cellStateLabels, statesWithWork } from '../../shared/domain/planning/matrix-cell-states';
 import {
   nextRoundupState,
@@ -35,25 +37,6 @@ type CreateInput = z.output<typeof createRoundupRequestSchema>;
 type UpdateInput = z.output<typeof updateRoundupRequestSchema>;
 type ListQuery = z.output<typeof roundupListQuerySchema>;
 type History = z.infer<typeof roundupHistorySchema>;
-
-/** Loads a roundup inside a transaction with its row locked, so plan changes to one roundup queue up. */
-export async function lockRoundup(manager: EntityManager, id: number): Promise<RoundupEntity> {
-  const roundup = await manager
-    .getRepository(RoundupEntity)
-    .findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
-  if (!roundup) throw notFound('That roundup');
-  return roundup;
-}
-
-export function assertPlanEditable(roundup: RoundupEntity) {
-  if (!planEditableStates.includes(roundup.state)) {
-    throw new AppError(
-      'plan_locked',
-      422,
-      `The roundup is ${roundupStateLabels[roundup.state]}: its test plan can change only while it is Planning or On the bench.`,
-    );
-  }
-}
 
 /** Checks that the profile exists and may be chosen (archived profiles stay only where already chosen). */
 async function checkBenchProfile(manager: EntityManager, id: number | null, current: number | null) {
@@ -100,8 +83,7 @@ export class RoundupsService {
 
   async get(id: number, manager: EntityManager = this.dataSource.manager): Promise<RoundupDetail> {
     const now = new Date();
-    const roundup = await manager.getRepository(RoundupEntity).findOneBy({ id });
-    if (!roundup) throw notFound('That roundup');
+    const roundup = await findRoundup(manager, id);
     const [summary] = await roundupSummaries(manager, [roundup], now);
     const profile = roundup.benchProfileId
       ? await manager.getRepository(BenchProfileEntity).findOneBy({ id: roundup.benchProfileId })
@@ -330,7 +312,7 @@ export class RoundupsService {
 
   async history(id: number): Promise<History['entries']> {
     const manager = this.dataSource.manager;
-    if (!(await manager.getRepository(RoundupEntity).existsBy({ id }))) throw notFound('That roundup');
+    await assertRoundupExists(manager, id);
     const entries = await manager.getRepository(AuditEntryEntity).find({
       where: { subjectType: 'roundup', subjectId: String(id) },
       order: { createdAt: 'DESC', id: 'DESC' },

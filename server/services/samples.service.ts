@@ -2,12 +2,12 @@ import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { ProductEntity } from '../entities/product.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
-import { RoundupEntity } from '../entities/roundup.entity';
 import { SampleEntity } from '../entities/sample.entity';
 import { AppError, notFound } from '../errors';
 import { toProductBrief } from '../mappers/product-fields';
 import { recordPlanChange } from '../lib/roundup-audit';
-import { samplesOfRoundups, toSampleDto } from './roundup-read-model';
+import { findRoundup } from '../lib/roundup-access';
+import { samplesOfRoundups, toSampleDto } from '../mappers/sample';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type { Sample, updateSampleRequestSchema } from '../../shared/schemas/samples';
 
@@ -66,8 +66,7 @@ export class SamplesService {
   constructor(private readonly dataSource: DataSource) {}
 
   async list(roundupId: number): Promise<{ timeZone: string; samples: Sample[] }> {
-    const roundup = await this.dataSource.getRepository(RoundupEntity).findOneBy({ id: roundupId });
-    if (!roundup) throw notFound('That roundup');
+    const roundup = await findRoundup(this.dataSource.manager, roundupId);
     return {
       timeZone: roundup.timeZone,
       samples: await samplesOfRoundups(this.dataSource.manager, [roundup], new Date()),
@@ -76,8 +75,7 @@ export class SamplesService {
 
   async update(actor: CurrentUser, roundupId: number, sampleId: number, input: UpdateInput): Promise<Sample> {
     return this.dataSource.transaction(async (manager) => {
-      const roundup = await manager.getRepository(RoundupEntity).findOneBy({ id: roundupId });
-      if (!roundup) throw notFound('That roundup');
+      const roundup = await findRoundup(manager, roundupId);
       const repo = manager.getRepository(SampleEntity);
       const sample = await repo.findOne({ where: { id: sampleId }, lock: { mode: 'pessimistic_write' } });
       const entry = sample ? await manager.getRepository(RoundupEntryEntity).findOneBy({ id: sample.entryId }) : null;

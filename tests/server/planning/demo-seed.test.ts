@@ -9,7 +9,8 @@ import { RoundupLoadConfigurationEntity } from '../../../server/entities/roundup
 import { RoundupEntity } from '../../../server/entities/roundup.entity';
 import { seedPlanning } from '../../../server/seed/demo-planning';
 import { seedStaff } from '../../../server/seed/demo-staff';
-import { roundupEntries, samplesOfRoundups } from '../../../server/services/roundup-read-model';
+import { roundupEntries } from '../../../server/mappers/roundup-entry';
+import { samplesOfRoundups } from '../../../server/mappers/sample';
 import { testDataSource } from '../support/test-app';
 
 class RollBack extends Error {}

@@ -1,5 +1,4 @@
 import {
-  analysisOptionsSchema,
   analysisRequestSchema,
   type AnalysisRequestInput,
   type ColumnRole,
@@ -8,12 +7,13 @@ import {
   type TemperatureUnit,
   type ToleranceClass,
 } from '../../../../shared/schemas/analysis';
+import { defaultOptions, optionFigures, type OptionFigure, type OptionFigureName } from './option-figures';
 
 /**
  * What the tester has chosen in the mapping form, as the form holds it (numbers as typed). It survives every failed
  * request, and a second file with the same header keeps it.
  */
-export interface MappingDraft {
+export interface MappingDraft extends Record<OptionFigureName, string> {
   time: string;
   vrm: string[];
   ambient: string;
@@ -24,24 +24,14 @@ export interface MappingDraft {
   coldJunction: 'none' | 'fixed' | 'column';
   coldJunctionFixedC: string;
   coldJunctionColumn: string;
-  soakMinutes: string;
-  ambientTargetC: string;
-  ambientToleranceC: string;
-  ambientDriftLimitC: string;
   toleranceClass: ToleranceClass;
   useNormalizedPeak: boolean;
-  manualThrottleMinute: string;
-  throttlePercent: string;
-  throttleMinSeconds: string;
-  comfortableBelowC: string;
-  warmUpToC: string;
   testerMarkedUnstable: boolean;
 }
 
 export type DraftField = Exclude<keyof MappingDraft, 'units'> | `unit:${string}`;
 
-/** The schema's own defaults, so the form never carries numbers of its own. */
-export const defaultOptions = analysisOptionsSchema.parse({});
+const figures: readonly OptionFigure[] = optionFigures;
 
 export const roleLabels: Record<ColumnRole, string> = {
   time: 'Time',
@@ -54,21 +44,14 @@ export const roleLabels: Record<ColumnRole, string> = {
 };
 
 function optionFields(): Omit<MappingDraft, 'time' | 'vrm' | 'ambient' | 'clock' | 'power' | 'units'> {
+  const typed = Object.fromEntries(figures.map((figure) => [figure.name, figure.initial(defaultOptions)]));
   return {
+    ...(typed as Record<OptionFigureName, string>),
     coldJunction: 'none',
     coldJunctionFixedC: '',
     coldJunctionColumn: '',
-    soakMinutes: String(defaultOptions.soakMinutes),
-    ambientTargetC: String(defaultOptions.ambientTargetC),
-    ambientToleranceC: String(defaultOptions.ambientToleranceC),
-    ambientDriftLimitC: String(defaultOptions.ambientDriftLimitC),
     toleranceClass: defaultOptions.toleranceClass,
     useNormalizedPeak: defaultOptions.useNormalizedPeak,
-    manualThrottleMinute: '',
-    throttlePercent: String(Math.round(defaultOptions.throttleFraction * 100)),
-    throttleMinSeconds: String(defaultOptions.throttleMinSeconds),
-    comfortableBelowC: String(defaultOptions.rubric.comfortableBelowC),
-    warmUpToC: String(defaultOptions.rubric.warmUpToC),
     testerMarkedUnstable: defaultOptions.testerMarkedUnstable,
   };
 }
@@ -141,31 +124,25 @@ const fieldByIssuePath: Record<string, DraftField> = {
   'mapping.power': 'power',
   'options.coldJunction.fixedC': 'coldJunctionFixedC',
   'options.coldJunction.column': 'coldJunctionColumn',
-  'options.soakMinutes': 'soakMinutes',
-  'options.ambientTargetC': 'ambientTargetC',
-  'options.ambientToleranceC': 'ambientToleranceC',
-  'options.ambientDriftLimitC': 'ambientDriftLimitC',
   'options.toleranceClass': 'toleranceClass',
-  'options.manualThrottleMinute': 'manualThrottleMinute',
-  'options.throttleFraction': 'throttlePercent',
-  'options.throttleMinSeconds': 'throttleMinSeconds',
-  'options.rubric.comfortableBelowC': 'comfortableBelowC',
-  'options.rubric.warmUpToC': 'warmUpToC',
+  ...Object.fromEntries(figures.map((figure) => [['options', ...figure.path].join('.'), figure.name as DraftField])),
 };
 
 /** Plain words for the schema's range checks, which read technical (as useZodForm's `messages` do elsewhere). */
 const rangeMessages: Partial<Record<DraftField, string>> = {
   coldJunctionFixedC: 'Enter a temperature from −50 to 150 °C.',
-  soakMinutes: 'Enter more than 0 and at most 1440 minutes.',
-  ambientTargetC: 'Enter a room target from −20 to 60 °C.',
-  ambientToleranceC: 'Enter a tolerance from 0 to 20 °C.',
-  ambientDriftLimitC: 'Enter a drift limit from 0 to 20 °C.',
-  manualThrottleMinute: 'Enter a minute of 0 or more, or leave it empty.',
-  throttlePercent: 'Enter a share above 0 and below 100 %.',
-  throttleMinSeconds: 'Enter more than 0 and at most 3600 seconds.',
-  comfortableBelowC: 'Enter a limit from 0 to 200 °C.',
-  warmUpToC: 'Enter a limit from 0 to 250 °C.',
+  ...Object.fromEntries(figures.map((figure) => [figure.name, figure.rangeMessage])),
 };
+
+/** Puts a value at a path of nested objects, making the objects on the way. */
+function setAt(target: Record<string, unknown>, path: readonly string[], value: unknown) {
+  let node = target;
+  for (const key of path.slice(0, -1)) {
+    node[key] ??= {};
+    node = node[key] as Record<string, unknown>;
+  }
+  node[path[path.length - 1]] = value;
+}
 
 function readNumber(text: string): number | null {
   const trimmed = text.trim().replace(',', '.');
@@ -221,8 +198,23 @@ export function requestFromDraft(
     errors.coldJunction = 'Millivolt channels need a cold junction: a fixed temperature or a logged column.';
   }
 
-  const throttlePercent = number('throttlePercent', draft.throttlePercent);
-  const manualThrottleMinute = draft.clock ? null : number('manualThrottleMinute', draft.manualThrottleMinute, false);
+  const options: Record<string, unknown> = {
+    ...(coldJunction ? { coldJunction } : {}),
+    toleranceClass: draft.toleranceClass,
+    useNormalizedPeak: draft.useNormalizedPeak,
+    testerMarkedUnstable: draft.testerMarkedUnstable,
+  };
+  for (const figure of figures) {
+    const name = figure.name as OptionFigureName;
+    if (figure.inapplicable?.(draft)) {
+      setAt(options, figure.path, null);
+      continue;
+    }
+    const typed = number(name, draft[name], !figure.optional);
+    // Unset required figures are left out (the schema's default would apply, but the error above stops the request).
+    if (typed !== null) setAt(options, figure.path, figure.toRequest ? figure.toRequest(typed) : typed);
+    else if (figure.optional) setAt(options, figure.path, null);
+  }
 
   const request: AnalysisRequestInput = {
     mapping: {
@@ -233,23 +225,7 @@ export function requestFromDraft(
       power: draft.power || null,
       units,
     },
-    options: {
-      ...(coldJunction ? { coldJunction } : {}),
-      soakMinutes: number('soakMinutes', draft.soakMinutes) ?? undefined,
-      ambientTargetC: number('ambientTargetC', draft.ambientTargetC) ?? undefined,
-      ambientToleranceC: number('ambientToleranceC', draft.ambientToleranceC) ?? undefined,
-      ambientDriftLimitC: number('ambientDriftLimitC', draft.ambientDriftLimitC) ?? undefined,
-      toleranceClass: draft.toleranceClass,
-      useNormalizedPeak: draft.useNormalizedPeak,
-      manualThrottleMinute,
-      throttleFraction: throttlePercent === null ? undefined : throttlePercent / 100,
-      throttleMinSeconds: number('throttleMinSeconds', draft.throttleMinSeconds) ?? undefined,
-      testerMarkedUnstable: draft.testerMarkedUnstable,
-      rubric: {
-        comfortableBelowC: number('comfortableBelowC', draft.comfortableBelowC) ?? undefined,
-        warmUpToC: number('warmUpToC', draft.warmUpToC) ?? undefined,
-      },
-    },
+    options: options as AnalysisRequestInput['options'],
   };
 
   const checked = analysisRequestSchema.safeParse(request);

@@ -4,6 +4,7 @@ import { secureCookieFor, type Env } from './env';
 import { AuthService } from './services/auth.service';
 import { BenchProfilesService } from './services/bench-profiles.service';
 import { BenchesService } from './services/benches.service';
+import { CalendarFeedService } from './services/calendar-feed.service';
 import { CatalogImportService } from './services/catalog-import.service';
 import { CatalogService } from './services/catalog.service';
 import { DashboardService } from './services/dashboard.service';
@@ -42,6 +43,7 @@ export function createServices(dataSource: DataSource, env: Env) {
   const myBench = new MyBenchService(dataSource, benches);
   const dashboard = new DashboardService(dataSource, myBench);
   const logCheck = new LogCheckService();
+  const calendarFeeds = new CalendarFeedService(dataSource, benches);
 
   return {
     sessions,
@@ -60,6 +62,7 @@ export function createServices(dataSource: DataSource, env: Env) {
     myBench,
     dashboard,
     logCheck,
+    calendarFeeds,
   };
 }
 

@@ -18,6 +18,7 @@ import { StoredFileEntity } from './stored-file.entity';
 import { TestRunEntity } from './test-run.entity';
 import { RunAnalysisEntity } from './run-analysis.entity';
 import { PhotoEntity } from './photo.entity';
+import { CalendarFeedEntity } from './calendar-feed.entity';
 
 export const entities = [
   UserEntity,
@@ -39,4 +40,5 @@ export const entities = [
   TestRunEntity,
   RunAnalysisEntity,
   PhotoEntity,
+  CalendarFeedEntity,
 ];

@@ -23,6 +23,10 @@ export class BenchBookingEntity {
   @Column({ type: 'varchar', length: 300, nullable: true })
   note: string | null;
 
+  /** Why it was booked although the bench's set-up differs from a roundup's bench profile. */
+  @Column({ type: 'varchar', length: 300, nullable: true, name: 'override_reason' })
+  overrideReason: string | null;
+
   @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
   createdAt: Date;
 }

@@ -17,6 +17,8 @@ import { CreateTestRuns1765200002000 } from './1765200002000-create-test-runs';
 import { CreateRunAnalyses1765200003000 } from './1765200003000-create-run-analyses';
 import { CreatePhotos1765200004000 } from './1765200004000-create-photos';
 import { CaptureSettings1765200005000 } from './1765200005000-capture-settings';
+import { AddBookingOverrideReason1765200031000 } from './1765200031000-add-booking-override-reason';
+import { CreateCalendarFeeds1765200032000 } from './1765200032000-create-calendar-feeds';
 
 export const migrations = [
   CreateUsersSessionsAudit1764600000000,
@@ -37,4 +39,6 @@ export const migrations = [
   CreateRunAnalyses1765200003000,
   CreatePhotos1765200004000,
   CaptureSettings1765200005000,
+  AddBookingOverrideReason1765200031000,
+  CreateCalendarFeeds1765200032000,
 ];

@@ -7,6 +7,7 @@ import { registerSystemRoutes } from './system.routes';
 import { registerUserRoutes } from './users.routes';
 import { registerBenchProfileRoutes } from './bench-profiles.routes';
 import { registerBenchRoutes } from './benches.routes';
+import { registerCalendarFeedRoutes } from './calendar-feed.routes';
 import { registerCatalogRoutes } from './catalog.routes';
 import { registerLoadConfigurationRoutes } from './load-configurations.routes';
 import { registerMatrixRoutes } from './matrix.routes';
@@ -31,4 +32,5 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerSampleRoutes(api, context);
   registerBenchRoutes(api, context);
   registerMyBenchRoutes(api, context);
+  registerCalendarFeedRoutes(api, context);
 }

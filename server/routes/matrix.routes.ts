@@ -50,7 +50,8 @@ export function registerMatrixRoutes(api: ApiRegistry, { services }: AppContext)
     body: cellTransitionRequestSchema,
     response: matrixCellSchema,
     successStatus: 200,
-    handler: ({ params, user, body }) => matrix.transition(user, params.id, params.cellId, body.action, body.note),
+    handler: ({ params, user, body }) =>
+      matrix.transition(user, params.id, params.cellId, body.action, body.note, body.overrideReason),
   });
 
   api.add({

@@ -5,6 +5,7 @@ import { BenchBookingEntity } from '../entities/bench-booking.entity';
 import { BenchProfileEntity } from '../entities/bench-profile.entity';
 import { BenchEntity } from '../entities/bench.entity';
 import { MatrixCellEntity } from '../entities/matrix-cell.entity';
+import { RoundupEntity } from '../entities/roundup.entity';
 import { AppError, conflict, forbidden, invalid, notFound } from '../errors';
 import { recordAudit } from './audit.service';
 import { isDuplicateKey } from '../lib/database-errors';
@@ -36,6 +37,44 @@ function slotText(startsAt: Date, endsAt: Date): string {
   const sameDay = startsAt.toISOString().slice(0, 10) === endsAt.toISOString().slice(0, 10);
   const end = sameDay ? endsAt.toISOString().slice(11, 16) : endsAt.toISOString().slice(0, 16).replace('T', ' ');
   return `${start}–${end} UTC`;
+}
+
+/** The parts of a bench profile that describe the physical set-up, as a booking compares them. */
+const setUpFields: { label: string; read: (profile: BenchProfileEntity) => string }[] = [
+  { label: 'room target', read: (p) => `${Number(p.roomTempTargetC).toFixed(1)} °C` },
+  { label: 'room tolerance', read: (p) => `±${Number(p.roomTempToleranceC).toFixed(1)} °C` },
+  { label: 'cooler', read: (p) => p.cooler },
+  { label: 'case and fans', read: (p) => p.caseAndFans },
+  { label: 'power supply', read: (p) => p.psu },
+  { label: 'memory', read: (p) => p.memory },
+  { label: 'probe', read: (p) => p.probeType },
+  { label: 'probe placement', read: (p) => p.probePlacement },
+];
+
+/**
+ * The tester's booking of this cell that covers `at`, and else their next one; both null when there is none. A run
+ * started outside every booking is warned about (the bench may be someone else's) and needs a reason.
+ */
+export async function cellBookingAt(manager: EntityManager, cellId: number, at: Date) {
+  const query = () =>
+    manager
+      .getRepository(BenchBookingEntity)
+      .createQueryBuilder('b')
+      .innerJoin(BenchBookingCellEntity, 'bc', 'bc.bookingId = b.id')
+      .innerJoin(BenchEntity, 'bench', 'bench.id = b.benchId')
+      .select(['b.startsAt AS startsAt', 'b.endsAt AS endsAt', 'bench.name AS benchName'])
+      .where('bc.cellId = :cellId', { cellId });
+  type Row = { startsAt: Date; endsAt: Date; benchName: string };
+  const covering = await query()
+    .andWhere('b.startsAt <= :at', { at })
+    .andWhere('b.endsAt > :at', { at })
+    .getRawOne<Row>();
+  const next = covering
+    ? undefined
+    : await query().andWhere('b.startsAt > :at', { at }).orderBy('b.startsAt', 'ASC').getRawOne<Row>();
+  const describe = (row: Row | undefined) =>
+    row ? `${row.benchName} ${slotText(new Date(row.startsAt), new Date(row.endsAt))}` : null;
+  return { covering: describe(covering), next: describe(next) };
 }
 
 /** Benches and their booking calendars. */
@@ -189,6 +228,7 @@ export class BenchesService {
         startsAt: booking.startsAt.toISOString(),
         endsAt: booking.endsAt.toISOString(),
         note: booking.note,
+        overrideReason: booking.overrideReason,
         cells: links
           .filter((l) => l.bookingId === booking.id)
           .map((l) => itemByCell.get(l.cellId))
@@ -221,10 +261,11 @@ export class BenchesService {
       if (!bench.active)
         throw new AppError('bench_inactive', 422, `${bench.name} is out of service and takes no bookings.`);
 
-      // Shared locks keep the cells assigned to this tester until the booking commits (an unassign waits).
+      // Exclusive locks on the cells: an unassign waits until the booking commits, and so does a second booking of
+      // the same cell on another bench (which then sees this one in the cell check below).
       const cells = await manager
         .getRepository(MatrixCellEntity)
-        .find({ where: { id: In(input.cellIds) }, lock: { mode: 'pessimistic_read' } });
+        .find({ where: { id: In(input.cellIds) }, lock: { mode: 'pessimistic_write' }, order: { id: 'ASC' } });
       const missing = input.cellIds.filter((id) => !cells.some((c) => c.id === id));
       if (missing.length > 0)
         throw invalid('Some cells do not exist.', { cellIds: `Cells ${missing.join(', ')} do not exist.` });
@@ -260,9 +301,21 @@ export class BenchesService {
         );
       }
 
+      await this.refuseCellsBookedElsewhere(manager, actor, input.cellIds, startsAt, endsAt);
+
+      const differences = await this.setUpDifferences(manager, bench, cells);
+      const overrideReason = differences.length > 0 ? (input.overrideReason ?? null) : null;
+      if (differences.length > 0 && !overrideReason) {
+        throw conflict(
+          'bench_profile_mismatch',
+          `${bench.name} is not set up as the roundup’s bench profile asks: ${differences.join('; ')}. Choose another bench, or book anyway and say why.`,
+          { overrideReason: 'Say why this bench will do, or choose another bench.' },
+        );
+      }
+
       const { identifiers } = await manager
         .getRepository(BenchBookingEntity)
-        .insert({ benchId, testerId: actor.id, startsAt, endsAt, note: input.note ?? null });
+        .insert({ benchId, testerId: actor.id, startsAt, endsAt, note: input.note ?? null, overrideReason });
       const bookingId = Number(identifiers[0].id);
       await manager
         .getRepository(BenchBookingCellEntity)
@@ -272,11 +325,89 @@ export class BenchesService {
         action: 'bench.booked',
         subjectType: 'bench',
         subjectId: benchId,
-        details: { bookingId, startsAt: startsAt.toISOString(), endsAt: endsAt.toISOString(), cellIds: input.cellIds },
+        details: {
+          bookingId,
+          startsAt: startsAt.toISOString(),
+          endsAt: endsAt.toISOString(),
+          cellIds: input.cellIds,
+          ...(overrideReason ? { setUpDifferences: differences, overrideReason } : {}),
+        },
       });
       const booking = await manager.getRepository(BenchBookingEntity).findOneByOrFail({ id: bookingId });
       return (await this.toBookingDtos(manager, [booking], actor))[0];
     });
+  }
+
+  /**
+   * A cell runs on one bench at a time: refuses the slot when one of the cells already has a booking, on any bench,
+   * that overlaps it. The caller holds the cells' row locks, so two bookings of one cell cannot pass this together.
+   */
+  private async refuseCellsBookedElsewhere(
+    manager: EntityManager,
+    actor: CurrentUser,
+    cellIds: number[],
+    startsAt: Date,
+    endsAt: Date,
+  ) {
+    const clash = await manager
+      .getRepository(BenchBookingEntity)
+      .createQueryBuilder('b')
+      .innerJoin(BenchBookingCellEntity, 'bc', 'bc.bookingId = b.id')
+      .innerJoin(BenchEntity, 'bench', 'bench.id = b.benchId')
+      .select(['b.startsAt AS startsAt', 'b.endsAt AS endsAt', 'bench.name AS benchName', 'bc.cellId AS cellId'])
+      .where('bc.cellId IN (:...cellIds)', { cellIds })
+      .andWhere('b.startsAt < :endsAt', { endsAt })
+      .andWhere('b.endsAt > :startsAt', { startsAt })
+      .orderBy('b.startsAt', 'ASC')
+      .getRawOne<{ startsAt: Date; endsAt: Date; benchName: string; cellId: number }>();
+    if (!clash) return;
+    const [item] = await queueItems(
+      manager,
+      await manager.getRepository(MatrixCellEntity).findBy({ id: clash.cellId }),
+      actor,
+      new Date(),
+    );
+    const cellName = item
+      ? `${item.product.maker} ${item.product.model} · ${item.loadConfiguration.name}`
+      : `Cell ${clash.cellId}`;
+    const slot = slotText(new Date(clash.startsAt), new Date(clash.endsAt));
+    throw conflict(
+      'cell_already_booked',
+      `${cellName} is already booked on ${clash.benchName} ${slot}, which overlaps ${slotText(startsAt, endsAt)}. A cell runs on one bench at a time: choose another time, or cancel the other booking first.`,
+      { cellIds: `${cellName} is already booked on ${clash.benchName} ${slot}.` },
+    );
+  }
+
+  /**
+   * How the bench's set-up differs from the bench profiles of the roundups the cells belong to, in words; empty
+   * when they agree. A bench built to the same profile agrees; a bench built to another profile agrees when every
+   * set-up field matches.
+   */
+  private async setUpDifferences(manager: EntityManager, bench: BenchEntity, cells: MatrixCellEntity[]) {
+    const roundups = await manager
+      .getRepository(RoundupEntity)
+      .find({ where: { id: In([...new Set(cells.map((cell) => cell.roundupId))]) }, order: { id: 'ASC' } });
+    const wanted = roundups.filter(
+      (roundup) => roundup.benchProfileId != null && roundup.benchProfileId !== bench.benchProfileId,
+    );
+    // A bench built to no profile has no described set-up: nothing to compare, so nothing to warn about.
+    if (wanted.length === 0 || bench.benchProfileId == null) return [];
+    const profileIds = [bench.benchProfileId, ...wanted.map((roundup) => roundup.benchProfileId as number)];
+    const profiles = new Map(
+      (await manager.getRepository(BenchProfileEntity).findBy({ id: In(profileIds) })).map((p) => [p.id, p]),
+    );
+    const own = profiles.get(bench.benchProfileId);
+    if (!own) return [];
+    const differences: string[] = [];
+    for (const roundup of wanted) {
+      const profile = profiles.get(roundup.benchProfileId as number);
+      if (!profile) continue;
+      const fields = setUpFields
+        .filter(({ read }) => read(own) !== read(profile))
+        .map(({ label, read }) => `${label} ${read(own)} here, ${read(profile)} in ${profile.name}`);
+      if (fields.length > 0) differences.push(`for “${roundup.title}”: ${fields.join(', ')}`);
+    }
+    return differences;
   }
 
   /** Cancels a booking: testers their own, editors any. */

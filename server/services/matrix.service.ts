@@ -6,12 +6,13 @@ import { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configuration.entity';
 import { UserEntity } from '../entities/user.entity';
-import { AppError, forbidden, invalid, notFound } from '../errors';
+import { AppError, conflict, forbidden, invalid, notFound } from '../errors';
 import { loadPeople } from '../mappers/people';
 import { recordPlanChange } from '../lib/roundup-audit';
 import { emptyProgress, progressByRoundup, toMatrixCellDto } from '../mappers/matrix-cell';
 import { productBriefs } from '../mappers/product-fields';
 import { assertPlanEditable, findRoundup, lockRoundup } from '../lib/roundup-access';
+import { cellBookingAt } from './benches.service';
 import {
   cellStateLabels,
   decideCellTransition,
@@ -190,6 +191,7 @@ export class MatrixService {
     cellId: number,
     action: CellAction,
     note?: string,
+    overrideReason?: string,
   ): Promise<MatrixCell> {
     return this.dataSource.transaction(async (manager) => {
       const roundup = await lockRoundup(manager, roundupId, 'pessimistic_read');
@@ -216,6 +218,22 @@ export class MatrixService {
         );
       }
       const now = new Date();
+      // A run belongs in bench time booked for it; starting outside every booking of the cell is warned about and
+      // needs a reason, which the plan's history keeps.
+      let outsideBooking: { overrideReason: string } | null = null;
+      if (action === 'start') {
+        const { covering, next } = await cellBookingAt(manager, cellId, now);
+        if (!covering) {
+          if (!overrideReason) {
+            throw conflict(
+              'start_outside_booking',
+              `No booking of this cell covers now${next ? `; its next one is ${next}` : ''}. The bench may be booked by someone else: book a slot, or start anyway and say why.`,
+              { overrideReason: 'Say why the run starts outside its bookings.' },
+            );
+          }
+          outsideBooking = { overrideReason };
+        }
+      }
       const patch: Partial<MatrixCellEntity> = { state: verdict.to, stateChangedAt: now };
       if (note !== undefined && note !== '') patch.note = note;
       if (action === 'unassign') {
@@ -231,6 +249,7 @@ export class MatrixService {
         from: cell.state,
         to: verdict.to,
         ...(note ? { note } : {}),
+        ...(outsideBooking ? { startedOutsideBooking: true, overrideReason: outsideBooking.overrideReason } : {}),
       });
       const updated = await repo.findOneByOrFail({ id: cellId });
       const people = await loadPeople(manager, [updated.testerId]);

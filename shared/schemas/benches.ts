@@ -61,6 +61,11 @@ export const createBookingRequestSchema = z
       .max(50)
       .refine((ids) => new Set(ids).size === ids.length, 'List each cell once.'),
     note: optionalTextSchema(300),
+    /**
+     * Why to book anyway when the bench's set-up differs from the roundup's bench profile; without it such a
+     * booking is refused with 409 bench_profile_mismatch, which lists the differences. Kept on the booking.
+     */
+    overrideReason: optionalTextSchema(300),
   })
   .superRefine((v, ctx) => {
     const start = Date.parse(v.startsAt);
@@ -80,6 +85,8 @@ export const bookingSchema = z.object({
   startsAt: instantSchema,
   endsAt: instantSchema,
   note: z.string().nullable(),
+  /** Why it was booked although the bench's set-up differs from a roundup's bench profile. */
+  overrideReason: z.string().nullable(),
   cells: z.array(queueItemSchema),
   /** The signed-in user may cancel it (their own, or any for an editor). */
   cancellable: z.boolean(),

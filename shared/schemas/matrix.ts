@@ -84,6 +84,8 @@ export const cellTransitionRequestSchema = z
   .object({
     action: cellActionSchema,
     note: z.string().trim().max(500).optional(),
+    /** A tester's reason to start a run outside every booking of the cell; without it that start is a 409. */
+    overrideReason: z.string().trim().max(300).optional(),
   })
   .refine((v) => v.action !== 'send-back' || (v.note?.length ?? 0) > 0, {
     path: ['note'],

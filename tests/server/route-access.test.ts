@@ -73,6 +73,11 @@ const allowed: Record<string, Caller[]> = {
   'POST /api/benches/:id/bookings': ['tester'],
   'DELETE /api/benches/:id/bookings/:bookingId': ['editor', 'tester'],
   'GET /api/my-bench': ['tester'],
+  'GET /api/account/calendar-feed': ['tester'],
+  'POST /api/account/calendar-feed': ['tester'],
+  'DELETE /api/account/calendar-feed': ['tester'],
+  // The secret token in the address is the key (calendar apps have no session); a wrong token is 404.
+  'GET /api/calendar/:token.ics': everyone,
   'GET /api/dashboard': staff,
 };
 

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { AuditEntryEntity } from '../../../server/entities/audit-entry.entity';
 import { BenchBookingEntity } from '../../../server/entities/bench-booking.entity';
 import { signedIn, testApp, testDataSource, type Client } from '../support/test-app';
 import {
@@ -149,5 +150,147 @@ describe('bench booking', () => {
     const mine = await tester.agent.get('/api/my-bench');
     expect(mine.body.upcomingBookings.map((b: { id: number }) => b.id)).toEqual([made.body.id]);
     expect((await editor.agent.delete(`/api/benches/${benchId}/bookings/${made.body.id}`)).status).toBe(204);
+  });
+
+  it('a cell runs on one bench at a time: the same cell on a second bench at an overlapping time is refused', async () => {
+    const { editor, tester, cells, benchId } = await setUp();
+    const second = await editor.agent.post('/api/benches').send({ name: `Bench ${tag()}` });
+    expect(second.status, second.text).toBe(201);
+    const first = await book(tester.agent, benchId, { ...slot(0, 2), cellIds: [cells[0].id] });
+    expect(first.status, first.text).toBe(201);
+
+    // [09:00, 11:00) on the other bench overlaps [08:00, 10:00) by an hour.
+    const twice = await book(tester.agent, second.body.id, { ...slot(1, 2), cellIds: [cells[0].id] });
+    expect(twice.status).toBe(409);
+    expect(twice.body.error.code).toBe('cell_already_booked');
+    expect(twice.body.error.message).toMatch(
+      /is already booked on Bench .* UTC, which overlaps .* one bench at a time/,
+    );
+    expect(twice.body.error.fields.cellIds).toMatch(/already booked on Bench/);
+    // Touching is fine (half-open intervals, first principles): [10:00, 11:00) after [08:00, 10:00).
+    expect((await book(tester.agent, second.body.id, { ...slot(2), cellIds: [cells[0].id] })).status).toBe(201);
+  });
+
+  it('simultaneous bookings of one cell on two benches leave a single booking of it', async () => {
+    const { editor, tester, cells, benchId } = await setUp();
+    const second = await editor.agent.post('/api/benches').send({ name: `Bench ${tag()}` });
+    const responses = await Promise.all(
+      [benchId, second.body.id, benchId, second.body.id].map((id) =>
+        book(tester.agent, id, { ...slot(3, 2), cellIds: [cells[0].id] }),
+      ),
+    );
+    expect(responses.filter((r) => r.status === 201)).toHaveLength(1);
+    expect(responses.filter((r) => r.status === 409)).toHaveLength(3);
+    const [row] = await (
+      await testDataSource()
+    ).query('SELECT COUNT(*) AS n FROM bench_booking_cells WHERE matrix_cell_id = ?', [cells[0].id]);
+    expect(Number(row.n)).toBe(1);
+  });
+});
+
+describe('the bench and the plan agree', () => {
+  /** A profile like the fixtures' own, but with the given set-up fields changed. */
+  async function profile(editor: Client, changes: Record<string, unknown> = {}) {
+    const response = await editor.post('/api/bench-profiles').send({
+      name: `Open bench ${tag()}`,
+      caseAndFans: 'Open test bench, one 120 mm fan at 800 rpm aimed at the board',
+      cooler: 'Quillon Arctide 360 liquid cooler',
+      psu: 'Ostrel Works 1000 W Platinum',
+      memory: '2 × 16 GB at 6000 MT/s, profile timings',
+      roomTempTargetC: 21,
+      roomTempToleranceC: 1,
+      probeType: 'Type K thermocouple, 0.1 mm bead',
+      probePlacement: 'Board rear under the V-core stages, taped',
+      requiredSoakMinutes: 60,
+      ...changes,
+    });
+    expect(response.status, response.text).toBe(201);
+    return response.body.id as number;
+  }
+
+  async function benchBuiltTo(editor: Client, benchProfileId: number) {
+    const response = await editor.post('/api/benches').send({ name: `Bench ${tag()}`, benchProfileId });
+    expect(response.status, response.text).toBe(201);
+    return response.body.id as number;
+  }
+
+  it('booking a bench set up differently from the roundup’s profile warns first, and books with a reason', async () => {
+    const { editor, tester, cells } = await setUp();
+    const warm = await benchBuiltTo(
+      editor.agent,
+      await profile(editor.agent, { roomTempTargetC: 24, cooler: 'Tidewell 240 liquid cooler' }),
+    );
+    const warned = await book(tester.agent, warm, { ...slot(0), cellIds: [cells[0].id] });
+    expect(warned.status).toBe(409);
+    expect(warned.body.error.code).toBe('bench_profile_mismatch');
+    expect(warned.body.error.message).toContain('room target 24.0 °C here, 21.0 °C in');
+    expect(warned.body.error.message).toContain('cooler Tidewell 240 liquid cooler here, Quillon Arctide 360');
+    expect(warned.body.error.fields.overrideReason).toBeTruthy();
+    expect(await (await testDataSource()).getRepository(BenchBookingEntity).countBy({ benchId: warm })).toBe(0);
+
+    const reason = 'Bench A is down for a new PSU; room runs warm, results get a note';
+    const booked = await book(tester.agent, warm, { ...slot(0), cellIds: [cells[0].id], overrideReason: reason });
+    expect(booked.status, booked.text).toBe(201);
+    expect(booked.body.overrideReason).toBe(reason);
+    const audit = await (
+      await testDataSource()
+    )
+      .getRepository(AuditEntryEntity)
+      .findOneByOrFail({ action: 'bench.booked', subjectId: String(warm) });
+    expect(audit.details).toMatchObject({ bookingId: booked.body.id, overrideReason: reason });
+  });
+
+  it('a bench built to the roundup’s profile, or to another with the same set-up, books without a warning', async () => {
+    const { editor, tester, cells, roundupId } = await setUp();
+    const roundup = await editor.agent.get(`/api/roundups/${roundupId}`);
+    const own = await benchBuiltTo(editor.agent, roundup.body.benchProfile.id);
+    const same = await benchBuiltTo(editor.agent, await profile(editor.agent));
+    const first = await book(tester.agent, own, { ...slot(0), cellIds: [cells[0].id] });
+    expect(first.status, first.text).toBe(201);
+    expect(first.body.overrideReason).toBeNull();
+    const second = await book(tester.agent, same, { ...slot(2), cellIds: [cells[0].id], overrideReason: 'not needed' });
+    expect(second.status, second.text).toBe(201);
+    // A reason where nothing differs is not kept: there is nothing it explains.
+    expect(second.body.overrideReason).toBeNull();
+  });
+
+  it('starting a run outside every booking of the cell warns the tester; a reason starts it and is kept', async () => {
+    const { tester, cells, roundupId, benchId } = await setUp();
+    const start = (cellId: number, body: Record<string, unknown> = {}) =>
+      tester.agent.post(`/api/roundups/${roundupId}/cells/${cellId}/transitions`).send({ action: 'start', ...body });
+
+    expect((await book(tester.agent, benchId, { ...slot(0), cellIds: [cells[0].id] })).status).toBe(201);
+    const warned = await start(cells[0].id);
+    expect(warned.status).toBe(409);
+    expect(warned.body.error.code).toBe('start_outside_booking');
+    expect(warned.body.error.message).toMatch(/No booking of this cell covers now; its next one is Bench .* UTC/);
+
+    const reason = 'Bench free all morning, booked slot is tomorrow';
+    const started = await start(cells[0].id, { overrideReason: reason });
+    expect(started.status, started.text).toBe(200);
+    expect(started.body.state).toBe('running');
+    const audit = await (
+      await testDataSource()
+    )
+      .getRepository(AuditEntryEntity)
+      .find({ where: { action: 'roundup.cell_moved', subjectId: String(roundupId) } });
+    expect(audit.map((entry) => entry.details)).toContainEqual(
+      expect.objectContaining({ cellId: cells[0].id, action: 'start', overrideReason: reason }),
+    );
+  });
+
+  it('starting a run inside a booking of the cell needs no reason', async () => {
+    const { tester, cells, roundupId, benchId } = await setUp();
+    const now = Date.now();
+    const covering = await book(tester.agent, benchId, {
+      startsAt: new Date(now - 10 * 60_000).toISOString(),
+      endsAt: new Date(now + 60 * 60_000).toISOString(),
+      cellIds: [cells[0].id],
+    });
+    expect(covering.status, covering.text).toBe(201);
+    const started = await tester.agent
+      .post(`/api/roundups/${roundupId}/cells/${cells[0].id}/transitions`)
+      .send({ action: 'start' });
+    expect(started.status, started.text).toBe(200);
   });
 });

@@ -11,10 +11,15 @@ import {
 } from './support/planning-fixtures';
 
 function move(agent: Client, roundupId: number, cellId: number, action: string, note?: string) {
-  return agent
-    .post(`/api/roundups/${roundupId}/cells/${cellId}/transitions`)
-    .send({ action, ...(note ? { note } : {}) });
+  return agent.post(`/api/roundups/${roundupId}/cells/${cellId}/transitions`).send({
+    action,
+    ...(note ? { note } : {}),
+    ...(action === 'start' ? { overrideReason: startWithoutBooking } : {}),
+  });
 }
+
+/** These tests are about the matrix's moves, not bench time: starts say why no booking covers them. */
+const startWithoutBooking = 'Bench free this morning; booking follows';
 
 async function setUp() {
   const app = await testApp();

@@ -149,7 +149,9 @@ describe('roundup plans', () => {
       .post(`/api/roundups/${roundupId}/assignments`)
       .send({ entryIds: [entry.id], testerId: testerUser.id, dueDate: dayFromToday(2) });
     const [cell] = (await matrixOf(editor, roundupId)).rows[0].cells;
-    await tester.post(`/api/roundups/${roundupId}/cells/${cell.id}/transitions`).send({ action: 'start' });
+    await tester
+      .post(`/api/roundups/${roundupId}/cells/${cell.id}/transitions`)
+      .send({ action: 'start', overrideReason: 'Bench free this morning; booking follows' });
     const drop = await editor.put(`/api/roundups/${roundupId}/load-configurations`).send({ loadConfigurationIds: [] });
     expect(drop.status).toBe(409);
     expect(drop.body.error.code).toBe('configuration_has_work');

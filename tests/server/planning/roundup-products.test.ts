@@ -155,7 +155,11 @@ describe('adding catalog products to a roundup', () => {
       .send({ entryIds: [entry.id], testerId: testerUser.id, dueDate: dayFromToday(7) });
     for (const action of ['start', 'record']) {
       expect(
-        (await tester.post(`/api/roundups/${earlier.roundupId}/cells/${cell.id}/transitions`).send({ action })).status,
+        (
+          await tester
+            .post(`/api/roundups/${earlier.roundupId}/cells/${cell.id}/transitions`)
+            .send({ action, overrideReason: 'Bench free this morning' })
+        ).status,
       ).toBe(200);
     }
     expect(
@@ -213,7 +217,9 @@ describe('adding catalog products to a roundup', () => {
       .post(`/api/roundups/${roundupId}/assignments`)
       .send({ entryIds: [entry.id], testerId: testerUser.id, dueDate: dayFromToday(3) });
     const [cell] = (await matrixOf(editor, roundupId)).rows[0].cells;
-    await tester.post(`/api/roundups/${roundupId}/cells/${cell.id}/transitions`).send({ action: 'start' });
+    await tester
+      .post(`/api/roundups/${roundupId}/cells/${cell.id}/transitions`)
+      .send({ action: 'start', overrideReason: 'Bench free this morning; booking follows' });
     const remove = await editor.delete(`/api/roundups/${roundupId}/entries/${entry.id}`);
     expect(remove.status).toBe(409);
     expect(remove.body.error.code).toBe('entry_has_work');

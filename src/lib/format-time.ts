@@ -46,10 +46,18 @@ const dayAndTime = new Intl.DateTimeFormat('en-GB', {
 });
 const timeOnly = new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
 
-/** "Tue 03 Dec, 09:00 – 13:00" (or with both days when the slot crosses midnight), in the device's zone. */
-export function formatSlot(startsAt: string, endsAt: string): string {
+/** "Tue 03 Dec, 09:00" in the device's zone. */
+export function formatDayAndTime(iso: string): string {
+  return dayAndTime.format(new Date(iso));
+}
+
+/**
+ * A booked slot in the device's zone: "Tue 03 Dec, 09:00 – 13:00". Under a heading that already names the day,
+ * `{ withDay: false }` gives "09:00 – 13:00". A slot that crosses midnight always names both days.
+ */
+export function formatSlot(startsAt: string, endsAt: string, { withDay = true }: { withDay?: boolean } = {}): string {
   const start = new Date(startsAt);
   const end = new Date(endsAt);
-  const sameDay = start.toDateString() === end.toDateString();
-  return `${dayAndTime.format(start)} – ${sameDay ? timeOnly.format(end) : dayAndTime.format(end)}`;
+  if (start.toDateString() !== end.toDateString()) return `${dayAndTime.format(start)} – ${dayAndTime.format(end)}`;
+  return `${withDay ? dayAndTime.format(start) : timeOnly.format(start)} – ${timeOnly.format(end)}`;
 }

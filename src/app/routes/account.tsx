@@ -5,10 +5,18 @@ import { sessionsQueryOptions } from '../../features/account/api/get-sessions';
 import { AccountDetails } from '../../features/account/components/account-details';
 import { ChangePasswordForm } from '../../features/account/components/change-password-form';
 import { SessionsPanel } from '../../features/account/components/sessions-panel';
+import { calendarFeedQueryOptions } from '../../features/bench-booking/api/calendar-feed';
+import { CalendarFeedPanel } from '../../features/bench-booking/components/calendar-feed-panel';
+import { sessionQueryOptions } from '../../features/auth/api/get-session';
 
 export function loader(queryClient: QueryClient) {
   return async () => {
-    await queryClient.ensureQueryData(sessionsQueryOptions());
+    const user = await queryClient.ensureQueryData(sessionQueryOptions());
+    await Promise.all([
+      queryClient.ensureQueryData(sessionsQueryOptions()),
+      // Bench testers have a private calendar of their bookings.
+      user?.role === 'tester' ? queryClient.ensureQueryData(calendarFeedQueryOptions()) : null,
+    ]);
     return null;
   };
 }
@@ -23,6 +31,7 @@ export function Component() {
         <AccountDetails user={user} />
         <ChangePasswordForm email={user.email} />
         <SessionsPanel className="lg:col-span-2" />
+        {user.role === 'tester' && <CalendarFeedPanel className="lg:col-span-2" />}
       </div>
     </>
   );

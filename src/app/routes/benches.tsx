@@ -1,13 +1,16 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useLoaderData, type LoaderFunctionArgs } from 'react-router';
+import { useLoaderData, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { paths } from '../../lib/paths';
 import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
-import { benchProfileOptionsQueryOptions, useBenchProfileOptions } from '../../features/benches/api/get-bench-profiles';
-import { benchesQueryOptions } from '../../features/benches/api/get-benches';
-import { bookableCellsQueryOptions, useBookableCells } from '../../features/benches/api/get-bookable-cells';
-import { bookingsQueryOptions } from '../../features/benches/api/get-bookings';
-import { weekFromParams } from '../../features/benches/components/bench-time';
+import { bookingsQueryOptions, useBookings } from '../../features/bench-booking/api/get-bookings';
+import { BenchCautions } from '../../features/bench-booking/components/bench-cautions';
+import { BookingCalendar } from '../../features/bench-booking/components/booking-calendar';
+import { weekFromParams } from '../../features/bench-booking/components/booking-time';
+import { benchesQueryOptions, useBenches } from '../../features/benches/api/get-benches';
 import { BenchesOverview } from '../../features/benches/components/benches-overview';
+import { myBenchQueryOptions, useMyBench } from '../../features/my-bench/api/get-my-bench';
+import { benchProfilesQueryOptions, useBenchProfiles } from '../../features/roundups/api/get-bench-profiles';
+import { bookableStates } from '../../../shared/domain/planning/matrix-cell-states';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
 import type { Role } from '../../../shared/schemas/common';
@@ -25,8 +28,8 @@ export function loader(queryClient: QueryClient) {
       await Promise.all([
         queryClient.ensureQueryData(benchesQueryOptions()),
         queryClient.ensureQueryData(bookingsQueryOptions({ from, to })),
-        canBook(user.role) ? queryClient.ensureQueryData(bookableCellsQueryOptions()) : null,
-        canManageBenches(user.role) ? queryClient.ensureQueryData(benchProfileOptionsQueryOptions()) : null,
+        canBook(user.role) ? queryClient.ensureQueryData(myBenchQueryOptions()) : null,
+        canManageBenches(user.role) ? queryClient.ensureQueryData(benchProfilesQueryOptions()) : null,
       ]);
     }
     return { openedAt };
@@ -43,25 +46,55 @@ export function Component() {
 
 function BenchesPage() {
   const user = useSession();
-  const { openedAt } = useLoaderData() as { openedAt: number };
   if (!user) return null;
-  if (canBook(user.role)) return <TesterBenches userId={user.id} openedAt={openedAt} />;
-  if (canManageBenches(user.role)) return <EditorBenches userId={user.id} openedAt={openedAt} />;
-  return (
-    <BenchesOverview currentUserId={user.id} canManage={false} bookableCells={null} profiles={[]} openedAt={openedAt} />
-  );
+  if (canBook(user.role)) return <TesterBenches userId={user.id} />;
+  if (canManageBenches(user.role)) return <EditorBenches userId={user.id} />;
+  return <Benches userId={user.id} canManage={false} profiles={[]} bookableCells={null} />;
 }
 
-function TesterBenches({ userId, openedAt }: { userId: number; openedAt: number }) {
-  const cells = useBookableCells();
-  return (
-    <BenchesOverview currentUserId={userId} canManage={false} bookableCells={cells} profiles={[]} openedAt={openedAt} />
-  );
+function TesterBenches({ userId }: { userId: number }) {
+  const { queue } = useMyBench();
+  const cells = queue.filter((item) => bookableStates.includes(item.cell.state));
+  return <Benches userId={userId} canManage={false} profiles={[]} bookableCells={cells} />;
 }
 
-function EditorBenches({ userId, openedAt }: { userId: number; openedAt: number }) {
-  const profiles = useBenchProfileOptions();
+function EditorBenches({ userId }: { userId: number }) {
+  const profiles = useBenchProfiles();
+  return <Benches userId={userId} canManage profiles={profiles} bookableCells={null} />;
+}
+
+function Benches({
+  userId,
+  canManage,
+  profiles,
+  bookableCells,
+}: {
+  userId: number;
+  canManage: boolean;
+  profiles: readonly { id: number; name: string }[];
+  bookableCells: Parameters<typeof BookingCalendar>[0]['bookableCells'];
+}) {
+  const { openedAt } = useLoaderData() as { openedAt: number };
+  const [params] = useSearchParams();
+  const { from, to } = weekFromParams(params, openedAt);
+  const benches = useBenches();
+  const bookings = useBookings({ from, to });
   return (
-    <BenchesOverview currentUserId={userId} canManage bookableCells={null} profiles={profiles} openedAt={openedAt} />
+    <BenchesOverview
+      canManage={canManage}
+      canBook={bookableCells !== null}
+      profiles={profiles}
+      bookings={bookings}
+      openedAt={openedAt}
+      caution={<BenchCautions className="mb-5" />}
+    >
+      <BookingCalendar
+        benches={benches}
+        bookings={bookings}
+        currentUserId={userId}
+        bookableCells={bookableCells}
+        openedAt={openedAt}
+      />
+    </BenchesOverview>
   );
 }

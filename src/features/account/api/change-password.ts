@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { type ChangePasswordRequest } from '../../../../shared/schemas/auth';
 import { okSchema } from '../../../../shared/schemas/common';
-import { accountKeys } from './account-keys';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export function changePassword(input: ChangePasswordRequest) {
   return apiClient.post('/api/account/password', input, { schema: okSchema });
@@ -13,6 +13,6 @@ export function useChangePassword() {
   return useMutation({
     mutationFn: changePassword,
     // The server ends every other session of the user, so the sessions list changes too.
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: accountKeys.all }),
+    onSuccess: () => invalidateAfter(queryClient, 'account'),
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { okSchema } from '../../../../shared/schemas/common';
-import { accountKeys } from './account-keys';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export function revokeSession(sessionId: string) {
   return apiClient.delete(`/api/account/sessions/${encodeURIComponent(sessionId)}`, { schema: okSchema });
@@ -11,6 +11,6 @@ export function useRevokeSession() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: revokeSession,
-    onSettled: () => queryClient.invalidateQueries({ queryKey: accountKeys.all }),
+    onSettled: () => invalidateAfter(queryClient, 'account'),
   });
 }

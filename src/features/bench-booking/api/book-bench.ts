@@ -1,19 +1,23 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
+import { invalidateAfter } from '../../../lib/stale-after';
 import { bookingSchema, type Booking, type CreateBookingRequest } from '../../../../shared/schemas/benches';
-import { invalidatePlanning } from '../../../lib/invalidate-planning';
 
 export interface BookBenchInput {
   benchId: number;
   booking: CreateBookingRequest;
 }
 
-/** Books a slot against the tester's assigned cells; an overlapping slot on the bench is refused with 409. */
+/**
+ * Books a slot against the tester's own assigned cells. Refused with 409 when the bench or one of the cells is
+ * already booked at that time, or when the bench's set-up differs from the roundup's profile and no reason to book
+ * anyway was given.
+ */
 export function bookBench({ benchId, booking }: BookBenchInput): Promise<Booking> {
   return apiClient.post(`/api/benches/${benchId}/bookings`, booking, { schema: bookingSchema });
 }
 
 export function useBookBench() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: bookBench, onSuccess: () => invalidatePlanning(queryClient) });
+  return useMutation({ mutationFn: bookBench, onSuccess: () => invalidateAfter(queryClient, 'booking') });
 }

@@ -1,7 +1,7 @@
 import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { bookingListSchema, type Booking } from '../../../../shared/schemas/benches';
-import { benchKeys } from './bench-keys';
+import { bookingKeys } from './booking-keys';
 
 export interface BookingWindow {
   /** ISO instants; bookings overlapping [from, to) are listed. */
@@ -17,10 +17,8 @@ export async function getBookings(window: BookingWindow, signal?: AbortSignal): 
 
 export function bookingsQueryOptions(window: BookingWindow) {
   return queryOptions({
-    queryKey: [...benchKeys.item('bookings'), window],
+    queryKey: bookingKeys.list({ from: window.from, to: window.to }),
     queryFn: ({ signal }) => getBookings(window, signal),
-    // Bookings are also made from My bench, which does not refresh this page's cache: always check on opening.
-    staleTime: 0,
   });
 }
 

@@ -6,7 +6,9 @@ import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { cx } from '../../../lib/class-names';
 import { describeSubmitError } from '../../../lib/form-errors';
 import type { Bench, Booking } from '../../../../shared/schemas/benches';
-import { useCancelBooking } from '../api/bookings';
+import { formatSlot } from '../../../lib/format-time';
+import { productName } from '../../../lib/product-name';
+import { useCancelBooking } from '../api/cancel-booking';
 import {
   addDays,
   dateParam,
@@ -15,9 +17,8 @@ import {
   formatDuration,
   formatLongDay,
   formatShortDate,
-  formatSlot,
   overlapsDay,
-} from './bench-time';
+} from './booking-time';
 
 export interface BookingAgendaProps {
   weekStart: Date;
@@ -152,8 +153,7 @@ export function BookingAgenda({
       >
         {cancelling && (
           <p>
-            {cancelling.bench.name}, {formatDayHeading(new Date(cancelling.startsAt))}{' '}
-            {formatSlot(cancelling.startsAt, cancelling.endsAt)} ({zoneLabel}), booked by{' '}
+            {cancelling.bench.name}, {formatSlot(cancelling.startsAt, cancelling.endsAt)} ({zoneLabel}), booked by{' '}
             {cancelling.tester.displayName}. The slot becomes free for others at once.
           </p>
         )}
@@ -166,7 +166,7 @@ function BookingLine({ booking, own, onCancel }: { booking: Booking; own: boolea
   return (
     <li className="flex flex-wrap items-start gap-x-4 gap-y-1 py-2 first:pt-0 last:pb-0">
       <div className="w-full sm:w-44 sm:shrink-0">
-        <p className="numeric text-ink">{formatSlot(booking.startsAt, booking.endsAt)}</p>
+        <p className="numeric text-ink">{formatSlot(booking.startsAt, booking.endsAt, { withDay: false })}</p>
         <p className="text-xs text-muted">{formatDuration(booking.startsAt, booking.endsAt)}</p>
       </div>
       <div className="min-w-0 flex-1 text-sm">
@@ -180,13 +180,18 @@ function BookingLine({ booking, own, onCancel }: { booking: Booking; own: boolea
           <ul className="mt-0.5 text-[0.8125rem] text-muted">
             {booking.cells.map((item) => (
               <li key={item.cell.id}>
-                {item.product.maker} {item.product.model} · {item.loadConfiguration.name}{' '}
+                {productName(item.product)} · {item.loadConfiguration.name}{' '}
                 <span className="whitespace-nowrap">({item.roundup.title})</span>
               </li>
             ))}
           </ul>
         )}
         {booking.note && <p className="mt-0.5 text-[0.8125rem] text-ink italic">“{booking.note}”</p>}
+        {booking.overrideReason && (
+          <p className="mt-0.5 text-[0.8125rem] text-amber">
+            Set-up differs from the profile: {booking.overrideReason}
+          </p>
+        )}
       </div>
       {booking.cancellable && (
         <Button

@@ -1,12 +1,14 @@
-import { useId, useState, type FormEvent } from 'react';
-import { Alert } from '../../../components/ui/alert';
+import { useState, type FormEvent } from 'react';
 import { z } from 'zod';
+import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Select } from '../../../components/ui/select';
+import { TextArea } from '../../../components/ui/text-area';
 import { TextField } from '../../../components/ui/text-field';
 import { isApiError } from '../../../lib/api-client';
-import { formatCalendarDate, userTimeZone } from '../../../lib/format-time';
+import { formatCalendarDate, formatSlot } from '../../../lib/format-time';
+import { productName } from '../../../lib/product-name';
 import { useZodForm } from '../../../lib/use-zod-form';
 import {
   createBookingRequestSchema,
@@ -14,19 +16,18 @@ import {
   type Bench,
   type Booking,
 } from '../../../../shared/schemas/benches';
-import { idSchema } from '../../../../shared/schemas/planning-fields';
 import type { QueueItem } from '../../../../shared/schemas/matrix';
+import { idSchema } from '../../../../shared/schemas/planning-fields';
 import { useBookBench } from '../api/book-bench';
-import { productName } from '../../../lib/product-name';
-import { localInputToInstant } from './bench-format';
+import { instantFromLocalInput, localInputValue, zoneLabel } from './booking-time';
 
-const emptyForm = { benchId: '', startsAt: '', endsAt: '', cellIds: '', note: '' };
 const labels = {
   benchId: 'Bench',
   startsAt: 'Starts',
   endsAt: 'Ends',
-  cellIds: 'Cells this slot is for',
+  cellIds: 'Your cells this slot is for',
   note: 'Note',
+  overrideReason: 'Why book it anyway',
 };
 
 const bookingTarget = z.object({ benchId: idSchema }).and(createBookingRequestSchema);
@@ -36,10 +37,17 @@ const bookingTarget = z.object({ benchId: idSchema }).and(createBookingRequestSc
  * form's text values. The shared booking schema then checks the slot (ends after it starts, at most 72 h).
  */
 const bookingFormSchema = z
-  .object({ benchId: z.string(), startsAt: z.string(), endsAt: z.string(), cellIds: z.string(), note: z.string() })
+  .object({
+    benchId: z.string(),
+    startsAt: z.string(),
+    endsAt: z.string(),
+    cellIds: z.string(),
+    note: z.string(),
+    overrideReason: z.string(),
+  })
   .transform((values, ctx): z.input<typeof bookingTarget> => {
-    const startsAt = localInputToInstant(values.startsAt);
-    const endsAt = localInputToInstant(values.endsAt);
+    const startsAt = instantFromLocalInput(values.startsAt);
+    const endsAt = instantFromLocalInput(values.endsAt);
     if (!values.benchId) ctx.addIssue({ code: 'custom', path: ['benchId'], message: 'Choose a bench.' });
     if (!startsAt) ctx.addIssue({ code: 'custom', path: ['startsAt'], message: 'Enter the date and time it starts.' });
     if (!endsAt) ctx.addIssue({ code: 'custom', path: ['endsAt'], message: 'Enter the date and time it ends.' });
@@ -51,26 +59,51 @@ const bookingFormSchema = z
       endsAt: endsAt ?? '',
       cellIds: values.cellIds ? values.cellIds.split(',').map(Number) : [],
       note: values.note,
+      overrideReason: values.overrideReason,
     };
   })
   .pipe(bookingTarget);
 
-export interface BookBenchFormProps {
+export interface BookingFormProps {
   benches: readonly Bench[];
   /** Cells assigned to the tester that can still be booked (assigned, running, needs retest). */
   cells: readonly QueueItem[];
-  onBooked: (booking: Booking) => void;
+  /** Preselected bench (e.g. the one the calendar is filtered to). */
+  initialBenchId?: number | null;
+  /** Suggested start, e.g. the next whole hour; given by the page so rendering stays pure. */
+  suggestedStart: Date;
+  onBooked?: (booking: Booking) => void;
 }
 
-/** Books bench time for assigned cells. A refused slot (another booking overlaps) keeps everything typed. */
-export function BookBenchForm({ benches, cells, onBooked }: BookBenchFormProps) {
-  const cellsHeadingId = useId();
+/**
+ * A tester books a bench for a slot against their own assigned cells; the same form on the Benches page and on
+ * My bench. Times are typed in the device's zone and sent as UTC instants. A refused slot (the bench or a cell is
+ * taken) keeps everything typed, with the server's reason on top. When the bench's set-up differs from a roundup's
+ * bench profile the server lists the differences first; the tester can book anyway with a written reason.
+ */
+export function BookingForm({ benches, cells, initialBenchId = null, suggestedStart, onBooked }: BookingFormProps) {
   const book = useBookBench();
-  const form = useZodForm({ schema: bookingFormSchema, initialValues: emptyForm, labels });
+  const active = benches.filter((bench) => bench.active);
+  const [initialValues] = useState(() => ({
+    benchId:
+      initialBenchId !== null && active.some((bench) => bench.id === initialBenchId)
+        ? String(initialBenchId)
+        : active.length === 1
+          ? String(active[0].id)
+          : '',
+    startsAt: localInputValue(suggestedStart),
+    endsAt: localInputValue(new Date(suggestedStart.getTime() + 2 * 3_600_000)),
+    cellIds: '',
+    note: '',
+    overrideReason: '',
+  }));
+  const form = useZodForm({ schema: bookingFormSchema, initialValues, labels });
   // The server's whole sentence for a refused slot (who holds the bench, when); the field error is shorter.
   const [refusal, setRefusal] = useState<string | null>(null);
-  const zone = userTimeZone();
-  const activeBenches = benches.filter((bench) => bench.active);
+  // The differences between the bench and the roundup's profile, once the server has named them.
+  const [mismatch, setMismatch] = useState<string | null>(null);
+  const [booked, setBooked] = useState<Booking | null>(null);
+  const zone = zoneLabel(suggestedStart.getTime());
   const chosen = new Set(form.values.cellIds ? form.values.cellIds.split(',').map(Number) : []);
 
   const toggleCell = (cellId: number, on: boolean) => {
@@ -80,50 +113,83 @@ export function BookBenchForm({ benches, cells, onBooked }: BookBenchFormProps) 
     form.setValue('cellIds', [...next].join(','));
   };
 
+  // A different bench, slot or set of cells is a different question: the warning no longer applies.
+  const change = (name: 'benchId' | 'startsAt' | 'endsAt') => (value: string) => {
+    form.setValue(name, value);
+    setRefusal(null);
+    if (name === 'benchId') setMismatch(null);
+  };
+
   const submit = (event: FormEvent) => {
     event.preventDefault();
     setRefusal(null);
+    setBooked(null);
     const input = form.validate();
     if (!input) return;
     const { benchId, ...booking } = input;
     book.mutate(
-      { benchId, booking },
+      { benchId, booking: mismatch ? booking : { ...booking, overrideReason: null } },
       {
         onSuccess: (saved) => {
-          form.reset();
-          onBooked(saved);
+          setMismatch(null);
+          setBooked(saved);
+          form.reset({ ...form.values, cellIds: '', note: '', overrideReason: '' });
+          onBooked?.(saved);
         },
         onError: (error) => {
           form.fail(error);
-          if (isApiError(error) && error.status === 409) setRefusal(error.message);
+          if (isApiError(error) && error.code === 'bench_profile_mismatch') setMismatch(error.message);
+          else if (isApiError(error) && error.status === 409) setRefusal(error.message);
         },
       },
     );
   };
 
+  if (active.length === 0) {
+    return <p className="text-sm text-muted">No bench is in service, so nothing can be booked now.</p>;
+  }
+
   return (
     <form noValidate onSubmit={submit} className="space-y-4" aria-label="Book a bench">
+      {booked && (
+        <Alert tone="success" announce>
+          Booked {booked.bench.name}, {formatSlot(booked.startsAt, booked.endsAt)} ({zone}), for {booked.cells.length}{' '}
+          cell{booked.cells.length === 1 ? '' : 's'}.
+        </Alert>
+      )}
       <FormErrorSummary
-        title="The bench was not booked"
+        title="This slot was not booked"
         items={form.summaryItems}
-        message={form.formError}
+        message={refusal ?? form.formError}
         attempt={form.attempt}
       />
+
       <Select
         {...form.field('benchId')}
-        options={activeBenches.map((bench) => ({
+        onChange={(event) => change('benchId')(event.target.value)}
+        placeholder="Choose a bench…"
+        options={active.map((bench) => ({
           value: String(bench.id),
           label: bench.location ? `${bench.name} (${bench.location})` : bench.name,
         }))}
-        placeholder={activeBenches.length ? 'Choose a bench…' : 'No bench is in service'}
       />
-      <div className="grid gap-4 sm:grid-cols-2">
-        <TextField {...form.field('startsAt')} type="datetime-local" step={900} />
-        <TextField {...form.field('endsAt')} type="datetime-local" step={900} />
+      {/* Each time field gets a row of its own when two do not fit side by side (a narrow panel, a phone). */}
+      <div className="grid grid-cols-[repeat(auto-fit,minmax(15.5rem,1fr))] gap-3">
+        <TextField
+          {...form.field('startsAt')}
+          onChange={(event) => change('startsAt')(event.target.value)}
+          type="datetime-local"
+          step={900}
+        />
+        <TextField
+          {...form.field('endsAt')}
+          onChange={(event) => change('endsAt')(event.target.value)}
+          type="datetime-local"
+          step={900}
+        />
       </div>
       <p className="-mt-2 text-[0.8125rem] text-muted">
-        Times are in your time zone, <strong className="font-semibold text-ink">{zone}</strong>. One slot is at most{' '}
-        {MAX_BOOKING_HOURS} hours; slots on a bench may touch but not overlap.
+        In {zone}. At most {MAX_BOOKING_HOURS} hours per booking; slots may touch but not overlap.
       </p>
 
       <fieldset
@@ -132,17 +198,17 @@ export function BookBenchForm({ benches, cells, onBooked }: BookBenchFormProps) 
         aria-describedby={form.errors.cellIds ? `${form.fieldId('cellIds')}-error` : undefined}
         className="outline-none"
       >
-        <legend id={cellsHeadingId} className="mb-1 text-sm font-semibold text-ink">
-          {labels.cellIds}
-        </legend>
+        <legend className="mb-1.5 text-sm font-semibold text-ink">{labels.cellIds}</legend>
         {form.errors.cellIds && (
-          <p id={`${form.fieldId('cellIds')}-error`} className="mb-1 flex gap-1.5 text-sm font-medium text-red">
+          <p id={`${form.fieldId('cellIds')}-error`} className="mb-1.5 flex gap-1.5 text-sm font-medium text-red">
             <span aria-hidden="true">✕</span>
             <span>{form.errors.cellIds}</span>
           </p>
         )}
         {cells.length === 0 ? (
-          <p className="text-sm text-muted">No assigned cells to book time for.</p>
+          <p className="text-sm text-muted">
+            You have no assigned cells to book time for. An editor assigns cells in a roundup’s test matrix.
+          </p>
         ) : (
           <ul className="max-h-72 divide-y divide-rule overflow-y-auto rounded-[3px] border border-rule">
             {cells.map((item) => {
@@ -163,6 +229,7 @@ export function BookBenchForm({ benches, cells, onBooked }: BookBenchFormProps) 
                     <span className="block text-xs text-muted">
                       {item.roundup.title}
                       {item.cell.dueDate && ` · due ${formatCalendarDate(item.cell.dueDate)}`}
+                      {item.cell.overdue && ' · overdue'}
                     </span>
                   </label>
                 </li>
@@ -172,14 +239,31 @@ export function BookBenchForm({ benches, cells, onBooked }: BookBenchFormProps) 
         )}
       </fieldset>
 
-      <TextField {...form.field('note')} optional autoComplete="off" maxLength={300} />
-      {refusal && (
-        <Alert tone="danger" title="That slot is taken">
-          {refusal}
-        </Alert>
+      <TextArea
+        {...form.field('note')}
+        onChange={(event) => form.setValue('note', event.target.value)}
+        optional
+        rows={2}
+        maxLength={300}
+        description="Anything the next person at the bench should know."
+      />
+
+      {mismatch && (
+        <div className="space-y-3">
+          <Alert tone="warning" title="This bench is not set up as the roundup asks">
+            {mismatch}
+          </Alert>
+          <TextArea
+            {...form.field('overrideReason')}
+            onChange={(event) => form.setValue('overrideReason', event.target.value)}
+            rows={2}
+            maxLength={300}
+            description="Kept with the booking, so the editor can see why the set-up differs."
+          />
+        </div>
       )}
       <Button type="submit" variant="primary" pending={book.isPending}>
-        Book the bench
+        {mismatch ? 'Book anyway' : 'Book this slot'}
       </Button>
     </form>
   );

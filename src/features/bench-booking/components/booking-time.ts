@@ -1,4 +1,6 @@
-// Bookings are UTC instants; this page shows them in the zone of the device, and names that zone.
+// Bookings are UTC instants; the booking screens show them in the zone of the device, and name that zone. Calendar
+// arithmetic and the datetime-local fields live here; slots are written out by formatSlot in lib/format-time.
+import { userTimeZone, zoneAbbreviation } from '../../../lib/format-time';
 
 const DAY_MS = 86_400_000;
 
@@ -48,7 +50,6 @@ export function instantFromLocalInput(value: string): string | null {
 
 const dayHeading = new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short' });
 const longDay = new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' });
-const clock = new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
 const shortDate = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short' });
 
 /** "Tue 2 Dec" */
@@ -61,29 +62,9 @@ export function formatLongDay(date: Date): string {
   return longDay.format(date);
 }
 
-/** "09:00" in local time. */
-export function formatClock(date: Date): string {
-  return clock.format(date);
-}
-
-const dueDate = new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
-
-/** A calendar date (YYYY-MM-DD, no zone) as "Sun 6 Dec"; read as UTC so it stays the same day everywhere. */
-export function formatDueDate(date: string): string {
-  return dueDate.format(new Date(`${date}T00:00:00Z`));
-}
-
 /** "2 Dec" */
 export function formatShortDate(date: Date): string {
   return shortDate.format(date);
-}
-
-/** "09:00–12:00", or "22:00 Tue 2 Dec – 06:00 Wed 3 Dec" when the slot crosses midnight. */
-export function formatSlot(startsAt: string, endsAt: string): string {
-  const start = new Date(startsAt);
-  const end = new Date(endsAt);
-  if (dateParam(start) === dateParam(end)) return `${formatClock(start)}–${formatClock(end)}`;
-  return `${formatClock(start)} ${formatDayHeading(start)} – ${formatClock(end)} ${formatDayHeading(end)}`;
 }
 
 /** "3 h", "1 h 30 min", "45 min" */
@@ -115,4 +96,11 @@ export function overlapsDay(dayStart: Date, startsAt: string, endsAt: string): b
 export function weekFromParams(params: URLSearchParams, now: number) {
   const weekStart = startOfWeek(parseDateParam(params.get('week')) ?? new Date(now));
   return { weekStart, from: weekStart.toISOString(), to: addDays(weekStart, 7).toISOString() };
+}
+
+/** The device's zone for the booking screens, e.g. "Europe/Berlin (CET)", as of the given moment. */
+export function zoneLabel(at: number): string {
+  const zone = userTimeZone();
+  const abbreviation = zoneAbbreviation(new Date(at).toISOString());
+  return abbreviation && abbreviation !== zone ? `${zone} (${abbreviation})` : zone;
 }

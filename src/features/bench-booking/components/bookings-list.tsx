@@ -6,8 +6,8 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { describeSubmitError } from '../../../lib/form-errors';
 import { formatSlot, userTimeZone } from '../../../lib/format-time';
 import type { Booking } from '../../../../shared/schemas/benches';
-import { useCancelBooking } from '../api/cancel-booking';
 import { productName } from '../../../lib/product-name';
+import { useCancelBooking } from '../api/cancel-booking';
 
 /** The tester's upcoming slots, soonest first, each with the cells it covers. */
 export function BookingsList({ bookings }: { bookings: readonly Booking[] }) {
@@ -57,6 +57,11 @@ export function BookingsList({ bookings }: { bookings: readonly Booking[] }) {
                   ))}
                 </ul>
                 {booking.note && <p className="mt-0.5 text-[0.8125rem]">{booking.note}</p>}
+                {booking.overrideReason && (
+                  <p className="mt-0.5 text-[0.8125rem] text-amber">
+                    Set-up differs from the profile: {booking.overrideReason}
+                  </p>
+                )}
               </div>
               {booking.cancellable && (
                 <Button

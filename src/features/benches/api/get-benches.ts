@@ -3,6 +3,7 @@ import { apiClient } from '../../../lib/api-client';
 import { benchListSchema, type Bench } from '../../../../shared/schemas/benches';
 import { benchKeys } from './bench-keys';
 
+/** The physical test systems (in and out of service): the Benches page and every bench picker. */
 export async function getBenches(signal?: AbortSignal): Promise<Bench[]> {
   const { benches } = await apiClient.get('/api/benches', { signal, schema: benchListSchema });
   return benches;

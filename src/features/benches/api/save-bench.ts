@@ -6,7 +6,7 @@ import {
   type CreateBenchRequest,
   type UpdateBenchRequest,
 } from '../../../../shared/schemas/benches';
-import { benchKeys } from './bench-keys';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export function createBench(input: CreateBenchRequest): Promise<Bench> {
   return apiClient.post('/api/benches', input, { schema: benchSchema });
@@ -25,7 +25,7 @@ export function useCreateBench() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createBench,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: benchKeys.all }),
+    onSuccess: () => invalidateAfter(queryClient, 'bench'),
   });
 }
 
@@ -33,6 +33,6 @@ export function useUpdateBench() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: updateBench,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: benchKeys.all }),
+    onSuccess: () => invalidateAfter(queryClient, 'bench'),
   });
 }

@@ -8,7 +8,6 @@ import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { createBenchRequestSchema, type Bench } from '../../../../shared/schemas/benches';
-import type { BenchProfileOption } from '../api/get-bench-profiles';
 import { useCreateBench, useUpdateBench } from '../api/save-bench';
 import { TextArea } from '../../../components/ui/text-area';
 
@@ -27,6 +26,12 @@ const benchFormSchema = z
     }
     return parsed.data;
   });
+
+/** A bench profile a bench can be built to (archived ones are left out of the picker). */
+export interface BenchProfileOption {
+  id: number;
+  name: string;
+}
 
 export interface BenchDialogProps {
   open: boolean;

@@ -1,66 +1,48 @@
-import { useState } from 'react';
-import { Link, useSearchParams } from 'react-router';
+import { useState, type ReactNode } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { PageHeader } from '../../../components/ui/page-header';
-import { Panel } from '../../../components/ui/panel';
-import { Select } from '../../../components/ui/select';
-import { userTimeZone, zoneAbbreviation } from '../../../lib/format-time';
 import type { Bench, Booking } from '../../../../shared/schemas/benches';
-import type { QueueItem } from '../../../../shared/schemas/matrix';
-import type { BenchProfileOption } from '../api/get-bench-profiles';
 import { useBenches } from '../api/get-benches';
-import { useBookings } from '../api/get-bookings';
-import { BenchCautions } from './bench-cautions';
-import { BenchDialog } from './bench-dialog';
+import { BenchDialog, type BenchProfileOption } from './bench-dialog';
 import { BenchesTable } from './benches-table';
-import { dateParam, formatDayHeading, startOfWeek, weekFromParams } from './bench-time';
-import { BookingAgenda } from './booking-agenda';
-import { BookingForm } from './booking-form';
 
 export interface BenchesOverviewProps {
-  currentUserId: number;
   /** Editors add and edit benches. */
   canManage: boolean;
-  /** Bench testers book slots; these are their bookable cells (null for other roles). */
-  bookableCells: readonly QueueItem[] | null;
+  /** Bench testers book time; the description says so. */
+  canBook: boolean;
   /** Bench profiles for the bench form (editors only). */
   profiles: readonly BenchProfileOption[];
+  /** This week's bookings, for each bench's next slot. */
+  bookings: readonly Booking[];
   /** The moment the page was opened, from the loader (keeps rendering pure). */
   openedAt: number;
+  /** The standing safety note, under the page heading. */
+  caution: ReactNode;
+  /** The booking calendar, under the benches. */
+  children: ReactNode;
 }
 
-export function BenchesOverview({ currentUserId, canManage, bookableCells, profiles, openedAt }: BenchesOverviewProps) {
-  const [params, setParams] = useSearchParams();
+/** The Benches page around its calendar: the test systems, and for editors adding and editing them. */
+export function BenchesOverview({
+  canManage,
+  canBook,
+  profiles,
+  bookings,
+  openedAt,
+  caution,
+  children,
+}: BenchesOverviewProps) {
   const benches = useBenches();
-  const { weekStart, from, to } = weekFromParams(params, openedAt);
-  const bookings = useBookings({ from, to });
   const [dialog, setDialog] = useState<{ bench: Bench | null; open: boolean }>({ bench: null, open: false });
   const [notice, setNotice] = useState<string | null>(null);
-  const [lastBooking, setLastBooking] = useState<Booking | null>(null);
 
-  const requestedBench = Number(params.get('bench'));
-  const benchId = benches.some((bench) => bench.id === requestedBench) ? requestedBench : null;
-  const zone = userTimeZone();
-  const abbreviation = zoneAbbreviation(new Date(openedAt).toISOString());
-  const zoneLabel = abbreviation && abbreviation !== zone ? `${zone} (${abbreviation})` : zone;
-  const today = dateParam(new Date(openedAt));
-  const nextHour = new Date(openedAt);
-  nextHour.setHours(nextHour.getHours() + 1, 0, 0, 0);
-
-  const weekHref = (date: Date) => {
-    const next = new URLSearchParams(params);
-    next.set('week', dateParam(startOfWeek(date)));
-    return `?${next}`;
-  };
-
-  const startEditing = (bench: Bench) => {
+  const openDialog = (bench: Bench | null) => {
     setNotice(null);
     setDialog({ bench, open: true });
   };
-
-  const lastBookingWeek = lastBooking ? dateParam(startOfWeek(new Date(lastBooking.startsAt))) : null;
 
   return (
     <>
@@ -68,25 +50,19 @@ export function BenchesOverview({ currentUserId, canManage, bookableCells, profi
         eyebrow="Lab"
         title="Benches"
         description={
-          bookableCells
+          canBook
             ? 'The physical test systems and who has them when. Book time against the cells assigned to you.'
             : 'The physical test systems and who has them when. Bench testers book time against their assigned cells.'
         }
         actions={
           canManage ? (
-            <Button
-              variant="primary"
-              onClick={() => {
-                setNotice(null);
-                setDialog({ bench: null, open: true });
-              }}
-            >
+            <Button variant="primary" onClick={() => openDialog(null)}>
               Add bench
             </Button>
           ) : undefined
         }
       />
-      <BenchCautions />
+      {caution}
       {notice && (
         <Alert tone="success" announce className="mb-4">
           {notice}
@@ -108,69 +84,11 @@ export function BenchesOverview({ currentUserId, canManage, bookableCells, profi
             <BenchesTable
               benches={benches}
               bookings={bookings}
-              onEdit={canManage ? startEditing : undefined}
+              onEdit={canManage ? openDialog : undefined}
               now={openedAt}
             />
           </section>
-
-          <div className="grid grid-cols-1 gap-5 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-            {bookableCells && (
-              <div className="lg:sticky lg:top-4 lg:col-start-2 lg:row-start-1 lg:self-start">
-                <Panel title="Book a bench" description="Your slot, for your assigned cells.">
-                  <BookingForm
-                    benches={benches}
-                    cells={bookableCells}
-                    initialBenchId={benchId}
-                    suggestedStart={nextHour}
-                    zoneLabel={zoneLabel}
-                    onBooked={setLastBooking}
-                  />
-                  {lastBooking && lastBookingWeek !== dateParam(weekStart) && (
-                    <p className="mt-3 text-sm">
-                      <Link to={weekHref(new Date(lastBooking.startsAt))} className="underline underline-offset-2">
-                        Show the week of {formatDayHeading(new Date(lastBooking.startsAt))}
-                      </Link>
-                    </p>
-                  )}
-                </Panel>
-              </div>
-            )}
-            <div className={bookableCells ? 'lg:col-start-1 lg:row-start-1' : 'lg:col-span-2'}>
-              <div className="mb-3 sm:w-72">
-                <Select
-                  label="Show bench"
-                  required={false}
-                  placeholder="All benches in service"
-                  options={benches.map((bench) => ({
-                    value: String(bench.id),
-                    label: bench.active ? bench.name : `${bench.name} (out of service)`,
-                  }))}
-                  value={benchId === null ? '' : String(benchId)}
-                  onChange={(event) =>
-                    setParams(
-                      (current) => {
-                        const next = new URLSearchParams(current);
-                        if (event.target.value) next.set('bench', event.target.value);
-                        else next.delete('bench');
-                        return next;
-                      },
-                      { preventScrollReset: true },
-                    )
-                  }
-                />
-              </div>
-              <BookingAgenda
-                weekStart={weekStart}
-                today={today}
-                benches={benches}
-                bookings={bookings}
-                benchId={benchId}
-                currentUserId={currentUserId}
-                weekHref={weekHref}
-                zoneLabel={zoneLabel}
-              />
-            </div>
-          </div>
+          {children}
         </>
       )}
 

@@ -3,7 +3,7 @@ import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import type { Bench, Booking } from '../../../../shared/schemas/benches';
-import { formatClock, formatDayHeading } from './bench-time';
+import { formatDayAndTime } from '../../../lib/format-time';
 
 export interface BenchesTableProps {
   benches: readonly Bench[];
@@ -58,8 +58,7 @@ export function BenchesTable({ benches, bookings, onEdit, now }: BenchesTablePro
         cell: (bench) => {
           const next = nextBooking(bench);
           if (!next) return <span className="text-muted">Free</span>;
-          const start = new Date(next.startsAt);
-          return `${formatDayHeading(start)}, ${formatClock(start)}`;
+          return formatDayAndTime(next.startsAt);
         },
       },
       {

@@ -7,7 +7,7 @@ import {
   type CatalogImportPreview,
   type CatalogImportResult,
 } from '../../../../shared/schemas/catalog-import';
-import { catalogKeys } from './catalog-keys';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export interface CsvRequestInput {
   /** The CSV as the user gave it: a chosen file, or pasted text sent as a file of its own. */
@@ -50,7 +50,7 @@ export function useCommitCatalogImport() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: commitCatalogImport,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: catalogKeys.all }),
+    onSuccess: () => invalidateAfter(queryClient, 'product'),
   });
 }
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { priceSchema, type CreatePriceRequest, type Price } from '../../../../shared/schemas/catalog';
-import { catalogKeys } from './catalog-keys';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export interface AddPriceInput {
   productId: number;
@@ -21,7 +21,7 @@ export function useAddPrice() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: addPrice,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: catalogKeys.all }),
+    onSuccess: () => invalidateAfter(queryClient, 'product'),
   });
 }
 
@@ -29,6 +29,6 @@ export function useRemovePrice() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: removePrice,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: catalogKeys.all }),
+    onSuccess: () => invalidateAfter(queryClient, 'product'),
   });
 }

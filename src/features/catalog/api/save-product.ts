@@ -7,6 +7,7 @@ import {
   type UpdateProductRequest,
 } from '../../../../shared/schemas/catalog';
 import { catalogKeys } from './catalog-keys';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export function createProduct(input: CreateProductRequest): Promise<ProductDetail> {
   return apiClient.post('/api/catalog/products', input, { schema: productDetailSchema });
@@ -32,7 +33,7 @@ export function useCreateProduct() {
     mutationFn: createProduct,
     onSuccess: (product) => {
       queryClient.setQueryData(catalogKeys.detail(product.id), product);
-      return queryClient.invalidateQueries({ queryKey: catalogKeys.lists() });
+      return invalidateAfter(queryClient, 'product');
     },
   });
 }
@@ -43,7 +44,7 @@ export function useUpdateProduct() {
     mutationFn: updateProduct,
     onSuccess: (product) => {
       queryClient.setQueryData(catalogKeys.detail(product.id), product);
-      return queryClient.invalidateQueries({ queryKey: catalogKeys.lists() });
+      return invalidateAfter(queryClient, 'product');
     },
   });
 }
@@ -54,7 +55,7 @@ export function useDeleteProduct() {
     mutationFn: deleteProduct,
     onSuccess: (_result, id) => {
       queryClient.removeQueries({ queryKey: catalogKeys.detail(id) });
-      return queryClient.invalidateQueries({ queryKey: catalogKeys.lists() });
+      return invalidateAfter(queryClient, 'product');
     },
   });
 }

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 import { assignCellsResponseSchema, type AssignCellsRequest } from '../../../../shared/schemas/matrix';
-import { invalidatePlanning } from '../../../lib/invalidate-planning';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export interface AssignCellsInput {
   roundupId: number;
@@ -18,5 +18,5 @@ export function assignCells({ roundupId, assignment }: AssignCellsInput): Promis
 
 export function useAssignCells() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: assignCells, onSuccess: () => invalidatePlanning(queryClient) });
+  return useMutation({ mutationFn: assignCells, onSuccess: () => invalidateAfter(queryClient, 'plan') });
 }

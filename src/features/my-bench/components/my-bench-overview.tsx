@@ -1,60 +1,70 @@
-import { useCallback, useState } from 'react';
+import { useCallback, useId, useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
 import { Panel } from '../../../components/ui/panel';
+import { TextArea } from '../../../components/ui/text-area';
+import { isApiError } from '../../../lib/api-client';
 import { describeSubmitError } from '../../../lib/form-errors';
-import {
-  bookableStates,
-  cellStateLabels,
-  type CellAction,
-} from '../../../../shared/domain/planning/matrix-cell-states';
-import type { QueueItem } from '../../../../shared/schemas/matrix';
-import { useBenches } from '../api/get-benches';
-import { useMyBench } from '../api/get-my-bench';
-import { useMoveCell } from '../api/move-cell';
-import { formatSlot } from '../../../lib/format-time';
 import { productName } from '../../../lib/product-name';
-import { BenchSafety } from './bench-safety';
-import { BookBenchForm } from './book-bench-form';
-import { BookingsList } from './bookings-list';
+import { cellStateLabels, type CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
+import type { MyBench } from '../../../../shared/schemas/benches';
+import type { MatrixCell, QueueItem } from '../../../../shared/schemas/matrix';
 import { QueueTable } from './queue-table';
 
+/** One of the tester's own moves on a cell: start a run, put it back in the queue, or mark it recorded. */
+export interface MoveCellInput {
+  roundupId: number;
+  cellId: number;
+  action: CellAction;
+  /** Why a run starts outside every booking of the cell (asked for after the server's warning). */
+  overrideReason?: string;
+}
+
 export interface MyBenchOverviewProps {
+  myBench: MyBench;
   /** Link to a roundup's matrix. */
   matrixPath: (roundupId: number) => string;
+  /** Sends a move (the page wires in the matrix's one transition request). */
+  moveCell: (input: MoveCellInput) => Promise<MatrixCell>;
 }
 
 type Notice = { tone: 'success' | 'danger'; text: string } | null;
 
-/** A tester's own work: the queue, what waits for the editor, the bookings, and booking a bench. */
-export function MyBenchOverview({ matrixPath }: MyBenchOverviewProps) {
-  const myBench = useMyBench();
-  const benches = useBenches();
-  const moveCell = useMoveCell();
+const cellName = (item: QueueItem) => `${productName(item.product)} · ${item.loadConfiguration.name}`;
+
+/** A tester's own work: the queue and what waits for the editor. */
+export function MyBenchOverview({ myBench, matrixPath, moveCell }: MyBenchOverviewProps) {
   const [notice, setNotice] = useState<Notice>(null);
-  const [booked, setBooked] = useState<string | null>(null);
-  const bookable = myBench.queue.filter((item) => bookableStates.includes(item.cell.state));
+  const [pendingCellId, setPendingCellId] = useState<number | undefined>();
+  // A start the server warned about: no booking of this cell covers now. The tester may start anyway, with a reason.
+  const [outside, setOutside] = useState<{ item: QueueItem; message: string } | null>(null);
   const overdue = myBench.queue.filter((item) => item.cell.overdue).length;
 
   const move = useCallback(
-    (item: QueueItem, action: CellAction) => {
-      const name = `${productName(item.product)} · ${item.loadConfiguration.name}`;
+    async (item: QueueItem, action: CellAction, overrideReason?: string) => {
       setNotice(null);
-      moveCell.mutate(
-        { roundupId: item.roundup.id, cellId: item.cell.id, action },
-        {
-          onSuccess: (cell) => setNotice({ tone: 'success', text: `${name}: ${cellStateLabels[cell.state]}.` }),
-          onError: (error) =>
-            setNotice({ tone: 'danger', text: `${name} did not move. ${describeSubmitError(error).message}` }),
-        },
-      );
+      setPendingCellId(item.cell.id);
+      try {
+        const cell = await moveCell({ roundupId: item.roundup.id, cellId: item.cell.id, action, overrideReason });
+        setOutside(null);
+        setNotice({ tone: 'success', text: `${cellName(item)}: ${cellStateLabels[cell.state]}.` });
+      } catch (error) {
+        if (isApiError(error) && error.code === 'start_outside_booking') {
+          setOutside({ item, message: error.message });
+        } else {
+          setOutside(null);
+          setNotice({ tone: 'danger', text: `${cellName(item)} did not move. ${describeSubmitError(error).message}` });
+        }
+      } finally {
+        setPendingCellId(undefined);
+      }
     },
     [moveCell],
   );
 
   return (
     <div className="space-y-6">
-      <BenchSafety />
-
       <Panel
         title="Your queue"
         description={
@@ -75,8 +85,8 @@ export function MyBenchOverview({ matrixPath }: MyBenchOverviewProps) {
           items={myBench.queue}
           bookings={myBench.upcomingBookings}
           matrixPath={matrixPath}
-          onMove={move}
-          pendingCellId={moveCell.isPending ? moveCell.variables?.cellId : undefined}
+          onMove={(item, action) => void move(item, action)}
+          pendingCellId={pendingCellId}
           empty={{
             title: 'Your queue is empty',
             text: 'When an editor assigns matrix cells to you, they appear here by due date.',
@@ -96,29 +106,76 @@ export function MyBenchOverview({ matrixPath }: MyBenchOverviewProps) {
         </Panel>
       )}
 
-      <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
-        <Panel title="Your bookings">
-          <BookingsList bookings={myBench.upcomingBookings} />
-        </Panel>
-        <Panel title="Book a bench" description="Reserve bench time for cells assigned to you.">
-          {booked && (
-            <Alert tone="success" announce className="mb-4">
-              {booked}
-            </Alert>
-          )}
-          <BookBenchForm
-            benches={benches}
-            cells={bookable}
-            onBooked={(booking) =>
-              setBooked(
-                `Booked ${booking.bench.name}, ${formatSlot(booking.startsAt, booking.endsAt)}, for ${booking.cells.length} cell${
-                  booking.cells.length === 1 ? '' : 's'
-                }.`,
-              )
-            }
-          />
-        </Panel>
-      </div>
+      <StartOutsideBookingDialog
+        warning={outside}
+        pending={outside !== null && pendingCellId === outside.item.cell.id}
+        onCancel={() => setOutside(null)}
+        onConfirm={(reason) => outside && void move(outside.item, 'start', reason)}
+      />
     </div>
+  );
+}
+
+function StartOutsideBookingDialog({
+  warning,
+  pending,
+  onCancel,
+  onConfirm,
+}: {
+  warning: { item: QueueItem; message: string } | null;
+  pending: boolean;
+  onCancel: () => void;
+  onConfirm: (reason: string) => void;
+}) {
+  const formId = useId();
+  const [reason, setReason] = useState('');
+  const [error, setError] = useState<string | undefined>();
+  return (
+    <Dialog
+      open={warning !== null}
+      onClose={onCancel}
+      size="sm"
+      title="Start outside your bookings?"
+      footer={
+        <>
+          <Button onClick={onCancel}>Keep it queued</Button>
+          <Button type="submit" form={formId} variant="primary" pending={pending}>
+            Start anyway
+          </Button>
+        </>
+      }
+    >
+      <form
+        id={formId}
+        noValidate
+        className="space-y-3"
+        onSubmit={(event) => {
+          event.preventDefault();
+          if (!reason.trim()) {
+            setError('Say why the run starts outside its bookings.');
+            return;
+          }
+          onConfirm(reason.trim());
+        }}
+      >
+        {warning && (
+          <p className="text-sm">
+            <span className="font-semibold">{cellName(warning.item)}.</span> {warning.message}
+          </p>
+        )}
+        <TextArea
+          label="Why start now"
+          rows={2}
+          maxLength={300}
+          value={reason}
+          error={error}
+          description="Kept in the roundup’s history, so the editor can see why."
+          onChange={(event) => {
+            setReason(event.target.value);
+            setError(undefined);
+          }}
+        />
+      </form>
+    </Dialog>
   );
 }

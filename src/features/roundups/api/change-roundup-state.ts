@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { roundupDetailSchema, type RoundupDetail } from '../../../../shared/schemas/roundups';
 import type { RoundupState } from '../../../../shared/domain/planning/roundup-states';
-import { invalidatePlanning } from '../../../lib/invalidate-planning';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export interface ChangeRoundupStateInput {
   id: number;
@@ -16,5 +16,5 @@ export function changeRoundupState({ id, to }: ChangeRoundupStateInput): Promise
 
 export function useChangeRoundupState() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: changeRoundupState, onSuccess: () => invalidatePlanning(queryClient) });
+  return useMutation({ mutationFn: changeRoundupState, onSuccess: () => invalidateAfter(queryClient, 'plan') });
 }

@@ -5,7 +5,7 @@ import {
   type BenchProfile,
   type CreateBenchProfileRequest,
 } from '../../../../shared/schemas/bench-profiles';
-import { roundupKeys } from './roundup-keys';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export function createBenchProfile(input: CreateBenchProfileRequest): Promise<BenchProfile> {
   return apiClient.post('/api/bench-profiles', input, { schema: benchProfileSchema });
@@ -15,6 +15,6 @@ export function useCreateBenchProfile() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createBenchProfile,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: roundupKeys.item('bench-profiles') }),
+    onSuccess: () => invalidateAfter(queryClient, 'benchProfile'),
   });
 }

@@ -5,7 +5,7 @@ import {
   type CreateLoadConfigurationRequest,
   type LoadConfiguration,
 } from '../../../../shared/schemas/load-configurations';
-import { roundupKeys } from './roundup-keys';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export function createLoadConfiguration(input: CreateLoadConfigurationRequest): Promise<LoadConfiguration> {
   return apiClient.post('/api/load-configurations', input, { schema: loadConfigurationSchema });
@@ -15,6 +15,6 @@ export function useCreateLoadConfiguration() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createLoadConfiguration,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: roundupKeys.item('load-configurations') }),
+    onSuccess: () => invalidateAfter(queryClient, 'loadConfiguration'),
   });
 }

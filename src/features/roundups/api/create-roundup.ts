@@ -5,7 +5,7 @@ import {
   type CreateRoundupRequest,
   type RoundupDetail,
 } from '../../../../shared/schemas/roundups';
-import { invalidatePlanning } from '../../../lib/invalidate-planning';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export function createRoundup(input: CreateRoundupRequest): Promise<RoundupDetail> {
   return apiClient.post('/api/roundups', input, { schema: roundupDetailSchema });
@@ -13,5 +13,5 @@ export function createRoundup(input: CreateRoundupRequest): Promise<RoundupDetai
 
 export function useCreateRoundup() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: createRoundup, onSuccess: () => invalidatePlanning(queryClient) });
+  return useMutation({ mutationFn: createRoundup, onSuccess: () => invalidateAfter(queryClient, 'plan') });
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidatePlanning } from '../../../lib/invalidate-planning';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export interface RemoveEntryInput {
   roundupId: number;
@@ -14,5 +14,5 @@ export function removeEntry({ roundupId, entryId }: RemoveEntryInput): Promise<v
 
 export function useRemoveEntry() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: removeEntry, onSuccess: () => invalidatePlanning(queryClient) });
+  return useMutation({ mutationFn: removeEntry, onSuccess: () => invalidateAfter(queryClient, 'plan') });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 import { roundupDetailSchema, type RoundupDetail } from '../../../../shared/schemas/roundups';
-import { invalidatePlanning } from '../../../lib/invalidate-planning';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export interface SetLoadConfigurationsInput {
   id: number;
@@ -23,5 +23,5 @@ export function setLoadConfigurations({
 
 export function useSetLoadConfigurations() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: setLoadConfigurations, onSuccess: () => invalidatePlanning(queryClient) });
+  return useMutation({ mutationFn: setLoadConfigurations, onSuccess: () => invalidateAfter(queryClient, 'plan') });
 }

@@ -5,7 +5,7 @@ import {
   type RoundupDetail,
   type UpdateRoundupRequest,
 } from '../../../../shared/schemas/roundups';
-import { invalidatePlanning } from '../../../lib/invalidate-planning';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export interface UpdateRoundupInput {
   id: number;
@@ -18,5 +18,5 @@ export function updateRoundup({ id, changes }: UpdateRoundupInput): Promise<Roun
 
 export function useUpdateRoundup() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: updateRoundup, onSuccess: () => invalidatePlanning(queryClient) });
+  return useMutation({ mutationFn: updateRoundup, onSuccess: () => invalidateAfter(queryClient, 'plan') });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { sampleSchema, type Sample, type UpdateSampleRequest } from '../../../../shared/schemas/samples';
-import { invalidatePlanning } from '../../../lib/invalidate-planning';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export interface UpdateSampleInput {
   roundupId: number;
@@ -16,5 +16,5 @@ export function updateSample({ roundupId, sampleId, changes }: UpdateSampleInput
 
 export function useUpdateSample() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: updateSample, onSuccess: () => invalidatePlanning(queryClient) });
+  return useMutation({ mutationFn: updateSample, onSuccess: () => invalidateAfter(queryClient, 'sample') });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { userSchema, type CreateUserRequest, type User } from '../../../../shared/schemas/users';
-import { userKeys } from './user-keys';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export function createUser(input: CreateUserRequest): Promise<User> {
   return apiClient.post('/api/users', input, { schema: userSchema });
@@ -11,6 +11,6 @@ export function useCreateUser() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createUser,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.all }),
+    onSuccess: () => invalidateAfter(queryClient, 'user'),
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { userSchema, type UpdateUserRequest, type User } from '../../../../shared/schemas/users';
-import { userKeys } from './user-keys';
+import { invalidateAfter } from '../../../lib/stale-after';
 
 export interface UpdateUserInput {
   id: number;
@@ -17,6 +17,6 @@ export function useUpdateUser() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: updateUser,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.all }),
+    onSuccess: () => invalidateAfter(queryClient, 'user'),
   });
 }

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import { PasswordGuesses, passwordGuessPolicy } from './auth/password-guesses';
 import { createSessionStore } from './auth/session-store';
 import { secureCookieFor, type Env } from './env';
 import { AuthService } from './services/auth.service';
@@ -28,6 +29,7 @@ export function createServices(dataSource: DataSource, env: Env) {
     sessionDays: env.SESSION_DAYS,
   });
   const files = createFileStore(env);
+  const passwordGuesses = new PasswordGuesses(dataSource, passwordGuessPolicy(env));
 
   const auth = new AuthService(dataSource, sessions);
   const users = new UsersService(dataSource);
@@ -47,6 +49,7 @@ export function createServices(dataSource: DataSource, env: Env) {
 
   return {
     sessions,
+    passwordGuesses,
     files,
     auth,
     users,

@@ -17,9 +17,14 @@ const envSchema = z
     TRUST_PROXY: z.string().default('false'),
     /** Secure session cookie; defaults to on in production. Turn off only for plain-HTTP local use. */
     COOKIE_SECURE: z.enum(['auto', 'true', 'false']).default('auto'),
+    /** Wrong passwords from one client address within SIGN_IN_WINDOW_MINUTES before it must wait. */
     SIGN_IN_LIMIT_PER_IP: z.coerce.number().int().positive().default(30),
-    SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().positive().default(8),
     SIGN_IN_WINDOW_MINUTES: z.coerce.number().positive().default(15),
+    /** Wrong passwords for one account before each further attempt waits for a lock to pass. */
+    SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().positive().default(5),
+    /** The first lock after SIGN_IN_LIMIT_PER_ACCOUNT wrong passwords; it doubles with each one after that. */
+    SIGN_IN_LOCK_SECONDS: z.coerce.number().positive().default(30),
+    SIGN_IN_LOCK_MAX_MINUTES: z.coerce.number().positive().default(15),
     SESSION_DAYS: z.coerce.number().int().positive().default(14),
     DB_LOGGING: booleanFlag,
     /** Where uploaded files are kept: local disk (UPLOADS_DIR) or S3-compatible object storage (S3_*). */

@@ -1,5 +1,6 @@
 // Sessions for Benchwire. lucia v3 is in maintenance, so it stays behind this module: the rest of the
 // server only calls the functions exported here, and swapping the library touches this file alone.
+import { createHash } from 'node:crypto';
 import { Lucia, TimeSpan } from 'lucia';
 import type { Adapter, DatabaseSession, DatabaseUser } from 'lucia';
 import { LessThan, type DataSource } from 'typeorm';
@@ -72,6 +73,15 @@ class TypeormSessionAdapter implements Adapter {
 }
 
 export const SESSION_COOKIE = 'benchwire_session';
+
+/**
+ * The name a session is listed and revoked by. The session id is the cookie's secret value, so it never leaves
+ * the server except in Set-Cookie; this one-way hash of it (132 bits, URL-safe) tells sessions apart instead.
+ */
+export function publicSessionId(sessionId: string): string {
+  return createHash('sha256').update(sessionId).digest('base64url').slice(0, 22);
+}
+export const PUBLIC_SESSION_ID_PATTERN = /^[A-Za-z0-9_-]{22}$/;
 
 export function createSessionStore(dataSource: DataSource, options: { secureCookie: boolean; sessionDays: number }) {
   return new Lucia(new TypeormSessionAdapter(dataSource), {

@@ -6,6 +6,7 @@ import { BenchProfileEntity } from './bench-profile.entity';
 import { BenchEntity } from './bench.entity';
 import { LoadConfigurationEntity } from './load-configuration.entity';
 import { MatrixCellEntity } from './matrix-cell.entity';
+import { PasswordGuessCounterEntity } from './password-guess-counter.entity';
 import { ProductPriceEntity } from './product-price.entity';
 import { ProductEntity } from './product.entity';
 import { RoundupEntryEntity } from './roundup-entry.entity';
@@ -41,4 +42,5 @@ export const entities = [
   RunAnalysisEntity,
   PhotoEntity,
   CalendarFeedEntity,
+  PasswordGuessCounterEntity,
 ];

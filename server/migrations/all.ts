@@ -19,6 +19,7 @@ import { CreatePhotos1765200004000 } from './1765200004000-create-photos';
 import { CaptureSettings1765200005000 } from './1765200005000-capture-settings';
 import { AddBookingOverrideReason1765200031000 } from './1765200031000-add-booking-override-reason';
 import { CreateCalendarFeeds1765200032000 } from './1765200032000-create-calendar-feeds';
+import { CreatePasswordGuessCounters1765300001000 } from './1765300001000-create-password-guess-counters';
 
 export const migrations = [
   CreateUsersSessionsAudit1764600000000,
@@ -41,4 +42,5 @@ export const migrations = [
   CaptureSettings1765200005000,
   AddBookingOverrideReason1765200031000,
   CreateCalendarFeeds1765200032000,
+  CreatePasswordGuessCounters1765300001000,
 ];

@@ -1,11 +1,15 @@
 import { z } from 'zod';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
+import { admitPasswordAttempt } from '../auth/password-guesses';
+import { PUBLIC_SESSION_ID_PATTERN } from '../auth/session-store';
+import { noStore } from '../middleware/no-store';
 import { changePasswordRequestSchema, sessionListSchema } from '../../shared/schemas/auth';
 import { okSchema } from '../../shared/schemas/common';
 
 export function registerAccountRoutes(api: ApiRegistry, { services }: AppContext) {
-  const auth = services.auth;
+  const { auth, passwordGuesses } = services;
+  api.router.use('/api/account', noStore);
 
   api.add({
     method: 'post',
@@ -16,8 +20,13 @@ export function registerAccountRoutes(api: ApiRegistry, { services }: AppContext
     body: changePasswordRequestSchema,
     response: okSchema,
     successStatus: 200,
-    handler: async ({ user, session, body }) => {
-      await auth.changePassword(user.id, session.id, body);
+    handler: async ({ user, session, body, req, res }) => {
+      const attempt = await admitPasswordAttempt(
+        passwordGuesses,
+        { check: 'current-password', email: user.email, address: req.ip },
+        res,
+      );
+      await auth.changePassword(user.id, session.id, body, attempt);
       return { ok: true as const };
     },
   });
@@ -37,8 +46,8 @@ export function registerAccountRoutes(api: ApiRegistry, { services }: AppContext
     path: '/api/account/sessions/:sessionId',
     access: 'signed-in',
     tag: 'Account',
-    summary: 'Revoke one of your sessions.',
-    params: z.object({ sessionId: z.string().min(1).max(64) }),
+    summary: 'Revoke one of your sessions, named by the id the session list gives (never the cookie value).',
+    params: z.object({ sessionId: z.string().regex(PUBLIC_SESSION_ID_PATTERN, 'Use an id from your session list.') }),
     response: okSchema,
     handler: async ({ user, params }) => {
       await auth.revokeSession(user.id, params.sessionId);

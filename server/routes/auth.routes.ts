@@ -1,36 +1,13 @@
-import { rateLimit } from 'express-rate-limit';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { AppError } from '../errors';
+import { admitPasswordAttempt } from '../auth/password-guesses';
+import { noStore } from '../middleware/no-store';
 import { sessionResponseSchema, signInRequestSchema } from '../../shared/schemas/auth';
 import { okSchema } from '../../shared/schemas/common';
 
-export function registerAuthRoutes(api: ApiRegistry, { services, env }: AppContext) {
-  const { auth, sessions } = services;
-  const windowMs = env.SIGN_IN_WINDOW_MINUTES * 60_000;
-  const tooMany = () => {
-    throw new AppError('rate_limited', 429, 'Too many sign-in attempts. Wait a few minutes and try again.');
-  };
-  const perIp = rateLimit({
-    windowMs,
-    limit: env.SIGN_IN_LIMIT_PER_IP,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: tooMany,
-  });
-  // Per account, only failed attempts count, so a colleague on the same network is not locked out.
-  const perAccount = rateLimit({
-    windowMs,
-    limit: env.SIGN_IN_LIMIT_PER_ACCOUNT,
-    standardHeaders: false,
-    legacyHeaders: false,
-    skipSuccessfulRequests: true,
-    keyGenerator: (req) =>
-      `account:${String(req.body?.email ?? '')
-        .trim()
-        .toLowerCase()}`,
-    handler: tooMany,
-  });
+export function registerAuthRoutes(api: ApiRegistry, { services }: AppContext) {
+  const { auth, sessions, passwordGuesses } = services;
+  api.router.use('/api/auth', noStore);
 
   api.add({
     method: 'post',
@@ -41,12 +18,18 @@ export function registerAuthRoutes(api: ApiRegistry, { services, env }: AppConte
     body: signInRequestSchema,
     response: sessionResponseSchema,
     successStatus: 200,
-    before: [perIp, perAccount],
     handler: async ({ body, req, res }) => {
-      const { session, user } = await auth.signIn(body, {
-        userAgent: req.get('user-agent') ?? null,
-        ipAddress: req.ip ?? null,
-      });
+      const attempt = await admitPasswordAttempt(
+        passwordGuesses,
+        { check: 'sign-in', email: body.email, address: req.ip },
+        res,
+      );
+      const { session, user } = await auth.signIn(
+        body,
+        { userAgent: req.get('user-agent') ?? null, ipAddress: req.ip ?? null },
+        attempt,
+        sessions.readSessionCookie(req.headers.cookie ?? ''),
+      );
       res.append('Set-Cookie', sessions.createSessionCookie(session.id).serialize());
       return { user };
     },

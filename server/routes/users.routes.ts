@@ -1,5 +1,6 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
+import { noStore } from '../middleware/no-store';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
   createUserRequestSchema,
@@ -10,6 +11,7 @@ import {
 
 export function registerUserRoutes(api: ApiRegistry, { services }: AppContext) {
   const users = services.users;
+  api.router.use('/api/users', noStore);
 
   api.add({
     method: 'get',

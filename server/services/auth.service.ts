@@ -3,7 +3,8 @@ import { Not } from 'typeorm';
 import { UserEntity } from '../entities/user.entity';
 import { SessionEntity } from '../entities/session.entity';
 import { hashPassword, verifyPassword } from '../auth/passwords';
-import type { SessionStore } from '../auth/session-store';
+import type { PasswordAttempt } from '../auth/password-guesses';
+import { publicSessionId, type SessionStore } from '../auth/session-store';
 import { AppError } from '../errors';
 import { recordAudit } from './audit.service';
 import type { ChangePasswordRequest, CurrentUser, SessionInfo, SignInRequest } from '../../shared/schemas/auth';
@@ -17,11 +18,21 @@ export class AuthService {
     private readonly sessions: SessionStore,
   ) {}
 
-  /** Checks the password and opens a session. Unknown, wrong and deactivated all answer the same. */
-  async signIn(input: SignInRequest, client: { userAgent: string | null; ipAddress: string | null }) {
+  /**
+   * Checks the password and opens a new session. Unknown, wrong and deactivated all answer the same. The
+   * session the browser presented, if any, ends: signing in always yields a fresh id.
+   */
+  async signIn(
+    input: SignInRequest,
+    client: { userAgent: string | null; ipAddress: string | null },
+    attempt: PasswordAttempt,
+    presentedSessionId: string | null,
+  ) {
     const user = await this.dataSource.getRepository(UserEntity).findOneBy({ email: input.email });
     const ok = await verifyPassword(user?.passwordHash ?? null, input.password);
+    await attempt.settle(Boolean(user && ok && user.active));
     if (!user || !ok || !user.active) throw wrongCredentials();
+    if (presentedSessionId) await this.sessions.invalidateSession(presentedSessionId);
     const session = await this.sessions.createSession(user.id, { ...client, createdAt: new Date() });
     await this.dataSource.transaction(async (manager) => {
       await manager.getRepository(UserEntity).update({ id: user.id }, { lastSignInAt: new Date() });
@@ -48,7 +59,7 @@ export class AuthService {
     return rows
       .filter((row) => row.expiresAt.getTime() > Date.now())
       .map((row) => ({
-        id: row.id,
+        id: publicSessionId(row.id),
         current: row.id === currentSessionId,
         createdAt: row.createdAt.toISOString(),
         expiresAt: row.expiresAt.toISOString(),
@@ -57,15 +68,26 @@ export class AuthService {
       }));
   }
 
-  async revokeSession(userId: number, sessionId: string) {
-    const result = await this.dataSource.getRepository(SessionEntity).delete({ id: sessionId, userId });
-    if (!result.affected) throw new AppError('not_found', 404, 'That session was not found among yours.');
+  /** Ends one of the user's sessions, named by its public id. */
+  async revokeSession(userId: number, publicId: string) {
+    const repository = this.dataSource.getRepository(SessionEntity);
+    const mine = await repository.find({ select: { id: true }, where: { userId } });
+    const target = mine.find((row) => publicSessionId(row.id) === publicId);
+    const result = target ? await repository.delete({ id: target.id, userId }) : null;
+    if (!result?.affected) throw new AppError('not_found', 404, 'That session was not found among yours.');
   }
 
   /** Changes the password and ends every other session of the user, in one transaction. */
-  async changePassword(userId: number, currentSessionId: string, input: ChangePasswordRequest) {
+  async changePassword(
+    userId: number,
+    currentSessionId: string,
+    input: ChangePasswordRequest,
+    attempt: PasswordAttempt,
+  ) {
     const user = await this.dataSource.getRepository(UserEntity).findOneByOrFail({ id: userId });
-    if (!(await verifyPassword(user.passwordHash, input.currentPassword))) {
+    const ok = await verifyPassword(user.passwordHash, input.currentPassword);
+    await attempt.settle(ok);
+    if (!ok) {
       throw new AppError('wrong_password', 400, 'Your current password is not right.', {
         currentPassword: 'This is not your current password.',
       });

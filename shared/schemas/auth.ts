@@ -46,6 +46,7 @@ export const changePasswordRequestSchema = z
 export type ChangePasswordRequest = z.infer<typeof changePasswordRequestSchema>;
 
 export const sessionInfoSchema = z.object({
+  /** The session's public id, for listing and revoking; the cookie value itself is never sent. */
   id: z.string(),
   current: z.boolean(),
   createdAt: instantSchema,

@@ -1,6 +1,7 @@
+import { randomBytes } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { client, createTestUser, signedIn, testApp, TEST_HOST } from './support/test-app';
+import { client, createTestUser, signedIn, testApp, TEST_HOST, type TestApp } from './support/test-app';
 
 describe('signing in and out', () => {
   it('when a tester signs in with the right password, then the session cookie is set and the session names them', async () => {
@@ -19,6 +20,37 @@ describe('signing in and out', () => {
     const session = await agent.get('/api/auth/session');
     expect(session.status).toBe(200);
     expect(session.body.user.id).toBe(user.id);
+  });
+
+  it('when someone signs in again, then the session is rotated and the old cookie is dead', async () => {
+    const app = await testApp();
+    const user = await createTestUser('writer');
+    const agent = client(app);
+    const first = await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+    const firstCookie = /benchwire_session=([^;]+)/.exec(String(first.headers['set-cookie']))![1];
+    const second = await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+    const secondCookie = /benchwire_session=([^;]+)/.exec(String(second.headers['set-cookie']))![1];
+    expect(secondCookie).not.toBe(firstCookie);
+    const withOld = await request(app).get('/api/auth/session').set('Cookie', `benchwire_session=${firstCookie}`);
+    expect(withOld.status).toBe(401);
+    expect((await agent.get('/api/auth/session')).status).toBe(200);
+    expect((await agent.get('/api/account/sessions')).body.sessions).toHaveLength(1);
+  });
+
+  it('answers about sessions and accounts are never stored by a cache', async () => {
+    const app = await testApp();
+    const user = await createTestUser('admin');
+    const agent = client(app);
+    const responses = [
+      await client(app).post('/api/auth/sign-in').send({ email: user.email, password: 'not-the-password' }),
+      await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password }),
+      await agent.get('/api/auth/session'),
+      await agent.get('/api/account/sessions'),
+      await agent.get('/api/users'),
+      await client(app).get('/api/account/sessions'),
+    ];
+    expect(responses.map((r) => r.status)).toEqual([401, 200, 200, 200, 200, 401]);
+    for (const response of responses) expect(response.headers['cache-control']).toBe('no-store');
   });
 
   it('when someone signs out, then the same cookie no longer opens a session', async () => {
@@ -113,33 +145,119 @@ describe('cross-site request protection', () => {
   });
 });
 
-describe('sign-in rate limits', () => {
-  it('when one account gets too many wrong passwords, then further attempts get 429 even with the right one', async () => {
-    const app = await testApp({ SIGN_IN_LIMIT_PER_ACCOUNT: '3', SIGN_IN_LIMIT_PER_IP: '100' });
-    const user = await createTestUser('writer');
-    for (let i = 0; i < 3; i++) {
-      expect(
-        (await client(app).post('/api/auth/sign-in').send({ email: user.email, password: 'wrong-password' })).status,
-      ).toBe(401);
-    }
-    const blocked = await client(app).post('/api/auth/sign-in').send({ email: user.email, password: user.password });
-    expect(blocked.status).toBe(429);
-    expect(blocked.body.error.code).toBe('rate_limited');
+/**
+ * Each test guesses from a network of its own (behind a trusted proxy) so counters never meet, not even across
+ * runs on the same database: a random /56 inside 2001:db8::/32, the documentation prefix (RFC 3849).
+ */
+function address() {
+  const hex = randomBytes(3).toString('hex');
+  return `2001:db8:${hex.slice(0, 4)}:${hex.slice(4)}00::1`;
+}
+const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+
+function signInFrom(app: TestApp, from: string, email: string, password: string) {
+  return client(app).set('X-Forwarded-For', from).post('/api/auth/sign-in').send({ email, password });
+}
+
+/** A 429 that says, in the header and in words, to wait at most `seconds`. */
+function expectWait(response: request.Response, seconds: number, about: RegExp) {
+  expect(response.status).toBe(429);
+  expect(response.body.error.code).toBe('rate_limited');
+  expect(Number(response.headers['retry-after'])).toBeGreaterThanOrEqual(1);
+  expect(Number(response.headers['retry-after'])).toBeLessThanOrEqual(seconds);
+  expect(response.body.error.message).toMatch(about);
+  expect(response.body.error.message).toMatch(/Try again in \d+ (second|minute|hour)s?\./);
+}
+
+describe('password guessing', () => {
+  it('when someone guesses an account’s password, then the owner still gets in once the short lock has passed', async () => {
+    const app = await testApp({ TRUST_PROXY: 'true', SIGN_IN_LIMIT_PER_ACCOUNT: '3', SIGN_IN_LOCK_SECONDS: '3' });
+    const owner = await createTestUser('editor');
+    const attacker = address();
+    for (let i = 0; i < 3; i++) expect((await signInFrom(app, attacker, owner.email, `guess-${i}`)).status).toBe(401);
+    // The third wrong password started a 3 s lock: every attempt waits, the owner's too, and nothing is checked.
+    expectWait(await signInFrom(app, attacker, owner.email, 'guess-3'), 3, /this account/);
+    expectWait(await signInFrom(app, address(), owner.email, owner.password), 3, /this account/);
+    await sleep(3100);
+    // The next wrong password doubles the lock (6 s); guesses during it are refused and do not extend it.
+    expect((await signInFrom(app, attacker, owner.email, 'guess-4')).status).toBe(401);
+    const doubled = await signInFrom(app, attacker, owner.email, 'guess-5');
+    expectWait(doubled, 6, /this account/);
+    expect(Number(doubled.headers['retry-after'])).toBeGreaterThan(3);
+    for (let i = 0; i < 4; i++) expectWait(await signInFrom(app, attacker, owner.email, `guess-6${i}`), 6, /account/);
+    await sleep(6100);
+    expect((await signInFrom(app, address(), owner.email, owner.password)).status).toBe(200);
+    // The right password cleared the count: the next typo is an ordinary 401 again.
+    expect((await signInFrom(app, address(), owner.email, 'a-typo')).status).toBe(401);
   });
 
-  it('when one address tries many accounts, then the per-address limit answers 429', async () => {
-    const app = await testApp({ SIGN_IN_LIMIT_PER_IP: '4', SIGN_IN_LIMIT_PER_ACCOUNT: '100' });
-    const statuses: number[] = [];
-    for (let i = 0; i < 5; i++) {
-      statuses.push(
-        (
-          await client(app)
-            .post('/api/auth/sign-in')
-            .send({ email: `probe${i}@test.soaksheet.example`, password: 'guess-guess' })
-        ).status,
-      );
+  it('when a burst of wrong passwords arrives at once, then only the free ones are checked', async () => {
+    const app = await testApp({ SIGN_IN_LIMIT_PER_ACCOUNT: '3', SIGN_IN_LOCK_SECONDS: '60' });
+    const user = await createTestUser('tester');
+    const statuses = await Promise.all(
+      Array.from({ length: 12 }, (_, i) =>
+        client(app)
+          .post('/api/auth/sign-in')
+          .send({ email: user.email, password: `burst-${i}` })
+          .then((r) => r.status),
+      ),
+    );
+    expect(statuses.filter((s) => s === 401)).toHaveLength(3);
+    expect(statuses.filter((s) => s === 429)).toHaveLength(9);
+  });
+
+  it('when an office signs in many times from one address, then successful sign-ins never count', async () => {
+    const app = await testApp({ TRUST_PROXY: 'true', SIGN_IN_LIMIT_PER_IP: '5' });
+    const office = address();
+    const staff = await Promise.all(Array.from({ length: 6 }, () => createTestUser('writer')));
+    for (let round = 0; round < 4; round++) {
+      for (const member of staff)
+        expect((await signInFrom(app, office, member.email, member.password)).status).toBe(200);
     }
-    expect(statuses).toEqual([401, 401, 401, 401, 429]);
+    // Four typos among 24 sign-ins stay under the ceiling of 5 wrong passwords.
+    for (const member of staff.slice(0, 4))
+      expect((await signInFrom(app, office, member.email, 'typo')).status).toBe(401);
+    expect((await signInFrom(app, office, staff[5].email, staff[5].password)).status).toBe(200);
+    expect((await signInFrom(app, office, staff[4].email, 'typo')).status).toBe(401);
+  });
+
+  it('when one address guesses across many accounts, then it hits its ceiling and other addresses do not', async () => {
+    const app = await testApp({ TRUST_PROXY: 'true', SIGN_IN_LIMIT_PER_IP: '4', SIGN_IN_WINDOW_MINUTES: '15' });
+    const guesser = address();
+    for (let i = 0; i < 4; i++) {
+      const response = await signInFrom(
+        app,
+        guesser,
+        `probe${i}-${randomBytes(3).toString('hex')}@test.soaksheet.example`,
+        'guess',
+      );
+      expect(response.status).toBe(401);
+    }
+    const blocked = await signInFrom(app, guesser, 'probe-next@test.soaksheet.example', 'guess');
+    expect(blocked.status).toBe(429);
+    expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(14 * 60);
+    expect(Number(blocked.headers['retry-after'])).toBeLessThanOrEqual(15 * 60);
+    expect(blocked.body.error.message).toMatch(/from your network\. Try again in 15 minutes\./);
+    const someone = await createTestUser('writer');
+    expect((await signInFrom(app, guesser, someone.email, someone.password)).status).toBe(429);
+    expect((await signInFrom(app, address(), someone.email, someone.password)).status).toBe(200);
+  });
+
+  it('when a signed-in session guesses the current password, then the change-password check is throttled too', async () => {
+    const app = await testApp({ SIGN_IN_LIMIT_PER_ACCOUNT: '3', SIGN_IN_LOCK_SECONDS: '4' });
+    const { agent, user } = await signedIn(app, 'writer');
+    const change = (currentPassword: string) =>
+      agent
+        .post('/api/account/password')
+        .send({ currentPassword, newPassword: 'a-brand-new-pass-1', confirmPassword: 'a-brand-new-pass-1' });
+    const burst = await Promise.all(Array.from({ length: 12 }, (_, i) => change(`wrong-${i}`)));
+    expect(burst.filter((r) => r.status === 400)).toHaveLength(3);
+    const refused = burst.filter((r) => r.status === 429);
+    expect(refused).toHaveLength(9);
+    for (const response of refused) expectWait(response, 4, /wrong current passwords/);
+    expectWait(await change(user.password), 4, /wrong current passwords/);
+    await sleep(4100);
+    expect((await change(user.password)).status).toBe(200);
   });
 });
 

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { AuditEntryEntity } from '../../server/entities/audit-entry.entity';
-import { client, signedIn, testApp, testDataSource, uniqueEmail } from './support/test-app';
+import { SessionEntity } from '../../server/entities/session.entity';
+import { client, createTestUser, signedIn, testApp, testDataSource, uniqueEmail } from './support/test-app';
 
 describe('staff accounts (admin)', () => {
   it('when an admin creates a writer, then the writer can sign in and the creation is audited', async () => {
@@ -144,6 +145,28 @@ describe('own password and sessions', () => {
     expect((await laptop.delete(`/api/account/sessions/${other.id}`)).status).toBe(200);
     expect((await phone.get('/api/auth/session')).status).toBe(401);
     expect((await laptop.get('/api/auth/session')).status).toBe(200);
+  });
+
+  it('the session list never shows a cookie value, and a cookie value does not revoke anything', async () => {
+    const app = await testApp();
+    const user = await createTestUser('editor');
+    const laptop = client(app);
+    const signIn = await laptop.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+    const token = /benchwire_session=([^;]+)/.exec(String(signIn.headers['set-cookie']))![1];
+    const { agent: phone } = await signedIn(app, user);
+    const list = await laptop.get('/api/account/sessions');
+    expect(list.text).not.toContain(token);
+    const storedIds = (await (await testDataSource()).getRepository(SessionEntity).findBy({ userId: user.id })).map(
+      (row) => row.id,
+    );
+    expect(storedIds).toHaveLength(2);
+    for (const id of storedIds) expect(list.text).not.toContain(id);
+    for (const session of list.body.sessions) expect(session.id).toMatch(/^[A-Za-z0-9_-]{22}$/);
+    // The phone's own cookie value is not a name the revoke route accepts.
+    const phoneToken = storedIds.find((id) => id !== token)!;
+    const byToken = await laptop.delete(`/api/account/sessions/${phoneToken}`);
+    expect(byToken.status).toBe(400);
+    expect((await phone.get('/api/auth/session')).status).toBe(200);
   });
 
   it("a user cannot revoke someone else's session", async () => {

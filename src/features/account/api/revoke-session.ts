@@ -3,8 +3,9 @@ import { apiClient } from '../../../lib/api-client';
 import { okSchema } from '../../../../shared/schemas/common';
 import { invalidateAfter } from '../../../lib/stale-after';
 
-export function revokeSession(sessionId: string) {
-  return apiClient.delete(`/api/account/sessions/${encodeURIComponent(sessionId)}`, { schema: okSchema });
+/** Revokes a session by the public id the session list gives; the session's cookie never reaches the page. */
+export function revokeSession(publicId: string) {
+  return apiClient.delete(`/api/account/sessions/${encodeURIComponent(publicId)}`, { schema: okSchema });
 }
 
 export function useRevokeSession() {

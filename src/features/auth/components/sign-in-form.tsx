@@ -1,4 +1,4 @@
-import type { FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
@@ -8,18 +8,10 @@ import { isApiError } from '../../../lib/api-client';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { signInRequestSchema, type CurrentUser } from '../../../../shared/schemas/auth';
 import { useSignIn } from '../api/sign-in';
+import { RetryCountdown } from './retry-countdown';
 
 export interface SignInFormProps {
   onSignedIn: (user: CurrentUser) => void;
-}
-
-function waitMessage(seconds: number): string {
-  const minutes = Math.max(1, Math.ceil(seconds / 60));
-  const at = new Date(Date.now() + seconds * 1000).toLocaleTimeString(undefined, {
-    hour: '2-digit',
-    minute: '2-digit',
-  });
-  return `You can try again in about ${minutes} minute${minutes === 1 ? '' : 's'} (at ${at}).`;
 }
 
 export function SignInForm({ onSignedIn }: SignInFormProps) {
@@ -30,12 +22,21 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
     labels: { email: 'E-mail', password: 'Password' },
   });
   const rateLimited = isApiError(signIn.error) && signIn.error.status === 429 ? signIn.error : null;
+  // When the lock lifts, set once per answer so the countdown does not restart on re-render.
+  const [retryAt, setRetryAt] = useState<number | null>(null);
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
     const input = form.validate();
     if (!input) return;
-    signIn.mutate(input, { onSuccess: onSignedIn, onError: (error) => form.fail(error) });
+    signIn.mutate(input, {
+      onSuccess: onSignedIn,
+      onError: (error) => {
+        const wait = isApiError(error) && error.status === 429 ? error.retryAfterSeconds : null;
+        setRetryAt(wait === null ? null : Date.now() + wait * 1000);
+        form.fail(error);
+      },
+    });
   };
 
   return (
@@ -43,9 +44,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
       {rateLimited ? (
         <Alert tone="warning" title="Wait before you try again" announce>
           <p>{rateLimited.message}</p>
-          {rateLimited.retryAfterSeconds !== null && (
-            <p className="mt-1">{waitMessage(rateLimited.retryAfterSeconds)}</p>
-          )}
+          {retryAt !== null && <RetryCountdown key={retryAt} until={retryAt} />}
         </Alert>
       ) : (
         <FormErrorSummary

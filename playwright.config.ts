@@ -30,7 +30,8 @@ export default defineConfig({
   },
   projects: [{ name: 'desktop', use: { viewport: { width: 1280, height: 800 } } }],
   webServer: {
-    command: 'node_modules/.bin/tsx server/index.ts',
+    // The built server, as `npm start` runs it (`npm test -- e2e` builds it first when its sources changed).
+    command: 'node --enable-source-maps dist/server/index.js',
     url: `http://127.0.0.1:${port}/api/health`,
     reuseExistingServer: false,
     timeout: 60_000,

@@ -1,14 +1,14 @@
 #!/usr/bin/env node
-// `npm start`: install, start a private MariaDB, migrate, seed once, build, serve.
-// `npm run dev`: the same database, with Vite's dev server and an API server that restarts on change.
-import { ensureDatabase, ensureDependencies, runStep, startProcess } from './lib/setup.mjs';
+// `npm start`: install, start a private MariaDB, build what changed, migrate, seed once, serve the built server
+// with plain Node.js.
+// `npm run dev`: the same database, with Vite's dev server and an API server that restarts on change (tsx watch).
+import { ensureBuilt } from './lib/build.mjs';
+import { SetupError } from './lib/mariadb.mjs';
+import { ensureDatabase, ensureDependencies, runStep, startNode, startProcess } from './lib/setup.mjs';
 
 const dev = process.argv.includes('--dev');
 
-ensureDependencies();
-const database = await ensureDatabase();
-const env = { ...process.env, DATABASE_URL: database.url, NODE_ENV: dev ? 'development' : 'production' };
-
+let database = null;
 let children = [];
 let stopping = false;
 async function shutdown(code) {
@@ -18,7 +18,7 @@ async function shutdown(code) {
   await Promise.all(
     children.map((child) => new Promise((r) => (child.exitCode !== null ? r() : child.once('exit', r)))),
   );
-  if (database.startedHere) {
+  if (database?.startedHere) {
     console.log('[setup] stopping the private MariaDB');
     await database.stop();
   }
@@ -28,8 +28,11 @@ process.on('SIGINT', () => shutdown(0));
 process.on('SIGTERM', () => shutdown(0));
 
 try {
-  runStep('tsx', ['server/cli/setup-database.ts', '--seed'], env);
+  ensureDependencies();
+  database = await ensureDatabase();
+  const env = { ...process.env, DATABASE_URL: database.url, NODE_ENV: dev ? 'development' : 'production' };
   if (dev) {
+    runStep('tsx', ['server/cli/setup-database.ts', '--seed'], env);
     children.push(
       startProcess('tsx', ['watch', '--clear-screen=false', 'server/index.ts'], {
         ...env,
@@ -38,11 +41,12 @@ try {
     );
     children.push(startProcess('vite', [], env));
   } else {
-    runStep('vite', ['build', '--logLevel', 'warn'], env);
-    children.push(startProcess('tsx', ['server/index.ts'], env));
+    ensureBuilt(['client', 'server'], env);
+    // Migrates and seeds in the server's own process, then serves: one Node.js start.
+    children.push(startNode(['--enable-source-maps', 'dist/server/start-production.js'], env));
   }
   for (const child of children) child.on('exit', (code) => shutdown(code ?? 0));
 } catch (error) {
-  console.error(`[setup] ${error.message}`);
+  console.error(error instanceof SetupError ? error.message : `[setup] ${error.message}`);
   await shutdown(error.exitCode ?? 1);
 }

@@ -4,7 +4,8 @@
 // throwaway database), and stop what it started.
 import { randomBytes } from 'node:crypto';
 import { createServer } from 'node:net';
-import { ensureDebianPackages } from './lib/mariadb.mjs';
+import { ensureBuilt } from './lib/build.mjs';
+import { ensureDebianPackages, SetupError } from './lib/mariadb.mjs';
 import { ensureDatabase, ensureDependencies, runStep } from './lib/setup.mjs';
 
 const only = process.argv.slice(2); // e.g. `npm test -- unit` or `npm test -- e2e`
@@ -12,7 +13,13 @@ const wants = (step) => only.length === 0 || only.includes(step);
 
 ensureDependencies();
 if (wants('e2e')) ensureDebianPackages(['chromium'], ['chromium']);
-const database = await ensureDatabase();
+let database;
+try {
+  database = await ensureDatabase();
+} catch (error) {
+  console.error(error instanceof SetupError ? error.message : `[test] ${error.message}`);
+  process.exit(1);
+}
 
 const suffix = `${process.pid}_${randomBytes(3).toString('hex')}`;
 const withDatabase = (name) => {
@@ -55,13 +62,13 @@ try {
     runStep('vitest', ['run'], { ...process.env, DATABASE_URL: unitUrl, NODE_ENV: 'test' });
   }
   if (wants('e2e')) {
-    console.log('\n== playwright (production build in Debian Chromium on a seeded throwaway database)');
+    console.log('\n== playwright (the built client and server in Debian Chromium on a seeded throwaway database)');
     created.push(e2eUrl);
     runStep('tsx', ['server/cli/setup-database.ts', '--fresh', '--seed', '--quiet'], {
       ...process.env,
       DATABASE_URL: e2eUrl,
     });
-    runStep('vite', ['build', '--logLevel', 'warn']);
+    ensureBuilt(['client', 'server']);
     const port = await freePort();
     runStep('playwright', ['test'], { ...process.env, DATABASE_URL: e2eUrl, E2E_PORT: String(port) });
   }

@@ -43,3 +43,8 @@ export function runStep(name, args, env = process.env) {
 export function startProcess(name, args, env = process.env) {
   return spawn(bin(name), args, { cwd: projectRoot, stdio: 'inherit', env });
 }
+
+/** Starts a long-running built script with this Node.js. */
+export function startNode(args, env = process.env) {
+  return spawn(process.execPath, args, { cwd: projectRoot, stdio: 'inherit', env });
+}

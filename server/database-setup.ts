@@ -17,6 +17,14 @@ export interface DatabaseSetupOptions {
   quiet?: boolean;
 }
 
+/** MariaDB 10.6 or newer, from `SELECT VERSION()` (e.g. "10.11.6-MariaDB-0+deb12u1"). */
+export function supportedServer(version: string): boolean {
+  const match = /^(\d+)\.(\d+)\./.exec(version);
+  if (!match || !/mariadb/i.test(version)) return false;
+  const [major, minor] = [Number(match[1]), Number(match[2])];
+  return major > 10 || (major === 10 && minor >= 6);
+}
+
 export async function setUpDatabase(url: string | undefined, options: DatabaseSetupOptions = {}) {
   if (!url) throw new Error('DATABASE_URL is not set (npm start sets it for the private MariaDB).');
   const { database, ...server } = connectionOptions(url);
@@ -26,6 +34,13 @@ export async function setUpDatabase(url: string | undefined, options: DatabaseSe
 
   const { username, ...rest } = server;
   const admin = await createConnection({ ...rest, user: username });
+  const [[{ version }]] = (await admin.query('SELECT VERSION() AS version')) as unknown as [[{ version: string }]];
+  if (!supportedServer(version)) {
+    await admin.end();
+    throw new Error(
+      `Benchwire needs MariaDB 10.6 or newer (for SELECT … FOR UPDATE SKIP LOCKED); the server at ${rest.host}:${rest.port} reports ${version}.`,
+    );
+  }
   if (options.drop || options.fresh) await admin.query(`DROP DATABASE IF EXISTS \`${database}\``);
   if (!options.drop) {
     await admin.query(`CREATE DATABASE IF NOT EXISTS \`${database}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);

@@ -82,7 +82,7 @@ export function previewLog(text: string): LogPreviewOutcome {
   return { ok: true, preview: buildPreview(parsed.table), table: parsed.table };
 }
 
-type ReadOutcome =
+export type ReadOutcome =
   | { ok: true; preview: LogPreview; log: MappedLog; mapping: ColumnMapping; guessed: boolean }
   | { ok: false; preview: LogPreview | null; errors: ParseError[] };
 
@@ -115,6 +115,11 @@ function readLog(text: string, choose: (preview: LogPreview) => ChosenMapping, o
     : { ok: false, preview, errors: mapped.errors };
 }
 
+/** Without a hook: the request's mapping, or the guessed one when the request has none. */
+function requestedMapping(mapping: ColumnMapping | undefined): (preview: LogPreview) => ChosenMapping {
+  return (preview) => (mapping ? { mapping, guessed: false } : { mapping: preview.guessedMapping, guessed: true });
+}
+
 /**
  * The whole engine behind Log check (POST /api/log-check/analyse, the lab CLI's `analyse`): read the logger file,
  * apply the tester's mapping (or the guessed one, flagged), analyse the run. Pure; bad input comes back as parse
@@ -126,12 +131,7 @@ export function analyseLog(
   hooks: AnalyseLogHooks = {},
 ): AnalyseLogOutcome {
   const request = analysisRequestSchema.parse(requestInput);
-  const choose =
-    hooks.chooseMapping ??
-    ((preview: LogPreview): ChosenMapping =>
-      request.mapping
-        ? { mapping: request.mapping, guessed: false }
-        : { mapping: preview.guessedMapping, guessed: true });
+  const choose = hooks.chooseMapping ?? requestedMapping(request.mapping);
   const read = readLog(text, choose, request.options);
   if (!read.ok) return read;
   const analysis = analyseRun(read.log, request.options, { mappingGuessed: read.guessed });
@@ -147,4 +147,18 @@ export function analyseLogFile(
   const text = loggerFileText(bytes);
   if (text === null) return { ok: false, notText: true };
   return analyseLog(text, requestInput, hooks);
+}
+
+/**
+ * The first half of analyseLogFile, for the Log check chart: the file's mapped series, read by the same decoder and
+ * reader with the same mapping rule, without the analysis.
+ */
+export function readLogFile(
+  bytes: Uint8Array,
+  requestInput: AnalysisRequestInput,
+): ReadOutcome | { ok: false; notText: true } {
+  const text = loggerFileText(bytes);
+  if (text === null) return { ok: false, notText: true };
+  const request = analysisRequestSchema.parse(requestInput);
+  return readLog(text, requestedMapping(request.mapping), request.options);
 }

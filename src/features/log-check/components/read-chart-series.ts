@@ -1,5 +1,4 @@
-import { parseLoggerTable } from '../../../../shared/domain/analysis/logger-table';
-import { readMappedLog } from '../../../../shared/domain/analysis/read-mapped-log';
+import { readLogFile } from '../../../../shared/domain/analysis/analyse-log';
 import { analysisRequestSchema, type AnalysisRequestInput } from '../../../../shared/schemas/analysis';
 
 export interface ChartLine {
@@ -16,12 +15,6 @@ export interface ChartSeries {
 
 /** Points kept per line: the lowest and highest reading of each of this many time buckets, so no peak is lost. */
 const bucketCount = 300;
-
-function decodeText(bytes: Uint8Array): string {
-  if (bytes[0] === 0xff && bytes[1] === 0xfe) return new TextDecoder('utf-16le').decode(bytes);
-  if (bytes[0] === 0xfe && bytes[1] === 0xff) return new TextDecoder('utf-16be').decode(bytes);
-  return new TextDecoder('utf-8').decode(bytes);
-}
 
 function thin(column: string, timeS: Float64Array, valuesC: Float64Array, endS: number): ChartLine {
   const points: [number, number][] = [];
@@ -61,19 +54,17 @@ function thin(column: string, timeS: Float64Array, valuesC: Float64Array, endS: 
 }
 
 /**
- * The temperature series of the file, read with the same shared reader the server uses, for the chart only: every
- * figure on the page comes from the server's analysis. Null when the file cannot be read here (the chart is then left
- * out, nothing else changes).
+ * The temperature series of the file, read by the same pipeline the server runs (the shared file-text decoder and
+ * logger reader), for the chart only: every figure on the page comes from the server's analysis. Null when the file
+ * cannot be read here (the chart is then left out, nothing else changes).
  */
 export async function readChartSeries(file: File, requestInput: AnalysisRequestInput): Promise<ChartSeries | null> {
   try {
-    const text = decodeText(new Uint8Array(await file.arrayBuffer()));
-    const parsed = parseLoggerTable(text);
     const request = analysisRequestSchema.safeParse(requestInput);
-    if (!parsed.ok || !request.success || !request.data.mapping) return null;
-    const mapped = readMappedLog(parsed.table, request.data.mapping, request.data.options);
-    if (!mapped.ok) return null;
-    const { timeS, vrm, ambient } = mapped.log;
+    if (!request.success) return null;
+    const read = readLogFile(new Uint8Array(await file.arrayBuffer()), request.data);
+    if (!read.ok) return null;
+    const { timeS, vrm, ambient } = read.log;
     const endS = timeS[timeS.length - 1] ?? 0;
     if (!(endS > 0)) return null;
     return {

@@ -2,7 +2,8 @@
  * Benchwire lab CLI: the measurement engine from a terminal.
  *
  *   npm run cli -- analyse <log file> [--vrm <col,col>] [--ambient <col>] [--clock <col>] [--power <col>]
- *                  [--time <col>] [--unit C|F|K|mV] [--cj <°C or col>] [--soak-min <n>] [--json]
+ *                  [--time <col>] [--unit C|F|K|mV] [--cj <°C or col>] [--soak-min <n>]
+ *                  [--load-start-min <n>] [--load-end-min <n>] [--confirm-dead <col,col>] [--json]
  *   npm run cli -- tc --mv <millivolts> [--cj <°C>] [--json]
  *   npm run cli -- tc --c <°C> [--cj <°C>] [--json]
  *
@@ -20,7 +21,7 @@ import type {
 } from '../../shared/schemas/analysis';
 import { analysisOptionsSchema, temperatureUnits } from '../../shared/schemas/analysis';
 import { analyseLogFile, type ChosenMapping } from '../../shared/domain/analysis/analyse-log';
-import { formatRunTime } from '../../shared/domain/analysis/run-time-format';
+import { formatDuration } from '../../shared/domain/analysis/run-time-format';
 import {
   ThermocoupleRangeError,
   typeKCelsiusWithColdJunction,
@@ -29,13 +30,30 @@ import {
 
 const usage = `Usage:
   npm run cli -- analyse <log file> [--vrm <col,col>] [--ambient <col>] [--clock <col>] [--power <col>]
-                 [--time <col>] [--unit C|F|K|mV] [--cj <°C or col>] [--soak-min <n>] [--json]
+                 [--time <col>] [--unit C|F|K|mV] [--cj <°C or col>] [--soak-min <n>]
+                 [--load-start-min <n>] [--load-end-min <n>] [--confirm-dead <col,col>] [--json]
   npm run cli -- tc --mv <millivolts> [--cj <°C>] [--json]     type K millivolts → °C
   npm run cli -- tc --c <°C> [--cj <°C>] [--json]              °C → type K millivolts
-Columns are header names or 1-based positions. Roles you leave out are guessed from the header and flagged.`;
+Columns are header names or 1-based positions. Roles you leave out are guessed from the header and flagged.
+--load-end-min sets where the load ended when the log runs on into a cool-down (else it is found from package power);
+--confirm-dead names VRM columns with no reading at all that you confirm as dead probes, so the run is judged without them.`;
 
 /** Options that take a value; kept in step with the options of readArguments. */
-const valueOptions = ['vrm', 'ambient', 'clock', 'power', 'time', 'unit', 'cj', 'soak-min', 'mv', 'c'];
+const valueOptions = [
+  'vrm',
+  'ambient',
+  'clock',
+  'power',
+  'time',
+  'unit',
+  'cj',
+  'soak-min',
+  'load-start-min',
+  'load-end-min',
+  'confirm-dead',
+  'mv',
+  'c',
+];
 
 class UsageError extends Error {}
 
@@ -70,6 +88,9 @@ function readArguments(argv: string[]) {
         unit: { type: 'string' },
         cj: { type: 'string' },
         'soak-min': { type: 'string' },
+        'load-start-min': { type: 'string' },
+        'load-end-min': { type: 'string' },
+        'confirm-dead': { type: 'string' },
         mv: { type: 'string' },
         c: { type: 'string' },
         json: { type: 'boolean' },
@@ -86,6 +107,20 @@ function numberOption(text: string | undefined, name: string): number | undefine
   const value = Number(text.replace(',', '.'));
   if (!Number.isFinite(value)) throw new UsageError(`--${name} needs a number, not "${text}".`);
   return value;
+}
+
+function minutesOption(text: string | undefined, name: string): number | undefined {
+  const minutes = numberOption(text, name);
+  return minutes === undefined ? undefined : minutes * 60;
+}
+
+function list(option: unknown): string[] | undefined {
+  return typeof option === 'string'
+    ? option
+        .split(',')
+        .map((name) => name.trim())
+        .filter(Boolean)
+    : undefined;
 }
 
 function printParseErrors(errors: ParseError[]): void {
@@ -113,9 +148,16 @@ function printAnalysis(file: string, mapping: ColumnMapping, guessed: string[], 
   if (guessed.length > 0) row('', `(guessed from the header: ${guessed.join(', ')}; confirm with --${guessed[0]})`);
   row(
     'Samples',
-    `${analysis.sampleCount} at ${analysis.sampleRateHz.toFixed(2)} Hz, logged ${formatRunTime(analysis.loggedS)}, ` +
-      `load from ${formatRunTime(analysis.loadStartS)}, soak ${formatRunTime(analysis.soakS)} of ${formatRunTime(analysis.requiredSoakS)} required`,
+    `${analysis.sampleCount} at ${analysis.sampleRateHz.toFixed(2)} Hz, logged ${formatDuration(analysis.loggedS)}, ` +
+      `load from ${formatDuration(analysis.loadStartS)}, soak ${formatDuration(analysis.soakS)} of ${formatDuration(analysis.requiredSoakS)} required`,
   );
+  if (analysis.loadEndS !== null) {
+    row(
+      'Load end',
+      `${formatDuration(analysis.loadEndS)} (${analysis.loadEndSource === 'manual' ? 'set by hand' : 'package power fell to idle'}); the cool-down tail after it is left out`,
+    );
+  }
+  for (const note of analysis.readNotes) row('Time stamps', note);
   lines.push('');
   const header = ['Channel', 'Peak °C', 'at', 'Steady °C', 'Change', 'Steady', 'Gaps', 'Spikes'];
   const widths = [Math.max(12, ...analysis.channels.map((channel) => channel.column.length)) + 2, 9, 9, 11, 9, 8, 7, 7];
@@ -125,7 +167,7 @@ function printAnalysis(file: string, mapping: ColumnMapping, guessed: string[], 
     const cells = [
       channel.column,
       one(channel.peakC),
-      channel.peakAtS === null ? '—' : formatRunTime(channel.peakAtS),
+      channel.peakAtS === null ? '—' : formatDuration(channel.peakAtS),
       one(channel.steadyStateMeanC),
       signedOne(channel.steadyStateChangeC),
       channel.reachedSteadyState ? 'yes' : 'no',
@@ -139,7 +181,7 @@ function printAnalysis(file: string, mapping: ColumnMapping, guessed: string[], 
     analysis.uncertainty.peakToleranceC === null
       ? `(${analysis.uncertainty.note})`
       : `± ${one(analysis.uncertainty.peakToleranceC)} °C (${analysis.uncertainty.standard})`;
-  row('Peak', `${one(analysis.peakC)} °C ${band} on ${analysis.peakChannel} at ${formatRunTime(analysis.peakAtS)}`);
+  row('Peak', `${one(analysis.peakC)} °C ${band} on ${analysis.peakChannel} at ${formatDuration(analysis.peakAtS)}`);
   row(
     'Steady state',
     `${one(analysis.steadyStateMeanC)} °C, ${analysis.reachedSteadyState ? 'reached' : 'not reached'}`,
@@ -161,7 +203,7 @@ function printAnalysis(file: string, mapping: ColumnMapping, guessed: string[], 
   row(
     'Prediction',
     prediction
-      ? `τ ${formatRunTime(prediction.tauS)}, steady state ${one(prediction.predictedSteadyC)} °C, soak ${(prediction.loadedS / prediction.tauS).toFixed(1)} τ ` +
+      ? `τ ${formatDuration(prediction.tauS)}, steady state ${one(prediction.predictedSteadyC)} °C, soak ${(prediction.loadedS / prediction.tauS).toFixed(1)} τ ` +
           `(${prediction.soakAtLeastFiveTau ? 'at least' : 'short of'} 5 τ)`
       : (analysis.predictionNote ?? '—'),
   );
@@ -169,18 +211,29 @@ function printAnalysis(file: string, mapping: ColumnMapping, guessed: string[], 
   row(
     'Throttle',
     throttle.detected
-      ? `from ${formatRunTime(throttle.firstAtS ?? 0)} (${throttle.source})` +
+      ? `from ${formatDuration(throttle.firstAtS ?? 0)} (${throttle.source})` +
           (throttle.shareThrottled === null ? '' : `, ${(throttle.shareThrottled * 100).toFixed(1)} % of the soak`)
       : throttle.source === 'none'
         ? 'no clock or power logged'
         : `none (${throttle.source})`,
   );
-  row('Verdict', `${analysis.verdict.label} (${analysis.verdict.basis} peak ${one(analysis.verdict.judgedC)} °C)`);
-  row('', analysis.verdict.rule);
+  const verdict = analysis.verdict;
+  const judged =
+    verdict.judgedC === null
+      ? ''
+      : ` (${verdict.basis} ${verdict.judgedFrom === 'predicted-steady-state' ? 'predicted steady state' : 'peak'} ${one(verdict.judgedC)} °C)`;
+  row('Verdict', `${verdict.label}${judged}`);
+  row('', verdict.rule);
+  const effects = {
+    withholds: 'withholds the verdict',
+    'makes-provisional': 'makes it provisional',
+    'read-with': 'read with it',
+  };
+  for (const concern of verdict.concerns) row('', `- ${concern.label}: ${effects[concern.effect]}`);
   if (analysis.flags.length > 0) {
     lines.push('', '  Flags');
     for (const flag of analysis.flags)
-      lines.push(`    ${flag.severity === 'warning' ? '!' : 'i'} ${flag.code.padEnd(22)}${flag.message}`);
+      lines.push(`    ${flag.severity === 'warning' ? '!' : 'i'} ${flag.label}: ${flag.message}`);
   }
   console.log(lines.join('\n'));
 }
@@ -199,6 +252,9 @@ function analyseCommand(values: ReturnType<typeof readArguments>['values'], posi
     coldJunction:
       cjText === undefined ? undefined : Number.isFinite(cjNumber) ? { fixedC: cjNumber } : { column: cjText },
     soakMinutes: numberOption(values['soak-min'], 'soak-min'),
+    loadStartS: minutesOption(values['load-start-min'], 'load-start-min'),
+    loadEndS: minutesOption(values['load-end-min'], 'load-end-min'),
+    confirmedDeadProbes: list(values['confirm-dead']),
   });
   if (!parsedOptions.success) {
     const issue = parsedOptions.error.issues[0];
@@ -213,13 +269,6 @@ function analyseCommand(values: ReturnType<typeof readArguments>['values'], posi
     console.error(`Cannot read ${file}: ${(error as Error).message}`);
     return 1;
   }
-  const list = (option: unknown) =>
-    typeof option === 'string'
-      ? option
-          .split(',')
-          .map((name) => name.trim())
-          .filter(Boolean)
-      : undefined;
   // Roles named on the command line are used as given; the others are guessed from the header, and said so.
   const guessed: string[] = [];
   const chooseMapping = (preview: LogPreview): ChosenMapping => {

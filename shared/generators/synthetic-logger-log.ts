@@ -32,9 +32,14 @@ export interface SyntheticLogSpec {
   sampleHz: number;
   seed?: number;
   loadStartS?: number;
+  /**
+   * The load stops here and the log runs on: probes cool first-order back toward their start with their own τ, package
+   * power falls to its idle level and the clock to its idle clock (a cool-down tail).
+   */
+  loadEndS?: number;
   probes: SyntheticProbe[];
   ambient?: { name: string; startC: number; driftC?: number; noiseC?: number } | null;
-  clock?: { name: string; mhz: number; noiseMhz?: number; drop?: SyntheticStep } | null;
+  clock?: { name: string; mhz: number; idleMhz?: number; noiseMhz?: number; drop?: SyntheticStep } | null;
   power?: { name: string; watts: number; idleWatts?: number; noiseW?: number; drop?: SyntheticStep } | null;
   extraChannels?: { name: string; value: number; noise?: number }[];
   /** Rows left out, leaving gaps in the time column. */
@@ -63,10 +68,12 @@ function clockText(t: number): string {
   return `${pad(hours)}:${pad(minutes)}:${secondText}`;
 }
 
-/** The temperature of a probe at t, without noise. */
-export function syntheticProbeC(probe: SyntheticProbe, t: number, loadStartS = 0): number {
+/** The temperature of a probe at t, without noise: a first-order rise from the load start, a first-order fall after its end. */
+export function syntheticProbeC(probe: SyntheticProbe, t: number, loadStartS = 0, loadEndS = Infinity): number {
   if (t < loadStartS) return probe.startC;
-  return probe.startC + probe.riseC * (1 - Math.exp(-(t - loadStartS) / probe.tauS));
+  const rise = (s: number) => probe.riseC * (1 - Math.exp(-(s - loadStartS) / probe.tauS));
+  if (t < loadEndS) return probe.startC + rise(t);
+  return probe.startC + rise(loadEndS) * Math.exp(-(t - loadEndS) / probe.tauS);
 }
 
 export function syntheticLoggerLog(spec: SyntheticLogSpec): string {
@@ -107,7 +114,7 @@ export function syntheticLoggerLog(spec: SyntheticLogSpec): string {
         cells.push(dropout.marker ?? 'OPEN');
         continue;
       }
-      let celsius = syntheticProbeC(probe, t, loadStartS) + (probe.noiseC ?? 0) * gaussian();
+      let celsius = syntheticProbeC(probe, t, loadStartS, spec.loadEndS) + (probe.noiseC ?? 0) * gaussian();
       for (const spike of probe.spikes ?? []) {
         if (Math.abs(t - spike.atS) < 0.5 / spec.sampleHz) celsius += spike.deltaC;
       }
@@ -118,13 +125,15 @@ export function syntheticLoggerLog(spec: SyntheticLogSpec): string {
       cells.push(temperature(startC + (driftC * t) / spec.durationS + noiseC * gaussian()));
     }
     if (spec.clock) {
-      const { mhz, noiseMhz = 0, drop } = spec.clock;
-      const value = drop && within(t, drop) ? drop.value : mhz;
+      const { mhz, idleMhz = mhz, noiseMhz = 0, drop } = spec.clock;
+      const idle = t < loadStartS || (spec.loadEndS !== undefined && t >= spec.loadEndS);
+      const value = idle ? idleMhz : drop && within(t, drop) ? drop.value : mhz;
       cells.push(String(Math.round(value + noiseMhz * gaussian())));
     }
     if (spec.power) {
       const { watts, idleWatts = watts, noiseW = 0, drop } = spec.power;
-      const base = t < loadStartS ? idleWatts : drop && within(t, drop) ? drop.value : watts;
+      const idle = t < loadStartS || (spec.loadEndS !== undefined && t >= spec.loadEndS);
+      const base = idle ? idleWatts : drop && within(t, drop) ? drop.value : watts;
       cells.push(number(base + noiseW * gaussian(), 1));
     }
     for (const extra of spec.extraChannels ?? []) cells.push(number(extra.value + (extra.noise ?? 0) * gaussian()));

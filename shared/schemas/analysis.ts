@@ -89,53 +89,71 @@ export const defaultVerdictRubric: VerdictRubric = verdictRubricSchema.parse({})
  * Bench-profile and per-upload options. Each default says where it comes from; "Benchwire default" means our own
  * choice with no published source.
  */
-export const analysisOptionsSchema = z.object({
-  /** Unit of temperature columns whose header and mapping name none. Unset: °C. */
-  unit: temperatureUnitSchema.optional(),
-  /** Required for raw millivolt channels: a thermocouple reads the difference to its cold junction. */
-  coldJunction: coldJunctionSchema.optional(),
-  /** The load configuration's required soak; an hour per load is common practice (REFERENCES.md, no source). */
-  soakMinutes: z.number().positive().max(1440).default(60),
-  /** Final window for the steady-state mean and the rise criterion (issue 3 default: last 10 minutes). */
-  steadyWindowMinutes: z.number().positive().max(240).default(10),
-  /**
-   * Largest change over the final window that still counts as steady. Default 1 °C in 10 min: the rate of
-   * IEC 62368-1 B.1.6 (≤ 3 K in 30 min) applied to the 10-minute window.
-   */
-  steadyRiseLimitC: z.number().positive().max(50).default(1),
-  /** Centred moving-median window in samples; 5 removes any run of up to 2 outlying samples. Benchwire default. */
-  spikeWindowSamples: z
-    .number()
-    .int()
-    .min(3)
-    .max(51)
-    .refine((n) => n % 2 === 1, 'Use an odd number of samples.')
-    .default(5),
-  /** A raw sample this far from its moving median counts as a spike. Benchwire default. */
-  spikeThresholdC: z.number().positive().default(5),
-  /** Controlled room near 21 °C: common practice (REFERENCES.md, no source); ±2 °C is a Benchwire default. */
-  ambientTargetC: z.number().min(-20).max(60).default(21),
-  ambientToleranceC: z.number().nonnegative().max(20).default(2),
-  /** Largest ambient change over the run (least-squares trend). Benchwire default. */
-  ambientDriftLimitC: z.number().nonnegative().max(20).default(2),
-  /** Normalised peak = reference + delta over ambient. 21 °C as above. */
-  referenceRoomC: z.number().min(-20).max(60).default(21),
-  /** Throttled when the clock (or package power) stays below this share of its loaded median. Benchwire default. */
-  throttleFraction: z.number().gt(0).lt(1).default(0.85),
-  /** … for at least this long. Benchwire default. */
-  throttleMinSeconds: z.number().positive().max(3600).default(10),
-  /** A tester's "throttled at minute X", used when no clock is logged. */
-  manualThrottleMinute: z.number().nonnegative().nullable().default(null),
-  /** A tester's mark that the system was unstable (crash, reset) during the soak: the run fails. */
-  testerMarkedUnstable: z.boolean().default(false),
-  /** Seconds into the log when the load started; unset: detected from package power, else the first sample. */
-  loadStartS: z.number().nonnegative().nullable().default(null),
-  /** Thermocouple class of the bench's probes; Class 2 is the general-purpose class, the wider (safer) band. */
-  toleranceClass: toleranceClassSchema.default('iec-60584-1-class-2'),
-  /** Judge the normalised peak (reference room + delta) instead of the absolute peak. */
-  useNormalizedPeak: z.boolean().default(false),
-  rubric: verdictRubricSchema.prefault({}),
-});
+export const analysisOptionsSchema = z
+  .object({
+    /** Unit of temperature columns whose header and mapping name none. Unset: °C. */
+    unit: temperatureUnitSchema.optional(),
+    /** Required for raw millivolt channels: a thermocouple reads the difference to its cold junction. */
+    coldJunction: coldJunctionSchema.optional(),
+    /** The load configuration's required soak; an hour per load is common practice (REFERENCES.md, no source). */
+    soakMinutes: z.number().positive().max(1440).default(60),
+    /** Final window for the steady-state mean and the rise criterion (issue 3 default: last 10 minutes). */
+    steadyWindowMinutes: z.number().positive().max(240).default(10),
+    /**
+     * Largest change over the final window that still counts as steady. Default 1 °C in 10 min: the rate of
+     * IEC 62368-1 B.1.6 (≤ 3 K in 30 min) applied to the 10-minute window.
+     */
+    steadyRiseLimitC: z.number().positive().max(50).default(1),
+    /** Centred moving-median window in samples; 5 removes any run of up to 2 outlying samples. Benchwire default. */
+    spikeWindowSamples: z
+      .number()
+      .int()
+      .min(3)
+      .max(51)
+      .refine((n) => n % 2 === 1, 'Use an odd number of samples.')
+      .default(5),
+    /** A raw sample this far from its moving median counts as a spike. Benchwire default. */
+    spikeThresholdC: z.number().positive().default(5),
+    /** Controlled room near 21 °C: common practice (REFERENCES.md, no source); ±2 °C is a Benchwire default. */
+    ambientTargetC: z.number().min(-20).max(60).default(21),
+    ambientToleranceC: z.number().nonnegative().max(20).default(2),
+    /** Largest ambient change over the run (least-squares trend). Benchwire default. */
+    ambientDriftLimitC: z.number().nonnegative().max(20).default(2),
+    /** Normalised peak = reference + delta over ambient. 21 °C as above. */
+    referenceRoomC: z.number().min(-20).max(60).default(21),
+    /** Throttled when the clock (or package power) stays below this share of its loaded median. Benchwire default. */
+    throttleFraction: z.number().gt(0).lt(1).default(0.85),
+    /** … for at least this long. Benchwire default. */
+    throttleMinSeconds: z.number().positive().max(3600).default(10),
+    /** A tester's "throttled at minute X", used when no clock is logged. */
+    manualThrottleMinute: z.number().nonnegative().nullable().default(null),
+    /** A tester's mark that the system was unstable (crash, reset) during the soak: the run fails. */
+    testerMarkedUnstable: z.boolean().default(false),
+    /** Seconds into the log when the load started; unset: detected from package power, else the first sample. */
+    loadStartS: z.number().nonnegative().nullable().default(null),
+    /**
+     * Seconds into the log when the load ended: samples after it are a cool-down tail, left out of the analysis. Unset:
+     * detected where package power (and the clock, when logged) fall to idle together, else the log's last sample.
+     */
+    loadEndS: z.number().positive().nullable().default(null),
+    /**
+     * VRM columns (header names) the tester confirms as dead probes: a mapped probe with no reading at all withholds the
+     * verdict until it is unmapped or confirmed here; a confirmed one is left out of the judgement.
+     */
+    confirmedDeadProbes: z.array(columnReference).max(64).default([]),
+    /** Thermocouple class of the bench's probes; Class 2 is the general-purpose class, the wider (safer) band. */
+    toleranceClass: toleranceClassSchema.default('iec-60584-1-class-2'),
+    /** Judge the normalised peak (reference room + delta) instead of the absolute peak. */
+    useNormalizedPeak: z.boolean().default(false),
+    rubric: verdictRubricSchema.prefault({}),
+  })
+  .refine(
+    (options) => options.loadEndS === null || options.loadStartS === null || options.loadEndS > options.loadStartS,
+    {
+      message: 'The load must end after it starts.',
+      path: ['loadEndS'],
+    },
+  );
 export type AnalysisOptions = z.infer<typeof analysisOptionsSchema>;
 export type AnalysisOptionsInput = z.input<typeof analysisOptionsSchema>;
 
@@ -210,6 +228,7 @@ export const qaFlagCodes = [
   'short-of-five-tau',
   'gaps',
   'probe-dropout',
+  'probe-dead',
   'probe-spike',
   'manual-entry',
   'mapping-guessed',
@@ -219,6 +238,8 @@ export type QaFlagCode = z.infer<typeof qaFlagCodeSchema>;
 
 export const qaFlagSchema = z.object({
   code: qaFlagCodeSchema,
+  /** The flag in words for people (qaFlagLabels); the code is for programs. */
+  label: z.string(),
   severity: z.enum(['warning', 'info']),
   message: z.string(),
   channel: z.string().nullable(),
@@ -235,6 +256,10 @@ export const channelFiguresSchema = z.object({
   steadyStateMeanC: z.number().nullable(),
   steadyStateChangeC: z.number().nullable(),
   reachedSteadyState: z.boolean(),
+  /** The probe has no reading at all in the analysed window (a dead or unplugged probe). */
+  dead: z.boolean(),
+  /** Steady state a good first-order fit predicts for this probe (see riseFitSchema.goodFit); null without one. */
+  predictedSteadyC: z.number().nullable(),
   gapSamples: z.number().int().nonnegative(),
   spikeCount: z.number().int().nonnegative(),
 });
@@ -250,6 +275,9 @@ export const riseFitSchema = z.object({
   rmsResidualC: z.number(),
   loadedS: z.number(),
   soakAtLeastFiveTau: z.boolean(),
+  /** The fit is good enough to predict the plateau (the criterion is `fitRule`); only then may a verdict use it. */
+  goodFit: z.boolean(),
+  fitRule: z.string(),
 });
 export type RiseFit = z.infer<typeof riseFitSchema>;
 
@@ -278,12 +306,36 @@ export const throttleSchema = z.object({
 });
 export type Throttle = z.infer<typeof throttleSchema>;
 
+/**
+ * final: judged on the measured peak of a complete, settled soak (or a throttle, which more soak cannot undo);
+ * provisional: the soak is unfinished, judged on the steady state a good first-order fit predicts;
+ * withheld: no verdict yet, `rule` says why.
+ */
+export const verdictStatuses = ['final', 'provisional', 'withheld'] as const;
+export const verdictStatusSchema = z.enum(verdictStatuses);
+export type VerdictStatus = z.infer<typeof verdictStatusSchema>;
+
+/** How a QA flag bears on the verdict: it withholds it, makes it provisional, or is to be read with it. */
+export const verdictConcernSchema = z.object({
+  code: qaFlagCodeSchema,
+  label: z.string(),
+  effect: z.enum(['withholds', 'makes-provisional', 'read-with']),
+});
+export type VerdictConcern = z.infer<typeof verdictConcernSchema>;
+
 export const verdictSchema = z.object({
-  code: verdictCodeSchema,
+  status: verdictStatusSchema,
+  /** The rubric's verdict; null when withheld. */
+  code: verdictCodeSchema.nullable(),
+  /** In words, the status included: "Warm", "Provisional: Warm", "No verdict yet". */
   label: z.string(),
   rule: z.string(),
-  basis: z.enum(['absolute', 'normalized']),
-  judgedC: z.number(),
+  /** What was judged: the measured peak, the predicted steady state, absolute or normalised; null when withheld. */
+  basis: z.enum(['absolute', 'normalized']).nullable(),
+  judgedFrom: z.enum(['measured-peak', 'predicted-steady-state']).nullable(),
+  judgedC: z.number().nullable(),
+  /** The QA flags that bear on this verdict, in words, those that withhold it or make it provisional first. */
+  concerns: z.array(verdictConcernSchema),
 });
 export type Verdict = z.infer<typeof verdictSchema>;
 
@@ -306,10 +358,17 @@ export const analysisResultSchema = z.object({
   prediction: riseFitSchema.nullable(),
   predictionNote: z.string().nullable(),
   startedAt: z.string().nullable(),
+  /** From the load start to the last loaded sample. */
   soakS: z.number(),
   requiredSoakS: z.number(),
+  /** From the first to the last sample of the file. */
   loggedS: z.number(),
   loadStartS: z.number(),
+  /** First sample after the load (the cool-down tail is left out from here); null when the load ran to the end. */
+  loadEndS: z.number().nullable(),
+  loadEndSource: z.enum(['detected', 'manual', 'none']),
+  /** How the time column was read when it needed explaining (repeated stamps spread evenly, …). */
+  readNotes: z.array(z.string()),
   sampleIntervalS: z.number(),
   sampleRateHz: z.number(),
   sampleCount: z.number().int(),

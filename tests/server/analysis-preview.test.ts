@@ -6,11 +6,11 @@ import { signedIn, testApp } from './support/test-app';
  * 21 + 50 °C with τ = 300 s, ambient holds 21.0 °C and the clock 5000 MHz. First principles: after
  * 12τ the rise is 50·(1 − e⁻¹²) = 49.9997 °C, so the peak is 71.0 °C at the end, 50.0 °C over ambient.
  */
-function firstOrderRiseLog() {
-  const lines = ['Elapsed (s),VRM rear (°C),Ambient (°C),CPU clock (MHz)'];
-  for (let t = 0; t <= 3600; t += 10) {
+function firstOrderRiseLog(endS = 3600, deadProbe = false) {
+  const lines = [`Elapsed (s),VRM rear (°C),Ambient (°C),CPU clock (MHz)${deadProbe ? ',VRM front (°C)' : ''}`];
+  for (let t = 0; t <= endS; t += 10) {
     const vrm = 21 + 50 * (1 - Math.exp(-t / 300));
-    lines.push(`${t},${vrm.toFixed(2)},21.0,5000`);
+    lines.push(`${t},${vrm.toFixed(2)},21.0,5000${deadProbe ? ',OPEN' : ''}`);
   }
   return lines.join('\n');
 }
@@ -35,6 +35,46 @@ describe('POST /api/log-check/analyse', () => {
     // Below ~80 °C without throttling: the easy pass (common practice, no source).
     expect(analysis.verdict.code).toBe('comfortable');
     expect(analysis.verdict.rule).toEqual(expect.any(String));
+  });
+
+  it('when the soak is cut short, then the API withholds the verdict or marks it provisional, in words', async () => {
+    const app = await testApp();
+    const { agent } = await signedIn(app, 'tester');
+    const send = (endS: number) =>
+      agent
+        .post('/api/log-check/analyse')
+        .attach('file', Buffer.from(firstOrderRiseLog(endS)), 'soak.csv')
+        .field('request', JSON.stringify({ mapping, options: { soakMinutes: 60 } }));
+    // 5 min = 1 τ: 63 % of the rise shown (first-order step response 1 − e^(−t/τ)), too little to predict from.
+    const early = await send(300);
+    expect(early.status, early.text).toBe(200);
+    expect(early.body.analysis.verdict).toMatchObject({ status: 'withheld', code: null, label: 'No verdict yet' });
+    // 20 min = 4 τ: 98 % shown; the fitted plateau is 71.0 °C (first principles), Comfortable, but provisional.
+    const later = await send(1200);
+    expect(later.body.analysis.verdict).toMatchObject({
+      status: 'provisional',
+      code: 'comfortable',
+      label: 'Provisional: Comfortable',
+      judgedFrom: 'predicted-steady-state',
+    });
+    expect(later.body.analysis.verdict.judgedC).toBeCloseTo(71.0, 0);
+  });
+
+  it('when a mapped VRM probe read nothing, then the verdict waits until the tester confirms it as dead', async () => {
+    const app = await testApp();
+    const { agent } = await signedIn(app, 'tester');
+    const deadMapping = { ...mapping, vrm: ['VRM rear (°C)', 'VRM front (°C)'] };
+    const send = (options: object) =>
+      agent
+        .post('/api/log-check/analyse')
+        .attach('file', Buffer.from(firstOrderRiseLog(3600, true)), 'soak.csv')
+        .field('request', JSON.stringify({ mapping: deadMapping, options }));
+    const blocked = await send({});
+    expect(blocked.status, blocked.text).toBe(200);
+    expect(blocked.body.analysis.verdict).toMatchObject({ status: 'withheld', code: null });
+    expect(blocked.body.analysis.flags[0]).toMatchObject({ code: 'probe-dead', label: 'Dead probe' });
+    const confirmed = await send({ confirmedDeadProbes: ['VRM front (°C)'] });
+    expect(confirmed.body.analysis.verdict).toMatchObject({ status: 'final', code: 'comfortable' });
   });
 
   it('a UTF-16 export with a byte-order mark reads the same as UTF-8', async () => {

@@ -1,5 +1,6 @@
 import type { AnalysisOptions, ChannelFigures, QaFlag, QaFlagCode, RiseFit } from '../../schemas/analysis';
-import { formatCelsius, formatRunTime } from './run-time-format';
+import { qaFlagLabels } from './qa-flag-labels';
+import { formatCelsius, formatDuration } from './run-time-format';
 import type { Dropout, TimeGap } from './sample-gaps';
 
 export interface QaFacts {
@@ -9,6 +10,10 @@ export interface QaFacts {
   ambientMeanC: number | null;
   ambientDriftC: number | null;
   soakS: number;
+  /** The soak counts as complete (it reached the required length within one sample interval). */
+  soakComplete: boolean;
+  /** VRM columns with no reading at all, and whether the tester confirmed each as dead. */
+  deadProbes: { column: string; confirmed: boolean }[];
   prediction: RiseFit | null;
   gaps: TimeGap[];
   dropouts: Dropout[];
@@ -30,7 +35,7 @@ export function collectQaFlags(facts: QaFacts): QaFlag[] {
     message: string,
     channel: string | null = null,
     atS: number | null = null,
-  ) => flags.push({ code, severity, message, channel, atS });
+  ) => flags.push({ code, label: qaFlagLabels[code], severity, message, channel, atS });
 
   if (facts.mappingGuessed) {
     add(
@@ -62,16 +67,25 @@ export function collectQaFlags(facts: QaFacts): QaFlag[] {
       );
     }
   }
-  const requiredS = options.soakMinutes * 60;
-  if (facts.soakS < requiredS) {
+  for (const dead of facts.deadProbes) {
+    add(
+      'probe-dead',
+      dead.confirmed ? 'info' : 'warning',
+      dead.confirmed
+        ? `${dead.column} has no reading at all; you confirmed it as a dead probe, so the run is judged without it.`
+        : `${dead.column} has no reading at all: a dead or unplugged probe. Unmap it, or confirm it as dead to judge the run without it.`,
+      dead.column,
+    );
+  }
+  if (!facts.soakComplete) {
     add(
       'soak-too-short',
       'warning',
-      `The loaded soak lasted ${formatRunTime(facts.soakS)}; this load configuration requires ${options.soakMinutes} min.`,
+      `The loaded soak lasted ${formatDuration(facts.soakS)}; this load configuration requires ${formatDuration(options.soakMinutes * 60)}.`,
     );
   }
   for (const channel of facts.channels) {
-    if (channel.reachedSteadyState) continue;
+    if (channel.reachedSteadyState || channel.dead) continue;
     const change =
       channel.steadyStateChangeC === null || !Number.isFinite(channel.steadyStateChangeC)
         ? 'could not be judged'
@@ -79,7 +93,7 @@ export function collectQaFlags(facts: QaFacts): QaFlag[] {
     add(
       'not-steady',
       'warning',
-      `${channel.column} ${change} over the final ${options.steadyWindowMinutes} min; steady means within ${formatCelsius(options.steadyRiseLimitC)} (the rate of IEC 62368-1 B.1.6).`,
+      `${channel.column} ${change} over the final ${formatDuration(options.steadyWindowMinutes * 60)}; steady means within ${formatCelsius(options.steadyRiseLimitC)} (the rate of IEC 62368-1 B.1.6).`,
       channel.column,
     );
   }
@@ -88,7 +102,7 @@ export function collectQaFlags(facts: QaFacts): QaFlag[] {
     add(
       'short-of-five-tau',
       'info',
-      `The loaded soak lasted ${(loadedS / tauS).toFixed(1)} τ (τ = ${formatRunTime(tauS)}); a first-order rise needs 5 τ to come within 1 % of its steady state, predicted at ${formatCelsius(predictedSteadyC)}.`,
+      `The loaded soak lasted ${(loadedS / tauS).toFixed(1)} τ (τ = ${formatDuration(tauS)}); a first-order rise needs 5 τ to come within 1 % of its steady state, predicted at ${formatCelsius(predictedSteadyC)}.`,
     );
   }
   if (facts.gaps.length > 0) {
@@ -96,7 +110,7 @@ export function collectQaFlags(facts: QaFacts): QaFlag[] {
     add(
       'gaps',
       'warning',
-      `${missing} missing sample(s) in ${facts.gaps.length} gap(s) of the time column, first at ${formatRunTime(facts.gaps[0].startS)}.`,
+      `${missing} missing sample(s) in ${facts.gaps.length} gap(s) of the time column, first at ${formatDuration(facts.gaps[0].startS)}.`,
       null,
       facts.gaps[0].startS,
     );
@@ -110,7 +124,7 @@ export function collectQaFlags(facts: QaFacts): QaFlag[] {
     add(
       'probe-dropout',
       'warning',
-      `${channel} had no reading for ${samples} sample(s) in ${dropouts.length} dropout(s), first at ${formatRunTime(dropouts[0].startS)}.`,
+      `${channel} had no reading for ${samples} sample(s) in ${dropouts.length} dropout(s), first at ${formatDuration(dropouts[0].startS)}.`,
       channel,
       dropouts[0].startS,
     );
@@ -120,7 +134,7 @@ export function collectQaFlags(facts: QaFacts): QaFlag[] {
     add(
       'probe-spike',
       'info',
-      `${channel}: ${times.length} spike(s) of more than ${formatCelsius(options.spikeThresholdC)} ignored by the ${options.spikeWindowSamples}-sample moving median, first at ${formatRunTime(times[0])}.`,
+      `${channel}: ${times.length} spike(s) of more than ${formatCelsius(options.spikeThresholdC)} ignored by the ${options.spikeWindowSamples}-sample moving median, first at ${formatDuration(times[0])}.`,
       channel,
       times[0],
     );

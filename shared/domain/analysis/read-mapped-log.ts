@@ -4,6 +4,7 @@ import { unitFromColumnName } from './log-column-guess';
 import { filledWidth, forEachDataRow, isBlankRow, type LoggerTable } from './logger-table';
 import { ParseErrorList, cellLabel } from './parse-error-list';
 import { guessTimeColumn, openTimeColumn, type TimeColumnReader } from './read-time-column';
+import { repeatedStampsNote, spreadRepeatedStamps } from './repeated-time-stamps';
 import { celsiusFrom, temperatureUnitLabels } from './temperature-units';
 import { typeKCelsiusFromMillivolts, typeKInverseRangeMv, typeKMillivoltsFromCelsius } from './type-k-thermocouple';
 
@@ -43,6 +44,8 @@ export interface MappedLog {
   ambient: MappedTemperatureChannel | null;
   clockMHz: MappedSeries | null;
   powerW: MappedSeries | null;
+  /** How the time column was read, when that needs saying (repeated stamps spread evenly). */
+  readNotes?: string[];
 }
 
 export type MappedLogOutcome = { ok: true; log: MappedLog } | { ok: false; errors: ParseError[] };
@@ -398,6 +401,8 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
     );
     return { ok: false, errors: errors.list() };
   }
+  const repeated = spreadRepeatedStamps(timeS, rowNumbers, columns[timeIndex], errors);
+  if (!errors.isEmpty) return { ok: false, errors: errors.list() };
   const startedAt = time.startedAt(startCell);
   const firstSeconds = timeS[0];
   for (let i = 0; i < count; i++) timeS[i] -= firstSeconds;
@@ -478,6 +483,7 @@ export function readMappedLog(table: LoggerTable, mapping: ColumnMapping, option
       ambient,
       clockMHz,
       powerW,
+      readNotes: repeated ? [repeatedStampsNote(repeated)] : [],
     },
   };
 }

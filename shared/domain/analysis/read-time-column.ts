@@ -32,8 +32,8 @@ const halfDayS = 43_200;
 const dayS = 86_400;
 
 /**
- * Reads one time cell after another, in file order: times must increase strictly, and a time-of-day column that
- * passes midnight is carried into the next day. Each refusal is listed with its row and column.
+ * Reads one time cell after another, in file order: times must not go back (repeats are judged afterwards, see
+ * spreadRepeatedStamps), and a time-of-day column that passes midnight is carried into the next day. Each refusal is listed with its row and column.
  */
 export class TimeColumnReader {
   private readonly read: (cell: string) => number;
@@ -67,13 +67,13 @@ export class TimeColumnReader {
     // A time-of-day column passes midnight once in a while; elapsed hh:mm:ss never falls by half a day.
     if (this.format === 'clock' && value + this.dayOffset < this.previous - halfDayS) this.dayOffset += dayS;
     value += this.dayOffset;
-    if (value <= this.previous) {
-      const what = value === this.previous ? 'repeats the time of the row before' : 'is earlier than the row before';
+    // A repeated stamp is kept for now: spreadRepeatedStamps accepts repeats at a steady rate and refuses the rest.
+    if (value < this.previous) {
       this.errors.add(
         row,
         this.column,
         'non-monotonic-time',
-        `${cellLabel(row, this.column)}: "${cell.trim()}" ${what} (row ${this.previousRow}); times must increase from row to row.`,
+        `${cellLabel(row, this.column)}: "${cell.trim()}" is earlier than the row before (row ${this.previousRow}); times must increase from row to row.`,
       );
     }
     this.previous = value;

@@ -1,5 +1,6 @@
 import {
   analysisOptionsSchema,
+  type AnalysisOptions,
   type AnalysisOptionsInput,
   type AnalysisResult,
   type ChannelFigures,
@@ -7,16 +8,19 @@ import {
   type Throttle,
 } from '../../schemas/analysis';
 import { fitFirstOrderRise } from './first-order-rise-fit';
+import { detectLoadEndIndex } from './load-end';
 import { detectLoadStartIndex } from './load-onset';
 import { movingMedian } from './moving-median';
 import { collectQaFlags } from './qa-flags';
-import type { MappedLog, MappedTemperatureChannel } from './read-mapped-log';
+import type { MappedLog, MappedSeries, MappedTemperatureChannel } from './read-mapped-log';
+import { judgeRiseFit, minimumFittedRiseC, riseFitQualityRule } from './rise-fit-quality';
+import { formatDuration } from './run-time-format';
 import { findDropouts, findTimeGaps, nominalSampleInterval, type Dropout } from './sample-gaps';
 import { indexAtOrAfter, linearSlope, summarizeSeries } from './series-statistics';
 import { checkSteadyState } from './steady-state';
 import { thermocoupleToleranceC, thermocoupleToleranceClasses } from './thermocouple-tolerance';
 import { detectThrottle } from './throttle-detection';
-import { judgeRun } from './verdict-rubric';
+import { judgeRun, type PredictedSteadyState } from './verdict-rubric';
 
 export interface AnalysisContext {
   /** The mapping came from the header guess, not from the tester. */
@@ -25,13 +29,13 @@ export interface AnalysisContext {
 
 /** Longest list of gaps, dropouts or spikes returned; the flags give the totals. */
 export const analysisListLimit = 100;
-/** A first-order prediction needs a rise to fit; below this the log shows no heating to extrapolate. */
-const minimumFittedRiseC = 1;
 /** τ beyond this multiple of the fitted span means the curve has not bent toward a plateau: no prediction. */
 const maximumTauOverSpan = 3;
 
 interface ChannelWork {
   figures: ChannelFigures;
+  prediction: RiseFit | null;
+  predictionNote: string | null;
   filtered: Float64Array;
   dropouts: Dropout[];
   spikeTimes: number[];
@@ -80,11 +84,16 @@ function analyseChannel(
       steadyStateMeanC: finite(steady.meanC),
       steadyStateChangeC: finite(steady.changeC),
       reachedSteadyState: steady.reached,
+      dead: peakIndex < 0,
+      predictedSteadyC: null,
       gapSamples,
       spikeCount: spikeTimes.length,
     },
+    prediction: null,
+    predictionNote: null,
     filtered,
-    dropouts: findDropouts(channel.column, timeS, raw),
+    // A probe with no reading at all is a dead probe, flagged as such rather than as one long dropout.
+    dropouts: peakIndex < 0 ? [] : findDropouts(channel.column, timeS, raw),
     spikeTimes,
     spikes,
   };
@@ -102,10 +111,14 @@ function predictRise(
   for (let i = 0; i < loadedTime.length; i++) loadedTime[i] = timeS[loadStartIndex + i] - loadStartS;
   const fit = fitFirstOrderRise(loadedTime, channel.filtered.subarray(loadStartIndex));
   if (!fit) return { prediction: null, note: 'Too few loaded samples to fit a first-order rise.' };
+  if (!Number.isFinite(fit.tauS) || !Number.isFinite(fit.riseC)) {
+    return { prediction: null, note: 'The first-order fit did not converge on this log.' };
+  }
   if (Math.abs(fit.riseC) < minimumFittedRiseC) {
     return { prediction: null, note: 'The loaded part shows no rise to fit: the temperature was already flat.' };
   }
   const spanS = loadedTime[loadedTime.length - 1];
+  const quality = judgeRiseFit(fit, spanS);
   if (fit.tauS > maximumTauOverSpan * spanS) {
     return {
       prediction: null,
@@ -123,8 +136,10 @@ function predictRise(
       rmsResidualC: fit.rmsResidualC,
       loadedS: soakS,
       soakAtLeastFiveTau: soakS >= 5 * fit.tauS,
+      goodFit: quality.good,
+      fitRule: riseFitQualityRule,
     },
-    note: null,
+    note: quality.reason === null ? null : `Not good enough to judge by: ${quality.reason}.`,
   };
 }
 
@@ -141,26 +156,105 @@ function manualThrottle(minute: number): Throttle {
   };
 }
 
-/**
- * The thermal analysis of one run: peaks after spike rejection, steady state, first-order prediction, ambient,
- * soak, gaps, throttling, QA flags, the peak's thermocouple tolerance and the rubric's verdict.
- */
-export function analyseRun(
-  log: MappedLog,
-  optionsInput: AnalysisOptionsInput = {},
-  context: AnalysisContext = { mappingGuessed: false },
-): AnalysisResult {
-  const options = analysisOptionsSchema.parse(optionsInput);
+/** The log up to (not including) sample `end`: the loaded window, without a cool-down tail. */
+function logUpTo(log: MappedLog, end: number): MappedLog {
+  if (end >= log.timeS.length) return log;
+  const series = (mapped: MappedSeries | null) => mapped && { ...mapped, values: mapped.values.subarray(0, end) };
+  const channel = (mapped: MappedTemperatureChannel) => ({ ...mapped, valuesC: mapped.valuesC.subarray(0, end) });
+  return {
+    ...log,
+    timeS: log.timeS.subarray(0, end),
+    rowNumbers: log.rowNumbers.subarray(0, end),
+    vrm: log.vrm.map(channel),
+    ambient: log.ambient && channel(log.ambient),
+    clockMHz: series(log.clockMHz),
+    powerW: series(log.powerW),
+  };
+}
+
+/** Fewest samples a loaded window keeps, whatever load end the tester sets. */
+const minimumLoadedSamples = 2;
+
+interface LoadWindow {
+  loadStartIndex: number;
+  /** First sample after the load; the sample count when the load ran to the end. */
+  endIndex: number;
+  loadEndS: number | null;
+  source: AnalysisResult['loadEndSource'];
+}
+
+function findLoadWindow(log: MappedLog, options: AnalysisOptions, intervalS: number): LoadWindow {
   const { timeS } = log;
   const count = timeS.length;
-  const endS = timeS[count - 1];
-  const intervalS = nominalSampleInterval(timeS);
   const loadStartIndex =
     options.loadStartS === null
       ? detectLoadStartIndex(log.powerW?.values ?? null)
       : Math.min(count - 1, indexAtOrAfter(timeS, options.loadStartS));
+  const fewest = Math.min(count, loadStartIndex + minimumLoadedSamples);
+  if (options.loadEndS !== null) {
+    // Samples stamped up to the tester's load end are loaded; the first one after it starts the tail.
+    const end = Math.max(fewest, indexAtOrAfter(timeS, options.loadEndS + 1e-9));
+    return end < count
+      ? { loadStartIndex, endIndex: end, loadEndS: Math.max(options.loadEndS, timeS[end - 1]), source: 'manual' }
+      : { loadStartIndex, endIndex: count, loadEndS: null, source: 'none' };
+  }
+  const end = Math.max(
+    fewest,
+    detectLoadEndIndex({
+      timeS,
+      powerW: log.powerW?.values ?? null,
+      clockMHz: log.clockMHz?.values ?? null,
+      loadStartIndex,
+      throttleFraction: options.throttleFraction,
+      intervalS,
+    }),
+  );
+  return end < count
+    ? { loadStartIndex, endIndex: end, loadEndS: timeS[end], source: 'detected' }
+    : { loadStartIndex, endIndex: count, loadEndS: null, source: 'none' };
+}
+
+function sentenceList(parts: readonly string[]): string {
+  if (parts.length <= 1) return parts.join('');
+  return `${parts.slice(0, -1).join(', ')} and ${parts[parts.length - 1]}`;
+}
+
+/** The name in a dead-probe confirmation matches the column's header name, case and outer spaces aside. */
+function isConfirmedDead(column: string, confirmed: readonly string[]): boolean {
+  const wanted = column.trim().toLowerCase();
+  return confirmed.some((name) => name.trim().toLowerCase() === wanted);
+}
+
+/**
+ * The thermal analysis of one run: the loaded window (load start to load end, a cool-down tail left out), peaks after
+ * spike rejection, steady state, first-order prediction, ambient, soak, gaps, throttling, QA flags, the peak's
+ * thermocouple tolerance and the rubric's verdict (withheld or provisional for an unfinished soak).
+ */
+export function analyseRun(
+  fullLog: MappedLog,
+  optionsInput: AnalysisOptionsInput = {},
+  context: AnalysisContext = { mappingGuessed: false },
+): AnalysisResult {
+  const options = analysisOptionsSchema.parse(optionsInput);
+  const intervalS = nominalSampleInterval(fullLog.timeS);
+  let window = findLoadWindow(fullLog, options, intervalS);
+  let log = logUpTo(fullLog, window.endIndex);
+  if (log.vrm.every((channel) => channel.valuesC.every((value) => value !== value))) {
+    // No probe read anything before the load end: judge the whole log rather than nothing.
+    window = { ...window, endIndex: fullLog.timeS.length, loadEndS: null, source: 'none' };
+    log = fullLog;
+  }
+  const { loadStartIndex } = window;
+  const { timeS } = log;
+  const count = timeS.length;
+  const endS = timeS[count - 1];
   const loadStartS = timeS[loadStartIndex];
-  const soakS = endS - loadStartS + intervalS;
+  // From the load start to the last loaded sample: a 0–3600 s log soaked 60 min, not 60 min plus one interval.
+  const soakS = endS - loadStartS;
+  const requiredSoakS = options.soakMinutes * 60;
+  // The last sample stands for the interval it closes, so a log one interval short of the requirement is complete
+  // (360 samples every 10 s from 0 to 3590 s are a 60-minute soak).
+  const soakComplete = soakS + intervalS >= requiredSoakS - 1e-9;
   const steadyWindowS = options.steadyWindowMinutes * 60;
 
   const channels = log.vrm.map((channel) =>
@@ -174,16 +268,18 @@ export function analyseRun(
       intervalS,
     ),
   );
-  let hottest = channels[0];
-  for (const channel of channels) {
+  const live = channels.filter((channel) => !channel.figures.dead);
+  let hottest = live[0];
+  for (const channel of live) {
     if ((channel.figures.peakC ?? -Infinity) > (hottest.figures.peakC ?? -Infinity)) hottest = channel;
   }
   const peakC = hottest.figures.peakC as number;
   const peakAtS = hottest.figures.peakAtS as number;
-  const steadyMeans = channels.flatMap((channel) =>
+  const steadyMeans = live.flatMap((channel) =>
     channel.figures.steadyStateMeanC === null ? [] : [channel.figures.steadyStateMeanC],
   );
   const steadyStateMeanC = steadyMeans.length > 0 ? Math.max(...steadyMeans) : null;
+  const reachedSteadyState = live.every((channel) => channel.figures.reachedSteadyState);
 
   let ambientMeanC: number | null = null;
   let ambientMinC: number | null = null;
@@ -207,7 +303,14 @@ export function analyseRun(
   const deltaOverAmbientC = ambientFinalWindowMeanC === null ? null : peakC - ambientFinalWindowMeanC;
   const normalizedPeakC = deltaOverAmbientC === null ? null : options.referenceRoomC + deltaOverAmbientC;
 
-  const { prediction, note: predictionNote } = predictRise(log, hottest, loadStartIndex, soakS);
+  for (const channel of live) {
+    const { prediction, note } = predictRise(log, channel, loadStartIndex, soakS);
+    channel.prediction = prediction;
+    channel.predictionNote = note;
+    channel.figures.predictedSteadyC = prediction?.goodFit ? prediction.predictedSteadyC : null;
+  }
+  const prediction = hottest.prediction;
+  const predictionNote = hottest.predictionNote;
 
   const throttleSignal = log.clockMHz ?? log.powerW;
   let throttle: Throttle;
@@ -254,6 +357,12 @@ export function analyseRun(
   }
 
   const figures = channels.map((channel) => channel.figures);
+  const deadProbes = figures
+    .filter((channel) => channel.dead)
+    .map((channel) => ({
+      column: channel.column,
+      confirmed: isConfirmedDead(channel.column, options.confirmedDeadProbes),
+    }));
   const flags = collectQaFlags({
     options,
     mappingGuessed: context.mappingGuessed,
@@ -261,6 +370,8 @@ export function analyseRun(
     ambientMeanC,
     ambientDriftC,
     soakS,
+    soakComplete,
+    deadProbes,
     prediction,
     gaps,
     dropouts,
@@ -268,6 +379,45 @@ export function analyseRun(
     clockLogged: log.clockMHz !== null,
   });
 
+  // An unfinished soak: what is missing, and whether first-order fits predict the steady state it did not reach.
+  const unsettled = live.filter((channel) => !channel.figures.reachedSteadyState);
+  const unfinished: string[] = [];
+  if (!soakComplete) {
+    unfinished.push(`the soak lasted ${formatDuration(soakS)} of the ${formatDuration(requiredSoakS)} required`);
+  }
+  if (unsettled.length > 0) {
+    unfinished.push(
+      `${sentenceList(unsettled.map((channel) => channel.figures.column))} had not settled over the final ${formatDuration(steadyWindowS)}`,
+    );
+  }
+  let predicted: PredictedSteadyState | null = null;
+  let noPredictionReason: string | null = null;
+  if (unfinished.length > 0) {
+    let hottestPredictedC = peakC;
+    for (const channel of live) {
+      const estimateC =
+        channel.figures.predictedSteadyC ?? (channel.figures.reachedSteadyState ? channel.figures.peakC : null);
+      if (estimateC === null) {
+        const why =
+          channel.prediction === null
+            ? channel.predictionNote
+            : channel.predictionNote?.replace(/^Not good enough to judge by: /, '');
+        noPredictionReason = `No good first-order fit predicts where ${channel.figures.column} would settle${why ? `: ${why.replace(/\.$/, '')}` : ''}.`;
+        break;
+      }
+      hottestPredictedC = Math.max(hottestPredictedC, estimateC);
+    }
+    if (noPredictionReason === null) {
+      predicted = {
+        peakC: hottestPredictedC,
+        normalizedPeakC:
+          ambientFinalWindowMeanC === null
+            ? null
+            : options.referenceRoomC + hottestPredictedC - ambientFinalWindowMeanC,
+      };
+    }
+  }
+  const concernCodes = [...new Set(flags.map((flag) => flag.code))].filter((code) => code !== 'probe-spike');
   const verdict = judgeRun(
     {
       peakC,
@@ -278,6 +428,17 @@ export function analyseRun(
       throttleSource: throttle.source,
       firstThrottleAtS: throttle.firstAtS,
       unstable: options.testerMarkedUnstable,
+      unfinished,
+      predicted,
+      noPredictionReason,
+      blockers: deadProbes
+        .filter((dead) => !dead.confirmed)
+        .map((dead) => `${dead.column} has no reading at all; unmap it, or confirm it as a dead probe`),
+      concerns: concernCodes.map((code) => ({
+        code,
+        label: flags.find((flag) => flag.code === code)?.label ?? code,
+        effect: 'read-with',
+      })),
     },
     options.rubric,
   );
@@ -287,8 +448,8 @@ export function analyseRun(
     peakAtS,
     peakChannel: hottest.figures.column,
     steadyStateMeanC,
-    reachedSteadyState: figures.every((channel) => channel.reachedSteadyState),
-    steadyStateRule: `Steady when each VRM probe changes by at most ${options.steadyRiseLimitC} °C over the final ${options.steadyWindowMinutes} min (least-squares trend); default after the rate of IEC 62368-1 B.1.6, ≤ 3 K in 30 min.`,
+    reachedSteadyState,
+    steadyStateRule: `Steady when each VRM probe changes by at most ${options.steadyRiseLimitC} °C over the final ${formatDuration(steadyWindowS)} (least-squares trend); default after the rate of IEC 62368-1 B.1.6, ≤ 3 K in 30 min.`,
     ambientMeanC,
     ambientMinC,
     ambientMaxC,
@@ -301,12 +462,15 @@ export function analyseRun(
     predictionNote,
     startedAt: log.startedAt,
     soakS,
-    requiredSoakS: options.soakMinutes * 60,
-    loggedS: endS + intervalS,
+    requiredSoakS,
+    loggedS: fullLog.timeS[fullLog.timeS.length - 1],
     loadStartS,
+    loadEndS: window.loadEndS,
+    loadEndSource: window.source,
+    readNotes: fullLog.readNotes ?? [],
     sampleIntervalS: intervalS,
     sampleRateHz: 1 / intervalS,
-    sampleCount: count,
+    sampleCount: fullLog.timeS.length,
     gaps: gaps.slice(0, analysisListLimit),
     dropouts: dropouts.slice(0, analysisListLimit),
     spikes: channels.flatMap((channel) => channel.spikes).slice(0, analysisListLimit),

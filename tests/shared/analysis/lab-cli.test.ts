@@ -76,6 +76,36 @@ describe('lab CLI', { timeout: 30_000 }, () => {
     expect(table.stdout).toContain('guessed from the header');
   });
 
+  it('withholds the verdict of an unfinished soak in JSON and text alike, and names QA flags in words', async () => {
+    const file = join(folder, 'short.csv');
+    // A 10-minute log of a rise with τ = 15 min: 0.67 τ shown (first-order step response), far from its plateau.
+    writeFileSync(
+      file,
+      syntheticLoggerLog({
+        durationS: 600,
+        sampleHz: 1,
+        probes: [{ name: 'VRM 1', startC: 65, riseC: 40, tauS: 900 }],
+        ambient: { name: 'Ambient', startC: 21 },
+        clock: { name: 'CPU clock [MHz]', mhz: 4600, idleMhz: 1200 },
+        power: { name: 'Package power [W]', watts: 200, idleWatts: 30 },
+        loadEndS: 480,
+      }),
+    );
+    const json = await lab('analyse', file, '--vrm', 'VRM 1 [°C]', '--json');
+    expect(json.code).toBe(0);
+    const analysis = analysisResultSchema.parse(JSON.parse(json.stdout));
+    expect(analysis.verdict).toMatchObject({ status: 'withheld', code: null, label: 'No verdict yet' });
+    expect(analysis.loadEndSource).toBe('detected');
+    const text = await lab('analyse', file, '--vrm', 'VRM 1 [°C]');
+    expect(text.stdout).toContain('Verdict       No verdict yet');
+    expect(text.stdout).toContain('- Soak shorter than required: withholds the verdict');
+    expect(text.stdout).toContain('Load end      8\u2009min (package power fell to idle)');
+    expect(text.stdout).not.toContain('soak-too-short');
+    // The tester sets the load end by hand instead.
+    const manual = await lab('analyse', file, '--vrm', 'VRM 1 [°C]', '--load-end-min', '5', '--json');
+    expect(analysisResultSchema.parse(JSON.parse(manual.stdout))).toMatchObject({ loadEndS: 300, soakS: 300 });
+  });
+
   it('exits 1 with the precise parse errors on a bad log', async () => {
     const file = join(folder, 'bad.csv');
     writeFileSync(file, 'Time,VRM 1\n0,50\n2,51\n1,52\n');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatCelsius, formatRunTime } from '../../../shared/domain/analysis/run-time-format';
+import { formatCelsius, formatDuration } from '../../../shared/domain/analysis/run-time-format';
 import { seededGaussian, seededRandom } from '../../../shared/generators/seeded-random';
 import { syntheticLoggerLog, syntheticProbeC } from '../../../shared/generators/synthetic-logger-log';
 
@@ -39,9 +39,14 @@ describe('seeded noise and synthetic logs for tests, the benchmark and demo data
     expect(text).toBe('Benchwire\nTime [s],VRM 1 [°C]\n0,40.00\n1,40.00\n2,40.00\n');
   });
 
-  it('prints run times and temperatures the Benchwire way', () => {
-    expect(formatRunTime(59.6)).toBe('1:00');
-    expect(formatRunTime(3725)).toBe('1:02:05');
+  it('prints durations and temperatures the Benchwire way (one duration format for every analysis screen and line)', () => {
+    expect(formatDuration(59.6)).toBe('1\u2009min');
+    expect(formatDuration(1000)).toBe('16\u2009min 40\u2009s');
+    expect(formatDuration(3600)).toBe('60\u2009min');
+    expect(formatDuration(3725)).toBe('62\u2009min 5\u2009s');
+    expect(formatDuration(45)).toBe('45\u2009s');
+    expect(formatDuration(0.05)).toBe('0.050\u2009s');
+    expect(formatDuration(2.5)).toBe('2.5\u2009s');
     expect(formatCelsius(79.04)).toBe('79.0\u2009°C');
   });
 });

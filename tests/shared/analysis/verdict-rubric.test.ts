@@ -37,7 +37,7 @@ describe('verdict rubric (defaults: common practice in VRM thermal reviews, no p
   it('fails a throttled run whatever its peak, and says when and why', () => {
     const verdict = judgeRun({ ...cool, throttled: true, firstThrottleAtS: 1800 }, defaultVerdictRubric);
     expect(verdict.code).toBe('throttled');
-    expect(verdict.rule).toBe('The CPU clock fell and stayed down from 30:00. A run that throttles fails.');
+    expect(verdict.rule).toBe('The CPU clock fell and stayed down from 30\u2009min. A run that throttles fails.');
   });
 
   it('fails a run the tester marked unstable', () => {

@@ -1,17 +1,17 @@
 import type { ReactNode, Ref } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Panel } from '../../../components/ui/panel';
+import { cx } from '../../../lib/class-names';
 import { benchSafetyCaution } from '../../../lib/role-guide';
-import type { AnalysisResult, Throttle } from '../../../../shared/schemas/analysis';
+import type { AnalysisResult, Throttle, VerdictConcern } from '../../../../shared/schemas/analysis';
 import { ChannelTable } from './channel-table';
 import {
   formatC,
   formatCount,
   formatDeltaC,
+  formatDuration,
   formatHertz,
-  formatMinutes,
   formatPercent,
-  formatSeconds,
   withUnit,
 } from './format-figures';
 import { QaFlagList } from './qa-flag-list';
@@ -48,6 +48,12 @@ const throttleSources: Record<Throttle['source'], string> = {
   none: 'nothing logged',
 };
 
+const concernEffects: Record<VerdictConcern['effect'], { words: string; glyph: string; style: string }> = {
+  withholds: { words: 'withholds the verdict', glyph: '✕', style: 'text-red' },
+  'makes-provisional': { words: 'makes it provisional', glyph: '!', style: 'text-amber' },
+  'read-with': { words: 'read the verdict with it', glyph: 'i', style: 'text-muted' },
+};
+
 function throttleUnit(source: Throttle['source']): string {
   return source === 'power' ? 'W' : 'MHz';
 }
@@ -65,7 +71,7 @@ export interface AnalysisResultsProps {
 /** The analysis of one soak, in the order a tester checks it: verdict, peak, steady state, room, log, throttle, QA. */
 export function AnalysisResults({ analysis, fileName, outdated, headingRef, chart }: AnalysisResultsProps) {
   const { verdict, prediction, throttle, uncertainty } = analysis;
-  const soakShort = analysis.soakS < analysis.requiredSoakS;
+  const soakShort = analysis.flags.some((flag) => flag.code === 'soak-too-short');
   const missingSamples = analysis.gaps.reduce((sum, gap) => sum + gap.missingSamples, 0);
 
   return (
@@ -85,15 +91,45 @@ export function AnalysisResults({ analysis, fileName, outdated, headingRef, char
       )}
 
       <div className="rounded-[3px] border border-rule bg-surface px-5 py-4">
-        <p className="text-xs font-semibold tracking-wide text-muted uppercase">Verdict</p>
+        <p className="text-xs font-semibold tracking-wide text-muted uppercase">
+          {verdict.status === 'withheld'
+            ? 'Verdict withheld'
+            : verdict.status === 'provisional'
+              ? 'Provisional verdict'
+              : 'Verdict'}
+        </p>
         <p className="mt-1">
-          <VerdictMark code={verdict.code} label={verdict.label} size="lg" />
+          <VerdictMark code={verdict.code} label={verdict.label} status={verdict.status} size="lg" />
         </p>
         <p className="mt-2 max-w-[70ch] text-sm text-ink">{verdict.rule}</p>
-        <p className="mt-1 text-[0.8125rem] text-muted">
-          Judged on the {verdict.basis === 'normalized' ? 'normalised' : 'absolute'} peak,{' '}
-          <span className="numeric">{formatC(verdict.judgedC)}</span>.
-        </p>
+        {verdict.judgedC !== null && (
+          <p className="mt-1 text-[0.8125rem] text-muted">
+            Judged on the {verdict.basis === 'normalized' ? 'normalised' : 'absolute'}{' '}
+            {verdict.judgedFrom === 'predicted-steady-state' ? 'predicted steady state' : 'peak'},{' '}
+            <span className="numeric">{formatC(verdict.judgedC)}</span>.
+          </p>
+        )}
+        {verdict.concerns.length > 0 && (
+          <div className="mt-3 border-t border-rule pt-2">
+            <p className="text-sm font-semibold text-ink">QA flags that bear on this verdict</p>
+            <ul className="mt-1 space-y-0.5 text-sm">
+              {verdict.concerns.map((concern) => {
+                const effect = concernEffects[concern.effect];
+                return (
+                  <li key={concern.code} className="flex gap-2">
+                    <span aria-hidden="true" className={cx('w-3 shrink-0 font-mono font-bold', effect.style)}>
+                      {effect.glyph}
+                    </span>
+                    <span className="text-ink">
+                      {concern.label} <span className="text-muted">— {effect.words}</span>
+                    </span>
+                  </li>
+                );
+              })}
+            </ul>
+            <p className="mt-1 text-[0.8125rem] text-muted">Each is explained under QA flags below.</p>
+          </div>
+        )}
       </div>
 
       <Alert tone="caution" title="Before you quote or touch anything">
@@ -111,7 +147,7 @@ export function AnalysisResults({ analysis, fileName, outdated, headingRef, char
               {formatC(analysis.peakC)}
               {uncertainty.peakToleranceC !== null && <> ±{withUnit(uncertainty.peakToleranceC.toFixed(1), '°C')}</>}
             </Figure>
-            <Figure term="Reached at">{formatMinutes(analysis.peakAtS)}</Figure>
+            <Figure term="Reached at">{formatDuration(analysis.peakAtS)}</Figure>
             <Figure term="Hottest probe">
               <span className="font-mono">{analysis.peakChannel}</span>
             </Figure>
@@ -141,16 +177,20 @@ export function AnalysisResults({ analysis, fileName, outdated, headingRef, char
           <h3 className="mt-3 text-sm font-semibold text-ink">Prediction from a first-order rise</h3>
           {prediction ? (
             <dl className="mt-1">
-              <Figure term="Time constant τ">{formatMinutes(prediction.tauS)}</Figure>
+              <Figure term="Time constant τ">{formatDuration(prediction.tauS)}</Figure>
               <Figure term="Predicted steady state">{formatC(prediction.predictedSteadyC)}</Figure>
               <Figure term="Loaded soak at least 5 τ">
                 <YesNo value={prediction.soakAtLeastFiveTau} />
               </Figure>
               <Figure term="Fit residual (RMS)">{formatDeltaC(prediction.rmsResidualC)}</Figure>
+              <Figure term="Good enough to judge by" note={analysis.predictionNote ?? undefined}>
+                <YesNo value={prediction.goodFit} />
+              </Figure>
             </dl>
           ) : (
             <p className="mt-1 text-sm text-ink">{analysis.predictionNote ?? 'No prediction for this log.'}</p>
           )}
+          {prediction && <p className="mt-1 text-[0.8125rem] text-muted">{prediction.fitRule}</p>}
         </Panel>
 
         <Panel title="Room (ambient probe)">
@@ -172,14 +212,30 @@ export function AnalysisResults({ analysis, fileName, outdated, headingRef, char
             <Figure term="Soak logged" note={soakShort ? 'Shorter than the load configuration asks for.' : undefined}>
               <span className={soakShort ? 'text-amber' : undefined}>
                 {soakShort && <span aria-hidden="true">! </span>}
-                {formatMinutes(analysis.soakS)} of {formatMinutes(analysis.requiredSoakS)}
+                {formatDuration(analysis.soakS)} of {formatDuration(analysis.requiredSoakS)}
               </span>
             </Figure>
-            <Figure term="Load started at">{formatMinutes(analysis.loadStartS)}</Figure>
+            <Figure term="Logged">{formatDuration(analysis.loggedS)}</Figure>
+            <Figure term="Load started at">{formatDuration(analysis.loadStartS)}</Figure>
+            <Figure
+              term="Load ended at"
+              note={
+                analysis.loadEndS === null
+                  ? undefined
+                  : `${analysis.loadEndSource === 'manual' ? 'Set by you' : 'Package power and the clock fell to idle together'}: the cool-down tail after it is left out of every figure.`
+              }
+            >
+              {analysis.loadEndS === null ? 'at the end of the log' : formatDuration(analysis.loadEndS)}
+            </Figure>
             <Figure term="Sample rate">
-              {formatHertz(analysis.sampleRateHz)} · every {formatSeconds(analysis.sampleIntervalS)}
+              {formatHertz(analysis.sampleRateHz)} · every {formatDuration(analysis.sampleIntervalS)}
             </Figure>
             <Figure term="Samples">{formatCount(analysis.sampleCount)}</Figure>
+            {analysis.readNotes.map((note) => (
+              <Figure key={note} term="Time stamps" note={note}>
+                spread evenly
+              </Figure>
+            ))}
             <Figure term="Gaps in the time column">
               {analysis.gaps.length === 0
                 ? 'none'
@@ -196,7 +252,7 @@ export function AnalysisResults({ analysis, fileName, outdated, headingRef, char
               <YesNo value={throttle.detected} good={false} failing />
             </Figure>
             <Figure term="Judged from">{throttleSources[throttle.source]}</Figure>
-            <Figure term="First at">{throttle.firstAtS === null ? '—' : formatMinutes(throttle.firstAtS)}</Figure>
+            <Figure term="First at">{throttle.firstAtS === null ? '—' : formatDuration(throttle.firstAtS)}</Figure>
             <Figure term="Share of the loaded soak">{formatPercent(throttle.shareThrottled)}</Figure>
             {throttle.loadedMedian !== null && throttle.threshold !== null && (
               <Figure term="Loaded median · threshold">

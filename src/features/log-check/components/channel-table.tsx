@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import type { ChannelFigures } from '../../../../shared/schemas/analysis';
-import { formatC, formatDeltaC, formatMinutes, unitLabel } from './format-figures';
+import { formatC, formatDeltaC, formatDuration, unitLabel } from './format-figures';
 
 /** One row per VRM probe: its own peak, minimum, steady-state mean and change, gaps and spikes. */
 export function ChannelTable({ channels, peakChannel }: { channels: readonly ChannelFigures[]; peakChannel: string }) {
@@ -26,7 +26,7 @@ export function ChannelTable({ channels, peakChannel }: { channels: readonly Cha
         header: 'Peak at',
         numeric: true,
         sortValue: (c) => c.peakAtS,
-        cell: (c) => formatMinutes(c.peakAtS),
+        cell: (c) => formatDuration(c.peakAtS),
         hideBelow: 'sm',
       },
       { id: 'min', header: 'Lowest', numeric: true, cell: (c) => formatC(c.minC), hideBelow: 'md' },
@@ -48,7 +48,11 @@ export function ChannelTable({ channels, peakChannel }: { channels: readonly Cha
         id: 'reached',
         header: 'Steady',
         cell: (c) =>
-          c.reachedSteadyState ? (
+          c.dead ? (
+            <span className="text-red">
+              <span aria-hidden="true">✕ </span>No readings
+            </span>
+          ) : c.reachedSteadyState ? (
             <span className="text-teal">
               <span aria-hidden="true">✓ </span>Yes
             </span>
@@ -57,6 +61,13 @@ export function ChannelTable({ channels, peakChannel }: { channels: readonly Cha
               <span aria-hidden="true">! </span>No
             </span>
           ),
+      },
+      {
+        id: 'predicted',
+        header: 'Predicted steady',
+        numeric: true,
+        cell: (c) => formatC(c.predictedSteadyC),
+        hideBelow: 'md',
       },
       { id: 'gaps', header: 'Gaps', numeric: true, cell: (c) => c.gapSamples, hideBelow: 'md' },
       { id: 'spikes', header: 'Spikes', numeric: true, cell: (c) => c.spikeCount, hideBelow: 'md' },
@@ -71,7 +82,7 @@ export function ChannelTable({ channels, peakChannel }: { channels: readonly Cha
       rowKey={(channel) => channel.column}
       filter={false}
       noun={['probe', 'probes']}
-      footnote="Final mean and change are over the final window of the soak; gaps and spikes count samples."
+      footnote="Final mean and change are over the final window of the soak; predicted steady is the plateau of a first-order fit good enough to judge by; gaps and spikes count samples."
     />
   );
 }

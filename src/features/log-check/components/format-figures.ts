@@ -1,3 +1,4 @@
+import { formatDuration as formatSharedDuration } from '../../../../shared/domain/analysis/run-time-format';
 import { temperatureUnitLabels } from '../../../../shared/domain/analysis/temperature-units';
 import type { TemperatureUnit } from '../../../../shared/schemas/analysis';
 
@@ -19,14 +20,9 @@ export function formatDeltaC(celsius: number | null | undefined, signed = false)
   return withUnit(signed && celsius > 0 ? `+${text}` : text, '°C');
 }
 
-export function formatMinutes(seconds: number | null | undefined, digits = 1): string {
-  return seconds === null || seconds === undefined ? '—' : withUnit((seconds / 60).toFixed(digits), 'min');
-}
-
-/** Whole seconds as they are, fractions with two significant figures (0.050 s at 20 Hz). */
-export function formatSeconds(seconds: number): string {
-  if (Number.isInteger(seconds) || seconds >= 10) return withUnit(seconds.toFixed(0), 's');
-  return withUnit(seconds >= 1 ? seconds.toFixed(1) : seconds.toPrecision(2), 's');
+/** Durations and times into a run, written the one Benchwire way (shared with the engine's messages and the CLI). */
+export function formatDuration(seconds: number | null | undefined): string {
+  return seconds === null || seconds === undefined ? '—' : formatSharedDuration(seconds);
 }
 
 export function formatHertz(hertz: number): string {

@@ -1,13 +1,13 @@
 import { cx } from '../../../lib/class-names';
 import type { QaFlag } from '../../../../shared/schemas/analysis';
-import { formatMinutes } from './format-figures';
+import { formatDuration } from './format-figures';
 
 const severityStyles: Record<QaFlag['severity'], { glyph: string; word: string; mark: string; bar: string }> = {
   warning: { glyph: '!', word: 'Warning', mark: 'border-amber text-amber', bar: 'border-l-amber' },
   info: { glyph: 'i', word: 'Note', mark: 'border-slate text-slate', bar: 'border-l-slate' },
 };
 
-/** The QA flags of a run, each with an icon, a word for its severity, its message and its code. */
+/** The QA flags of a run, each with an icon, a word for its severity, its label in words and its message. */
 export function QaFlagList({ flags }: { flags: readonly QaFlag[] }) {
   if (flags.length === 0) {
     return (
@@ -39,18 +39,18 @@ export function QaFlagList({ flags }: { flags: readonly QaFlag[] }) {
             </span>
             <div className="min-w-0 text-sm">
               <p className="text-ink">
-                <span className="font-semibold">{style.word}:</span> {flag.message}
+                <span className="font-semibold">
+                  {style.word} · {flag.label}:
+                </span>{' '}
+                {flag.message}
               </p>
-              <p className="mt-0.5 text-xs text-muted">
-                <code className="font-mono">{flag.code}</code>
-                {flag.channel && (
-                  <>
-                    {' · '}
-                    <span className="font-mono">{flag.channel}</span>
-                  </>
-                )}
-                {flag.atS !== null && <> · at {formatMinutes(flag.atS)}</>}
-              </p>
+              {(flag.channel || flag.atS !== null) && (
+                <p className="mt-0.5 text-xs text-muted">
+                  {flag.channel && <span className="font-mono">{flag.channel}</span>}
+                  {flag.channel && flag.atS !== null && ' · '}
+                  {flag.atS !== null && <>at {formatDuration(flag.atS)}</>}
+                </p>
+              )}
             </div>
           </li>
         );

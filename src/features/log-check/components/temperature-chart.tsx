@@ -1,6 +1,6 @@
 import { useId } from 'react';
 import type { AnalysisResult } from '../../../../shared/schemas/analysis';
-import { formatC, thinSpace } from './format-figures';
+import { formatC, formatDuration, thinSpace } from './format-figures';
 import type { ChartLine, ChartSeries } from './read-chart-series';
 
 const width = 720;
@@ -50,7 +50,10 @@ export interface TemperatureChartProps {
   analysis: AnalysisResult;
 }
 
-/** The VRM probes and the ambient probe over the log, absolute °C, with the peak and any throttled stretch marked. */
+/**
+ * The VRM probes and the ambient probe over the whole log, absolute °C, with the peak and any throttled stretch marked,
+ * and the cool-down tail after the load shaded as left out of the analysis.
+ */
 export function TemperatureChart({ series, analysis }: TemperatureChartProps) {
   const hatchId = useId();
   const titleId = useId();
@@ -116,6 +119,30 @@ export function TemperatureChart({ series, analysis }: TemperatureChartProps) {
               <line x1="0" y1="0" x2="0" y2="6" stroke="var(--color-red)" strokeWidth="2" />
             </pattern>
           </defs>
+          {analysis.loadEndS !== null && analysis.loadEndS < series.endS && (
+            <g>
+              <rect
+                x={x(analysis.loadEndS)}
+                y={margin.top}
+                width={Math.max(2, margin.left + plotWidth - x(analysis.loadEndS))}
+                height={plotHeight}
+                fill="var(--color-wash)"
+                opacity="0.8"
+              />
+              <line
+                x1={x(analysis.loadEndS)}
+                x2={x(analysis.loadEndS)}
+                y1={margin.top}
+                y2={margin.top + plotHeight}
+                stroke="var(--color-muted)"
+                strokeWidth="1.5"
+                strokeDasharray="4 3"
+              />
+              <text x={x(analysis.loadEndS) + 4} y={margin.top + 11} fill="var(--color-muted)" className="font-sans">
+                after the load · left out
+              </text>
+            </g>
+          )}
           {analysis.throttle.episodes.map((episode) => (
             <g key={episode.startS}>
               <rect
@@ -225,8 +252,9 @@ export function TemperatureChart({ series, analysis }: TemperatureChartProps) {
       <p id={`${titleId}-summary`} className="mt-1 text-[0.8125rem] text-muted">
         Readings as logged, thinned to the lowest and highest of each short stretch so no peak is lost; the figures
         above come from the server’s analysis. Room mean {formatC(analysis.ambientMeanC)}, soak{' '}
-        {(analysis.soakS / 60).toFixed(0)}
-        {thinSpace}min.
+        {formatDuration(analysis.soakS)}.
+        {analysis.loadEndS !== null &&
+          ` The shaded stretch from ${formatDuration(analysis.loadEndS)} is after the load ended: a cool-down, left out of the analysis.`}
       </p>
     </figure>
   );

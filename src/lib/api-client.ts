@@ -80,13 +80,6 @@ const errorBodySchema = z.object({
   error: apiErrorSchema.shape.error.extend({ details: z.unknown().optional() }),
 });
 
-/** Until every route sends `error.details`, an older answer may carry them beside `error` (the log check's 422). */
-function besideError(body: unknown): unknown {
-  if (typeof body !== 'object' || body === null) return null;
-  const { error: _error, ...rest } = body as Record<string, unknown>;
-  return Object.keys(rest).length > 0 ? rest : null;
-}
-
 function parseRetryAfter(header: string | null): number | null {
   if (!header) return null;
   const seconds = Number(header);
@@ -104,7 +97,7 @@ export function apiErrorFrom(status: number, body: unknown, retryAfterHeader: st
     const { code, message, fields, details } = parsed.data.error;
     return new ApiError(status, code, message, fields ?? {}, {
       retryAfterSeconds,
-      details: details ?? besideError(body),
+      details: details ?? null,
     });
   }
   // A proxy or a crashed server may answer with HTML or nothing; the status still tells the story.

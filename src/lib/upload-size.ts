@@ -1,14 +1,20 @@
-const thinSpace = '\u2009';
+import { formatUploadBytes, type UploadLimit } from '../../shared/upload-limits';
 
-/** Sizes as file managers show them: powers of 1024, one decimal below 10, whole numbers above (878 KB, 2.4 MB). */
-export function formatBytes(bytes: number): string {
-  if (bytes < 1024) return `${bytes}${thinSpace}B`;
-  const [value, unit] = bytes < 1024 * 1024 ? [bytes / 1024, 'KB'] : [bytes / (1024 * 1024), 'MB'];
-  const digits = value < 10 && !Number.isInteger(value) ? 1 : 0;
-  return `${value.toLocaleString('en-GB', { maximumFractionDigits: digits })}${thinSpace}${unit}`;
+/** Sizes as the server writes them in its messages (one function, from shared/upload-limits). */
+export const formatBytes = formatUploadBytes;
+
+/** What to tell the user about a file over the limit, before anything is sent: its size, the limit, what to do. */
+export function fileTooLargeMessage(fileName: string, sizeBytes: number, limit: UploadLimit): string {
+  return `“${fileName}” is ${formatBytes(sizeBytes)}; the limit is ${formatBytes(limit.maxFileBytes)}. ${limit.whenTooLarge}`;
 }
 
-/** What to tell the user about a file over the limit, before anything is sent. */
-export function fileTooLargeMessage(fileName: string, sizeBytes: number, maxBytes: number): string {
-  return `“${fileName}” is ${formatBytes(sizeBytes)}; the limit is ${formatBytes(maxBytes)}.`;
+/** Whether a file name ends in one of the endings the upload's route reads. */
+export function hasAcceptedExtension(fileName: string, limit: UploadLimit): boolean {
+  const name = fileName.toLowerCase();
+  return limit.acceptedExtensions.some((extension) => name.endsWith(extension));
+}
+
+/** The file input's `accept` list for an upload. */
+export function acceptAttribute(limit: UploadLimit): string {
+  return limit.acceptedExtensions.join(',');
 }

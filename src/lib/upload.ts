@@ -1,5 +1,6 @@
 import type { z } from 'zod';
 import { ApiError, apiErrorFrom, networkError, parseJsonBody, unexpectedResponseError } from './api-client';
+import type { UploadLimit } from '../../shared/upload-limits';
 import { fileTooLargeMessage } from './upload-size';
 
 export interface UploadProgress {
@@ -23,8 +24,8 @@ export interface UploadRequest<T> {
   fields?: Record<string, string>;
   /** The 2xx body is checked against it; a mismatch is an error, never passed on. */
   schema: z.ZodType<T>;
-  /** Refused in the browser, before a byte is sent (the server refuses it too: same number from shared/). */
-  maxBytes?: number;
+  /** The upload's limits from shared/upload-limits: a file over the size is refused before a byte is sent. */
+  limit: UploadLimit;
   onProgress?: (progress: UploadProgress) => void;
   signal?: AbortSignal;
 }
@@ -51,7 +52,7 @@ export function uploadFile<T>({
   file,
   fields = {},
   schema,
-  maxBytes,
+  limit,
   onProgress,
   signal,
 }: UploadRequest<T>): Promise<T> {
@@ -60,9 +61,8 @@ export function uploadFile<T>({
       reject(new UploadCancelled());
       return;
     }
-    if (maxBytes !== undefined && file.blob.size > maxBytes) {
-      const message = fileTooLargeMessage(file.fileName, file.blob.size, maxBytes);
-      reject(new ApiError(413, 'payload_too_large', message, { file: message }));
+    if (file.blob.size > limit.maxFileBytes) {
+      reject(new ApiError(413, 'payload_too_large', fileTooLargeMessage(file.fileName, file.blob.size, limit)));
       return;
     }
 

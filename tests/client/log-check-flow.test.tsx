@@ -4,6 +4,7 @@ import type { ReactNode } from 'react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { requestFromDraft } from '../../src/features/log-check/components/mapping-draft';
 import { useLogCheck } from '../../src/features/log-check/components/use-log-check';
+import { logFileUploadLimit } from '../../shared/upload-limits';
 import { installFakeUploadServer, type UploadHandler } from './support/fake-upload-server';
 import { answerLogCheck, csvFile, firstOrderSoakCsv, soakWithBadCellCsv } from './support/log-check-server';
 
@@ -82,7 +83,10 @@ describe('the log check flow', () => {
     const huge = csvFile('huge.csv', 'x');
     Object.defineProperty(huge, 'size', { value: 30 * 1024 * 1024 });
     act(() => result.current.choose(huge));
-    expect(result.current.fileError).toBe('“huge.csv” is 30\u2009MB; the limit is 25\u2009MB.');
+    // 25 MiB: logFileUploadLimit in shared/upload-limits.ts.
+    expect(result.current.fileError).toBe(
+      `“huge.csv” is 30\u2009MB; the limit is 25\u2009MB. ${logFileUploadLimit.whenTooLarge}`,
+    );
     expect(server.sent).toHaveLength(0);
     expect(result.current.file).toBeNull();
   });
@@ -135,7 +139,7 @@ describe('the log check flow', () => {
     }));
     act(() => result.current.choose(csvFile('soak.csv', firstOrderSoakCsv())));
     await waitFor(() => expect(result.current.fileError).not.toBeNull());
-    expect(result.current.fileError).toBe('This is not a text export: save the log as CSV or TSV. Not a text file.');
+    expect(result.current.fileError).toBe('This is not a text export: save the log as CSV or TSV.');
     expect(result.current.requestError).toBeNull();
   });
 });

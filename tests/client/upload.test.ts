@@ -2,6 +2,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { z } from 'zod';
 import { ApiError, apiRequest } from '../../src/lib/api-client';
 import { uploadFile, type UploadProgress } from '../../src/lib/upload';
+import { catalogImportUploadLimit as limit } from '../../shared/upload-limits';
 import { installFakeUploadServer } from './support/fake-upload-server';
 
 const file = { blob: new Blob(['a,b\n1,2\n'], { type: 'text/csv' }), fileName: 'table.csv' };
@@ -31,7 +32,7 @@ describe('the upload helper', () => {
     installFakeUploadServer(async () => ({ status: 422, body }));
     vi.stubGlobal('fetch', async () => new Response(JSON.stringify(body), { status: 422 }));
 
-    const fromUpload = await rejectionOf(uploadFile({ path: '/api/x', file, schema: answerSchema }));
+    const fromUpload = await rejectionOf(uploadFile({ path: '/api/x', file, schema: answerSchema, limit }));
     const fromFetch = await rejectionOf(apiRequest('/api/x', { method: 'POST', body: {} }));
     expect(fromUpload).toBeInstanceOf(ApiError);
     expect(fromUpload).toEqual(fromFetch);
@@ -46,6 +47,7 @@ describe('the upload helper', () => {
       file,
       fields: { checksum: 'abc' },
       schema: answerSchema,
+      limit,
       onProgress: (progress) => seen.push(progress.phase),
     });
     expect(answer).toEqual({ rows: 1 });
@@ -57,12 +59,16 @@ describe('the upload helper', () => {
 
   it('refuses an answer that does not match the schema, and a file over the limit before sending', async () => {
     const server = installFakeUploadServer(async () => ({ status: 200, body: { rows: 'many' } }));
-    expect(await rejectionOf(uploadFile({ path: '/api/x', file, schema: answerSchema }))).toMatchObject({
+    expect(await rejectionOf(uploadFile({ path: '/api/x', file, schema: answerSchema, limit }))).toMatchObject({
       code: 'unexpected_response',
     });
-    expect(await rejectionOf(uploadFile({ path: '/api/x', file, schema: answerSchema, maxBytes: 4 }))).toMatchObject({
+    expect(
+      await rejectionOf(
+        uploadFile({ path: '/api/x', file, schema: answerSchema, limit: { ...limit, maxFileBytes: 4 } }),
+      ),
+    ).toMatchObject({
       status: 413,
-      message: '“table.csv” is 8\u2009B; the limit is 4\u2009B.',
+      message: `“table.csv” is 8\u2009B; the limit is 4\u2009B. ${limit.whenTooLarge}`,
     });
     expect(server.sent).toHaveLength(1);
   });

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { uploadFile, type UploadFile, type UploadProgress } from '../../../lib/upload';
+import { catalogImportUploadLimit } from '../../../../shared/upload-limits';
 import {
-  CATALOG_IMPORT_MAX_BYTES,
   catalogImportPreviewSchema,
   catalogImportResultSchema,
   type CatalogImportPreview,
@@ -21,7 +21,7 @@ export function previewCatalogImport({ source, onProgress }: CsvRequestInput): P
     path: '/api/catalog/import/preview',
     file: source,
     schema: catalogImportPreviewSchema,
-    maxBytes: CATALOG_IMPORT_MAX_BYTES,
+    limit: catalogImportUploadLimit,
     onProgress,
   });
 }
@@ -37,7 +37,7 @@ export function commitCatalogImport({ source, checksum, onProgress }: CommitImpo
     file: source,
     fields: { checksum },
     schema: catalogImportResultSchema,
-    maxBytes: CATALOG_IMPORT_MAX_BYTES,
+    limit: catalogImportUploadLimit,
     onProgress,
   });
 }

@@ -3,7 +3,8 @@ import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
 import { TextArea } from '../../../components/ui/text-area';
 import { UploadProgress } from '../../../components/ui/upload-progress';
-import { formatBytes } from '../../../lib/upload-size';
+import { acceptAttribute, formatBytes } from '../../../lib/upload-size';
+import { catalogImportUploadLimit } from '../../../../shared/upload-limits';
 import type { CatalogImportFlow } from './use-catalog-import';
 
 const sourceModes = [
@@ -54,7 +55,7 @@ export function CatalogImportSourceForm({ flow }: { flow: CatalogImportFlow }) {
             key={flow.fileInputKey}
             id={fileInputId}
             type="file"
-            accept=".csv,text/csv"
+            accept={`${acceptAttribute(catalogImportUploadLimit)},text/csv`}
             aria-invalid={sourceError ? true : undefined}
             aria-describedby={[sourceError ? fileErrorId : '', fileHintId].filter(Boolean).join(' ')}
             onChange={(event) => flow.chooseFile(event.target.files?.[0] ?? null)}

@@ -2,11 +2,8 @@ import { useReducer } from 'react';
 import { describeSubmitError } from '../../../lib/form-errors';
 import { isUploadCancelled, type UploadFile, type UploadProgress } from '../../../lib/upload';
 import { fileTooLargeMessage } from '../../../lib/upload-size';
-import {
-  CATALOG_IMPORT_MAX_BYTES,
-  type CatalogImportPreview,
-  type CatalogImportResult,
-} from '../../../../shared/schemas/catalog-import';
+import type { CatalogImportPreview, CatalogImportResult } from '../../../../shared/schemas/catalog-import';
+import { catalogImportUploadLimit } from '../../../../shared/upload-limits';
 import { useCommitCatalogImport, usePreviewCatalogImport } from '../api/import-catalog';
 
 export type CsvSourceMode = 'file' | 'paste';
@@ -123,10 +120,10 @@ export function useCatalogImport() {
       });
       return;
     }
-    if (source.blob.size > CATALOG_IMPORT_MAX_BYTES) {
+    if (source.blob.size > catalogImportUploadLimit.maxFileBytes) {
       const name = state.mode === 'file' ? source.fileName : 'The pasted text';
-      const message = fileTooLargeMessage(name, source.blob.size, CATALOG_IMPORT_MAX_BYTES);
-      dispatch({ type: 'source-refused', message: `${message} Split it into parts.` });
+      const message = fileTooLargeMessage(name, source.blob.size, catalogImportUploadLimit);
+      dispatch({ type: 'source-refused', message });
       return;
     }
     dispatch({ type: 'sent', step: 'preview', totalBytes: source.blob.size });

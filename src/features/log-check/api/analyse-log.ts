@@ -1,6 +1,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { isApiError } from '../../../lib/api-client';
 import { uploadFile, type UploadProgress } from '../../../lib/upload';
+import { logFileUploadLimit } from '../../../../shared/upload-limits';
 import {
   analysisPreviewFailureSchema,
   analysisPreviewResponseSchema,
@@ -12,9 +13,6 @@ import {
 import { logCheckKeys } from './log-check-keys';
 
 export const analysisPreviewPath = '/api/log-check/analyse';
-
-/** The server refuses larger files (MAX_LOG_BYTES in server/routes/log-check.routes.ts); checked here first. */
-export const maxLogBytes = 25 * 1024 * 1024;
 
 export type AnalyseLogOutcome =
   | { kind: 'analysed'; preview: LogPreview; analysis: AnalysisResult }
@@ -40,7 +38,7 @@ export async function analyseLog({ file, request, onProgress, signal }: AnalyseL
       file: { blob: file, fileName: file.name },
       fields: request ? { request: JSON.stringify(request) } : {},
       schema: analysisPreviewResponseSchema,
-      maxBytes: maxLogBytes,
+      limit: logFileUploadLimit,
       onProgress,
       signal,
     });

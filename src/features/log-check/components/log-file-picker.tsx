@@ -1,7 +1,7 @@
 import { useId, useRef, useState, type DragEvent } from 'react';
 import { cx } from '../../../lib/class-names';
-import { formatBytes } from '../../../lib/upload-size';
-import { maxLogBytes } from '../api/analyse-log';
+import { acceptAttribute, formatBytes } from '../../../lib/upload-size';
+import { logFileUploadLimit } from '../../../../shared/upload-limits';
 
 export interface LogFilePickerProps {
   file: File | null;
@@ -11,7 +11,7 @@ export interface LogFilePickerProps {
   disabled?: boolean;
 }
 
-const accept = '.csv,.tsv,.txt,.log,.dat,text/csv,text/plain,text/tab-separated-values';
+const accept = `${acceptAttribute(logFileUploadLimit)},text/csv,text/plain,text/tab-separated-values`;
 
 /**
  * A drop area around an ordinary file input: dragging a file from the desktop works, and so does the keyboard (Tab to
@@ -100,8 +100,8 @@ export function LogFilePicker({ file, onChoose, error, disabled = false }: LogFi
           </p>
         )}
         <p id={hintId} className="mt-1 text-[0.8125rem] text-muted">
-          A CSV, TSV or text export of the logger, up to {formatBytes(maxLogBytes)}. Nothing is saved: the file is read
-          and analysed, then forgotten.
+          A CSV, TSV or text export of the logger, up to {formatBytes(logFileUploadLimit.maxFileBytes)}. Nothing is
+          saved: the file is read and analysed, then forgotten.
         </p>
       </div>
       {file && (

@@ -1,9 +1,10 @@
 import { useCallback, useMemo, useReducer, useRef } from 'react';
 import { isApiError } from '../../../lib/api-client';
 import { isUploadCancelled, type UploadProgress } from '../../../lib/upload';
-import { fileTooLargeMessage } from '../../../lib/upload-size';
+import { fileTooLargeMessage, hasAcceptedExtension } from '../../../lib/upload-size';
+import { logFileUploadLimit } from '../../../../shared/upload-limits';
 import type { AnalysisRequestInput, LogPreview, ParseError } from '../../../../shared/schemas/analysis';
-import { maxLogBytes, useAnalyseLog, type AnalyseLogOutcome } from '../api/analyse-log';
+import { useAnalyseLog, type AnalyseLogOutcome } from '../api/analyse-log';
 import { draftFromPreview, requestFromDraft, type MappingDraft } from './mapping-draft';
 import { readChartSeries, type ChartSeries } from './read-chart-series';
 
@@ -93,10 +94,10 @@ function describeFailure(error: unknown): Pick<LogCheckState, 'fileError' | 'req
       requestError: { message: 'Your session ended, so the file was not read.', signedOut: true },
     };
   }
-  // Problems with the file itself (missing, too large, not a text file) belong beside the file input.
+  // Problems with the file itself (missing, too large, not a text file) belong beside the file input; the server's
+  // message says what to change, its field note only repeats it in short.
   if (error.fields.file || error.status === 413 || error.status === 415) {
-    const detail = error.fields.file && error.fields.file !== error.message ? ` ${error.fields.file}` : '';
-    return { fileError: `${error.message}${detail}`, requestError: null };
+    return { fileError: error.message, requestError: null };
   }
   return { fileError: null, requestError: { message: error.message, signedOut: false } };
 }
@@ -159,13 +160,13 @@ export function logCheckReducer(state: LogCheckState, action: Action): LogCheckS
   }
 }
 
-const acceptedName = /\.(csv|tsv|txt|log|dat)$/i;
-
 /** Why a chosen file is refused before anything is sent, or null when it may go. */
 export function refuseLogFile(file: File): string | null {
-  if (!acceptedName.test(file.name)) return `“${file.name}” is not a logger export: choose a .csv, .tsv or .txt file.`;
+  if (!hasAcceptedExtension(file.name, logFileUploadLimit)) {
+    return `“${file.name}” is not a logger export: choose a ${logFileUploadLimit.acceptedExtensions.join(', ')} file.`;
+  }
   if (file.size === 0) return `“${file.name}” is empty.`;
-  if (file.size > maxLogBytes) return fileTooLargeMessage(file.name, file.size, maxLogBytes);
+  if (file.size > logFileUploadLimit.maxFileBytes) return fileTooLargeMessage(file.name, file.size, logFileUploadLimit);
   return null;
 }
 

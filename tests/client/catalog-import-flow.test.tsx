@@ -52,19 +52,23 @@ async function answerImport(request: SentUpload) {
   return { status: 200, body: { created: 2, updated: 0, unchanged: 0, pricesAdded: 0, productIds: [1, 2] } };
 }
 
+function renderImport() {
+  render(
+    <QueryClientProvider client={new QueryClient()}>
+      <MemoryRouter>
+        <CatalogImport />
+      </MemoryRouter>
+    </QueryClientProvider>,
+  );
+}
+
 afterEach(() => vi.unstubAllGlobals());
 
 describe('the catalog import flow', () => {
   it('when a file has a row error, then nothing can be confirmed; fixed as text and checked again, it imports', async () => {
     const server = installFakeUploadServer(answerImport);
     const user = userEvent.setup();
-    render(
-      <QueryClientProvider client={new QueryClient()}>
-        <MemoryRouter>
-          <CatalogImport />
-        </MemoryRouter>
-      </QueryClientProvider>,
-    );
+    renderImport();
     const csv = [header, rowCalm, rowLoud('wide-atx')].join('\n');
 
     await user.upload(screen.getByLabelText('CSV file'), new File([csv], 'boards.csv', { type: 'text/csv' }));
@@ -102,13 +106,7 @@ describe('the catalog import flow', () => {
   it('when the file is over the limit, then it is refused beside the input and nothing is sent', async () => {
     const server = installFakeUploadServer(answerImport);
     const user = userEvent.setup();
-    render(
-      <QueryClientProvider client={new QueryClient()}>
-        <MemoryRouter>
-          <CatalogImport />
-        </MemoryRouter>
-      </QueryClientProvider>,
-    );
+    renderImport();
     const big = new File(['x'], 'big.csv', { type: 'text/csv' });
     Object.defineProperty(big, 'size', { value: 2_000_000 });
     await user.upload(screen.getByLabelText('CSV file'), big);

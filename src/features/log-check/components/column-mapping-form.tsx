@@ -1,21 +1,15 @@
 import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Panel } from '../../../components/ui/panel';
-import type { AnalysisRequestInput, LogPreview } from '../../../../shared/schemas/analysis';
 import { AnalysisOptionFields } from './analysis-option-fields';
 import { ColumnRoleFields } from './column-role-fields';
-import type { MappingDraft } from './mapping-draft';
 import { TemperatureUnitFields } from './temperature-unit-fields';
-import { useMappingForm } from './use-mapping-form';
+import { useMappingForm, type UseMappingFormOptions } from './use-mapping-form';
 
-export interface ColumnMappingFormProps {
-  preview: LogPreview;
-  draft: MappingDraft;
-  /** The draft as the server guessed it, to mark fields the tester has not yet changed. */
-  guess: MappingDraft | null;
-  onChange: (draft: MappingDraft) => void;
-  onAnalyse: (request: AnalysisRequestInput) => void;
+export interface ColumnMappingFormProps extends Omit<UseMappingFormOptions, 'disabled'> {
+  /** An analysis with this mapping is on its way. */
   pending: boolean;
+  /** The file is being read again: the fields wait for it. */
   disabled?: boolean;
 }
 

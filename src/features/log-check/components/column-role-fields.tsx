@@ -14,6 +14,17 @@ export function GuessedMark({ shown }: { shown: boolean }) {
   );
 }
 
+/** The error of a group of fields (a fieldset), tied to it by aria-describedby on the fieldset. */
+export function FieldsetError({ id, message }: { id: string; message: string | undefined }) {
+  if (!message) return null;
+  return (
+    <p id={id} className="mt-1 flex gap-1.5 text-sm font-medium text-red">
+      <span aria-hidden="true">✕</span>
+      <span>{message}</span>
+    </p>
+  );
+}
+
 const roleDescriptions = {
   ambient: 'Needed for delta over ambient and the normalised peak.',
   clock: 'Throttling is detected from the clock (MHz, or GHz when the header says so).',
@@ -87,12 +98,7 @@ export function ColumnRoleFields({ form, guessed }: { form: MappingForm; guessed
         <p className="mt-0.5 text-[0.8125rem] text-muted">
           Every thermocouple on the power stages or their heatsink. The peak is the hottest of them.
         </p>
-        {errors.vrm && (
-          <p id={`${id('vrm')}-error`} className="mt-1 flex gap-1.5 text-sm font-medium text-red">
-            <span aria-hidden="true">✕</span>
-            <span>{errors.vrm}</span>
-          </p>
-        )}
+        <FieldsetError id={`${id('vrm')}-error`} message={errors.vrm} />
         <div className="mt-2 grid gap-x-4 gap-y-1.5 sm:grid-cols-2 lg:grid-cols-3">
           {preview.columns
             .filter((column) => column.name !== draft.time)

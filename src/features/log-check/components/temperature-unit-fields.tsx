@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { temperatureUnits, type TemperatureUnit } from '../../../../shared/schemas/analysis';
-import { GuessedMark } from './column-role-fields';
+import { FieldsetError, GuessedMark } from './column-role-fields';
 import { unitLabel } from './format-figures';
 import { unitOf } from './mapping-draft';
 import { fieldLabels, type MappingForm } from './use-mapping-form';
@@ -69,12 +69,7 @@ export function TemperatureUnitFields({ form }: { form: MappingForm }) {
           <p className="mt-0.5 text-[0.8125rem] text-muted">
             A thermocouple reads the difference to its cold junction, usually the logger’s terminals.
           </p>
-          {errors.coldJunction && (
-            <p id={`${id('coldJunction')}-error`} className="mt-1 flex gap-1.5 text-sm font-medium text-red">
-              <span aria-hidden="true">✕</span>
-              <span>{errors.coldJunction}</span>
-            </p>
-          )}
+          <FieldsetError id={`${id('coldJunction')}-error`} message={errors.coldJunction} />
           <div className="mt-2 space-y-2">
             {coldJunctionModes.map(([mode, label], index) => {
               const inputId = index === 0 ? id('coldJunction') : id(`coldJunction-${mode}`);

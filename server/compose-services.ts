@@ -10,12 +10,13 @@ import { CatalogImportService } from './services/catalog-import.service';
 import { CatalogService } from './services/catalog.service';
 import { DashboardService } from './services/dashboard.service';
 import { LoadConfigurationsService } from './services/load-configurations.service';
-import { LogCheckService } from './services/log-check.service';
+import { analyseInProcess, LogCheckService, type LogFileAnalyser } from './services/log-check.service';
 import { MatrixService } from './services/matrix.service';
 import { MyBenchService } from './services/my-bench.service';
 import { RoundupEntriesService } from './services/roundup-entries.service';
 import { RoundupsService } from './services/roundups.service';
 import { SamplesService } from './services/samples.service';
+import { TestRunsService } from './services/test-runs.service';
 import { UsersService } from './services/users.service';
 import { createFileStore } from './storage/create-file-store';
 
@@ -44,8 +45,11 @@ export function createServices(dataSource: DataSource, env: Env) {
   const benches = new BenchesService(dataSource);
   const myBench = new MyBenchService(dataSource, benches);
   const dashboard = new DashboardService(dataSource, myBench);
-  const logCheck = new LogCheckService();
   const calendarFeeds = new CalendarFeedService(dataSource, benches);
+  // One analyser for every logger file the server reads: log check and test runs alike.
+  const logFileAnalyser: LogFileAnalyser = analyseInProcess;
+  const logCheck = new LogCheckService(logFileAnalyser);
+  const testRuns = new TestRunsService(dataSource, files, logFileAnalyser);
 
   return {
     sessions,
@@ -66,6 +70,7 @@ export function createServices(dataSource: DataSource, env: Env) {
     dashboard,
     logCheck,
     calendarFeeds,
+    testRuns,
   };
 }
 

@@ -15,6 +15,7 @@ import { registerMyBenchRoutes } from './my-bench.routes';
 import { registerRoundupEntryRoutes } from './roundup-entries.routes';
 import { registerRoundupRoutes } from './roundups.routes';
 import { registerSampleRoutes } from './samples.routes';
+import { registerTestRunRoutes } from './test-runs.routes';
 
 /** Every feature's routes. A new feature adds one line here. */
 export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
@@ -33,4 +34,5 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerBenchRoutes(api, context);
   registerMyBenchRoutes(api, context);
   registerCalendarFeedRoutes(api, context);
+  registerTestRunRoutes(api, context);
 }

@@ -13,6 +13,7 @@ import { emptyProgress, progressByRoundup, toMatrixCellDto } from '../mappers/ma
 import { productBriefs } from '../mappers/product-fields';
 import { assertPlanEditable, findRoundup, lockRoundup } from '../lib/roundup-access';
 import { cellBookingAt } from './benches.service';
+import { TestRunsService } from './test-runs.service';
 import {
   cellStateLabels,
   decideCellTransition,
@@ -217,6 +218,7 @@ export class MatrixService {
           `The roundup is ${roundupStateLabels[roundup.state]}; its matrix is closed.`,
         );
       }
+      if (action === 'record') await TestRunsService.assertCellHasRun(manager, cellId);
       const now = new Date();
       // A run belongs in bench time booked for it; starting outside every booking of the cell is warned about and
       // needs a reason, which the plan's history keeps.

@@ -79,6 +79,17 @@ const allowed: Record<string, Caller[]> = {
   // The secret token in the address is the key (calendar apps have no session); a wrong token is 404.
   'GET /api/calendar/:token.ics': everyone,
   'GET /api/dashboard': staff,
+  // Bench capture: staff read results; testers and editors record; editors review and set the rubric.
+  'GET /api/cells/:cellId/runs': staff,
+  'POST /api/cells/:cellId/runs': ['editor', 'tester'],
+  'POST /api/cells/:cellId/manual-runs': ['editor', 'tester'],
+  'GET /api/runs/:runId': staff,
+  'GET /api/runs/:runId/logger-file': staff,
+  'POST /api/runs/:runId/analyses': ['editor', 'tester'],
+  'POST /api/runs/:runId/review': ['editor'],
+  'POST /api/runs/:runId/run-of-record': ['editor'],
+  'GET /api/roundups/:id/results': staff,
+  'PUT /api/roundups/:id/rubric': ['editor'],
 };
 
 interface RouteLayer {

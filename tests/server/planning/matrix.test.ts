@@ -8,6 +8,7 @@ import {
   dayFromToday,
   matrixOf,
   moveToBench,
+  recordManualRun,
 } from './support/planning-fixtures';
 
 function move(agent: Client, roundupId: number, cellId: number, action: string, note?: string) {
@@ -99,6 +100,11 @@ describe('the test matrix', () => {
     expect(notRecorded.status).toBe(422);
     expect(notRecorded.body.error.message).toMatch(/Recorded; this one is Running/);
 
+    // “Mark recorded” needs a run behind it.
+    const noRun = await move(tester.agent, roundupId, a.id, 'record');
+    expect(noRun.status).toBe(409);
+    expect(noRun.body.error.code).toBe('no_run');
+    await recordManualRun(tester.agent, a.id);
     expect((await move(tester.agent, roundupId, a.id, 'record')).body.state).toBe('recorded');
     const accepted = await move(editor.agent, roundupId, a.id, 'accept');
     expect(accepted.body.state).toBe('accepted');
@@ -168,6 +174,7 @@ describe('the test matrix', () => {
     await assign([rows[1].cells[1].id], tester.user.id, dayFromToday(4));
     await assign([rows[1].cells[2].id], otherTester.user.id, dayFromToday(1));
     await move(tester.agent, roundupId, rows[1].cells[1].id, 'start');
+    await recordManualRun(tester.agent, rows[1].cells[1].id);
     await move(tester.agent, roundupId, rows[1].cells[1].id, 'record');
 
     const mine = await tester.agent.get('/api/my-bench');

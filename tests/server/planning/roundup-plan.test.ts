@@ -10,6 +10,7 @@ import {
   matrixOf,
   moveToBench,
   tag,
+  recordManualRun,
 } from './support/planning-fixtures';
 
 describe('roundup plans', () => {
@@ -159,6 +160,7 @@ describe('roundup plans', () => {
     const early = await editor.post(`/api/roundups/${roundupId}/state`).send({ to: 'writing' });
     expect(early.status).toBe(422);
     expect(early.body.error.message).toMatch(/1 matrix cell\(s\) are not accepted yet/);
+    await recordManualRun(tester, cell.id);
     await tester.post(`/api/roundups/${roundupId}/cells/${cell.id}/transitions`).send({ action: 'record' });
     await editor.post(`/api/roundups/${roundupId}/cells/${cell.id}/transitions`).send({ action: 'accept' });
     const writing = await editor.post(`/api/roundups/${roundupId}/state`).send({ to: 'writing' });

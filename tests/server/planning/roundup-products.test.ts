@@ -8,6 +8,7 @@ import {
   dayFromToday,
   matrixOf,
   moveToBench,
+  recordManualRun,
 } from './support/planning-fixtures';
 
 type Suggestion = { product: { id: number }; priceCheck: { fit: string; latestPrice: { amountMinor: number } | null } };
@@ -154,6 +155,7 @@ describe('adding catalog products to a roundup', () => {
       .post(`/api/roundups/${earlier.roundupId}/assignments`)
       .send({ entryIds: [entry.id], testerId: testerUser.id, dueDate: dayFromToday(7) });
     for (const action of ['start', 'record']) {
+      if (action === 'record') await recordManualRun(tester, cell.id);
       expect(
         (
           await tester

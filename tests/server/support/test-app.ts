@@ -1,4 +1,6 @@
 import { randomBytes } from 'node:crypto';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { createApp } from '../../../server/app';
@@ -14,6 +16,9 @@ export const TEST_ORIGIN = `http://${TEST_HOST}`;
 
 let dataSource: DataSource | null = null;
 
+/** Uploaded files of API tests land here, never in the project's uploads/ folder. */
+export const testUploadsDir = join(tmpdir(), `benchwire-test-uploads-${process.pid}`);
+
 export function testEnv(overrides: Partial<Record<keyof Env, string>> = {}): Env {
   // Every API test calls from 127.0.0.1 and the wrong-password counters live in the shared test database, so
   // the per-address ceiling is out of the way unless a test sets it (and then uses an address of its own).
@@ -22,6 +27,8 @@ export function testEnv(overrides: Partial<Record<keyof Env, string>> = {}): Env
     NODE_ENV: 'test',
     COOKIE_SECURE: 'false',
     SIGN_IN_LIMIT_PER_IP: '100000',
+    STORAGE_DRIVER: 'local',
+    UPLOADS_DIR: testUploadsDir,
     ...overrides,
   });
 }

@@ -156,3 +156,16 @@ export async function matrixOf(agent: Client, roundupId: number) {
     progress: { cellCount: number; acceptedCount: number; percentAccepted: number; unassignedCount: number };
   };
 }
+
+/** A manual run on a cell (no booking, so with a reason): "Mark recorded" needs a run behind it. */
+export async function recordManualRun(agent: Client, cellId: number, peakC = 71.5) {
+  const response = await agent.post(`/api/cells/${cellId}/manual-runs`).send({
+    firmwareVersion: 'F1.0',
+    startedAt: new Date().toISOString(),
+    manualPeakC: peakC,
+    manualAmbientC: 21.0,
+    outsideBookingReason: 'Set-up check before the booking system was used.',
+  });
+  if (response.status !== 201) throw new Error(`manual run: ${response.status} ${response.text}`);
+  return response.body.run as { id: number };
+}

@@ -21,6 +21,7 @@ import { analysedOrThrow, checkLogFileUpload, type LogFileAnalyser, type LogFile
 import { analysisEngineVersion } from '../../shared/domain/analysis/engine-version';
 import { repeatRunStatistics } from '../../shared/domain/analysis/repeat-run-statistics';
 import { judgeRun } from '../../shared/domain/analysis/verdict-rubric';
+import { qaFlagLabels } from '../../shared/domain/analysis/qa-flag-labels';
 import { vrmElectricalLoad } from '../../shared/domain/analysis/vrm-electrical-load';
 import type { PhaseMultiplication } from '../../shared/domain/planning/power-design';
 import {
@@ -672,6 +673,7 @@ function manualAnalysis(
     flags: [
       {
         code: 'manual-entry',
+        label: qaFlagLabels['manual-entry'],
         severity: 'warning',
         message: 'Entered by hand: no logger file backs these figures.',
         channel: null,

@@ -34,7 +34,7 @@ const runFacts = {
 export const loggerRunRequestSchema = z.object({
   ...runFacts,
   mapping: columnMappingSchema,
-  options: analysisOptionsSchema.partial().optional(),
+  options: analysisOptionsSchema.optional(),
   /** Remember this mapping for the cell's bench profile (the next upload starts from it). */
   rememberMapping: z.boolean().default(true),
 });
@@ -163,7 +163,7 @@ export type ReviewRunRequest = z.input<typeof reviewRunRequestSchema>;
 
 export const reanalyseRunRequestSchema = z.object({
   mapping: columnMappingSchema.optional(),
-  options: analysisOptionsSchema.partial().optional(),
+  options: analysisOptionsSchema.optional(),
 });
 
 export const roundupRubricRequestSchema = z.object({ rubric: verdictRubricSchema.nullable() });

@@ -147,3 +147,34 @@ test('a bench tester books a slot, and an overlapping second booking is refused 
   await expect(form.getByLabel('Ends')).toHaveValue(localSlot(2, 13));
   await expect(form.getByRole('checkbox', { name: cellLabel })).toBeChecked();
 });
+
+test('an editor opens a bench, records a probe whose calibration has run out and logs maintenance', async ({
+  page,
+}) => {
+  await signInAs(page, 'editor');
+  await mainNavigation(page).getByRole('link', { name: 'Benches' }).click();
+  await page.getByRole('row').filter({ hasText: 'Bench B' }).getByRole('link', { name: 'Bench B' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Bench B' })).toBeVisible();
+  await expect(page.getByText('get hot enough to burn')).toBeVisible();
+  await expect(page.getByText('Built to the profile')).toBeVisible();
+
+  const suffix = uniqueSuffix();
+  const add = page.getByRole('form', { name: 'Add a probe or logger' });
+  await add.getByLabel('Name').fill(`Probe ${suffix}, V-core rear`);
+  await add.getByLabel('Type or model').fill('Type K thermocouple, 0.1 mm bead');
+  const lastYear = new Date(Date.now() - 400 * 86_400_000).toISOString().slice(0, 10);
+  await add.getByLabel('Last calibrated').fill(lastYear);
+  await add.getByRole('button', { name: 'Add' }).click();
+  const probe = page.getByRole('list', { name: 'Probes and logger' }).getByRole('listitem').filter({ hasText: suffix });
+  await expect(probe).toContainText('Past due');
+  await expect(page.getByText('Calibration past due')).toBeVisible();
+  await probe.getByRole('button', { name: /Calibrated today/ }).click();
+  await expect(probe).not.toContainText('Past due');
+
+  const log = page.getByRole('form', { name: 'Log maintenance' });
+  await log.getByLabel('What was done').fill(`New thermal tape under probe ${suffix}`);
+  await log.getByRole('button', { name: 'Log it' }).click();
+  await expect(page.getByRole('list', { name: 'Maintenance log' })).toContainText(
+    `New thermal tape under probe ${suffix}`,
+  );
+});

@@ -20,6 +20,8 @@ import { TestRunEntity } from './test-run.entity';
 import { RunAnalysisEntity } from './run-analysis.entity';
 import { PhotoEntity } from './photo.entity';
 import { CalendarFeedEntity } from './calendar-feed.entity';
+import { BenchInstrumentEntity } from './bench-instrument.entity';
+import { BenchMaintenanceEntryEntity } from './bench-maintenance-entry.entity';
 
 export const entities = [
   UserEntity,
@@ -43,4 +45,6 @@ export const entities = [
   PhotoEntity,
   CalendarFeedEntity,
   PasswordGuessCounterEntity,
+  BenchInstrumentEntity,
+  BenchMaintenanceEntryEntity,
 ];

@@ -20,6 +20,7 @@ import { CaptureSettings1765200005000 } from './1765200005000-capture-settings';
 import { AddBookingOverrideReason1765200031000 } from './1765200031000-add-booking-override-reason';
 import { CreateCalendarFeeds1765200032000 } from './1765200032000-create-calendar-feeds';
 import { CreatePasswordGuessCounters1765300001000 } from './1765300001000-create-password-guess-counters';
+import { CreateBenchInstrumentsAndMaintenance1765400033000 } from './1765400033000-create-bench-instruments-and-maintenance';
 
 export const migrations = [
   CreateUsersSessionsAudit1764600000000,
@@ -43,4 +44,5 @@ export const migrations = [
   AddBookingOverrideReason1765200031000,
   CreateCalendarFeeds1765200032000,
   CreatePasswordGuessCounters1765300001000,
+  CreateBenchInstrumentsAndMaintenance1765400033000,
 ];

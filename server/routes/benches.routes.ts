@@ -13,6 +13,15 @@ import {
   createBookingRequestSchema,
   updateBenchRequestSchema,
 } from '../../shared/schemas/benches';
+import {
+  benchDetailSchema,
+  createInstrumentRequestSchema,
+  createMaintenanceRequestSchema,
+  instrumentParamsSchema,
+  instrumentSchema,
+  maintenanceEntrySchema,
+  updateInstrumentRequestSchema,
+} from '../../shared/schemas/bench-detail';
 
 export function registerBenchRoutes(api: ApiRegistry, { services }: AppContext) {
   const benches = services.benches;
@@ -98,5 +107,52 @@ export function registerBenchRoutes(api: ApiRegistry, { services }: AppContext) 
     handler: async ({ user, params }) => {
       await benches.cancel(user, params.id, params.bookingId);
     },
+  });
+
+  api.add({
+    method: 'get',
+    path: '/api/benches/:id/detail',
+    access: planningReaders,
+    tag: 'Benches',
+    summary: 'One bench: its set-up, probes and logger with their calibration, and its maintenance log.',
+    params: idParamSchema,
+    response: benchDetailSchema,
+    handler: ({ params }) => benches.detail(params.id),
+  });
+
+  api.add({
+    method: 'post',
+    path: '/api/benches/:id/instruments',
+    access: planEditors,
+    tag: 'Benches',
+    summary: 'Add a probe or logger to a bench, with its calibration date and interval.',
+    params: idParamSchema,
+    body: createInstrumentRequestSchema,
+    response: instrumentSchema,
+    handler: ({ user, params, body }) => benches.addInstrument(user, params.id, body),
+  });
+
+  api.add({
+    method: 'patch',
+    path: '/api/benches/:id/instruments/:instrumentId',
+    access: planEditors,
+    tag: 'Benches',
+    summary: 'Edit a probe or logger, e.g. its new calibration date.',
+    params: instrumentParamsSchema,
+    body: updateInstrumentRequestSchema,
+    response: instrumentSchema,
+    handler: ({ user, params, body }) => benches.updateInstrument(user, params.id, params.instrumentId, body),
+  });
+
+  api.add({
+    method: 'post',
+    path: '/api/benches/:id/maintenance',
+    access: benchWorkers,
+    tag: 'Benches',
+    summary: 'Log maintenance done on a bench.',
+    params: idParamSchema,
+    body: createMaintenanceRequestSchema,
+    response: maintenanceEntrySchema,
+    handler: ({ user, params, body }) => benches.addMaintenance(user, params.id, body),
   });
 }

@@ -10,7 +10,19 @@ import { AppError, conflict, forbidden, invalid, notFound } from '../errors';
 import { recordAudit } from './audit.service';
 import { isDuplicateKey } from '../lib/database-errors';
 import { loadPeople, personOrNull } from '../mappers/people';
+import { benchProfileRoundupCounts, toBenchProfileDto } from '../mappers/bench-profile';
 import { queueItems } from '../mappers/queue-item';
+import { BenchInstrumentEntity } from '../entities/bench-instrument.entity';
+import { BenchMaintenanceEntryEntity } from '../entities/bench-maintenance-entry.entity';
+import { calibrationOverdue, nextCalibrationDue } from '../../shared/domain/planning/calibration';
+import type {
+  BenchDetail,
+  createInstrumentRequestSchema,
+  createMaintenanceRequestSchema,
+  Instrument,
+  MaintenanceEntry,
+  updateInstrumentRequestSchema,
+} from '../../shared/schemas/bench-detail';
 import { bookableStates, cellStateLabels } from '../../shared/domain/planning/matrix-cell-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type {
@@ -25,6 +37,9 @@ import type { PersonRef } from '../../shared/schemas/planning-fields';
 type CreateBenchInput = z.output<typeof createBenchRequestSchema>;
 type UpdateBenchInput = z.output<typeof updateBenchRequestSchema>;
 type CreateBookingInput = z.output<typeof createBookingRequestSchema>;
+type CreateInstrumentInput = z.output<typeof createInstrumentRequestSchema>;
+type UpdateInstrumentInput = z.output<typeof updateInstrumentRequestSchema>;
+type CreateMaintenanceInput = z.output<typeof createMaintenanceRequestSchema>;
 
 const nameTaken = () =>
   conflict('name_taken', 'Another bench already has this name.', { name: 'Another bench already has this name.' });
@@ -37,6 +52,23 @@ function slotText(startsAt: Date, endsAt: Date): string {
   const sameDay = startsAt.toISOString().slice(0, 10) === endsAt.toISOString().slice(0, 10);
   const end = sameDay ? endsAt.toISOString().slice(11, 16) : endsAt.toISOString().slice(0, 16).replace('T', ' ');
   return `${start}–${end} UTC`;
+}
+
+function toInstrumentDto(instrument: BenchInstrumentEntity, today: string): Instrument {
+  const nextDue = instrument.calibratedOn
+    ? nextCalibrationDue(instrument.calibratedOn, instrument.calibrationIntervalMonths)
+    : null;
+  return {
+    id: instrument.id,
+    kind: instrument.kind,
+    label: instrument.label,
+    model: instrument.model,
+    serialNumber: instrument.serialNumber,
+    calibratedOn: instrument.calibratedOn,
+    calibrationIntervalMonths: instrument.calibrationIntervalMonths,
+    nextCalibrationDue: nextDue,
+    calibrationOverdue: nextDue === null || calibrationOverdue(nextDue, today),
+  };
 }
 
 /** The parts of a bench profile that describe the physical set-up, as a booking compares them. */
@@ -408,6 +440,119 @@ export class BenchesService {
       if (fields.length > 0) differences.push(`for “${roundup.title}”: ${fields.join(', ')}`);
     }
     return differences;
+  }
+
+  /** One bench's page: its set-up (the profile it is built to), probes and logger, and maintenance log. */
+  async detail(id: number, today = new Date().toISOString().slice(0, 10)): Promise<BenchDetail> {
+    const manager = this.dataSource.manager;
+    const bench = await this.get(id, manager);
+    const profile = bench.benchProfile
+      ? await manager.getRepository(BenchProfileEntity).findOneBy({ id: bench.benchProfile.id })
+      : null;
+    const instruments = await manager
+      .getRepository(BenchInstrumentEntity)
+      .find({ where: { benchId: id }, order: { kind: 'ASC', label: 'ASC', id: 'ASC' } });
+    const entries = await manager
+      .getRepository(BenchMaintenanceEntryEntity)
+      .find({ where: { benchId: id }, order: { doneOn: 'DESC', id: 'DESC' }, take: 200 });
+    const people = await loadPeople(
+      manager,
+      entries.map((entry) => entry.recordedBy),
+    );
+    return {
+      bench,
+      setUp: profile
+        ? toBenchProfileDto(profile, (await benchProfileRoundupCounts(manager, [profile.id])).get(profile.id) ?? 0)
+        : null,
+      instruments: instruments.map((instrument) => toInstrumentDto(instrument, today)),
+      maintenance: entries.map((entry) => ({
+        id: entry.id,
+        doneOn: entry.doneOn,
+        description: entry.description,
+        recordedBy: personOrNull(people, entry.recordedBy),
+        createdAt: entry.createdAt.toISOString(),
+      })),
+    };
+  }
+
+  async addInstrument(actor: CurrentUser, benchId: number, input: CreateInstrumentInput): Promise<Instrument> {
+    return this.dataSource.transaction(async (manager) => {
+      await this.lockBench(manager, benchId);
+      const { identifiers } = await manager.getRepository(BenchInstrumentEntity).insert({ ...input, benchId });
+      const id = Number(identifiers[0].id);
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'bench.instrument_added',
+        subjectType: 'bench',
+        subjectId: benchId,
+        details: { instrumentId: id, ...input },
+      });
+      const saved = await manager.getRepository(BenchInstrumentEntity).findOneByOrFail({ id });
+      return toInstrumentDto(saved, new Date().toISOString().slice(0, 10));
+    });
+  }
+
+  /** Edits a probe or logger, e.g. a new calibration date after it came back from the lab. */
+  async updateInstrument(
+    actor: CurrentUser,
+    benchId: number,
+    instrumentId: number,
+    input: UpdateInstrumentInput,
+  ): Promise<Instrument> {
+    return this.dataSource.transaction(async (manager) => {
+      await this.lockBench(manager, benchId);
+      const repo = manager.getRepository(BenchInstrumentEntity);
+      const instrument = await repo.findOneBy({ id: instrumentId, benchId });
+      if (!instrument) throw notFound('That probe or logger');
+      const changes = Object.fromEntries(Object.entries(input).filter(([, value]) => value !== undefined));
+      if (Object.keys(changes).length > 0) {
+        await repo.update({ id: instrumentId }, changes);
+        await recordAudit(manager, {
+          actorId: actor.id,
+          action: 'bench.instrument_updated',
+          subjectType: 'bench',
+          subjectId: benchId,
+          details: { instrumentId, ...changes },
+        });
+      }
+      return toInstrumentDto(await repo.findOneByOrFail({ id: instrumentId }), new Date().toISOString().slice(0, 10));
+    });
+  }
+
+  async addMaintenance(actor: CurrentUser, benchId: number, input: CreateMaintenanceInput): Promise<MaintenanceEntry> {
+    if (input.doneOn > new Date().toISOString().slice(0, 10)) {
+      throw invalid('Log maintenance once it is done.', { doneOn: 'The day cannot be in the future.' });
+    }
+    return this.dataSource.transaction(async (manager) => {
+      await this.lockBench(manager, benchId);
+      const { identifiers } = await manager
+        .getRepository(BenchMaintenanceEntryEntity)
+        .insert({ benchId, doneOn: input.doneOn, description: input.description, recordedBy: actor.id });
+      const id = Number(identifiers[0].id);
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'bench.maintenance_logged',
+        subjectType: 'bench',
+        subjectId: benchId,
+        details: { entryId: id, doneOn: input.doneOn },
+      });
+      const entry = await manager.getRepository(BenchMaintenanceEntryEntity).findOneByOrFail({ id });
+      return {
+        id,
+        doneOn: entry.doneOn,
+        description: entry.description,
+        recordedBy: { id: actor.id, displayName: actor.displayName },
+        createdAt: entry.createdAt.toISOString(),
+      };
+    });
+  }
+
+  private async lockBench(manager: EntityManager, benchId: number) {
+    const bench = await manager
+      .getRepository(BenchEntity)
+      .findOne({ where: { id: benchId }, lock: { mode: 'pessimistic_write' } });
+    if (!bench) throw notFound('That bench');
+    return bench;
   }
 
   /** Cancels a booking: testers their own, editors any. */

@@ -53,6 +53,7 @@ export function createAppRouter(queryClient: QueryClient) {
                 { path: 'catalog/:productId', lazy: lazy(() => import('./routes/catalog-product')) },
                 { path: 'catalog/:productId/edit', lazy: lazy(() => import('./routes/catalog-product-edit')) },
                 { path: 'benches', lazy: lazy(() => import('./routes/benches')) },
+                { path: 'benches/:benchId', lazy: lazy(() => import('./routes/bench-detail')) },
                 { path: 'log-check', lazy: lazy(() => import('./routes/log-check')) },
                 { path: 'roundups', lazy: lazy(() => import('./routes/roundups')) },
                 { path: 'roundups/new', lazy: lazy(() => import('./routes/roundup-new')) },

@@ -9,6 +9,7 @@ export const paths = {
   catalogProduct: (id: number) => `/catalog/${id}`,
   catalogProductEdit: (id: number) => `/catalog/${id}/edit`,
   benches: '/benches',
+  bench: (id: number) => `/benches/${id}`,
   logCheck: '/log-check',
   roundups: '/roundups',
   newRoundup: '/roundups/new',

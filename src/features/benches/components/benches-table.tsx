@@ -1,4 +1,6 @@
 import { useMemo } from 'react';
+import { Link } from 'react-router';
+import { paths } from '../../../lib/paths';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
@@ -25,7 +27,11 @@ export function BenchesTable({ benches, bookings, onEdit, now }: BenchesTablePro
         header: 'Bench',
         rowHeader: true,
         sortValue: (bench) => bench.name,
-        cell: (bench) => <span className="whitespace-nowrap">{bench.name}</span>,
+        cell: (bench) => (
+          <Link to={paths.bench(bench.id)} className="whitespace-nowrap text-copper underline-offset-2 hover:underline">
+            {bench.name}
+          </Link>
+        ),
       },
       {
         id: 'status',

@@ -1,0 +1,67 @@
+import { queryOptions, useMutation, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { invalidateAfter } from '../../../lib/stale-after';
+import {
+  benchDetailSchema,
+  instrumentSchema,
+  maintenanceEntrySchema,
+  type BenchDetail,
+  type CreateInstrumentRequest,
+  type CreateMaintenanceRequest,
+  type Instrument,
+  type MaintenanceEntry,
+  type UpdateInstrumentRequest,
+} from '../../../../shared/schemas/bench-detail';
+import { benchKeys } from './bench-keys';
+
+/** One bench: its set-up, probes and logger with their calibration, and its maintenance log. */
+export function getBenchDetail(id: number, signal?: AbortSignal): Promise<BenchDetail> {
+  return apiClient.get(`/api/benches/${id}/detail`, { signal, schema: benchDetailSchema });
+}
+
+export function benchDetailQueryOptions(id: number) {
+  return queryOptions({ queryKey: benchKeys.detail(id), queryFn: ({ signal }) => getBenchDetail(id, signal) });
+}
+
+export function useBenchDetail(id: number) {
+  return useSuspenseQuery(benchDetailQueryOptions(id)).data;
+}
+
+export function addInstrument({ benchId, instrument }: { benchId: number; instrument: CreateInstrumentRequest }) {
+  return apiClient.post<Instrument>(`/api/benches/${benchId}/instruments`, instrument, { schema: instrumentSchema });
+}
+
+export function updateInstrument({
+  benchId,
+  instrumentId,
+  changes,
+}: {
+  benchId: number;
+  instrumentId: number;
+  changes: UpdateInstrumentRequest;
+}) {
+  return apiClient.patch<Instrument>(`/api/benches/${benchId}/instruments/${instrumentId}`, changes, {
+    schema: instrumentSchema,
+  });
+}
+
+export function logMaintenance({ benchId, entry }: { benchId: number; entry: CreateMaintenanceRequest }) {
+  return apiClient.post<MaintenanceEntry>(`/api/benches/${benchId}/maintenance`, entry, {
+    schema: maintenanceEntrySchema,
+  });
+}
+
+export function useAddInstrument() {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn: addInstrument, onSuccess: () => invalidateAfter(queryClient, 'bench') });
+}
+
+export function useUpdateInstrument() {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn: updateInstrument, onSuccess: () => invalidateAfter(queryClient, 'bench') });
+}
+
+export function useLogMaintenance() {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn: logMaintenance, onSuccess: () => invalidateAfter(queryClient, 'bench') });
+}

@@ -82,6 +82,19 @@ export const optionFigures = [
     inapplicable: (mapping) => (mapping.clock ? 'A clock column is mapped: throttling is detected from it.' : null),
   },
   {
+    name: 'loadEndMinute',
+    label: 'Load ended at minute',
+    unit: 'min',
+    path: ['loadEndS'],
+    initial: () => '',
+    toRequest: (minutes) => minutes * 60,
+    optional: true,
+    rangeMessage: 'Enter the minute the load stopped, after it started, or leave it empty.',
+    group: 'main',
+    description:
+      'Only when the log runs on after the load: later samples are a cool-down, left out. Empty: found from package power.',
+  },
+  {
     name: 'throttlePercent',
     label: 'Throttle threshold',
     unit: '%',

@@ -101,3 +101,65 @@ test('a writer has no Log check entry and the page explains why', async ({ page 
   await expect(page.getByText('Your role cannot open this page')).toBeVisible();
   await expect(page.getByLabel('Logger file')).toHaveCount(0);
 });
+
+/**
+ * A soak stopped after 10 minutes while still climbing: T(t) = 60 + 40·(1 − e^(−t/900)) °C. At 600 s it reads
+ * 60 + 40·(1 − e^(−2/3)) = 79.5 °C; with τ = 15 min the log shows 0.67 τ of the rise (first-order step response
+ * 1 − e^(−t/τ)), too little to predict the plateau, so no verdict may be given.
+ */
+function unfinishedSoakCsv(): string {
+  const lines = ['Time [s],VRM 1 [°C],Ambient [°C],CPU clock [MHz]'];
+  for (let t = 0; t < 600; t += 5) {
+    const vrmC = 60 + 40 * (1 - Math.exp(-t / 900));
+    lines.push(`${t},${vrmC.toFixed(2)},21.00,5000`);
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+test('a soak stopped while still climbing gets no verdict, and the box says why in words', async ({ page }) => {
+  const file = path.join(folder, 'soak-unfinished.csv');
+  await writeFile(file, unfinishedSoakCsv());
+  await signInAs(page, 'tester');
+  await mainNavigation(page).getByRole('link', { name: 'Log check' }).click();
+  await page.getByLabel('Logger file').setInputFiles(file);
+  await expect(page.getByRole('checkbox', { name: 'VRM 1 [°C]' })).toBeChecked();
+  await page.getByRole('button', { name: 'Analyse' }).click();
+
+  const results = page.getByRole('region', { name: 'Result' });
+  await expect(results.getByText('No verdict yet', { exact: true })).toBeVisible();
+  await expect(results).toContainText('No verdict from an unfinished soak: the soak lasted 9');
+  await expect(results).toContainText('Soak shorter than required — withholds the verdict');
+  await expect(results).toContainText('Not settled — withholds the verdict');
+  await expect(results.getByText('Comfortable', { exact: true })).toHaveCount(0);
+  await expect(results.getByText('soak-too-short')).toHaveCount(0);
+});
+
+/** The first-order soak with a second VRM probe that read nothing at all (its cells say OPEN). */
+function soakWithDeadProbeCsv(): string {
+  const lines = ['Time [s],VRM 1 [°C],VRM 2 [°C],Ambient [°C],CPU clock [MHz]'];
+  for (let t = 0; t < 3600; t += 10) {
+    const vrmC = 21 + 50 * (1 - Math.exp(-t / 300));
+    lines.push(`${t},${vrmC.toFixed(2)},OPEN,21.00,5000`);
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+test('a dead probe withholds the verdict until the tester confirms it', async ({ page }) => {
+  const file = path.join(folder, 'soak-dead-probe.csv');
+  await writeFile(file, soakWithDeadProbeCsv());
+  await signInAs(page, 'tester');
+  await mainNavigation(page).getByRole('link', { name: 'Log check' }).click();
+  await page.getByLabel('Logger file').setInputFiles(file);
+  await expect(page.getByRole('checkbox', { name: 'VRM 2 [°C]' })).toBeChecked();
+  await page.getByRole('button', { name: 'Analyse' }).click();
+
+  const results = page.getByRole('region', { name: 'Result' });
+  await expect(results.getByText('No verdict yet', { exact: true })).toBeVisible();
+  await expect(results).toContainText('Dead probe — withholds the verdict');
+  await results.getByRole('button', { name: 'VRM 2 [°C] is dead: judge without it' }).click();
+  // The same soak as the first test without the dead probe: 71.0 °C, below 80 °C (first principles, see above).
+  await expect(results.getByText('Comfortable', { exact: true })).toBeVisible();
+  await expect(
+    page.getByRole('checkbox', { name: 'VRM 2 [°C] is a dead probe: judge the run without it' }),
+  ).toBeChecked();
+});

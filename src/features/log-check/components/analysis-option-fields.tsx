@@ -61,6 +61,19 @@ export function AnalysisOptionFields({ form }: { form: MappingForm }) {
           description="An unstable run fails, whatever the temperatures."
           onChange={(event) => update({ testerMarkedUnstable: event.target.checked }, [])}
         />
+        {draft.confirmedDeadProbes.map((column) => (
+          <Checkbox
+            key={column}
+            id={id(`dead:${column}`)}
+            label={`${column} is a dead probe: judge the run without it`}
+            checked
+            disabled={disabled}
+            description="You confirmed it after it read nothing. Clear this to have its missing readings withhold the verdict again."
+            onChange={() =>
+              update({ confirmedDeadProbes: draft.confirmedDeadProbes.filter((name) => name !== column) }, [])
+            }
+          />
+        ))}
       </div>
       <details className="mt-4" open={limitsHaveErrors || undefined}>
         <summary className="cursor-pointer text-sm font-semibold text-ink">Throttle rule and verdict limits</summary>

@@ -1,5 +1,6 @@
 import type { ReactNode, Ref } from 'react';
 import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
 import { cx } from '../../../lib/class-names';
 import { benchSafetyCaution } from '../../../lib/role-guide';
@@ -66,12 +67,24 @@ export interface AnalysisResultsProps {
   headingRef?: Ref<HTMLHeadingElement>;
   /** The chart of the log, when the file could be drawn. */
   chart?: ReactNode;
+  /** Confirms a VRM column with no reading as a dead probe and analyses again without it. */
+  onConfirmDeadProbe?: (column: string) => void;
 }
 
 /** The analysis of one soak, in the order a tester checks it: verdict, peak, steady state, room, log, throttle, QA. */
-export function AnalysisResults({ analysis, fileName, outdated, headingRef, chart }: AnalysisResultsProps) {
+export function AnalysisResults({
+  analysis,
+  fileName,
+  outdated,
+  headingRef,
+  chart,
+  onConfirmDeadProbe,
+}: AnalysisResultsProps) {
   const { verdict, prediction, throttle, uncertainty } = analysis;
   const soakShort = analysis.flags.some((flag) => flag.code === 'soak-too-short');
+  const unconfirmedDead = analysis.flags.flatMap((flag) =>
+    flag.code === 'probe-dead' && flag.severity === 'warning' && flag.channel ? [flag.channel] : [],
+  );
   const missingSamples = analysis.gaps.reduce((sum, gap) => sum + gap.missingSamples, 0);
 
   return (
@@ -128,6 +141,15 @@ export function AnalysisResults({ analysis, fileName, outdated, headingRef, char
               })}
             </ul>
             <p className="mt-1 text-[0.8125rem] text-muted">Each is explained under QA flags below.</p>
+          </div>
+        )}
+        {onConfirmDeadProbe && unconfirmedDead.length > 0 && (
+          <div className="mt-3 flex flex-wrap gap-2">
+            {unconfirmedDead.map((column) => (
+              <Button key={column} size="sm" onClick={() => onConfirmDeadProbe(column)}>
+                {column} is dead: judge without it
+              </Button>
+            ))}
           </div>
         )}
       </div>

@@ -4,6 +4,7 @@ import { AnalysisResults } from './analysis-results';
 import { ColumnMappingForm } from './column-mapping-form';
 import { LogFilePanel } from './log-file-panel';
 import { LogPreviewPanel } from './log-preview';
+import { requestFromDraft } from './mapping-draft';
 import { ParseErrorTable } from './parse-error-table';
 import { TemperatureChart } from './temperature-chart';
 import { useLogCheck, type LogResult } from './use-log-check';
@@ -88,6 +89,16 @@ export function LogCheckPage({ signInPath }: LogCheckPageProps) {
             fileName={file.name}
             outdated={check.resultOutdated}
             headingRef={resultHeading}
+            onConfirmDeadProbe={
+              reading && draft
+                ? (column) => {
+                    const next = { ...draft, confirmedDeadProbes: [...draft.confirmedDeadProbes, column] };
+                    check.setDraft(next);
+                    const built = requestFromDraft(next, reading.preview);
+                    if (built.request) check.analyse(built.request);
+                  }
+                : undefined
+            }
             chart={
               check.chartSeries ? (
                 <TemperatureChart series={check.chartSeries} analysis={result.outcome.analysis} />

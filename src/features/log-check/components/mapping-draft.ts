@@ -27,6 +27,8 @@ export interface MappingDraft extends Record<OptionFigureName, string> {
   toleranceClass: ToleranceClass;
   useNormalizedPeak: boolean;
   testerMarkedUnstable: boolean;
+  /** VRM columns with no reading that the tester confirmed as dead probes (from the result's verdict box). */
+  confirmedDeadProbes: string[];
 }
 
 export type DraftField = Exclude<keyof MappingDraft, 'units'> | `unit:${string}`;
@@ -53,6 +55,7 @@ function optionFields(): Omit<MappingDraft, 'time' | 'vrm' | 'ambient' | 'clock'
     toleranceClass: defaultOptions.toleranceClass,
     useNormalizedPeak: defaultOptions.useNormalizedPeak,
     testerMarkedUnstable: defaultOptions.testerMarkedUnstable,
+    confirmedDeadProbes: [],
   };
 }
 
@@ -106,6 +109,7 @@ export function draftFromPreview(
     clock: guessed?.clock ?? '',
     power: guessed?.power ?? '',
     units: {},
+    confirmedDeadProbes: [],
     coldJunction: 'none',
     coldJunctionColumn: junctionColumn,
   };
@@ -203,6 +207,7 @@ export function requestFromDraft(
     toleranceClass: draft.toleranceClass,
     useNormalizedPeak: draft.useNormalizedPeak,
     testerMarkedUnstable: draft.testerMarkedUnstable,
+    confirmedDeadProbes: draft.confirmedDeadProbes.filter((column) => draft.vrm.includes(column)),
   };
   for (const figure of figures) {
     const name = figure.name as OptionFigureName;

@@ -138,7 +138,12 @@ export function TemperatureChart({ series, analysis }: TemperatureChartProps) {
                 strokeWidth="1.5"
                 strokeDasharray="4 3"
               />
-              <text x={x(analysis.loadEndS) + 4} y={margin.top + 11} fill="var(--color-muted)" className="font-sans">
+              <text
+                x={x(analysis.loadEndS) + 4}
+                y={margin.top + plotHeight - 6}
+                fill="var(--color-muted)"
+                className="font-sans"
+              >
                 after the load · left out
               </text>
             </g>

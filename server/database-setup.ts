@@ -6,6 +6,9 @@ import { connectionOptions, createDataSource, initializeDataSource } from './dat
 import { seedDemoOnce } from './seed/demo-seed';
 import { demoAccounts } from './seed/demo-staff';
 
+/** A problem with the database's configuration that the operator can fix; said in one sentence, no stack. */
+export class DatabaseSetupError extends Error {}
+
 export interface DatabaseSetupOptions {
   /** Drop the database and stop. */
   drop?: boolean;
@@ -26,10 +29,10 @@ export function supportedServer(version: string): boolean {
 }
 
 export async function setUpDatabase(url: string | undefined, options: DatabaseSetupOptions = {}) {
-  if (!url) throw new Error('DATABASE_URL is not set (npm start sets it for the private MariaDB).');
+  if (!url) throw new DatabaseSetupError('DATABASE_URL is not set (npm start sets it for the private MariaDB).');
   const { database, ...server } = connectionOptions(url);
   if (!/^[A-Za-z0-9_]+$/.test(database)) {
-    throw new Error(`Database name "${database}" may only contain letters, digits and underscores.`);
+    throw new DatabaseSetupError(`Database name "${database}" may only contain letters, digits and underscores.`);
   }
 
   const { username, ...rest } = server;
@@ -37,7 +40,7 @@ export async function setUpDatabase(url: string | undefined, options: DatabaseSe
   const [[{ version }]] = (await admin.query('SELECT VERSION() AS version')) as unknown as [[{ version: string }]];
   if (!supportedServer(version)) {
     await admin.end();
-    throw new Error(
+    throw new DatabaseSetupError(
       `Benchwire needs MariaDB 10.6 or newer (for SELECT … FOR UPDATE SKIP LOCKED); the server at ${rest.host}:${rest.port} reports ${version}.`,
     );
   }

@@ -1,5 +1,7 @@
 import { useId, useMemo, useState, type ReactNode } from 'react';
 import { cx } from '../../lib/class-names';
+import { useColumnChoice } from '../../lib/use-column-choice';
+import { ColumnChooser } from './column-chooser';
 
 export type SortDirection = 'ascending' | 'descending';
 export interface SortState {
@@ -17,8 +19,16 @@ export interface DataTableColumn<Row> {
   filterValue?: (row: Row) => string;
   /** Right-aligned in the mono face with tabular figures: counts, temperatures, times. */
   numeric?: boolean;
-  /** The cell that names the row, read out as the row's header. */
+  /** The cell that names the row, read out as the row's header; it stays in view while the table scrolls sideways. */
   rowHeader?: boolean;
+  /** Stays at the right edge while the table scrolls sideways (from the sm breakpoint up), e.g. the row's actions. */
+  pinEnd?: boolean;
+  /** With a column chooser: the name in the chooser (the header may be shorter). */
+  label?: string;
+  /** With a column chooser: shown until the user chooses otherwise (default true). */
+  defaultVisible?: boolean;
+  /** With a column chooser: always shown. The row header and pinned columns always are. */
+  fixed?: boolean;
   /** Hidden below this breakpoint (keeps phones readable); never hide the row header. */
   hideBelow?: 'sm' | 'md' | 'lg';
   className?: string;
@@ -43,6 +53,16 @@ export interface DataTableProps<Row> {
   /** Shown instead of the table when there are no rows at all. */
   empty?: ReactNode;
   rowClassName?: (row: Row) => string | undefined;
+  /** A "Columns" chooser in the toolbar; the choice is remembered on this device under `storageKey`. */
+  columnChoice?: { storageKey: string };
+}
+
+// Sticky cells need their own background so the scrolled columns pass underneath; the line shows the edge.
+const stickyStart = 'sticky left-0 shadow-[inset_-1px_0_0_var(--color-rule)]';
+const stickyEnd = 'sm:sticky sm:right-0 sm:shadow-[inset_1px_0_0_var(--color-rule)]';
+
+function isAlwaysShown(column: { rowHeader?: boolean; pinEnd?: boolean; fixed?: boolean }): boolean {
+  return Boolean(column.rowHeader || column.pinEnd || column.fixed);
 }
 
 const collator = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' });
@@ -58,7 +78,6 @@ export function DataTable<Row>({
   caption,
   showCaption = false,
   rows,
-  columns,
   rowKey,
   initialSort,
   filter = { label: 'Filter' },
@@ -67,8 +86,33 @@ export function DataTable<Row>({
   footnote,
   empty,
   rowClassName,
+  columnChoice,
+  columns: allColumns,
 }: DataTableProps<Row>) {
   const [sort, setSort] = useState<SortState | undefined>(initialSort);
+  const choice = useColumnChoice(columnChoice?.storageKey);
+  const choosable = useMemo(
+    () =>
+      columnChoice
+        ? allColumns
+            .filter((column) => !isAlwaysShown(column))
+            .map((column) => ({
+              id: column.id,
+              label: column.label ?? column.header,
+              defaultVisible: column.defaultVisible ?? true,
+            }))
+        : [],
+    [allColumns, columnChoice],
+  );
+  const columns = useMemo(
+    () =>
+      columnChoice
+        ? allColumns.filter(
+            (column) => isAlwaysShown(column) || choice.isVisible(column.id, column.defaultVisible ?? true),
+          )
+        : allColumns,
+    [allColumns, columnChoice, choice],
+  );
   const [query, setQuery] = useState('');
   const captionId = useId();
   const filterId = useId();
@@ -115,7 +159,7 @@ export function DataTable<Row>({
 
   return (
     <div>
-      {(filter || toolbar) && (
+      {(filter || toolbar || columnChoice) && (
         <div className="mb-2.5 flex flex-wrap items-end gap-3">
           {filter && (
             <div className="w-full sm:w-72">
@@ -133,6 +177,7 @@ export function DataTable<Row>({
             </div>
           )}
           {toolbar}
+          {columnChoice && <ColumnChooser columns={choosable} {...choice} />}
           <p aria-live="polite" className="numeric ml-auto pb-1.5 text-muted">
             {countText}
           </p>
@@ -142,14 +187,15 @@ export function DataTable<Row>({
         role="region"
         aria-labelledby={captionId}
         tabIndex={0}
-        className="overflow-x-auto rounded-[3px] border border-rule bg-surface"
+        // The area scrolls on its own, at most about a screen high, so its sideways scrollbar is always within reach.
+        className="max-h-[max(20rem,calc(100dvh-7rem))] overflow-auto overscroll-x-contain rounded-[3px] border border-rule bg-surface"
       >
-        <table className="w-full border-collapse text-sm">
+        <table className="w-full border-separate border-spacing-0 text-sm">
           <caption id={captionId} className={showCaption ? 'px-3 py-2 text-left font-semibold' : 'sr-only'}>
             {caption}
           </caption>
           <thead>
-            <tr className="border-b border-edge/70 bg-wash">
+            <tr>
               {columns.map((column) => {
                 const sorted = sort?.columnId === column.id ? sort.direction : undefined;
                 return (
@@ -158,9 +204,12 @@ export function DataTable<Row>({
                     scope="col"
                     aria-sort={column.sortValue ? (sorted ?? 'none') : undefined}
                     className={cx(
-                      'px-3 py-1.5 text-xs font-semibold tracking-wide whitespace-nowrap text-muted uppercase',
+                      'sticky top-0 z-10 border-b border-edge/70 bg-wash px-3 py-1.5 text-xs font-semibold tracking-wide whitespace-nowrap text-muted uppercase',
                       column.numeric ? 'text-right' : 'text-left',
                       column.hideBelow && hidden[column.hideBelow],
+                      column.rowHeader && stickyStart,
+                      column.pinEnd && stickyEnd,
+                      (column.rowHeader || column.pinEnd) && 'z-20',
                     )}
                   >
                     {column.sortValue ? (
@@ -186,10 +235,7 @@ export function DataTable<Row>({
           </thead>
           <tbody>
             {visibleRows.map((row) => (
-              <tr
-                key={rowKey(row)}
-                className={cx('border-b border-rule last:border-b-0 hover:bg-wash/60', rowClassName?.(row))}
-              >
+              <tr key={rowKey(row)} className={cx('group hover:bg-wash/60', rowClassName?.(row))}>
                 {columns.map((column) => {
                   const Cell = column.rowHeader ? 'th' : 'td';
                   return (
@@ -197,8 +243,11 @@ export function DataTable<Row>({
                       key={column.id}
                       scope={column.rowHeader ? 'row' : undefined}
                       className={cx(
-                        'px-3 py-1.5 align-middle',
+                        'border-b border-rule px-3 py-1.5 align-middle group-last:border-b-0',
                         column.rowHeader && 'text-left font-medium',
+                        column.rowHeader && stickyStart,
+                        column.pinEnd && stickyEnd,
+                        (column.rowHeader || column.pinEnd) && 'z-[1] bg-surface group-hover:bg-wash',
                         column.numeric && 'numeric text-right whitespace-nowrap',
                         column.hideBelow && hidden[column.hideBelow],
                         column.className,

@@ -12,9 +12,7 @@ import { CATALOG_PAGE_SIZE, useProducts } from '../api/get-products';
 import { catalogColumns } from './catalog-columns';
 import { CatalogFilters } from './catalog-filters';
 import { filtersFromSearchParams, hasActiveFilters } from './catalog-search-params';
-import { ColumnChooser } from './column-chooser';
 import { ExportMenu } from './export-menu';
-import { useColumnChoice } from './use-column-choice';
 
 export interface CatalogBrowserProps {
   /** Editors and bench testers add, edit and import; writers read. */
@@ -27,16 +25,11 @@ export function CatalogBrowser({ canEdit }: CatalogBrowserProps) {
   const location = useLocation();
   const filters = useMemo(() => filtersFromSearchParams(params), [params]);
   const list = useProducts(filters);
-  const choice = useColumnChoice();
   const notice = (location.state as { notice?: string } | null)?.notice;
 
-  const allColumns = useMemo(
+  const columns = useMemo(
     () => catalogColumns({ regions: list.facets.regions, canEdit }),
     [list.facets.regions, canEdit],
-  );
-  const columns = useMemo(
-    () => allColumns.filter((column) => column.fixed || choice.isVisible(column.id, column.defaultVisible)),
-    [allColumns, choice],
   );
   const filtered = hasActiveFilters(params);
   const catalogIsEmpty = list.total === 0 && !filtered;
@@ -101,14 +94,7 @@ export function CatalogBrowser({ canEdit }: CatalogBrowserProps) {
             initialSort={{ columnId: 'maker', direction: 'ascending' }}
             filter={false}
             noun={['product', 'products']}
-            toolbar={
-              <ColumnChooser
-                columns={allColumns}
-                isVisible={choice.isVisible}
-                setVisible={choice.setVisible}
-                onReset={choice.reset}
-              />
-            }
+            columnChoice={{ storageKey: 'benchwire:catalog:columns' }}
             empty={
               <EmptyState title="No products match">
                 Nothing in the catalog matches this search and these filters. Clear them to see every product.

@@ -22,14 +22,13 @@ import {
   stageTypeLong,
   stageTypeShort,
 } from './catalog-format';
+import { productName } from '../../../lib/product-name';
 
 export interface CatalogColumn extends DataTableColumn<Product> {
   /** Name in the column chooser (the header may be shorter). */
   label: string;
   /** Shown until the user chooses otherwise. */
   defaultVisible: boolean;
-  /** Always shown: the column that names the row, and the actions. */
-  fixed?: boolean;
 }
 
 const muted = (text: string) => (text === '—' ? <span className="text-muted">—</span> : text);
@@ -67,7 +66,6 @@ export function catalogColumns(options: { regions: readonly string[]; canEdit: b
       header: 'Model',
       label: 'Model',
       defaultVisible: true,
-      fixed: true,
       rowHeader: true,
       sortValue: (product) => product.model,
       cell: (product) => (
@@ -278,12 +276,12 @@ export function catalogColumns(options: { regions: readonly string[]; canEdit: b
       header: 'Actions',
       label: 'Actions',
       defaultVisible: true,
-      fixed: true,
+      pinEnd: true,
       cell: (product) => (
         <Link
           to={paths.catalogProductEdit(product.id)}
           className={buttonStyles('secondary', 'sm')}
-          aria-label={`Edit ${product.maker} ${product.model}`}
+          aria-label={`Edit ${productName(product)}`}
         >
           Edit
         </Link>

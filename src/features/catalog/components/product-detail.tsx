@@ -18,6 +18,7 @@ import { AddPriceForm } from './add-price-form';
 import { formatFormFactor } from './catalog-format';
 import { PriceHistory } from './price-history';
 import { ProductSpec } from './product-spec';
+import { productName } from '../../../lib/product-name';
 
 export interface ProductDetailViewProps {
   productId: number;
@@ -39,7 +40,7 @@ export function ProductDetailView({ productId, canEdit, canDelete }: ProductDeta
   const [deleteError, setDeleteError] = useState<string | undefined>();
   const [archiveMessage, setArchiveMessage] = useState<{ tone: 'success' | 'danger'; text: string } | null>(null);
   const notice = (location.state as { notice?: string } | null)?.notice;
-  const name = `${product.maker} ${product.model}`;
+  const name = productName(product);
 
   const latestIds = new Set(product.latestPrices.map((price) => price.id));
   const knownRegions = [...new Set(product.prices.map((price) => price.region))].sort();

@@ -54,7 +54,16 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
         rowHeader: true,
         className: 'min-w-40',
         sortValue: (item) => productName(item.product),
-        cell: (item) => productName(item.product),
+        cell: (item) => (
+          <>
+            {productName(item.product)}
+            {onMove && (
+              <span className="mt-1.5 block font-normal sm:hidden">
+                <QueueActions item={item} onMove={onMove} pending={pendingCellId === item.cell.id} />
+              </span>
+            )}
+          </>
+        ),
       },
       {
         id: 'configuration',
@@ -110,25 +119,10 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
       list.push({
         id: 'actions',
         header: 'Actions',
-        cell: (item) => {
-          const name = `${productName(item.product)} · ${item.loadConfiguration.name}`;
-          return (
-            <div className="flex flex-wrap gap-1.5">
-              {item.cell.actions.map((action) => (
-                <Button
-                  key={action}
-                  size="sm"
-                  variant={action === 'record' ? 'primary' : 'secondary'}
-                  pending={pendingCellId === item.cell.id}
-                  aria-label={`${cellActionRules[action].label}: ${name}`}
-                  onClick={() => onMove(item, action)}
-                >
-                  {cellActionRules[action].label}
-                </Button>
-              ))}
-            </div>
-          );
-        },
+        // On a phone the moves sit under the product name instead, where no sideways scrolling is needed.
+        hideBelow: 'sm',
+        pinEnd: true,
+        cell: (item) => <QueueActions item={item} onMove={onMove} pending={pendingCellId === item.cell.id} />,
       });
     }
     return list;
@@ -146,5 +140,33 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
       rowClassName={(item) => (item.cell.overdue ? 'bg-red/5' : undefined)}
       empty={<EmptyState title={empty.title}>{empty.text}</EmptyState>}
     />
+  );
+}
+
+function QueueActions({
+  item,
+  onMove,
+  pending,
+}: {
+  item: QueueItem;
+  onMove: (item: QueueItem, action: CellAction) => void;
+  pending: boolean;
+}) {
+  const name = `${productName(item.product)} · ${item.loadConfiguration.name}`;
+  return (
+    <span className="flex flex-wrap gap-1.5">
+      {item.cell.actions.map((action) => (
+        <Button
+          key={action}
+          size="sm"
+          variant={action === 'record' ? 'primary' : 'secondary'}
+          pending={pending}
+          aria-label={`${cellActionRules[action].label}: ${name}`}
+          onClick={() => onMove(item, action)}
+        >
+          {cellActionRules[action].label}
+        </Button>
+      ))}
+    </span>
   );
 }

@@ -1,5 +1,5 @@
-import { useMemo, useState, type ReactNode } from 'react';
-import { Link } from 'react-router';
+import { useMemo, type ReactNode } from 'react';
+import { Link, useSearchParams } from 'react-router';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
@@ -24,13 +24,30 @@ export interface RoundupsTableProps {
   emptyAction?: ReactNode;
 }
 
+function isRoundupState(value: string): value is RoundupState {
+  return (roundupStates as readonly string[]).includes(value);
+}
+
 const stateOptions = [
   { value: '', label: 'All states' },
   ...roundupStates.map((state) => ({ value: state, label: roundupStateLabels[state] })),
 ];
 
 export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTableProps) {
-  const [state, setState] = useState<RoundupState | ''>('');
+  // The state filter lives in the address (?state=writing), so the dashboard's tiles can open a filtered list.
+  const [params, setParams] = useSearchParams();
+  const requested = params.get('state');
+  const state: RoundupState | '' = requested && isRoundupState(requested) ? requested : '';
+  const setState = (next: RoundupState | '') =>
+    setParams(
+      (current) => {
+        const updated = new URLSearchParams(current);
+        if (next) updated.set('state', next);
+        else updated.delete('state');
+        return updated;
+      },
+      { replace: true },
+    );
   const rows = useMemo(() => roundups.filter((r) => !state || r.state === state), [roundups, state]);
 
   const columns = useMemo<DataTableColumn<RoundupSummary>[]>(
@@ -98,6 +115,7 @@ export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTa
       {
         id: 'loans',
         header: 'Loans',
+        label: 'Sample loans',
         hideBelow: 'md',
         sortValue: (r) => r.overdueSampleCount,
         cell: (r) =>
@@ -120,6 +138,7 @@ export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTa
       initialSort={{ columnId: 'target', direction: 'ascending' }}
       filter={{ label: 'Filter roundups', placeholder: 'Title, platform or state' }}
       noun={['roundup', 'roundups']}
+      columnChoice={{ storageKey: 'benchwire:roundups:columns' }}
       toolbar={
         <Select
           label="State"

@@ -1,20 +1,24 @@
 import { useRef, type KeyboardEvent } from 'react';
-import { Button } from '../../../components/ui/button';
-import { Checkbox } from '../../../components/ui/checkbox';
-import type { CatalogColumn } from './catalog-columns';
+import type { ColumnChoice } from '../../lib/use-column-choice';
+import { Button } from './button';
+import { Checkbox } from './checkbox';
 
-export interface ColumnChooserProps {
-  columns: readonly CatalogColumn[];
-  isVisible: (id: string, defaultVisible: boolean) => boolean;
-  setVisible: (id: string, defaultVisible: boolean, visible: boolean) => void;
-  onReset: () => void;
+export interface ChoosableColumn {
+  id: string;
+  /** Name in the chooser. */
+  label: string;
+  defaultVisible: boolean;
+}
+
+export interface ColumnChooserProps extends ColumnChoice {
+  /** The columns the user may switch on and off (not the row header or the actions). */
+  columns: readonly ChoosableColumn[];
 }
 
 /** A disclosure with one checkbox per column; the choice is remembered on this device. */
-export function ColumnChooser({ columns, isVisible, setVisible, onReset }: ColumnChooserProps) {
+export function ColumnChooser({ columns, isVisible, setVisible, reset }: ColumnChooserProps) {
   const detailsRef = useRef<HTMLDetailsElement>(null);
-  const choosable = columns.filter((column) => !column.fixed);
-  const visibleCount = choosable.filter((column) => isVisible(column.id, column.defaultVisible)).length;
+  const visibleCount = columns.filter((column) => isVisible(column.id, column.defaultVisible)).length;
 
   const closeOnEscape = (event: KeyboardEvent<HTMLDetailsElement>) => {
     if (event.key !== 'Escape' || !detailsRef.current?.open) return;
@@ -28,7 +32,7 @@ export function ColumnChooser({ columns, isVisible, setVisible, onReset }: Colum
       <summary className="inline-flex min-h-9 cursor-pointer list-none items-center gap-2 rounded-[3px] border border-edge bg-surface px-3.5 text-sm font-medium text-ink hover:bg-wash [&::-webkit-details-marker]:hidden">
         Columns
         <span className="numeric text-muted">
-          {visibleCount}/{choosable.length}
+          {visibleCount}/{columns.length}
         </span>
         <span aria-hidden="true" className="font-mono text-[0.625rem] group-open:rotate-180">
           ▼
@@ -38,7 +42,7 @@ export function ColumnChooser({ columns, isVisible, setVisible, onReset }: Colum
         <fieldset>
           <legend className="mb-2 text-sm font-semibold text-ink">Show these columns</legend>
           <div className="max-h-[min(24rem,60vh)] space-y-1.5 overflow-y-auto pr-1">
-            {choosable.map((column) => (
+            {columns.map((column) => (
               <Checkbox
                 key={column.id}
                 label={column.label}
@@ -50,7 +54,7 @@ export function ColumnChooser({ columns, isVisible, setVisible, onReset }: Colum
         </fieldset>
         <div className="mt-3 flex justify-between gap-2 border-t border-rule pt-2.5">
           <p className="text-xs text-muted">Remembered on this device.</p>
-          <Button size="sm" variant="quiet" onClick={onReset}>
+          <Button size="sm" variant="quiet" onClick={reset}>
             Reset
           </Button>
         </div>

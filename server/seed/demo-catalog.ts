@@ -489,7 +489,7 @@ const lines: BoardLine[] = [
   // --- Tarnwell
   {
     maker: 'Tarnwell',
-    model: 'Tarnwell Wend B50',
+    model: 'Wend B50',
     chipset: 'HX-B50',
     formFactor: 'micro-atx',
     releaseDate: '2025-03-31',
@@ -513,7 +513,7 @@ const lines: BoardLine[] = [
   },
   {
     maker: 'Tarnwell',
-    model: 'Tarnwell Wend B70',
+    model: 'Wend B70',
     chipset: 'HX-B70',
     formFactor: 'atx',
     releaseDate: '2025-04-22',
@@ -537,7 +537,7 @@ const lines: BoardLine[] = [
   },
   {
     maker: 'Tarnwell',
-    model: 'Tarnwell Orrin X90',
+    model: 'Orrin X90',
     chipset: 'HX-X90',
     formFactor: 'atx',
     releaseDate: '2025-03-12',
@@ -562,7 +562,7 @@ const lines: BoardLine[] = [
   // --- Vesk
   {
     maker: 'Vesk',
-    model: 'Vesk Halden B70',
+    model: 'Halden B70',
     chipset: 'HX-B70',
     formFactor: 'atx',
     releaseDate: '2025-05-06',
@@ -586,7 +586,7 @@ const lines: BoardLine[] = [
   },
   {
     maker: 'Vesk',
-    model: 'Vesk Halden B50 ITX',
+    model: 'Halden B50 ITX',
     chipset: 'HX-B50',
     formFactor: 'mini-itx',
     releaseDate: '2025-05-13',

@@ -214,7 +214,7 @@ export async function seedPlanning(manager: EntityManager, staff: PlanningStaff,
       note: 'Room drifted to 23.4 °C during the soak; run it again with the door shut.',
     },
     {
-      model: 'Tarnwell Wend B70',
+      model: 'Wend B70',
       cells: [
         ['assigned', jules, 6],
         ['assigned', jules, 7],
@@ -222,7 +222,7 @@ export async function seedPlanning(manager: EntityManager, staff: PlanningStaff,
       ],
     },
     {
-      model: 'Vesk Halden B70',
+      model: 'Halden B70',
       cells: [
         ['not-started', null, null],
         ['not-started', null, null],
@@ -285,7 +285,7 @@ export async function seedPlanning(manager: EntityManager, staff: PlanningStaff,
       tester: jules,
       startsAt: at(2, 7),
       endsAt: at(2, 12),
-      cells: ['Tarnwell Wend B70:0', 'Tarnwell Wend B70:1'],
+      cells: ['Wend B70:0', 'Wend B70:1'],
       note: 'Two soaks back to back',
     },
     {
@@ -475,7 +475,7 @@ function sampleFor(model: string, date: (days: number) => string): Partial<Sampl
         conditionNotes: 'Open-box purchase, all accessories present',
         status: 'on-the-bench',
       };
-    case 'Tarnwell Wend B70':
+    case 'Wend B70':
       return {
         source: 'vendor-loan',
         vendorContact: 'Tobin Achterberg, Tarnwell press office',
@@ -486,7 +486,7 @@ function sampleFor(model: string, date: (days: number) => string): Partial<Sampl
         conditionNotes: 'New, sealed',
         status: 'received',
       };
-    case 'Vesk Halden B70':
+    case 'Halden B70':
       return { source: 'vendor-loan', vendorContact: 'Vesk sample desk', returnBy: date(50), status: 'ordered' };
     default:
       return { source: 'retail', orderReference: 'FH-77310', costMinor: 16990, costCurrency: 'EUR', status: 'ordered' };

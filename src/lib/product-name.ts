@@ -1,4 +1,4 @@
-/** A product as planning screens name it: maker, then model. */
-export function productName(product: { maker: string; model: string }): string {
-  return `${product.maker} ${product.model}`;
-}
+import { productDisplayName } from '../../shared/domain/planning/product-display-name';
+
+/** A product as planning screens name it: maker, then model, the maker written once. */
+export const productName = productDisplayName;

@@ -10,6 +10,7 @@ import { PageHeader } from '../../components/ui/page-header';
 import { ForbiddenState } from '../../components/ui/forbidden-state';
 import { roleLabels } from '../../../shared/schemas/common';
 import { RoleGate } from '../role-gate';
+import { productName } from '../../lib/product-name';
 
 export function loader(queryClient: QueryClient) {
   return async () => {
@@ -47,7 +48,7 @@ function NewProductPage() {
         save={(input) => createProduct.mutateAsync(input)}
         onSaved={(product) =>
           navigate(paths.catalogProduct(product.id), {
-            state: { notice: `${product.maker} ${product.model} is in the catalog.` },
+            state: { notice: `${productName(product)} is in the catalog.` },
           })
         }
       />

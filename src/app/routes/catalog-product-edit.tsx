@@ -13,6 +13,7 @@ import { ForbiddenState } from '../../components/ui/forbidden-state';
 import { roleLabels } from '../../../shared/schemas/common';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
+import { productName } from '../../lib/product-name';
 
 export function loader(queryClient: QueryClient) {
   return async ({ params }: LoaderFunctionArgs) => {
@@ -47,7 +48,7 @@ function EditProduct({ id }: { id: number }) {
     <>
       <PageHeader
         eyebrow="Catalog"
-        title={`Edit ${product.maker} ${product.model}`}
+        title={`Edit ${productName(product)}`}
         description="Changes show in the catalog and in every roundup plan that lists this board."
       />
       <ProductForm

@@ -11,6 +11,7 @@ import { seedPlanning } from '../../../server/seed/demo-planning';
 import { seedStaff } from '../../../server/seed/demo-staff';
 import { roundupEntries } from '../../../server/mappers/roundup-entry';
 import { samplesOfRoundups } from '../../../server/mappers/sample';
+import { productDisplayName } from '../../../shared/domain/planning/product-display-name';
 import { testDataSource } from '../support/test-app';
 
 class RollBack extends Error {}
@@ -29,6 +30,10 @@ describe('demo seed: planning', () => {
         expect(products.length).toBeGreaterThanOrEqual(20);
         expect(new Set(products.map((p) => p.maker))).toEqual(
           new Set(['Korvath', 'Ostrel Works', 'Brightmoor', 'Quillon', 'Tarnwell', 'Vesk']),
+        );
+        // Names appear once: no demo model repeats its maker's name.
+        expect(products.filter((p) => productDisplayName(p) !== `${p.maker} ${p.model}`).map((p) => p.model)).toEqual(
+          [],
         );
         expect(new Set(products.map((p) => p.chipset)).size).toBe(3);
         expect(products.every((p) => p.effectivePhases && p.vcoreStageCurrentA && p.socket === 'HX4')).toBe(true);

@@ -11,6 +11,7 @@ import { authenticate } from './middleware/authenticate';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { verifyOrigin } from './middleware/verify-origin';
 import { registerFeatureRoutes } from './routes/all';
+import { installHumanMessages } from '../shared/schemas/human-messages';
 
 export interface CreateAppOptions {
   dataSource: DataSource;
@@ -28,6 +29,8 @@ export function createApp({
   clientDir,
   services = createServices(dataSource, env),
 }: CreateAppOptions) {
+  // Field errors in API answers read as words a person can act on, the same as the forms'.
+  installHumanMessages();
   const secureCookie = secureCookieFor(env);
   const context: AppContext = { dataSource, env, services };
 

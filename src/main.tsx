@@ -7,6 +7,10 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router/dom';
 import { createAppRouter } from './app/router';
 import { createQueryClient } from './lib/query-client';
+import { installHumanMessages } from '../shared/schemas/human-messages';
+
+// Form checks speak in words a person can act on, never in the validation library's wording.
+installHumanMessages();
 
 // Created once, outside React: loaders and components share this cache, and re-renders never rebuild the router.
 const queryClient = createQueryClient();

@@ -61,3 +61,12 @@ export function formatSlot(startsAt: string, endsAt: string, { withDay = true }:
   if (start.toDateString() !== end.toDateString()) return `${dayAndTime.format(start)} – ${dayAndTime.format(end)}`;
   return `${withDay ? dayAndTime.format(start) : timeOnly.format(start)} – ${timeOnly.format(end)}`;
 }
+
+/**
+ * A time of day as the user's own locale writes it: "14:05" where clocks run 24 hours, "2:05 PM" where they do
+ * not. The locale decides the hour cycle; nothing here forces one.
+ */
+export function formatClockTime(date: Date): string {
+  const locales = typeof navigator === 'undefined' ? undefined : navigator.languages;
+  return new Intl.DateTimeFormat(locales, { hour: 'numeric', minute: '2-digit' }).format(date);
+}

@@ -87,43 +87,46 @@ export function AppShell({ user, navigation, onSignOut, signingOut = false, busy
         </div>
       </header>
 
-      <div className="md:grid md:grid-cols-[13.5rem_minmax(0,1fr)]">
-        <nav
-          id={navId}
-          aria-label="Main"
-          className={cx(
-            'border-b border-rule bg-paper md:sticky md:top-13.5 md:block md:h-[calc(100dvh-3.375rem)] md:border-r md:border-b-0',
-            menuOpen ? 'block' : 'hidden',
-          )}
-        >
-          <p className="border-b border-rule px-4 py-2.5 text-sm sm:hidden">
-            Signed in as <span className="font-medium">{user.displayName}</span>
-            <span className="text-muted"> · {user.roleLabel}</span>
-          </p>
-          <ol className="px-2 py-3 md:py-5">
-            {navigation.map((item, index) => (
-              <li key={item.to}>
-                <NavLink
-                  to={item.to}
-                  end={item.end}
-                  className={({ isActive }) =>
-                    cx(
-                      'group flex items-baseline gap-3 rounded-[3px] border-l-[3px] px-3 py-2 text-sm',
-                      isActive
-                        ? 'border-copper bg-surface font-semibold text-ink'
-                        : 'border-transparent text-ink hover:bg-wash',
-                    )
-                  }
-                >
-                  <span aria-hidden="true" className="numeric text-[0.6875rem] text-muted">
-                    {String(index + 1).padStart(2, '0')}
-                  </span>
-                  {item.label}
-                </NavLink>
-              </li>
-            ))}
-          </ol>
-        </nav>
+      <div className="md:grid md:min-h-[calc(100dvh-3.375rem)] md:grid-cols-[13.5rem_minmax(0,1fr)]">
+        {/* The rule sits on this column, which is as tall as the page; the navigation inside it stays in view. */}
+        <div className="md:border-r md:border-rule">
+          <nav
+            id={navId}
+            aria-label="Main"
+            className={cx(
+              'border-b border-rule bg-paper md:sticky md:top-13.5 md:block md:max-h-[calc(100dvh-3.375rem)] md:overflow-y-auto md:border-b-0',
+              menuOpen ? 'block' : 'hidden',
+            )}
+          >
+            <p className="border-b border-rule px-4 py-2.5 text-sm sm:hidden">
+              Signed in as <span className="font-medium">{user.displayName}</span>
+              <span className="text-muted"> · {user.roleLabel}</span>
+            </p>
+            <ol className="px-2 py-3 md:py-5">
+              {navigation.map((item, index) => (
+                <li key={item.to}>
+                  <NavLink
+                    to={item.to}
+                    end={item.end}
+                    className={({ isActive }) =>
+                      cx(
+                        'group flex items-baseline gap-3 rounded-[3px] border-l-[3px] px-3 py-2 text-sm',
+                        isActive
+                          ? 'border-copper bg-surface font-semibold text-ink'
+                          : 'border-transparent text-ink hover:bg-wash',
+                      )
+                    }
+                  >
+                    <span aria-hidden="true" className="numeric text-[0.6875rem] text-muted">
+                      {String(index + 1).padStart(2, '0')}
+                    </span>
+                    {item.label}
+                  </NavLink>
+                </li>
+              ))}
+            </ol>
+          </nav>
+        </div>
 
         <main ref={mainRef} id="main" tabIndex={-1} className="min-w-0 px-4 pt-6 pb-16 outline-none sm:px-6 md:px-8">
           <div className="mx-auto max-w-6xl">{children}</div>

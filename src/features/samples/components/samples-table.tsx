@@ -12,6 +12,7 @@ import { productName } from '../../../lib/product-name';
 import { overdueText } from './samples-format';
 import { SampleDialog } from './sample-dialog';
 import { SampleStatusBadge } from './sample-status-badge';
+import { countOf, plural } from '../../../lib/plural';
 
 export interface SamplesTableProps {
   roundupId: number;
@@ -127,9 +128,9 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
   return (
     <div className="space-y-3">
       {overdue.length > 0 && (
-        <Alert tone="danger" title={`${overdue.length} loan${overdue.length === 1 ? ' is' : 's are'} overdue`}>
-          {overdue.map((s) => `${productName(s.product)} (${overdueText(s.daysOverdue).toLowerCase()})`).join('; ')}.
-          Return them or mark them kept.
+        <Alert tone="danger" title={`${countOf(overdue.length, 'loan is', 'loans are')} overdue`}>
+          {overdue.map((s) => `${productName(s.product)} (${overdueText(s.daysOverdue).toLowerCase()})`).join('; ')}.{' '}
+          {plural(overdue.length, 'Return it or mark it kept.', 'Return them or mark them kept.')}
         </Alert>
       )}
       {notice && (

@@ -1,19 +1,29 @@
-import { useId } from 'react';
+import { useId, type ChangeEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
+import { countOf } from '../../../lib/plural';
 import type { PersonRef } from '../../../../shared/schemas/planning-fields';
+
+/** A form field's props as `useZodForm().field(name)` gives them. */
+interface FieldProps {
+  id: string;
+  name: string;
+  label: string;
+  value: string;
+  error?: string;
+  onChange: (event: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => void;
+}
 
 export interface AssignBarProps {
   chosenCount: number;
   testers: readonly PersonRef[] | undefined;
-  testerId: string;
-  dueDate: string;
+  tester: FieldProps;
+  dueDate: FieldProps;
   timeZone: string;
-  errors: { testerId?: string; dueDate?: string; cellIds?: string };
+  /** No cell or row is chosen. */
+  cellsError?: string;
   pending: boolean;
-  onTesterChange: (value: string) => void;
-  onDueDateChange: (value: string) => void;
   onAssign: () => void;
   onClear: () => void;
 }
@@ -22,13 +32,11 @@ export interface AssignBarProps {
 export function AssignBar({
   chosenCount,
   testers,
-  testerId,
+  tester,
   dueDate,
   timeZone,
-  errors,
+  cellsError,
   pending,
-  onTesterChange,
-  onDueDateChange,
   onAssign,
   onClear,
 }: AssignBarProps) {
@@ -42,13 +50,13 @@ export function AssignBar({
       <p id={headingId} className="text-sm font-semibold">
         Assign to a tester{' '}
         <span aria-live="polite" className="font-normal text-muted">
-          · {chosenCount === 0 ? 'no cells chosen yet' : `${chosenCount} cell${chosenCount === 1 ? '' : 's'} chosen`}
+          · {chosenCount === 0 ? 'no cells chosen yet' : `${countOf(chosenCount, 'cell', 'cells')} chosen`}
         </span>
       </p>
-      {errors.cellIds && (
-        <p className="mt-1 flex gap-1.5 text-sm font-medium text-red">
+      {cellsError && (
+        <p role="alert" className="mt-1 flex gap-1.5 text-sm font-medium text-red">
           <span aria-hidden="true">✕</span>
-          <span>{errors.cellIds}</span>
+          <span>{cellsError}</span>
         </p>
       )}
       <p className="mt-0.5 text-[0.8125rem] text-muted">
@@ -57,23 +65,12 @@ export function AssignBar({
       </p>
       <div className="mt-2 flex flex-wrap items-start gap-3">
         <Select
-          label="Tester"
-          options={(testers ?? []).map((tester) => ({ value: String(tester.id), label: tester.displayName }))}
+          {...tester}
+          options={(testers ?? []).map((person) => ({ value: String(person.id), label: person.displayName }))}
           placeholder={testers ? 'Choose a tester…' : 'Loading testers…'}
-          value={testerId}
-          onChange={(event) => onTesterChange(event.target.value)}
-          error={errors.testerId}
           className="w-full sm:w-56"
         />
-        <TextField
-          label="Due date"
-          type="date"
-          value={dueDate}
-          onChange={(event) => onDueDateChange(event.target.value)}
-          error={errors.dueDate}
-          description={`Ends at midnight, ${timeZone}.`}
-          className="w-full sm:w-48"
-        />
+        <TextField {...dueDate} type="date" description={`Ends at midnight, ${timeZone}.`} className="w-full sm:w-48" />
         <div className="flex gap-2 sm:mt-6">
           <Button variant="primary" onClick={onAssign} pending={pending}>
             Assign chosen cells

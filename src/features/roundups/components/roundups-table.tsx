@@ -12,7 +12,7 @@ import {
 } from '../../../../shared/domain/planning/roundup-states';
 import type { RoundupSummary } from '../../../../shared/schemas/roundups';
 import { formatCalendarDate } from '../../../lib/format-time';
-import { formatBand } from './planning-format';
+import { formatBandRange } from './planning-format';
 import { ProgressMeter } from './progress-meter';
 import { RoundupStateBadge } from '../../../components/ui/roundup-state-badge';
 
@@ -83,7 +83,13 @@ export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTa
         header: 'Price band',
         hideBelow: 'lg',
         sortValue: (r) => r.priceBand.minMinor,
-        cell: (r) => <span className="numeric whitespace-nowrap">{formatBand(r.priceBand)}</span>,
+        // The range on one line, the region under it: keeps the list inside a laptop screen.
+        cell: (r) => (
+          <span className="numeric block whitespace-nowrap">
+            {formatBandRange(r.priceBand)}
+            <span className="block text-xs text-muted">in {r.priceBand.region}</span>
+          </span>
+        ),
       },
       {
         id: 'target',

@@ -30,6 +30,7 @@ import {
 } from '../../shared/schemas/catalog';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type { z } from 'zod';
+import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 
 type ListQuery = z.output<typeof productListQuerySchema>;
 type PriceInput = z.output<typeof createPriceRequestSchema>;
@@ -221,7 +222,7 @@ export class CatalogService {
       if (uses > 0) {
         throw conflict(
           'product_in_use',
-          `${product.maker} ${product.model} is in ${uses} roundup${uses === 1 ? '' : 's'} and may have results, so it cannot be deleted. Archive it instead.`,
+          `${productDisplayName(product)} is in ${uses} roundup${uses === 1 ? '' : 's'} and may have results, so it cannot be deleted. Archive it instead.`,
         );
       }
       await manager.getRepository(ProductEntity).delete({ id });

@@ -22,6 +22,7 @@ import type {
   referenceCandidatesSchema,
 } from '../../shared/schemas/roundups';
 import type { RoundupState } from '../../shared/domain/planning/roundup-states';
+import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 
 type AddInput = z.output<typeof addRoundupEntryRequestSchema>;
 type ReferenceCandidates = z.infer<typeof referenceCandidatesSchema>['candidates'];
@@ -179,13 +180,13 @@ export class RoundupEntriesService {
         if (!product)
           throw invalid('That product is not in the catalog.', { productId: 'That product is not in the catalog.' });
         if (product.archivedAt) {
-          throw invalid(`${product.maker} ${product.model} is archived; restore it in the catalog first.`, {
+          throw invalid(`${productDisplayName(product)} is archived; restore it in the catalog first.`, {
             productId: 'This product is archived.',
           });
         }
         const entries = manager.getRepository(RoundupEntryEntity);
         if (await entries.existsBy({ roundupId, productId: product.id })) {
-          throw conflict('entry_exists', `${product.maker} ${product.model} is already in this roundup.`, {
+          throw conflict('entry_exists', `${productDisplayName(product)} is already in this roundup.`, {
             productId: 'Already in this roundup.',
           });
         }
@@ -196,7 +197,7 @@ export class RoundupEntriesService {
             throw new AppError(
               'no_earlier_results',
               422,
-              `${product.maker} ${product.model} has no accepted results in an earlier roundup, so it cannot be a reference entry. Add it to be tested instead.`,
+              `${productDisplayName(product)} has no accepted results in an earlier roundup, so it cannot be a reference entry. Add it to be tested instead.`,
               { kind: 'No earlier accepted results.' },
             );
           }
@@ -247,13 +248,13 @@ export class RoundupEntriesService {
         if (entry.priceCheck.warning) warnings.push(entry.priceCheck.warning);
         if (input.kind === 'tested' && product.platform !== roundup.platform) {
           warnings.push(
-            `${product.maker} ${product.model} is a ${product.platform} product; this roundup covers ${roundup.platform}.`,
+            `${productDisplayName(product)} is a ${product.platform} product; this roundup covers ${roundup.platform}.`,
           );
         }
         await recordPlanChange(manager, actor, roundupId, 'roundup.entry_added', {
           entryId,
           productId: product.id,
-          product: `${product.maker} ${product.model}`,
+          product: productDisplayName(product),
           kind: input.kind,
           referenceRoundupId,
           priceFit: entry.priceCheck.fit,
@@ -282,14 +283,14 @@ export class RoundupEntriesService {
       if (busy.length > 0) {
         throw conflict(
           'entry_has_work',
-          `${product.maker} ${product.model} cannot leave the roundup: ${busy.length} of its cells are ${[...new Set(busy.map((c) => cellStateLabels[c.state].toLowerCase()))].join(' or ')}.`,
+          `${productDisplayName(product)} cannot leave the roundup: ${busy.length} of its cells are ${[...new Set(busy.map((c) => cellStateLabels[c.state].toLowerCase()))].join(' or ')}.`,
         );
       }
       await manager.getRepository(RoundupEntryEntity).delete({ id: entryId });
       await recordPlanChange(manager, actor, roundupId, 'roundup.entry_removed', {
         entryId,
         productId: entry.productId,
-        product: `${product.maker} ${product.model}`,
+        product: productDisplayName(product),
         kind: entry.kind,
       });
     });

@@ -32,6 +32,7 @@ import type {
   RoundupSummary,
   updateRoundupRequestSchema,
 } from '../../shared/schemas/roundups';
+import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 
 type CreateInput = z.output<typeof createRoundupRequestSchema>;
 type UpdateInput = z.output<typeof updateRoundupRequestSchema>;
@@ -121,7 +122,7 @@ export class RoundupsService {
     }
     const archivedProducts = entries.filter((e) => e.product.archived);
     for (const entry of archivedProducts)
-      planWarnings.push(`${entry.product.maker} ${entry.product.model} is archived in the catalog.`);
+      planWarnings.push(`${productDisplayName(entry.product)} is archived in the catalog.`);
 
     const next = nextRoundupState(roundup.state);
     const problems = next ? roundupTransitionProblems(await this.facts(manager, roundup), next) : [];

@@ -10,6 +10,7 @@ import { findRoundup } from '../lib/roundup-access';
 import { samplesOfRoundups, toSampleDto } from '../mappers/sample';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type { Sample, updateSampleRequestSchema } from '../../shared/schemas/samples';
+import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 
 type UpdateInput = z.output<typeof updateSampleRequestSchema>;
 
@@ -106,7 +107,7 @@ export class SamplesService {
         const product = await manager.getRepository(ProductEntity).findOneByOrFail({ id: entry.productId });
         await recordPlanChange(manager, actor, roundupId, 'roundup.sample_updated', {
           sampleId,
-          product: `${product.maker} ${product.model}`,
+          product: productDisplayName(product),
           changes,
         });
       }

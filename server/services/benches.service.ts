@@ -33,6 +33,7 @@ import type {
   updateBenchRequestSchema,
 } from '../../shared/schemas/benches';
 import type { PersonRef } from '../../shared/schemas/planning-fields';
+import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 
 type CreateBenchInput = z.output<typeof createBenchRequestSchema>;
 type UpdateBenchInput = z.output<typeof updateBenchRequestSchema>;
@@ -400,7 +401,7 @@ export class BenchesService {
       new Date(),
     );
     const cellName = item
-      ? `${item.product.maker} ${item.product.model} · ${item.loadConfiguration.name}`
+      ? `${productDisplayName(item.product)} · ${item.loadConfiguration.name}`
       : `Cell ${clash.cellId}`;
     const slot = slotText(new Date(clash.startsAt), new Date(clash.endsAt));
     throw conflict(

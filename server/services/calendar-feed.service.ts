@@ -16,6 +16,7 @@ import {
   type CalendarFeed,
   type CalendarFeedCreated,
 } from '../../shared/schemas/calendar-feed';
+import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 
 const DAY_MS = 86_400_000;
 
@@ -113,7 +114,7 @@ export class CalendarFeedService {
 
     const assignedAt = new Map(cells.map((cell) => [cell.id, cell.assignedAt ?? undefined]));
     const cellLine = (item: (typeof due)[number]) =>
-      `${item.product.maker} ${item.product.model} · ${item.loadConfiguration.name} (${item.roundup.title})`;
+      `${productDisplayName(item.product)} · ${item.loadConfiguration.name} (${item.roundup.title})`;
     const events: CalendarEvent[] = [
       ...bookings.map((booking) => ({
         uid: `booking-${booking.id}@benchwire`,
@@ -127,7 +128,7 @@ export class CalendarFeedService {
         uid: `cell-${item.cell.id}-due@benchwire`,
         stamp: assignedAt.get(item.cell.id) ?? now,
         when: { startDate: item.cell.dueDate as string, endDate: nextDay(item.cell.dueDate as string) },
-        summary: `Due: ${item.product.maker} ${item.product.model} · ${item.loadConfiguration.name}`,
+        summary: `Due: ${productDisplayName(item.product)} · ${item.loadConfiguration.name}`,
         description: `${item.roundup.title}\n${cellStateLabels[item.cell.state]}`,
       })),
     ];

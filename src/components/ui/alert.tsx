@@ -13,7 +13,7 @@ export interface AlertProps {
    */
   announce?: boolean;
   /**
-   * Shown open the first time in a session, folded to its title after that (one click opens it again); never
+   * Shown open the first time on a page in a session, folded to its title after that (one click opens it again); never
    * removed. On by default for a caution with a title — the standing safety notes, which otherwise fill most of a
    * phone's first screen on every visit.
    */
@@ -67,7 +67,8 @@ export function Alert({
   );
 }
 
-const readKey = (title: string) => `benchwire:read:${title}`;
+// Remembered per page and title: a caution met on one page is still shown open the first time on another.
+const readKey = (title: string) => `benchwire:read:${window.location.pathname}:${title}`;
 
 function readThisSession(title: string): boolean {
   try {

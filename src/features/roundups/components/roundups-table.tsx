@@ -76,7 +76,7 @@ export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTa
         header: 'Platform',
         sortValue: (r) => r.platform,
         hideBelow: 'md',
-        cell: (r) => <span className="whitespace-nowrap">{r.platform}</span>,
+        cell: (r) => r.platform,
       },
       {
         id: 'band',

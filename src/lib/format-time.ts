@@ -66,7 +66,11 @@ export function formatSlot(startsAt: string, endsAt: string, { withDay = true }:
  * A time of day as the user's own locale writes it: "14:05" where clocks run 24 hours, "2:05 PM" where they do
  * not. The locale decides the hour cycle; nothing here forces one.
  */
-export function formatClockTime(date: Date): string {
+export function formatClockTime(date: Date, options: { seconds?: boolean } = {}): string {
   const locales = typeof navigator === 'undefined' ? undefined : navigator.languages;
-  return new Intl.DateTimeFormat(locales, { hour: 'numeric', minute: '2-digit' }).format(date);
+  return new Intl.DateTimeFormat(locales, {
+    hour: 'numeric',
+    minute: '2-digit',
+    ...(options.seconds ? { second: '2-digit' } : {}),
+  }).format(date);
 }

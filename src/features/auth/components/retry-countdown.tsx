@@ -1,9 +1,10 @@
 import { useEffect, useState } from 'react';
+import { formatClockTime } from '../../../lib/format-time';
+import { countOf } from '../../../lib/plural';
 
 function inWords(seconds: number): string {
-  if (seconds < 60) return `${seconds} second${seconds === 1 ? '' : 's'}`;
-  const minutes = Math.ceil(seconds / 60);
-  return `${minutes} minute${minutes === 1 ? '' : 's'}`;
+  if (seconds < 60) return countOf(seconds, 'second', 'seconds');
+  return countOf(Math.ceil(seconds / 60), 'minute', 'minutes');
 }
 
 /**
@@ -24,11 +25,7 @@ export function RetryCountdown({ until }: { until: number }) {
 
   const left = Math.ceil((until - now) / 1000);
   if (left <= 0) return <p className="mt-1">You can try again now.</p>;
-  const at = new Date(until).toLocaleTimeString(undefined, {
-    hour: '2-digit',
-    minute: '2-digit',
-    ...(left < 120 ? { second: '2-digit' } : {}),
-  });
+  const at = formatClockTime(new Date(until), { seconds: left < 120 });
   return (
     <p className="mt-1">
       You can try again in {inWords(left)} (at {at}).

@@ -10,6 +10,7 @@ import type { QueueItem } from '../../../../shared/schemas/matrix';
 import { formatCalendarDate, formatSlot } from '../../../lib/format-time';
 import { productName } from '../../../lib/product-name';
 import { CellStateBadge } from '../../../components/ui/cell-state-badge';
+import { useMediaQuery } from '../../../lib/use-media-query';
 
 export interface QueueTableProps {
   caption: string;
@@ -30,6 +31,9 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
     for (const booking of bookings) for (const item of booking.cells) map.set(item.cell.id, booking);
     return map;
   }, [bookings]);
+  // On a phone the moves sit under the product name, where no sideways scrolling is needed; wider, in their own
+  // column pinned to the right edge. Rendered in one place only, so each move is one button.
+  const wide = useMediaQuery('(min-width: 40rem)');
 
   const columns = useMemo<DataTableColumn<QueueItem>[]>(() => {
     const list: DataTableColumn<QueueItem>[] = [
@@ -57,8 +61,8 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
         cell: (item) => (
           <>
             {productName(item.product)}
-            {onMove && (
-              <span className="mt-1.5 block font-normal sm:hidden">
+            {onMove && !wide && (
+              <span className="mt-1.5 block font-normal">
                 <QueueActions item={item} onMove={onMove} pending={pendingCellId === item.cell.id} />
               </span>
             )}
@@ -115,18 +119,16 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
         },
       },
     ];
-    if (onMove) {
+    if (onMove && wide) {
       list.push({
         id: 'actions',
         header: 'Actions',
-        // On a phone the moves sit under the product name instead, where no sideways scrolling is needed.
-        hideBelow: 'sm',
         pinEnd: true,
         cell: (item) => <QueueActions item={item} onMove={onMove} pending={pendingCellId === item.cell.id} />,
       });
     }
     return list;
-  }, [matrixPath, onMove, pendingCellId, slotByCell]);
+  }, [matrixPath, onMove, pendingCellId, slotByCell, wide]);
 
   return (
     <DataTable

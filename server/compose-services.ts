@@ -17,6 +17,7 @@ import { RoundupEntriesService } from './services/roundup-entries.service';
 import { RoundupsService } from './services/roundups.service';
 import { SamplesService } from './services/samples.service';
 import { TestRunsService } from './services/test-runs.service';
+import { PhotosService } from './services/photos.service';
 import { UsersService } from './services/users.service';
 import { createFileStore } from './storage/create-file-store';
 
@@ -50,6 +51,7 @@ export function createServices(dataSource: DataSource, env: Env) {
   const logFileAnalyser: LogFileAnalyser = analyseInProcess;
   const logCheck = new LogCheckService(logFileAnalyser);
   const testRuns = new TestRunsService(dataSource, files, logFileAnalyser);
+  const photos = new PhotosService(dataSource, files);
 
   return {
     sessions,
@@ -71,6 +73,7 @@ export function createServices(dataSource: DataSource, env: Env) {
     logCheck,
     calendarFeeds,
     testRuns,
+    photos,
   };
 }
 

@@ -55,7 +55,7 @@ export const photoUploadLimit: UploadLimit = {
   maxFiles: 1,
   maxFields: 4,
   maxFieldBytes: 4 * 1024,
-  acceptedExtensions: ['.jpg', '.jpeg', '.png', '.webp', '.heic', '.heif', '.avif', '.tif', '.tiff'],
+  acceptedExtensions: ['.jpg', '.jpeg', '.png', '.webp'],
   whenTooLarge: 'Export the photo at a smaller size or higher compression.',
 };
 

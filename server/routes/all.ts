@@ -16,6 +16,7 @@ import { registerRoundupEntryRoutes } from './roundup-entries.routes';
 import { registerRoundupRoutes } from './roundups.routes';
 import { registerSampleRoutes } from './samples.routes';
 import { registerTestRunRoutes } from './test-runs.routes';
+import { registerPhotoRoutes } from './photos.routes';
 
 /** Every feature's routes. A new feature adds one line here. */
 export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
@@ -35,4 +36,5 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerMyBenchRoutes(api, context);
   registerCalendarFeedRoutes(api, context);
   registerTestRunRoutes(api, context);
+  registerPhotoRoutes(api, context);
 }

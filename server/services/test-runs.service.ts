@@ -158,6 +158,7 @@ export class TestRunsService {
           peakC: toNumber(analysis?.peakC ?? null),
           deltaOverAmbientC: toNumber(analysis?.deltaOverAmbientC ?? null),
           verdict: (analysis?.verdict as RoundupResults['cells'][number]['verdict']) ?? null,
+          verdictStatus: result?.verdict?.status ?? null,
           verdictLabel: result?.verdict?.label ?? null,
           throttled: result?.throttle?.detected === true || analysis?.verdict === 'throttled',
           flagCount: analysis?.flagCodes ? analysis.flagCodes.split(',').filter(Boolean).length : 0,
@@ -700,13 +701,17 @@ function analysisSummary(
   row: RunAnalysisEntity,
   people: Map<number, { id: number; displayName: string }>,
 ): RunAnalysisSummary {
-  const result = row.result as { flags?: QaFlag[]; verdict?: { label?: string; rule?: string } };
+  const result = row.result as {
+    flags?: QaFlag[];
+    verdict?: { label?: string; rule?: string; status?: RunAnalysisSummary['verdictStatus'] };
+  };
   return {
     id: row.id,
     engineVersion: row.engineVersion,
     createdAt: row.createdAt.toISOString(),
     createdBy: personOrNull(people, row.createdBy) ?? { id: row.createdBy, displayName: 'Former staff' },
     verdict: (row.verdict as RunAnalysisSummary['verdict']) ?? null,
+    verdictStatus: result.verdict?.status ?? null,
     verdictLabel: result.verdict?.label ?? null,
     verdictRule: result.verdict?.rule ?? null,
     peakC: toNumber(row.peakC),

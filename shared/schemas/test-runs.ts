@@ -5,6 +5,7 @@ import {
   columnMappingSchema,
   qaFlagSchema,
   verdictCodeSchema,
+  verdictStatusSchema,
   verdictRubricSchema,
 } from './analysis';
 import { decimalSchema, idSchema, optionalTextSchema, personRefSchema, requiredTextSchema } from './planning-fields';
@@ -78,6 +79,8 @@ export const runAnalysisSummarySchema = z.object({
   createdAt: instantSchema,
   createdBy: personRefSchema,
   verdict: verdictCodeSchema.nullable(),
+  /** Final, provisional (judged on the predicted steady state) or withheld (verdict null): never shown as final. */
+  verdictStatus: verdictStatusSchema.nullable(),
   verdictLabel: z.string().nullable(),
   verdictRule: z.string().nullable(),
   peakC: z.number().nullable(),
@@ -180,6 +183,7 @@ export const resultCellSchema = z.object({
   peakC: z.number().nullable(),
   deltaOverAmbientC: z.number().nullable(),
   verdict: verdictCodeSchema.nullable(),
+  verdictStatus: verdictStatusSchema.nullable(),
   verdictLabel: z.string().nullable(),
   throttled: z.boolean(),
   flagCount: z.number().int(),

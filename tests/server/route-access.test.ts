@@ -94,6 +94,12 @@ const allowed: Record<string, Caller[]> = {
   'POST /api/runs/:runId/run-of-record': ['editor'],
   'GET /api/roundups/:id/results': staff,
   'PUT /api/roundups/:id/rubric': ['editor'],
+  'GET /api/roundups/:id/entries/:entryId/photos': staff,
+  'POST /api/roundups/:id/entries/:entryId/photos': ['editor', 'tester'],
+  'PUT /api/roundups/:id/entries/:entryId/photo-order': ['editor', 'tester'],
+  'PATCH /api/photos/:photoId': ['editor', 'tester'],
+  'DELETE /api/photos/:photoId': ['editor', 'tester'],
+  'GET /api/photos/:photoId/files/:size': staff,
 };
 
 interface RouteLayer {

@@ -1,0 +1,71 @@
+import { z } from 'zod';
+import { instantSchema } from './common';
+import { idSchema, personRefSchema, requiredTextSchema } from './planning-fields';
+
+export const photoKinds = ['overview', 'power-delivery', 'heatsinks', 'thermal-image', 'other'] as const;
+export const photoKindSchema = z.enum(photoKinds, { error: 'Choose what the photo shows.' });
+export const photoKindLabels: Record<(typeof photoKinds)[number], string> = {
+  overview: 'Board overview',
+  'power-delivery': 'Power delivery close-up',
+  heatsinks: 'Heatsinks',
+  'thermal-image': 'Thermal image',
+  other: 'Other',
+};
+
+const captionSchema = z.string().trim().max(300, 'Use at most 300 characters.').default('');
+/** Alt text is required: it is what a screen reader says, and what shows when the image cannot load. */
+const altTextMessage = 'Describe the photo for people who cannot see it.';
+const altTextSchema = z.string({ error: altTextMessage }).pipe(requiredTextSchema(300, altTextMessage));
+
+/** The text fields sent beside the photo file. */
+export const photoUploadFieldsSchema = z.object({
+  kind: photoKindSchema,
+  caption: captionSchema,
+  altText: altTextSchema,
+});
+export type PhotoUploadFields = z.input<typeof photoUploadFieldsSchema>;
+
+export const updatePhotoRequestSchema = z.object({
+  kind: photoKindSchema.optional(),
+  caption: captionSchema.optional(),
+  altText: altTextSchema.optional(),
+});
+
+export const reorderPhotosRequestSchema = z.object({
+  photoIds: z.array(idSchema).min(1, 'List the photos in their new order.').max(200),
+});
+
+export const photoSizeSchema = z.object({
+  width: z.number().int(),
+  height: z.number().int(),
+  format: z.enum(['webp', 'jpeg']),
+  url: z.string(),
+});
+
+export const photoSchema = z.object({
+  id: z.number().int(),
+  roundupId: z.number().int(),
+  entryId: z.number().int(),
+  kind: photoKindSchema,
+  caption: z.string(),
+  altText: z.string(),
+  position: z.number().int(),
+  width: z.number().int(),
+  height: z.number().int(),
+  sizes: z.array(photoSizeSchema),
+  uploadedBy: personRefSchema,
+  createdAt: instantSchema,
+});
+export type Photo = z.infer<typeof photoSchema>;
+
+export const photoListSchema = z.object({ photos: z.array(photoSchema) });
+
+export const entryPhotosParamsSchema = z.object({
+  id: z.coerce.number().int().positive(),
+  entryId: z.coerce.number().int().positive(),
+});
+export const photoParamsSchema = z.object({ photoId: z.coerce.number().int().positive() });
+export const photoFileParamsSchema = z.object({
+  photoId: z.coerce.number().int().positive(),
+  size: z.string().regex(/^\d{1,4}\.(webp|jpeg)$/, 'Ask for a size such as 960.webp.'),
+});

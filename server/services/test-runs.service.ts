@@ -47,6 +47,7 @@ import type {
   VrmLoadFigures,
 } from '../../shared/schemas/test-runs';
 import type { z } from 'zod';
+import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 
 type LoggerRunInput = z.output<typeof loggerRunRequestSchema>;
 type ManualRunInput = z.output<typeof manualRunRequestSchema>;
@@ -97,7 +98,7 @@ export class TestRunsService {
     return {
       cellId,
       roundupId: cell.roundupId,
-      productName: `${product.maker} ${product.model}`,
+      productName: productDisplayName(product),
       loadConfigurationName: configuration.name,
       runOfRecordId: cell.runOfRecordId,
       runs: dtos,

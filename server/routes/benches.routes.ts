@@ -1,6 +1,6 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { benchWorkers, bookers, planEditors, planningReaders } from './planning-access';
+import { benchWorkers, bookers, planEditors, planningReaders } from '../../shared/access/roles';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
   benchListSchema,

@@ -2,7 +2,7 @@ import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
 import { AppError } from '../errors';
 import { formatCatalogCsv } from '../lib/catalog-csv';
-import { catalogEditors, planEditors, planningReaders } from './planning-access';
+import { catalogEditors, planEditors, planningReaders } from '../../shared/access/roles';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
   createPriceRequestSchema,

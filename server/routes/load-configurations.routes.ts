@@ -1,6 +1,6 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { planEditors, planningReaders } from './planning-access';
+import { planEditors, planningReaders } from '../../shared/access/roles';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
   createLoadConfigurationRequestSchema,

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { ApiRegistry } from '../api-registry';
+import { logCheckers } from '../../shared/access/roles';
 import type { AppContext } from '../app-context';
 import {
   analysisPreviewFailureSchema,
@@ -17,7 +18,7 @@ export function registerLogCheckRoutes(api: ApiRegistry, { services }: AppContex
   api.add({
     method: 'post',
     path: '/api/log-check/analyse',
-    access: ['tester', 'editor'],
+    access: logCheckers,
     tag: 'Log check',
     summary:
       'Analyse a logger file (CSV/TSV) without saving it: the parsed-column preview and the full analysis, or 422 log_parse_failed with the preview and the row-and-column parse errors in error.details.',

@@ -1,6 +1,6 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { bookers } from './planning-access';
+import { bookers } from '../../shared/access/roles';
 import { myBenchSchema } from '../../shared/schemas/benches';
 import { dashboardSchema } from '../../shared/schemas/dashboard';
 

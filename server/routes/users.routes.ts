@@ -1,4 +1,5 @@
 import type { ApiRegistry } from '../api-registry';
+import { accountManagers } from '../../shared/access/roles';
 import type { AppContext } from '../app-context';
 import { noStore } from '../middleware/no-store';
 import { idParamSchema } from '../../shared/schemas/common';
@@ -16,7 +17,7 @@ export function registerUserRoutes(api: ApiRegistry, { services }: AppContext) {
   api.add({
     method: 'get',
     path: '/api/users',
-    access: ['admin'],
+    access: accountManagers,
     tag: 'Users',
     summary: 'All staff accounts.',
     response: userListSchema,
@@ -26,7 +27,7 @@ export function registerUserRoutes(api: ApiRegistry, { services }: AppContext) {
   api.add({
     method: 'post',
     path: '/api/users',
-    access: ['admin'],
+    access: accountManagers,
     tag: 'Users',
     summary: 'Create a staff account.',
     body: createUserRequestSchema,
@@ -37,7 +38,7 @@ export function registerUserRoutes(api: ApiRegistry, { services }: AppContext) {
   api.add({
     method: 'patch',
     path: '/api/users/:id',
-    access: ['admin'],
+    access: accountManagers,
     tag: 'Users',
     summary: 'Edit, deactivate or reactivate an account, change its role or reset its password.',
     params: idParamSchema,

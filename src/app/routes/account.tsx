@@ -8,6 +8,7 @@ import { SessionsPanel } from '../../features/account/components/sessions-panel'
 import { calendarFeedQueryOptions } from '../../features/bench-booking/api/calendar-feed';
 import { CalendarFeedPanel } from '../../features/bench-booking/components/calendar-feed-panel';
 import { sessionQueryOptions } from '../../features/auth/api/get-session';
+import { bookers, may } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
   return async () => {
@@ -15,7 +16,7 @@ export function loader(queryClient: QueryClient) {
     await Promise.all([
       queryClient.ensureQueryData(sessionsQueryOptions()),
       // Bench testers have a private calendar of their bookings.
-      user?.role === 'tester' ? queryClient.ensureQueryData(calendarFeedQueryOptions()) : null,
+      user && may(user.role, bookers) ? queryClient.ensureQueryData(calendarFeedQueryOptions()) : null,
     ]);
     return null;
   };
@@ -31,7 +32,7 @@ export function Component() {
         <AccountDetails user={user} />
         <ChangePasswordForm email={user.email} />
         <SessionsPanel className="lg:col-span-2" />
-        {user.role === 'tester' && <CalendarFeedPanel className="lg:col-span-2" />}
+        {may(user.role, bookers) && <CalendarFeedPanel className="lg:col-span-2" />}
       </div>
     </>
   );

@@ -8,6 +8,7 @@ import { benchDetailQueryOptions, useBenchDetail } from '../../features/benches/
 import { BenchDetailView } from '../../features/benches/components/bench-detail-view';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
+import { benchWorkers, may, planEditors } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
   return async ({ params }: LoaderFunctionArgs) => {
@@ -51,8 +52,8 @@ function BenchPage() {
       <BenchCautions className="mb-5" />
       <BenchDetailView
         detail={detail}
-        canManage={user.role === 'editor'}
-        canLog={user.role === 'editor' || user.role === 'tester'}
+        canManage={may(user.role, planEditors)}
+        canLog={may(user.role, benchWorkers)}
         today={today}
       />
     </>

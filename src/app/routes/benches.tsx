@@ -14,10 +14,10 @@ import { bookableStates } from '../../../shared/domain/planning/matrix-cell-stat
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
 import type { Role } from '../../../shared/schemas/common';
+import { bookers, may, planEditors } from '../../../shared/access/roles';
 
-// Mirrors server/routes/planning-access.ts: editors manage benches, bench testers book them.
-const canManageBenches = (role: Role) => role === 'editor';
-const canBook = (role: Role) => role === 'tester';
+const canManageBenches = (role: Role) => may(role, planEditors);
+const canBook = (role: Role) => may(role, bookers);
 
 export function loader(queryClient: QueryClient) {
   return async ({ request }: LoaderFunctionArgs) => {

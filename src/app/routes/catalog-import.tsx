@@ -2,10 +2,10 @@ import type { QueryClient } from '@tanstack/react-query';
 import { paths } from '../../lib/paths';
 import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { CatalogImport } from '../../features/catalog/components/catalog-import';
-import { canEditCatalog } from '../../features/catalog/components/catalog-roles';
 import { ForbiddenState } from '../../components/ui/forbidden-state';
 import { roleLabels } from '../../../shared/schemas/common';
 import { RoleGate } from '../role-gate';
+import { catalogEditors, may } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
   return async () => {
@@ -25,6 +25,7 @@ export function Component() {
 function ImportPage() {
   const user = useSession();
   if (!user) return null;
-  if (!canEditCatalog(user.role)) return <ForbiddenState pageName="Catalog import" roleLabel={roleLabels[user.role]} />;
+  if (!may(user.role, catalogEditors))
+    return <ForbiddenState pageName="Catalog import" roleLabel={roleLabels[user.role]} />;
   return <CatalogImport />;
 }

@@ -3,7 +3,6 @@ import { useNavigate } from 'react-router';
 import { paths } from '../../lib/paths';
 import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { useCreateProduct } from '../../features/catalog/api/save-product';
-import { canEditCatalog } from '../../features/catalog/components/catalog-roles';
 import { ProductForm } from '../../features/catalog/components/product-form';
 import { emptyProductForm } from '../../features/catalog/components/product-form-values';
 import { PageHeader } from '../../components/ui/page-header';
@@ -11,6 +10,7 @@ import { ForbiddenState } from '../../components/ui/forbidden-state';
 import { roleLabels } from '../../../shared/schemas/common';
 import { RoleGate } from '../role-gate';
 import { productName } from '../../lib/product-name';
+import { catalogEditors, may } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
   return async () => {
@@ -32,7 +32,8 @@ function NewProductPage() {
   const createProduct = useCreateProduct();
   const navigate = useNavigate();
   if (!user) return null;
-  if (!canEditCatalog(user.role)) return <ForbiddenState pageName="New product" roleLabel={roleLabels[user.role]} />;
+  if (!may(user.role, catalogEditors))
+    return <ForbiddenState pageName="New product" roleLabel={roleLabels[user.role]} />;
   return (
     <>
       <PageHeader

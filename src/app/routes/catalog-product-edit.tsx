@@ -4,7 +4,6 @@ import { paths } from '../../lib/paths';
 import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { productQueryOptions, useProduct } from '../../features/catalog/api/get-product';
 import { useUpdateProduct } from '../../features/catalog/api/save-product';
-import { canEditCatalog } from '../../features/catalog/components/catalog-roles';
 import { ProductForm } from '../../features/catalog/components/product-form';
 import { productFormValuesFrom } from '../../features/catalog/components/product-form-values';
 import { productIdFrom } from '../../features/catalog/components/product-id';
@@ -14,6 +13,7 @@ import { roleLabels } from '../../../shared/schemas/common';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
 import { productName } from '../../lib/product-name';
+import { catalogEditors, may } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
   return async ({ params }: LoaderFunctionArgs) => {
@@ -36,7 +36,8 @@ function EditProductPage() {
   const user = useSession();
   const id = productIdFrom(useParams().productId);
   if (!user) return null;
-  if (!canEditCatalog(user.role)) return <ForbiddenState pageName="Edit product" roleLabel={roleLabels[user.role]} />;
+  if (!may(user.role, catalogEditors))
+    return <ForbiddenState pageName="Edit product" roleLabel={roleLabels[user.role]} />;
   return <EditProduct key={id} id={id} />;
 }
 

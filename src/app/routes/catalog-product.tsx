@@ -3,11 +3,11 @@ import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { paths } from '../../lib/paths';
 import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { productQueryOptions } from '../../features/catalog/api/get-product';
-import { canDeleteFromCatalog, canEditCatalog } from '../../features/catalog/components/catalog-roles';
 import { ProductDetailView } from '../../features/catalog/components/product-detail';
 import { productIdFrom } from '../../features/catalog/components/product-id';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
+import { catalogEditors, planEditors, may } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
   return async ({ params }: LoaderFunctionArgs) => {
@@ -35,8 +35,8 @@ function ProductPage() {
     <ProductDetailView
       key={id}
       productId={id}
-      canEdit={canEditCatalog(user.role)}
-      canDelete={canDeleteFromCatalog(user.role)}
+      canEdit={may(user.role, catalogEditors)}
+      canDelete={may(user.role, planEditors)}
     />
   );
 }

@@ -4,10 +4,10 @@ import { paths } from '../../lib/paths';
 import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { productsQueryOptions } from '../../features/catalog/api/get-products';
 import { CatalogBrowser } from '../../features/catalog/components/catalog-browser';
-import { canEditCatalog } from '../../features/catalog/components/catalog-roles';
 import { filtersFromSearchParams } from '../../features/catalog/components/catalog-search-params';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
+import { catalogEditors, may } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
   return async ({ request }: LoaderFunctionArgs) => {
@@ -31,5 +31,5 @@ export function Component() {
 function CatalogPage() {
   const user = useSession();
   if (!user) return null;
-  return <CatalogBrowser canEdit={canEditCatalog(user.role)} />;
+  return <CatalogBrowser canEdit={may(user.role, catalogEditors)} />;
 }

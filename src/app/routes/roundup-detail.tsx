@@ -17,6 +17,7 @@ import { MatrixGrid } from '../../features/matrix/components/matrix-grid';
 import { SamplesTable } from '../../features/samples/components/samples-table';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
+import { benchWorkers, may, planEditors } from '../../../shared/access/roles';
 
 function roundupIdFrom(value: string | undefined): number {
   const id = Number(value);
@@ -33,7 +34,7 @@ export function loader(queryClient: QueryClient) {
       queryClient.ensureQueryData(roundupQueryOptions(id)),
       queryClient.ensureQueryData(matrixQueryOptions(id)),
     ];
-    if (user.role === 'editor') {
+    if (may(user.role, planEditors)) {
       // Warm, not awaited: only the test-plan editor needs them.
       void queryClient.prefetchQuery(benchProfilesQueryOptions());
       void queryClient.prefetchQuery(loadConfigurationsQueryOptions());
@@ -64,7 +65,7 @@ function RoundupPage() {
 
   const requested = search.get('tab');
   const tab = tabIds.find((id) => id === requested) ?? 'products';
-  const isEditor = user.role === 'editor';
+  const isEditor = may(user.role, planEditors);
   const justCreated = (location.state as { created?: boolean } | null)?.created === true;
 
   return (
@@ -114,7 +115,7 @@ function RoundupPage() {
               <Suspense fallback={<LoadingState label="Loading samples…" />}>
                 <SamplesTable
                   roundupId={roundup.id}
-                  canEdit={user.role === 'editor' || user.role === 'tester'}
+                  canEdit={may(user.role, benchWorkers)}
                   defaultCurrency={roundup.priceBand.currency}
                 />
               </Suspense>

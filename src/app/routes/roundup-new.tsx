@@ -8,11 +8,12 @@ import { benchProfilesQueryOptions } from '../../features/roundups/api/get-bench
 import { loadConfigurationsQueryOptions } from '../../features/roundups/api/get-load-configurations';
 import { CreateRoundupForm } from '../../features/roundups/components/create-roundup-form';
 import { roleLabels } from '../../../shared/schemas/common';
+import { may, planEditors } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
   return async () => {
     const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (user?.role === 'editor') {
+    if (user && may(user.role, planEditors)) {
       await Promise.all([
         queryClient.ensureQueryData(benchProfilesQueryOptions()),
         queryClient.ensureQueryData(loadConfigurationsQueryOptions()),
@@ -27,7 +28,7 @@ export function Component() {
   const navigate = useNavigate();
   if (!user) return null;
   // Planning a roundup is an editor's job; the server refuses everyone else too.
-  if (user.role !== 'editor') return <ForbiddenState pageName="New roundup" roleLabel={roleLabels[user.role]} />;
+  if (!may(user.role, planEditors)) return <ForbiddenState pageName="New roundup" roleLabel={roleLabels[user.role]} />;
   return (
     <>
       <PageHeader

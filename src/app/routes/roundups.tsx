@@ -8,6 +8,7 @@ import { roundupsQueryOptions, useRoundups } from '../../features/roundups/api/g
 import { RoundupsTable } from '../../features/roundups/components/roundups-table';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
+import { may, planEditors } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
   return async () => {
@@ -29,7 +30,7 @@ function RoundupsPage() {
   const user = useSession();
   const roundups = useRoundups();
   const newRoundup =
-    user?.role === 'editor' ? (
+    user && may(user.role, planEditors) ? (
       <Link to={paths.newRoundup} className={buttonStyles('primary')}>
         New roundup
       </Link>

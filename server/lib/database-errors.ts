@@ -12,3 +12,13 @@ export function archivedWhere(archived: 'exclude' | 'include' | 'only') {
   if (archived === 'only') return { archivedAt: Not(IsNull()) };
   return {};
 }
+
+/** Runs a write that a unique index may refuse; that refusal becomes `taken()` (a 409 naming the field). */
+export async function refusingDuplicates<T>(write: () => Promise<T>, taken: () => Error): Promise<T> {
+  try {
+    return await write();
+  } catch (error) {
+    if (isDuplicateKey(error)) throw taken();
+    throw error;
+  }
+}

@@ -1,5 +1,7 @@
-import type { EntityManager } from 'typeorm';
+import { In, type EntityManager, type FindOptionsWhere } from 'typeorm';
+import { RoundupEntity } from '../entities/roundup.entity';
 import { recordAudit } from '../services/audit.service';
+import { planEditableStates } from '../../shared/domain/planning/roundup-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
 
 /**
@@ -15,4 +17,22 @@ export function recordPlanChange(
   details: Record<string, unknown>,
 ): Promise<void> {
   return recordAudit(manager, { actorId: actor.id, action, subjectType: 'roundup', subjectId: roundupId, details });
+}
+
+/**
+ * Records a change to something roundups share (a bench profile, a load configuration) in the history of every
+ * roundup that uses it and is still in planning or on the bench: their plans changed with it.
+ */
+export async function recordSharedPlanChange(
+  manager: EntityManager,
+  actor: CurrentUser,
+  usedBy: FindOptionsWhere<RoundupEntity>,
+  action: string,
+  details: Record<string, unknown>,
+): Promise<void> {
+  const affected = await manager.getRepository(RoundupEntity).find({
+    where: { ...usedBy, state: In([...planEditableStates]) },
+    select: { id: true },
+  });
+  for (const roundup of affected) await recordPlanChange(manager, actor, roundup.id, action, details);
 }

@@ -1,13 +1,12 @@
-import { In, type DataSource, type EntityManager } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { BenchProfileEntity } from '../entities/bench-profile.entity';
-import { RoundupEntity } from '../entities/roundup.entity';
 import { conflict, notFound } from '../errors';
 import { recordAudit } from './audit.service';
-import { archivedWhere, isDuplicateKey } from '../lib/database-errors';
+import { archivedWhere, refusingDuplicates } from '../lib/database-errors';
+import { fieldChanges } from '../lib/field-changes';
 import { benchProfileRoundupCounts, toBenchProfileDto } from '../mappers/bench-profile';
-import { recordPlanChange } from '../lib/roundup-audit';
-import { planEditableStates } from '../../shared/domain/planning/roundup-states';
+import { recordSharedPlanChange } from '../lib/roundup-audit';
 import type {
   BenchProfile,
   benchProfileListQuerySchema,
@@ -59,82 +58,70 @@ export class BenchProfilesService {
     return toBenchProfileDto(profile, (await benchProfileRoundupCounts(manager, [id])).get(id) ?? 0);
   }
 
-  async create(actor: CurrentUser, input: CreateInput): Promise<BenchProfile> {
-    try {
-      return await this.dataSource.transaction(async (manager) => {
-        const { identifiers } = await manager.getRepository(BenchProfileEntity).insert({
-          ...input,
-          roomTempTargetC: input.roomTempTargetC.toFixed(1),
-          roomTempToleranceC: input.roomTempToleranceC.toFixed(1),
-          createdBy: actor.id,
-        });
-        const id = Number(identifiers[0].id);
-        await recordAudit(manager, {
-          actorId: actor.id,
-          action: 'bench_profile.created',
-          subjectType: 'bench_profile',
-          subjectId: id,
-          details: { name: input.name },
-        });
-        return this.get(id, manager);
-      });
-    } catch (error) {
-      if (isDuplicateKey(error)) throw nameTaken();
-      throw error;
-    }
+  create(actor: CurrentUser, input: CreateInput): Promise<BenchProfile> {
+    return refusingDuplicates(
+      () =>
+        this.dataSource.transaction(async (manager) => {
+          const { identifiers } = await manager.getRepository(BenchProfileEntity).insert({
+            ...input,
+            roomTempTargetC: input.roomTempTargetC.toFixed(1),
+            roomTempToleranceC: input.roomTempToleranceC.toFixed(1),
+            createdBy: actor.id,
+          });
+          const id = Number(identifiers[0].id);
+          await recordAudit(manager, {
+            actorId: actor.id,
+            action: 'bench_profile.created',
+            subjectType: 'bench_profile',
+            subjectId: id,
+            details: { name: input.name },
+          });
+          return this.get(id, manager);
+        }),
+      nameTaken,
+    );
   }
 
   /**
    * Edits a profile. The profile is part of the plan of every roundup that uses it, so each such roundup still
    * in planning or on the bench gets a history entry too.
    */
-  async update(actor: CurrentUser, id: number, input: UpdateInput): Promise<BenchProfile> {
-    try {
-      return await this.dataSource.transaction(async (manager) => {
-        const repo = manager.getRepository(BenchProfileEntity);
-        const profile = await repo.findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
-        if (!profile) throw notFound('That bench profile');
-        const before = toBenchProfileDto(profile, 0);
-        const changes: Record<string, { from: unknown; to: unknown }> = {};
-        for (const key of fieldNames) {
-          const value = input[key];
-          if (value !== undefined && value !== before[key]) changes[key] = { from: before[key], to: value };
-        }
-        const patch: Partial<BenchProfileEntity> = {};
-        for (const key of Object.keys(changes) as (typeof fieldNames)[number][]) {
-          const value = input[key];
-          (patch as Record<string, unknown>)[key] =
-            key === 'roomTempTargetC' || key === 'roomTempToleranceC' ? (value as number).toFixed(1) : value;
-        }
-        if (input.archived !== undefined && input.archived !== before.archived) {
-          patch.archivedAt = input.archived ? new Date() : null;
-          changes.archived = { from: before.archived, to: input.archived };
-        }
-        if (Object.keys(patch).length > 0) {
-          await repo.update({ id }, patch);
-          await recordAudit(manager, {
-            actorId: actor.id,
-            action: 'bench_profile.updated',
-            subjectType: 'bench_profile',
-            subjectId: id,
-            details: changes,
-          });
-          const affected = await manager.getRepository(RoundupEntity).find({
-            where: { benchProfileId: id, state: In([...planEditableStates]) },
-            select: { id: true },
-          });
-          for (const roundup of affected) {
-            await recordPlanChange(manager, actor, roundup.id, 'roundup.bench_profile_edited', {
+  update(actor: CurrentUser, id: number, input: UpdateInput): Promise<BenchProfile> {
+    return refusingDuplicates(
+      () =>
+        this.dataSource.transaction(async (manager) => {
+          const repo = manager.getRepository(BenchProfileEntity);
+          const profile = await repo.findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+          if (!profile) throw notFound('That bench profile');
+          const before = toBenchProfileDto(profile, 0);
+          const changes = fieldChanges(before, input, fieldNames);
+          const patch: Partial<BenchProfileEntity> = {};
+          for (const key of Object.keys(changes) as (typeof fieldNames)[number][]) {
+            const value = input[key];
+            (patch as Record<string, unknown>)[key] =
+              key === 'roomTempTargetC' || key === 'roomTempToleranceC' ? (value as number).toFixed(1) : value;
+          }
+          if (input.archived !== undefined && input.archived !== before.archived) {
+            patch.archivedAt = input.archived ? new Date() : null;
+            changes.archived = { from: before.archived, to: input.archived };
+          }
+          if (Object.keys(patch).length > 0) {
+            await repo.update({ id }, patch);
+            await recordAudit(manager, {
+              actorId: actor.id,
+              action: 'bench_profile.updated',
+              subjectType: 'bench_profile',
+              subjectId: id,
+              details: changes,
+            });
+            await recordSharedPlanChange(manager, actor, { benchProfileId: id }, 'roundup.bench_profile_edited', {
               benchProfileId: id,
               changes,
             });
           }
-        }
-        return this.get(id, manager);
-      });
-    } catch (error) {
-      if (isDuplicateKey(error)) throw nameTaken();
-      throw error;
-    }
+          return this.get(id, manager);
+        }),
+      nameTaken,
+    );
   }
 }

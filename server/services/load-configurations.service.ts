@@ -2,13 +2,12 @@ import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { LoadConfigurationEntity } from '../entities/load-configuration.entity';
 import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configuration.entity';
-import { RoundupEntity } from '../entities/roundup.entity';
 import { conflict, invalid, notFound } from '../errors';
 import { recordAudit } from './audit.service';
-import { archivedWhere, isDuplicateKey } from '../lib/database-errors';
+import { archivedWhere, refusingDuplicates } from '../lib/database-errors';
+import { fieldChanges } from '../lib/field-changes';
 import { loadConfigurationRoundupCounts, toLoadConfigurationDto } from '../mappers/load-configuration';
-import { recordPlanChange } from '../lib/roundup-audit';
-import { planEditableStates } from '../../shared/domain/planning/roundup-states';
+import { recordSharedPlanChange } from '../lib/roundup-audit';
 import type {
   createLoadConfigurationRequestSchema,
   LoadConfiguration,
@@ -69,86 +68,78 @@ export class LoadConfigurationsService {
     return toLoadConfigurationDto(config, (await loadConfigurationRoundupCounts(manager, [id])).get(id) ?? 0);
   }
 
-  async create(actor: CurrentUser, input: CreateInput): Promise<LoadConfiguration> {
-    try {
-      return await this.dataSource.transaction(async (manager) => {
-        const { identifiers } = await manager.getRepository(LoadConfigurationEntity).insert({
-          ...toColumns(input),
-          fixedClockMhz: input.settingsMode === 'fixed' ? input.fixedClockMhz : null,
-          createdBy: actor.id,
-        });
-        const id = Number(identifiers[0].id);
-        await recordAudit(manager, {
-          actorId: actor.id,
-          action: 'load_configuration.created',
-          subjectType: 'load_configuration',
-          subjectId: id,
-          details: { name: input.name },
-        });
-        return this.get(id, manager);
-      });
-    } catch (error) {
-      if (isDuplicateKey(error)) throw nameTaken();
-      throw error;
-    }
+  create(actor: CurrentUser, input: CreateInput): Promise<LoadConfiguration> {
+    return refusingDuplicates(
+      () =>
+        this.dataSource.transaction(async (manager) => {
+          const { identifiers } = await manager.getRepository(LoadConfigurationEntity).insert({
+            ...toColumns(input),
+            fixedClockMhz: input.settingsMode === 'fixed' ? input.fixedClockMhz : null,
+            createdBy: actor.id,
+          });
+          const id = Number(identifiers[0].id);
+          await recordAudit(manager, {
+            actorId: actor.id,
+            action: 'load_configuration.created',
+            subjectType: 'load_configuration',
+            subjectId: id,
+            details: { name: input.name },
+          });
+          return this.get(id, manager);
+        }),
+      nameTaken,
+    );
   }
 
   /** Edits a configuration; roundups in planning or on the bench that use it get a history entry too. */
-  async update(actor: CurrentUser, id: number, input: UpdateInput): Promise<LoadConfiguration> {
-    try {
-      return await this.dataSource.transaction(async (manager) => {
-        const repo = manager.getRepository(LoadConfigurationEntity);
-        const config = await repo.findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
-        if (!config) throw notFound('That load configuration');
-        const before = toLoadConfigurationDto(config, 0);
-        const merged = { ...before, ...Object.fromEntries(Object.entries(input).filter(([, v]) => v !== undefined)) };
-        if (merged.settingsMode === 'fixed' && !merged.fixedClockMhz) {
-          throw invalid('A fixed configuration needs its clock in MHz.', {
-            fixedClockMhz: 'A fixed configuration needs its clock in MHz.',
-          });
-        }
-        if (merged.settingsMode === 'stock') merged.fixedClockMhz = null;
-        const changes: Record<string, { from: unknown; to: unknown }> = {};
-        for (const key of fieldNames) {
-          if (merged[key] !== before[key]) changes[key] = { from: before[key], to: merged[key] };
-        }
-        const patch = toColumns(
-          Object.fromEntries(
-            Object.keys(changes).map((k) => [k, merged[k as keyof typeof merged]]),
-          ) as Partial<CreateInput>,
-        );
-        if (input.archived !== undefined && input.archived !== before.archived) {
-          patch.archivedAt = input.archived ? new Date() : null;
-          changes.archived = { from: before.archived, to: input.archived };
-        }
-        if (Object.keys(patch).length > 0) {
-          await repo.update({ id }, patch);
-          await recordAudit(manager, {
-            actorId: actor.id,
-            action: 'load_configuration.updated',
-            subjectType: 'load_configuration',
-            subjectId: id,
-            details: changes,
-          });
-          const links = await manager.getRepository(RoundupLoadConfigurationEntity).findBy({ loadConfigurationId: id });
-          const affected = links.length
-            ? await manager.getRepository(RoundupEntity).find({
-                where: { id: In(links.map((l) => l.roundupId)), state: In([...planEditableStates]) },
-                select: { id: true },
-              })
-            : [];
-          for (const roundup of affected) {
-            await recordPlanChange(manager, actor, roundup.id, 'roundup.load_configuration_edited', {
-              loadConfigurationId: id,
-              changes,
+  update(actor: CurrentUser, id: number, input: UpdateInput): Promise<LoadConfiguration> {
+    return refusingDuplicates(
+      () =>
+        this.dataSource.transaction(async (manager) => {
+          const repo = manager.getRepository(LoadConfigurationEntity);
+          const config = await repo.findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+          if (!config) throw notFound('That load configuration');
+          const before = toLoadConfigurationDto(config, 0);
+          const merged = { ...before, ...Object.fromEntries(Object.entries(input).filter(([, v]) => v !== undefined)) };
+          if (merged.settingsMode === 'fixed' && !merged.fixedClockMhz) {
+            throw invalid('A fixed configuration needs its clock in MHz.', {
+              fixedClockMhz: 'A fixed configuration needs its clock in MHz.',
             });
           }
-        }
-        return this.get(id, manager);
-      });
-    } catch (error) {
-      if (isDuplicateKey(error)) throw nameTaken();
-      throw error;
-    }
+          if (merged.settingsMode === 'stock') merged.fixedClockMhz = null;
+          const changes = fieldChanges(before, merged, fieldNames);
+          const patch = toColumns(
+            Object.fromEntries(
+              Object.keys(changes).map((k) => [k, merged[k as keyof typeof merged]]),
+            ) as Partial<CreateInput>,
+          );
+          if (input.archived !== undefined && input.archived !== before.archived) {
+            patch.archivedAt = input.archived ? new Date() : null;
+            changes.archived = { from: before.archived, to: input.archived };
+          }
+          if (Object.keys(patch).length > 0) {
+            await repo.update({ id }, patch);
+            await recordAudit(manager, {
+              actorId: actor.id,
+              action: 'load_configuration.updated',
+              subjectType: 'load_configuration',
+              subjectId: id,
+              details: changes,
+            });
+            const links = await manager
+              .getRepository(RoundupLoadConfigurationEntity)
+              .findBy({ loadConfigurationId: id });
+            if (links.length > 0) {
+              const usedBy = { id: In(links.map((l) => l.roundupId)) };
+              await recordSharedPlanChange(manager, actor, usedBy, 'roundup.load_configuration_edited', {
+                loadConfigurationId: id,
+                changes,
+              });
+            }
+          }
+          return this.get(id, manager);
+        }),
+      nameTaken,
+    );
   }
 }

@@ -1,6 +1,6 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { benchWorkers, planningReaders } from './planning-access';
+import { benchWorkers, planningReaders } from '../../shared/access/roles';
 import {
   entryPhotosParamsSchema,
   photoFileParamsSchema,

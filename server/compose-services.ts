@@ -10,7 +10,7 @@ import { CatalogImportService } from './services/catalog-import.service';
 import { CatalogService } from './services/catalog.service';
 import { DashboardService } from './services/dashboard.service';
 import { LoadConfigurationsService } from './services/load-configurations.service';
-import { analyseInProcess, LogCheckService, type LogFileAnalyser } from './services/log-check.service';
+import { LogCheckService, pooledAnalyser } from './services/log-check.service';
 import { MatrixService } from './services/matrix.service';
 import { MyBenchService } from './services/my-bench.service';
 import { RoundupEntriesService } from './services/roundup-entries.service';
@@ -47,8 +47,9 @@ export function createServices(dataSource: DataSource, env: Env) {
   const myBench = new MyBenchService(dataSource, benches);
   const dashboard = new DashboardService(dataSource, myBench);
   const calendarFeeds = new CalendarFeedService(dataSource, benches);
-  // One analyser for every logger file the server reads: log check and test runs alike.
-  const logFileAnalyser: LogFileAnalyser = analyseInProcess;
+  // One analyser for every logger file the server reads, log check and test runs alike: worker threads, so no file
+  // holds the event loop.
+  const logFileAnalyser = pooledAnalyser();
   const logCheck = new LogCheckService(logFileAnalyser);
   const testRuns = new TestRunsService(dataSource, files, logFileAnalyser);
   const photos = new PhotosService(dataSource, files);
@@ -70,6 +71,7 @@ export function createServices(dataSource: DataSource, env: Env) {
     benches,
     myBench,
     dashboard,
+    logFileAnalyser,
     logCheck,
     calendarFeeds,
     testRuns,

@@ -31,6 +31,7 @@ async function shutdown() {
   closing = true;
   server.close();
   server.closeIdleConnections();
+  await services.logFileAnalyser.close().catch(() => {});
   await dataSource.destroy().catch(() => {});
   process.exit(0);
 }

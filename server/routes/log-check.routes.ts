@@ -29,6 +29,13 @@ export function registerLogCheckRoutes(api: ApiRegistry, { services }: AppContex
       422: { description: 'The file could not be read (log_parse_failed)', details: analysisPreviewFailureSchema },
     },
     successStatus: 200,
-    handler: ({ req, body }) => logCheck.analyse(req.file, body.request),
+    handler: ({ req, res, body }) => {
+      // A tester who cancels the upload or closes the page stops the analysis too.
+      const gone = new AbortController();
+      res.on('close', () => {
+        if (!res.writableFinished) gone.abort();
+      });
+      return logCheck.analyse(req.file, body.request, gone.signal);
+    },
   });
 }

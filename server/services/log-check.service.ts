@@ -1,7 +1,9 @@
 import { AppError } from '../errors';
+import { lazyWorkerPool, type LazyWorkerPool } from '../lib/worker-pool';
+import type { AnalyseLogTask } from '../workers/analyse-log';
 import type { AnalysisPreviewResponse, AnalysisRequestInput } from '../../shared/schemas/analysis';
 import { analyseLogFile, type AnalyseLogFileOutcome } from '../../shared/domain/analysis/analyse-log';
-import { logFileUploadLimit } from '../../shared/upload-limits';
+import { logAnalysisLimits, logFileUploadLimit } from '../../shared/upload-limits';
 
 /** An uploaded logger file as the upload middleware hands it over. */
 export interface LogFileUpload {
@@ -9,24 +11,92 @@ export interface LogFileUpload {
   buffer: Uint8Array;
 }
 
-/** Runs the analysis pipeline on a file's bytes (in a worker pool on the server, in the process in the lab CLI). */
-export type LogFileAnalyser = (bytes: Uint8Array, request: AnalysisRequestInput) => Promise<AnalyseLogFileOutcome>;
+/**
+ * Runs the analysis pipeline on a file's bytes: in the server's worker pool (pooledAnalyser), or in this process
+ * where nothing else waits (the lab CLI, tests of the pipeline's answers). `signal`: the caller went away.
+ */
+export type LogFileAnalyser = (
+  bytes: Uint8Array,
+  request: AnalysisRequestInput,
+  signal?: AbortSignal,
+) => Promise<AnalyseLogFileOutcome>;
 
-/** The pipeline in this process (the lab CLI; the server until it hands the work to its worker pool). */
+/** The pipeline in this process. */
 export const analyseInProcess: LogFileAnalyser = async (bytes, request) => analyseLogFile(bytes, request);
+
+/** An analyser with worker threads behind it, to be closed when the server stops. */
+export interface PooledLogFileAnalyser extends LogFileAnalyser {
+  close(): Promise<void>;
+}
+
+const seconds = (ms: number) => `${Math.round(ms / 1000)} s`;
+
+/**
+ * The pipeline in worker threads (server/workers/analyse-log.ts), so a large or awkward file never holds the event
+ * loop: other requests are answered while it is read. A task past the time budget has its thread ended and answers
+ * 422 analysis_too_long; a full queue answers 503 analysis_busy; a thread out of memory 422 analysis_too_large.
+ */
+export function pooledAnalyser({
+  timeBudgetMs = logAnalysisLimits.timeBudgetMs,
+  maxQueue = 8,
+  maxHeapMb = 768,
+  pool = lazyWorkerPool('analyse-log', { maxQueue, maxHeapMb, idleTimeoutMs: 60_000 }),
+}: {
+  timeBudgetMs?: number;
+  maxQueue?: number;
+  maxHeapMb?: number;
+  pool?: LazyWorkerPool;
+} = {}): PooledLogFileAnalyser {
+  const analyse: LogFileAnalyser = async (bytes, request, signal) => {
+    const budget = AbortSignal.timeout(timeBudgetMs);
+    try {
+      const task: AnalyseLogTask = { bytes, request };
+      return await pool.run<AnalyseLogFileOutcome>(task, signal ? AbortSignal.any([budget, signal]) : budget);
+    } catch (error) {
+      if (budget.aborted) {
+        throw new AppError(
+          'analysis_too_long',
+          422,
+          `The analysis was stopped after ${seconds(timeBudgetMs)}, the most one file may take. Export fewer channels, log at a lower rate, or split the log into parts.`,
+        );
+      }
+      if ((error as Error)?.message === 'Task queue is at limit') {
+        throw new AppError(
+          'analysis_busy',
+          503,
+          'Benchwire is analysing other files right now. Try again in a minute.',
+        );
+      }
+      if ((error as { code?: string })?.code === 'ERR_WORKER_OUT_OF_MEMORY') {
+        throw new AppError(
+          'analysis_too_large',
+          422,
+          'The file needs more memory to analyse than one analysis may use. Export fewer channels, log at a lower rate, or split the log into parts.',
+        );
+      }
+      throw error;
+    }
+  };
+  return Object.assign(analyse, { close: () => pool.close() });
+}
 
 const extensionList = logFileUploadLimit.acceptedExtensions.join(', ');
 
 /**
  * Log check: a tester's logger file, read and analysed without saving anything. The file type is checked here; the
- * reading, mapping and analysis are the one pipeline in shared/domain/analysis/analyse-log.
+ * reading, mapping and analysis are the one pipeline in shared/domain/analysis/analyse-log, run by the analyser.
  */
 export class LogCheckService {
   constructor(private readonly analyser: LogFileAnalyser = analyseInProcess) {}
 
-  async analyse(file: LogFileUpload | undefined, request: AnalysisRequestInput): Promise<AnalysisPreviewResponse> {
+  /** `signal`: the caller went away; the work stops. */
+  async analyse(
+    file: LogFileUpload | undefined,
+    request: AnalysisRequestInput,
+    signal?: AbortSignal,
+  ): Promise<AnalysisPreviewResponse> {
     const upload = checkLogFileUpload(file);
-    return analysedOrThrow(await this.analyser(upload.buffer, request));
+    return analysedOrThrow(await this.analyser(upload.buffer, request, signal));
   }
 }
 

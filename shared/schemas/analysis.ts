@@ -181,6 +181,10 @@ export const parseErrorCodes = [
   'mapping-incomplete',
   'cold-junction-missing',
   'too-many-errors',
+  /** Refused before reading (shared/upload-limits logAnalysisLimits): a file of this shape would hold a worker long. */
+  'line-too-long',
+  'too-many-columns',
+  'too-many-cells',
 ] as const;
 export const parseErrorCodeSchema = z.enum(parseErrorCodes);
 export type ParseErrorCode = z.infer<typeof parseErrorCodeSchema>;

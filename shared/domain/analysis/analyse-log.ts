@@ -9,6 +9,7 @@ import {
 } from '../../schemas/analysis';
 import { guessColumnMapping, guessColumnRole, unitFromColumnName } from './log-column-guess';
 import { detectTimeFormat } from './log-time-value';
+import { lineTooLong, tableTooLarge, type LogShapeLimits } from './log-shape-limits';
 import { loggerFileText } from './logger-file-text';
 import { isBlankRow, parseLoggerTable, type LoggerTable } from './logger-table';
 import { readMappedLog, type MappedLog } from './read-mapped-log';
@@ -41,6 +42,8 @@ export interface AnalyseLogHooks {
    * CLI). Without it: the request's mapping, or the guessed one when the request has none.
    */
   chooseMapping?: (preview: LogPreview) => ChosenMapping;
+  /** Shape limits other than shared/upload-limits' (tests). */
+  limits?: LogShapeLimits;
 }
 
 function previewRows(table: LoggerTable): string[][] {
@@ -75,11 +78,19 @@ function buildPreview(table: LoggerTable): LogPreview {
   };
 }
 
-/** First step of an upload: how Benchwire reads the file (delimiter, header, columns, guessed roles), no analysis. */
-export function previewLog(text: string): LogPreviewOutcome {
+/**
+ * First step of an upload: how Benchwire reads the file (delimiter, header, columns, guessed roles), no analysis.
+ * A file over the shape limits (line length, columns, cells) is refused here, before the heavy work.
+ */
+export function previewLog(text: string, limits?: LogShapeLimits): LogPreviewOutcome {
+  const longLine = lineTooLong(text, limits);
+  if (longLine) return { ok: false, preview: null, errors: [longLine] };
   const parsed = parseLoggerTable(text);
   if (!parsed.ok) return { ok: false, preview: null, errors: parsed.errors };
-  return { ok: true, preview: buildPreview(parsed.table), table: parsed.table };
+  const { table } = parsed;
+  const tooLarge = tableTooLarge(table.headerRow, table.columns.length, table.lineCount, limits);
+  if (tooLarge) return { ok: false, preview: null, errors: [tooLarge] };
+  return { ok: true, preview: buildPreview(table), table };
 }
 
 export type ReadOutcome =
@@ -90,8 +101,13 @@ export type ReadOutcome =
  * Reads the file and the mapped columns. Kept apart from the analysis so that the raw table (every cell as a string)
  * is out of reach once the columns are read, and the collector can drop it while the analysis runs.
  */
-function readLog(text: string, choose: (preview: LogPreview) => ChosenMapping, options: AnalysisOptions): ReadOutcome {
-  const previewed = previewLog(text);
+function readLog(
+  text: string,
+  choose: (preview: LogPreview) => ChosenMapping,
+  options: AnalysisOptions,
+  limits: LogShapeLimits | undefined,
+): ReadOutcome {
+  const previewed = previewLog(text, limits);
   if (!previewed.ok) return previewed;
   const { preview, table } = previewed;
   const { mapping: chosen, guessed } = choose(preview);
@@ -132,7 +148,7 @@ export function analyseLog(
 ): AnalyseLogOutcome {
   const request = analysisRequestSchema.parse(requestInput);
   const choose = hooks.chooseMapping ?? requestedMapping(request.mapping);
-  const read = readLog(text, choose, request.options);
+  const read = readLog(text, choose, request.options, hooks.limits);
   if (!read.ok) return read;
   const analysis = analyseRun(read.log, request.options, { mappingGuessed: read.guessed });
   return { ok: true, preview: read.preview, analysis, mapping: read.mapping };
@@ -160,5 +176,5 @@ export function readLogFile(
   const text = loggerFileText(bytes);
   if (text === null) return { ok: false, notText: true };
   const request = analysisRequestSchema.parse(requestInput);
-  return readLog(text, requestedMapping(request.mapping), request.options);
+  return readLog(text, requestedMapping(request.mapping), request.options, undefined);
 }

@@ -4,6 +4,8 @@
 import { createConnection } from 'mysql2/promise';
 import { connectionOptions, createDataSource, initializeDataSource } from './data-source';
 import { seedDemoOnce } from './seed/demo-seed';
+import { createFileStore } from './storage/create-file-store';
+import { loadEnv } from './env';
 import { demoAccounts } from './seed/demo-staff';
 
 /** A problem with the database's configuration that the operator can fix; said in one sentence, no stack. */
@@ -57,7 +59,7 @@ export async function setUpDatabase(url: string | undefined, options: DatabaseSe
     if (applied.length)
       console.log(`[setup] applied ${applied.length} migration(s): ${applied.map((m) => m.name).join(', ')}`);
     if (options.seed) {
-      const seeded = await seedDemoOnce(dataSource);
+      const seeded = await seedDemoOnce(dataSource, createFileStore(loadEnv({ ...process.env, DATABASE_URL: url })));
       if (seeded) console.log('[setup] seeded the demo outlet (The Soak Sheet)');
       if (!options.quiet) {
         console.log('\nDemo accounts (invented outlet "The Soak Sheet"):');

@@ -2,13 +2,17 @@ import type { DataSource } from 'typeorm';
 import { UserEntity } from '../entities/user.entity';
 import { seedPlanning } from './demo-planning';
 import { seedStaff } from './demo-staff';
+import { seedDemoRuns } from './demo-runs';
+import type { FileStore } from '../storage/file-store';
 
 /** Seeds the invented demo outlet once: only into a database that has no users yet. Returns whether it ran. */
-export async function seedDemoOnce(dataSource: DataSource): Promise<boolean> {
+export async function seedDemoOnce(dataSource: DataSource, files: FileStore): Promise<boolean> {
   if ((await dataSource.getRepository(UserEntity).count()) > 0) return false;
   await dataSource.transaction(async (manager) => {
     const staff = await seedStaff(manager);
     await seedPlanning(manager, { editor: staff.editor, tester: staff.tester, secondTester: staff.secondTester });
   });
+  // Runs go through the test-run service (its own transactions, the file store), after the plan they hang on.
+  await seedDemoRuns(dataSource, files);
   return true;
 }

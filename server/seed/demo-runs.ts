@@ -131,6 +131,8 @@ export async function seedDemoRuns(dataSource: DataSource, files: FileStore, now
     const plan = specialRuns[key] ?? [
       { firmware: '1.04', review: cell.state === 'accepted' ? { decision: 'accept' } : undefined },
     ];
+    // The plan seeded the cell's final state; runs are added while it is open, then the state is put back.
+    await dataSource.getRepository(MatrixCellEntity).update({ id: cell.id }, { state: 'running' });
     for (const [runIndex, demo] of plan.entries()) {
       // A past booking on the first bench, two hours long, days apart for each cell.
       const startsAt = new Date(now.getTime() - (40 - index) * DAY_MS - (runIndex + 1) * 3 * HOUR_MS);
@@ -180,6 +182,7 @@ export async function seedDemoRuns(dataSource: DataSource, files: FileStore, now
         await runs.markRunOfRecord(actorOf(editor), runId);
       }
     }
+    await dataSource.getRepository(MatrixCellEntity).update({ id: cell.id }, { state: cell.state, note: cell.note });
   }
   return made;
 }

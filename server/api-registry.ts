@@ -1,5 +1,5 @@
 import express, { type Request, type Response, type RequestHandler } from 'express';
-import type { z } from 'zod';
+import { z } from 'zod';
 import type { Session } from 'lucia';
 import type { CurrentUser } from '../shared/schemas/auth';
 import type { Role } from '../shared/schemas/common';
@@ -66,21 +66,83 @@ export interface RegisteredRoute {
   successStatus: number;
 }
 
+/** The first message per field path; each unknown key is a field of its own, so the reply names it. */
 function fieldErrors(error: z.ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {
+    if (issue.code === 'unrecognized_keys') {
+      for (const key of issue.keys) {
+        fields[[...issue.path, key].join('.')] ??= `Unknown field “${key}”: remove it or check its spelling.`;
+      }
+      continue;
+    }
     const key = issue.path.join('.') || '_';
     fields[key] ??= issue.message;
   }
   return fields;
 }
 
+function unknownKeys(error: z.ZodError): string[] {
+  return error.issues.flatMap((issue) =>
+    issue.code === 'unrecognized_keys' ? issue.keys.map((key) => [...issue.path, key].join('.')) : [],
+  );
+}
+
 export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, where: string): z.output<S> {
   const parsed = schema.safeParse(value);
   if (!parsed.success) {
-    throw new AppError('validation_failed', 400, `Some ${where} values are not valid.`, fieldErrors(parsed.error));
+    const unknown = unknownKeys(parsed.error);
+    const message =
+      unknown.length > 0
+        ? `Unknown ${where} field${unknown.length === 1 ? '' : 's'}: ${unknown.join(', ')}.`
+        : `Some ${where} values are not valid.`;
+    throw new AppError('validation_failed', 400, message, fieldErrors(parsed.error));
   }
   return parsed.data;
+}
+
+/** Path ids are plain decimal integers: no sign, spaces, hex, exponent or decimal point. */
+const plainDecimal = /^[0-9]{1,15}$/;
+
+/** Names of the path parameters the route's params schema reads as numbers. */
+function numericPathParams(params: z.ZodType | undefined): string[] {
+  if (!params) return [];
+  const schema = z.toJSONSchema(params, { io: 'input', unrepresentable: 'any' }) as {
+    properties?: Record<string, { type?: string }>;
+  };
+  return Object.entries(schema.properties ?? {})
+    .filter(([, property]) => property.type === 'integer' || property.type === 'number')
+    .map(([name]) => name);
+}
+
+function checkPathIds(names: string[], params: Record<string, string>) {
+  const fields: Record<string, string> = {};
+  for (const name of names) {
+    const value = params[name];
+    if (value !== undefined && !plainDecimal.test(value)) fields[name] = 'Use a plain whole number, e.g. 42.';
+  }
+  if (Object.keys(fields).length > 0) {
+    throw new AppError('validation_failed', 400, 'Some path values are not valid.', fields);
+  }
+}
+
+/** True when the request carries a body (a length above zero, or a chunked one). */
+function hasBody(req: Request): boolean {
+  const length = req.headers['content-length'];
+  return (length !== undefined && length !== '0') || req.headers['transfer-encoding'] !== undefined;
+}
+
+/** A JSON route takes application/json (and multipart/form-data when it declares file fields); else 415. */
+function checkContentType(req: Request, multipart: boolean) {
+  if (!hasBody(req)) return;
+  const accepted = multipart ? ['application/json', 'multipart/form-data'] : ['application/json'];
+  if (req.is(accepted)) return;
+  const sent = req.headers['content-type'] ?? 'none';
+  throw new AppError(
+    'unsupported_media_type',
+    415,
+    `Send the body as ${accepted.join(' or ')}; this request sent ${sent}.`,
+  );
 }
 
 export function checkAccess(access: Access, user: CurrentUser | null) {
@@ -103,17 +165,24 @@ export class ApiRegistry {
   ) {
     const successStatus = spec.successStatus ?? (spec.method === 'post' ? 201 : 200);
     this.routes.push({ ...spec, successStatus });
-    const guard: RequestHandler = (_req, res, next) => {
+    const pathIds = numericPathParams(spec.params);
+    const guard: RequestHandler = (req, res, next) => {
       checkAccess(spec.access, res.locals.user ?? null);
+      checkPathIds(pathIds, req.params as Record<string, string>);
+      if (spec.body || spec.multipart) checkContentType(req, !!spec.multipart);
       next();
     };
     const handle: RequestHandler = async (req, res) => {
+      // The address first: a body's problems mean little while the path names nothing.
+      const params = spec.params ? parseOrThrow(spec.params, req.params, 'path') : req.params;
+      const query = spec.query ? parseOrThrow(spec.query, req.query, 'query') : req.query;
+      const body = spec.body ? parseOrThrow(spec.body, req.body, 'form') : req.body;
       const ctx = {
         req,
         res,
-        body: spec.body ? parseOrThrow(spec.body, req.body, 'form') : req.body,
-        query: spec.query ? parseOrThrow(spec.query, req.query, 'query') : req.query,
-        params: spec.params ? parseOrThrow(spec.params, req.params, 'path') : req.params,
+        body,
+        query,
+        params,
         user: res.locals.user ?? null,
         session: res.locals.session ?? null,
       } as AuthedContext<z.output<BS>, z.output<QS>, z.output<PS>>;

@@ -26,6 +26,9 @@ export function createDataSource(databaseUrl: string, options: { logging?: boole
     migrationsRun: false,
     migrationsTransactionMode: 'each',
     timezone: 'Z',
+    // DATE columns come back as the stored 'YYYY-MM-DD' text: the driver's Date objects would turn years 0–99
+    // into 1900–1999 (it builds them with Date.UTC). DATETIME columns stay Date instants.
+    dateStrings: ['DATE'],
     charset: 'utf8mb4_unicode_ci',
     // Failed queries surface through the error handler; logging them here too would also log expected conflicts.
     logging: options.logging ? ['query', 'error'] : false,

@@ -51,7 +51,14 @@ export function registerMatrixRoutes(api: ApiRegistry, { services }: AppContext)
     response: matrixCellSchema,
     successStatus: 200,
     handler: ({ params, user, body }) =>
-      matrix.transition(user, params.id, params.cellId, body.action, body.note, body.overrideReason),
+      matrix.transition(
+        user,
+        params.id,
+        params.cellId,
+        body.action,
+        body.note ?? undefined,
+        body.overrideReason ?? undefined,
+      ),
   });
 
   api.add({

@@ -9,7 +9,7 @@ import { recordPlanChange } from '../lib/roundup-audit';
 import { findRoundup } from '../lib/roundup-access';
 import { samplesOfRoundups, toSampleDto } from '../mappers/sample';
 import type { CurrentUser } from '../../shared/schemas/auth';
-import type { Sample, updateSampleRequestSchema } from '../../shared/schemas/samples';
+import { sampleDateOrderProblems, type Sample, type updateSampleRequestSchema } from '../../shared/schemas/samples';
 import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 
 type UpdateInput = z.output<typeof updateSampleRequestSchema>;
@@ -57,9 +57,7 @@ export function sampleProblems(sample: SampleFields): Record<string, string> {
   if (sample.status === 'returned' && !sample.returnedOn) problems.returnedOn = 'Enter the date it went back.';
   if (sample.status !== 'returned' && sample.returnedOn)
     problems.returnedOn = 'Only a returned sample has a returned date.';
-  if (sample.receivedOn && sample.returnedOn && sample.returnedOn < sample.receivedOn) {
-    problems.returnedOn = 'It cannot go back before it arrived.';
-  }
+  Object.assign(problems, sampleDateOrderProblems(sample));
   return problems;
 }
 

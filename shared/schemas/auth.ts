@@ -1,14 +1,13 @@
 import { z } from 'zod';
 import { instantSchema, roleSchema } from './common';
+import { passwordText } from './text';
+import { whenValid } from './checks';
 
 export const PASSWORD_MIN = 12;
 export const PASSWORD_MAX = 128;
 
-/** New passwords: 12 to 128 characters, used as typed (no trimming, no truncation). */
-export const newPasswordSchema = z
-  .string()
-  .min(PASSWORD_MIN, `Use at least ${PASSWORD_MIN} characters.`)
-  .max(PASSWORD_MAX, `Use at most ${PASSWORD_MAX} characters.`);
+/** New passwords: 12 to 128 characters, used as typed (no trimming, no truncation), not only spaces. */
+export const newPasswordSchema = passwordText(PASSWORD_MIN, PASSWORD_MAX);
 
 export const emailSchema = z
   .string()
@@ -16,10 +15,10 @@ export const emailSchema = z
   .toLowerCase()
   .pipe(z.email('Enter an e-mail address such as name@example.org.').max(254));
 
-export const signInRequestSchema = z.object({
+export const signInRequestSchema = z.strictObject({
   email: emailSchema,
   // Sign-in accepts any length up to the maximum so old passwords still work.
-  password: z.string().min(1, 'Enter your password.').max(PASSWORD_MAX, `Use at most ${PASSWORD_MAX} characters.`),
+  password: passwordText(1, PASSWORD_MAX, 'Enter your password.'),
 });
 export type SignInRequest = z.infer<typeof signInRequestSchema>;
 
@@ -34,14 +33,15 @@ export type CurrentUser = z.infer<typeof currentUserSchema>;
 export const sessionResponseSchema = z.object({ user: currentUserSchema });
 
 export const changePasswordRequestSchema = z
-  .object({
-    currentPassword: z.string().min(1, 'Enter your current password.').max(PASSWORD_MAX),
+  .strictObject({
+    currentPassword: passwordText(1, PASSWORD_MAX, 'Enter your current password.'),
     newPassword: newPasswordSchema,
-    confirmPassword: z.string(),
+    confirmPassword: passwordText(0, PASSWORD_MAX),
   })
   .refine((v) => v.newPassword === v.confirmPassword, {
     path: ['confirmPassword'],
     message: 'The two new passwords do not match.',
+    when: whenValid('newPassword', 'confirmPassword'),
   });
 export type ChangePasswordRequest = z.infer<typeof changePasswordRequestSchema>;
 

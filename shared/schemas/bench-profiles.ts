@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { instantSchema } from './common';
-import { decimalSchema, optionalTextSchema, requiredTextSchema } from './planning-fields';
+import { decimalSchema, requiredTextSchema } from './planning-fields';
+import { optionalMultiLineText } from './text';
 
 /**
  * A bench profile: the test system a roundup is measured on. Reusable across roundups; a roundup refers to
@@ -24,14 +25,16 @@ const benchProfileFields = {
   probePlacement: requiredTextSchema(300),
   /** Minimum soak before a reading counts, minutes. */
   requiredSoakMinutes: z.number().int().min(0).max(1440),
-  notes: optionalTextSchema(2000),
+  notes: optionalMultiLineText(2000),
 };
 
-export const createBenchProfileRequestSchema = z.object(benchProfileFields);
+export const createBenchProfileRequestSchema = z.strictObject(benchProfileFields);
 export type CreateBenchProfileRequest = z.input<typeof createBenchProfileRequestSchema>;
 
 /** Partial update; `archived: true` hides the profile from pickers (roundups that use it keep it). */
-export const updateBenchProfileRequestSchema = z.object({ ...benchProfileFields, archived: z.boolean() }).partial();
+export const updateBenchProfileRequestSchema = z
+  .strictObject({ ...benchProfileFields, archived: z.boolean() })
+  .partial();
 export type UpdateBenchProfileRequest = z.input<typeof updateBenchProfileRequestSchema>;
 
 export const benchProfileSchema = z.object({

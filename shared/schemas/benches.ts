@@ -2,23 +2,26 @@ import { z } from 'zod';
 import { instantSchema } from './common';
 import { idSchema, optionalTextSchema, personRefSchema, requiredTextSchema } from './planning-fields';
 import { queueItemSchema } from './matrix';
+import { bookingInstantSchema, dateRanges, zonedInstant } from './dates';
+import { optionalMultiLineText } from './text';
+import { whenValid } from './checks';
 
 /** A physical test system with its own booking calendar. */
-export const createBenchRequestSchema = z.object({
+export const createBenchRequestSchema = z.strictObject({
   name: requiredTextSchema(80, 'Name the bench.'),
   location: optionalTextSchema(120),
   /** The bench profile this bench is built to, if any. */
   benchProfileId: idSchema.nullable().default(null),
-  notes: optionalTextSchema(500),
+  notes: optionalMultiLineText(500),
 });
 export type CreateBenchRequest = z.input<typeof createBenchRequestSchema>;
 
 export const updateBenchRequestSchema = z
-  .object({
+  .strictObject({
     name: requiredTextSchema(80, 'Name the bench.'),
     location: optionalTextSchema(120),
     benchProfileId: idSchema.nullable(),
-    notes: optionalTextSchema(500),
+    notes: optionalMultiLineText(500),
     /** Inactive benches take no new bookings. */
     active: z.boolean(),
   })
@@ -41,18 +44,15 @@ export const benchListSchema = z.object({ benches: z.array(benchSchema) });
 /** Longest single booking; longer work is booked as several slots. Common practice, no source. */
 export const MAX_BOOKING_HOURS = 72;
 
-/** Instants with an explicit zone (Z or an offset); the API answers in UTC. */
-const zonedInstantSchema = z.iso.datetime({
-  offset: true,
-  message: 'Enter a date and time with its zone, e.g. 2025-06-02T09:00:00+02:00.',
-});
+/** Instants with an explicit zone (Z or an offset), within the booking years once in UTC; the API answers in UTC. */
+const zonedInstantSchema = bookingInstantSchema;
 
 /**
  * Book a bench for [startsAt, endsAt) against cells assigned to you. Bookings on one bench may touch
  * (one ends 12:00, the next starts 12:00) but not overlap; an overlap is refused with 409 booking_overlap.
  */
 export const createBookingRequestSchema = z
-  .object({
+  .strictObject({
     startsAt: zonedInstantSchema,
     endsAt: zonedInstantSchema,
     cellIds: z
@@ -60,22 +60,29 @@ export const createBookingRequestSchema = z
       .min(1, 'Choose the assigned cells this slot is for.')
       .max(50)
       .refine((ids) => new Set(ids).size === ids.length, 'List each cell once.'),
-    note: optionalTextSchema(300),
+    note: optionalMultiLineText(300),
     /**
      * Why to book anyway when the bench's set-up differs from the roundup's bench profile; without it such a
      * booking is refused with 409 bench_profile_mismatch, which lists the differences. Kept on the booking.
      */
-    overrideReason: optionalTextSchema(300),
+    overrideReason: optionalMultiLineText(300),
   })
-  .superRefine((v, ctx) => {
-    const start = Date.parse(v.startsAt);
-    const end = Date.parse(v.endsAt);
-    if (!(end > start))
-      ctx.addIssue({ code: 'custom', path: ['endsAt'], message: 'The slot must end after it starts.' });
-    else if (end - start > MAX_BOOKING_HOURS * 3_600_000) {
-      ctx.addIssue({ code: 'custom', path: ['endsAt'], message: `Book at most ${MAX_BOOKING_HOURS} hours at a time.` });
-    }
-  });
+  .superRefine(
+    (v, ctx) => {
+      const start = Date.parse(v.startsAt);
+      const end = Date.parse(v.endsAt);
+      if (!(end > start))
+        ctx.addIssue({ code: 'custom', path: ['endsAt'], message: 'The slot must end after it starts.' });
+      else if (end - start > MAX_BOOKING_HOURS * 3_600_000) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['endsAt'],
+          message: `Book at most ${MAX_BOOKING_HOURS} hours at a time.`,
+        });
+      }
+    },
+    { when: whenValid('startsAt', 'endsAt') },
+  );
 export type CreateBookingRequest = z.input<typeof createBookingRequestSchema>;
 
 export const bookingSchema = z.object({
@@ -97,8 +104,8 @@ export const bookingListSchema = z.object({ bookings: z.array(bookingSchema) });
 
 /** Calendar window; defaults to from now − 1 day to now + 14 days. */
 export const bookingListQuerySchema = z.object({
-  from: z.preprocess((v) => (v === '' ? undefined : v), z.iso.datetime({ offset: true }).optional()),
-  to: z.preprocess((v) => (v === '' ? undefined : v), z.iso.datetime({ offset: true }).optional()),
+  from: z.preprocess((v) => (v === '' ? undefined : v), zonedInstant(dateRanges.booking).optional()),
+  to: z.preprocess((v) => (v === '' ? undefined : v), zonedInstant(dateRanges.booking).optional()),
 });
 
 export const bookingParamsSchema = z.object({

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { catalogImportUploadLimit } from '../upload-limits';
 import { calendarDateSchema } from './planning-fields';
+import { multiLineText, queryText } from './text';
 
 /**
  * The catalog CSV: one product per row, header row first, comma-separated, UTF-8. Export writes exactly these
@@ -54,12 +55,14 @@ export const CATALOG_IMPORT_MAX_BYTES = catalogImportUploadLimit.maxFileBytes;
  * Preview or commit a CSV. JSON body `{ csv }`, or multipart/form-data with the file in field `file` (and, for
  * commit, `checksum` as a text field).
  */
-export const catalogImportPreviewRequestSchema = z.object({
-  csv: z.string().max(CATALOG_IMPORT_MAX_BYTES, 'The file is too large for one import.').optional(),
+const csvTextSchema = multiLineText(CATALOG_IMPORT_MAX_BYTES).optional();
+
+export const catalogImportPreviewRequestSchema = z.strictObject({
+  csv: csvTextSchema,
 });
 
-export const catalogImportCommitRequestSchema = z.object({
-  csv: z.string().max(CATALOG_IMPORT_MAX_BYTES, 'The file is too large for one import.').optional(),
+export const catalogImportCommitRequestSchema = z.strictObject({
+  csv: csvTextSchema,
   /** The checksum the preview returned: commit refuses a file that differs from the one previewed. */
   checksum: z.string().regex(/^[0-9a-f]{64}$/, 'Preview the file first; send the checksum it returned.'),
 });
@@ -121,7 +124,7 @@ export type CatalogImportResult = z.infer<typeof catalogImportResultSchema>;
 
 /** Export query: the same filters as the list; `priceRegion` picks which latest price fills the price columns. */
 export const catalogExportQuerySchema = z.object({
-  priceRegion: z.preprocess((v) => (v === '' ? undefined : v), z.string().trim().toUpperCase().optional()),
+  priceRegion: z.preprocess((v) => (v === '' ? undefined : v), queryText(8).toUpperCase().optional()),
   archived: z.enum(['exclude', 'include', 'only']).default('exclude'),
-  platform: z.preprocess((v) => (v === '' ? undefined : v), z.string().trim().max(80).optional()),
+  platform: z.preprocess((v) => (v === '' ? undefined : v), queryText(80).optional()),
 });

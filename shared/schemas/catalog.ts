@@ -12,6 +12,9 @@ import {
 } from './planning-fields';
 import { phaseMultiplications, stagesPerPhaseProblem } from '../domain/planning/power-design';
 import { roundupStateSchema } from './roundup-state';
+import { priceObservedDateSchema, releaseDateSchema } from './dates';
+import { optionalMultiLineText, queryText } from './text';
+import { whenValid } from './checks';
 
 // ---------------------------------------------------------------------------------------------------------------
 // Codes and their labels
@@ -77,7 +80,7 @@ const count = (max: number) =>
  * computes it from controller phases and multiplication (shared/domain/planning/power-design.ts).
  */
 export const powerDesignInputSchema = z
-  .object({
+  .strictObject({
     controller: optionalTextSchema(80),
     controllerPhases: z.number().int().min(1).max(32).nullable().default(null),
     phaseMultiplication: phaseMultiplicationSchema.nullable().default(null),
@@ -90,22 +93,25 @@ export const powerDesignInputSchema = z
     /** Stages on the SoC rail. */
     socRailStages: z.number().int().min(0).max(16).nullable().default(null),
     /** Other rails in words, e.g. "1 stage graphics, 1 stage auxiliary". */
-    otherRails: optionalTextSchema(200),
-    heatsinkNotes: optionalTextSchema(500),
+    otherRails: optionalMultiLineText(200),
+    heatsinkNotes: optionalMultiLineText(500),
   })
-  .superRefine((design, ctx) => {
-    if (design.phaseMultiplication && design.stagesPerPhase) {
-      const problem = stagesPerPhaseProblem(design.phaseMultiplication, design.stagesPerPhase);
-      if (problem) ctx.addIssue({ code: 'custom', path: ['stagesPerPhase'], message: problem });
-    }
-    if (design.phaseMultiplication && !design.controllerPhases) {
-      ctx.addIssue({ code: 'custom', path: ['controllerPhases'], message: 'Enter the controller phases too.' });
-    }
-  });
+  .superRefine(
+    (design, ctx) => {
+      if (design.phaseMultiplication && design.stagesPerPhase) {
+        const problem = stagesPerPhaseProblem(design.phaseMultiplication, design.stagesPerPhase);
+        if (problem) ctx.addIssue({ code: 'custom', path: ['stagesPerPhase'], message: problem });
+      }
+      if (design.phaseMultiplication && !design.controllerPhases) {
+        ctx.addIssue({ code: 'custom', path: ['controllerPhases'], message: 'Enter the controller phases too.' });
+      }
+    },
+    { when: whenValid('phaseMultiplication', 'stagesPerPhase', 'controllerPhases') },
+  );
 export type PowerDesignInput = z.input<typeof powerDesignInputSchema>;
 
 /** Rear USB ports by speed (counts; null while unknown). */
-export const rearUsbSchema = z.object({
+export const rearUsbSchema = z.strictObject({
   usb2: count(20).default(null),
   usb5g: count(20).default(null),
   usb10g: count(20).default(null),
@@ -114,7 +120,7 @@ export const rearUsbSchema = z.object({
 });
 export type RearUsb = z.infer<typeof rearUsbSchema>;
 
-export const featuresInputSchema = z.object({
+export const featuresInputSchema = z.strictObject({
   rearUsb: rearUsbSchema.default({ usb2: null, usb5g: null, usb10g: null, usb20g: null, usb40g: null }),
   frontUsbCHeader: frontUsbCHeaderSchema.nullable().default(null),
   /** Fastest wired LAN port in Mbit/s; 0 = none. */
@@ -136,12 +142,12 @@ const productFields = {
   socket: requiredTextSchema(40, 'Enter the socket.'),
   chipset: requiredTextSchema(40, 'Enter the chipset.'),
   formFactor: formFactorSchema,
-  releaseDate: calendarDateSchema.nullable().default(null),
+  releaseDate: releaseDateSchema.nullable().default(null),
   powerDesign: powerDesignInputSchema.default(() => powerDesignInputSchema.parse({})),
   features: featuresInputSchema.default(() => featuresInputSchema.parse({})),
 };
 
-export const createProductRequestSchema = z.object(productFields);
+export const createProductRequestSchema = z.strictObject(productFields);
 export type CreateProductRequest = z.input<typeof createProductRequestSchema>;
 export type ProductInput = z.output<typeof createProductRequestSchema>;
 
@@ -150,7 +156,7 @@ export type ProductInput = z.output<typeof createProductRequestSchema>;
  * `archived: true` archives the product (hidden from suggestions and the default list); false restores it.
  */
 export const updateProductRequestSchema = z
-  .object({
+  .strictObject({
     maker: productFields.maker,
     model: productFields.model,
     category: productCategorySchema,
@@ -158,7 +164,7 @@ export const updateProductRequestSchema = z
     socket: productFields.socket,
     chipset: productFields.chipset,
     formFactor: formFactorSchema,
-    releaseDate: calendarDateSchema.nullable(),
+    releaseDate: releaseDateSchema.nullable(),
     powerDesign: powerDesignInputSchema,
     features: featuresInputSchema,
     archived: z.boolean(),
@@ -169,11 +175,11 @@ export type UpdateProductRequest = z.input<typeof updateProductRequestSchema>;
 // ---------------------------------------------------------------------------------------------------------------
 // Prices
 
-export const createPriceRequestSchema = z.object({
+export const createPriceRequestSchema = z.strictObject({
   region: regionSchema,
   currency: currencySchema,
   amountMinor: amountMinorSchema,
-  observedOn: calendarDateSchema,
+  observedOn: priceObservedDateSchema,
   /** Where the price was seen: shop name, or a note such as "maker's list price". */
   source: requiredTextSchema(200, 'Say where the price was seen.'),
 });
@@ -314,11 +320,11 @@ const emptyToUndefined = (value: unknown) => (value === '' ? undefined : value);
  * `sort=price` needs `priceRegion` (sorts by the latest price in that region; products without one last).
  */
 export const productListQuerySchema = z.object({
-  search: z.preprocess(emptyToUndefined, z.string().trim().max(100).optional()),
-  maker: z.preprocess(emptyToUndefined, z.string().trim().max(80).optional()),
-  platform: z.preprocess(emptyToUndefined, z.string().trim().max(80).optional()),
-  socket: z.preprocess(emptyToUndefined, z.string().trim().max(40).optional()),
-  chipset: z.preprocess(emptyToUndefined, z.string().trim().max(40).optional()),
+  search: z.preprocess(emptyToUndefined, queryText(100).optional()),
+  maker: z.preprocess(emptyToUndefined, queryText(80).optional()),
+  platform: z.preprocess(emptyToUndefined, queryText(80).optional()),
+  socket: z.preprocess(emptyToUndefined, queryText(40).optional()),
+  chipset: z.preprocess(emptyToUndefined, queryText(40).optional()),
   formFactor: z.preprocess(emptyToUndefined, formFactorSchema.optional()),
   vcoreStageType: z.preprocess(emptyToUndefined, vcoreStageTypeSchema.optional()),
   minEffectivePhases: z.preprocess(emptyToUndefined, z.coerce.number().int().min(0).optional()),

@@ -1,6 +1,8 @@
 import { z } from 'zod';
 import { instantSchema } from './common';
-import { decimalSchema, optionalTextSchema, requiredTextSchema } from './planning-fields';
+import { decimalSchema, requiredTextSchema } from './planning-fields';
+import { optionalMultiLineText } from './text';
+import { whenValid } from './checks';
 
 export const loadSettingsModes = ['stock', 'fixed'] as const;
 export const loadSettingsModeSchema = z.enum(loadSettingsModes);
@@ -22,7 +24,7 @@ const loadConfigurationFields = {
   /** All-core clock in MHz; required when settingsMode is fixed, null for stock. */
   fixedClockMhz: z.number().int().min(100).max(10000).nullable().default(null),
   /** Further settings in words (power limits, load-line calibration, the load program). */
-  settingsNotes: optionalTextSchema(500),
+  settingsNotes: optionalMultiLineText(500),
   /** Expected package power under the load, W, one decimal. */
   expectedPackagePowerW: decimalSchema(1, 2000, 1, 'W'),
   /** Core voltage under the load (set for fixed, expected for stock), V, three decimals. */
@@ -31,7 +33,8 @@ const loadConfigurationFields = {
   soakMinutes: z.number().int().min(1).max(1440),
 };
 
-function fixedNeedsClock(
+/** A fixed configuration needs its clock (forms run the same rule beside their number fields). */
+export function fixedNeedsClock(
   value: { settingsMode?: LoadSettingsMode; fixedClockMhz?: number | null },
   ctx: z.RefinementCtx,
 ) {
@@ -40,12 +43,14 @@ function fixedNeedsClock(
   }
 }
 
-export const createLoadConfigurationRequestSchema = z.object(loadConfigurationFields).superRefine(fixedNeedsClock);
+export const createLoadConfigurationRequestSchema = z
+  .strictObject(loadConfigurationFields)
+  .superRefine(fixedNeedsClock, { when: whenValid('settingsMode', 'fixedClockMhz') });
 export type CreateLoadConfigurationRequest = z.input<typeof createLoadConfigurationRequestSchema>;
 
 /** Partial update; the server re-checks the fixed-needs-clock rule on the merged record. */
 export const updateLoadConfigurationRequestSchema = z
-  .object({
+  .strictObject({
     ...loadConfigurationFields,
     fixedClockMhz: z.number().int().min(100).max(10000).nullable(),
     archived: z.boolean(),

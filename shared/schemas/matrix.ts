@@ -4,6 +4,9 @@ import { productBriefSchema } from './catalog';
 import { calendarDateSchema, idSchema, personRefSchema } from './planning-fields';
 import { cellActions, cellStates } from '../domain/planning/matrix-cell-states';
 import { roundupStateSchema } from './roundup-state';
+import { planningDateSchema } from './dates';
+import { optionalMultiLineText } from './text';
+import { whenValid } from './checks';
 
 /**
  * Cell states and actions; labels and the rules of who may do what are in
@@ -66,30 +69,32 @@ export type RoundupMatrix = z.infer<typeof roundupMatrixSchema>;
 
 /** Assign cells, whole rows (entryIds) or both to one tester with a due date. */
 export const assignCellsRequestSchema = z
-  .object({
+  .strictObject({
     cellIds: z.array(idSchema).max(500).default([]),
     entryIds: z.array(idSchema).max(200).default([]),
     testerId: idSchema,
-    dueDate: calendarDateSchema,
+    dueDate: planningDateSchema,
   })
   .refine((v) => v.cellIds.length + v.entryIds.length > 0, {
     path: ['cellIds'],
     message: 'Choose at least one cell or row.',
+    when: whenValid('cellIds', 'entryIds'),
   });
 export type AssignCellsRequest = z.input<typeof assignCellsRequestSchema>;
 export const assignCellsResponseSchema = z.object({ cells: z.array(matrixCellSchema) });
 
 /** Move one cell. `note` is required for send-back (the reason) and optional otherwise. */
 export const cellTransitionRequestSchema = z
-  .object({
+  .strictObject({
     action: cellActionSchema,
-    note: z.string().trim().max(500).optional(),
+    note: optionalMultiLineText(500),
     /** A tester's reason to start a run outside every booking of the cell; without it that start is a 409. */
-    overrideReason: z.string().trim().max(300).optional(),
+    overrideReason: optionalMultiLineText(300),
   })
   .refine((v) => v.action !== 'send-back' || (v.note?.length ?? 0) > 0, {
     path: ['note'],
     message: 'Say why the cell needs a retest.',
+    when: whenValid('action', 'note'),
   });
 export type CellTransitionRequest = z.input<typeof cellTransitionRequestSchema>;
 

@@ -1,8 +1,12 @@
 import { z } from 'zod';
 import { isKnownCurrency } from '../domain/planning/money';
 import { isValidTimeZone } from '../domain/planning/loan-overdue';
+import { optionalSingleLineText, singleLineText } from './text';
 
-/** A calendar date without time or zone, YYYY-MM-DD (release dates, due dates, return-by dates). */
+/**
+ * A calendar date without time or zone, YYYY-MM-DD, as responses carry it. Requests use the ranged schemas of
+ * shared/schemas/dates.ts (releaseDateSchema, planningDateSchema, …).
+ */
 export const calendarDateSchema = z.iso.date('Enter a date as YYYY-MM-DD.');
 
 /** ISO 4217 currency code, e.g. EUR. Upper-cased on input. */
@@ -51,19 +55,14 @@ export function decimalSchema(min: number, max: number, scale: number, unit: str
     );
 }
 
-/** Optional free text: trimmed, empty becomes null. */
+/** Optional one-line text: trimmed, empty becomes null (the rules of shared/schemas/text.ts). */
 export function optionalTextSchema(max: number) {
-  return z
-    .string()
-    .trim()
-    .max(max, `Use at most ${max} characters.`)
-    .nullable()
-    .optional()
-    .transform((value) => (value ? value : null));
+  return optionalSingleLineText(max);
 }
 
+/** Required one-line text (the rules of shared/schemas/text.ts). */
 export function requiredTextSchema(max: number, emptyMessage = 'This cannot be empty.') {
-  return z.string().trim().min(1, emptyMessage).max(max, `Use at most ${max} characters.`);
+  return singleLineText(max, emptyMessage);
 }
 
 export const idSchema = z.number().int().positive();

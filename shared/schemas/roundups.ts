@@ -17,10 +17,13 @@ import {
 } from './planning-fields';
 import { roundupStateSchema } from './roundup-state';
 import { bandFits } from '../domain/planning/price-band';
+import { planningDateSchema, todayIn } from './dates';
+import { whenValid } from './checks';
+import { isValidTimeZone } from '../domain/planning/loan-overdue';
 
 /** Inclusive price bounds in minor units of one currency, for one region. */
 export const priceBandSchema = z
-  .object({
+  .strictObject({
     minMinor: amountMinorSchema,
     maxMinor: amountMinorSchema,
     currency: currencySchema,
@@ -29,6 +32,7 @@ export const priceBandSchema = z
   .refine((band) => band.minMinor <= band.maxMinor, {
     path: ['maxMinor'],
     message: 'The upper bound must not be below the lower bound.',
+    when: whenValid('minMinor', 'maxMinor'),
   });
 export type PriceBandInput = z.input<typeof priceBandSchema>;
 
@@ -37,28 +41,47 @@ const uniqueIds = z
   .max(20)
   .refine((ids) => new Set(ids).size === ids.length, 'List each configuration once.');
 
-export const createRoundupRequestSchema = z.object({
-  title: requiredTextSchema(200, 'Give the roundup a title.'),
-  category: productCategorySchema.default('motherboard'),
-  platform: requiredTextSchema(80, 'Enter the platform.'),
-  priceBand: priceBandSchema,
-  targetPublishDate: calendarDateSchema.nullable().default(null),
-  /** The outlet's time zone for this roundup: due dates and loan return-by dates end at its midnight. */
-  timeZone: timeZoneSchema.default('UTC'),
-  benchProfileId: idSchema.nullable().default(null),
-  /** Load configurations in test order. */
-  loadConfigurationIds: uniqueIds.default([]),
-});
+/**
+ * A new roundup's target publish date cannot already be past: it is compared with today in the roundup's time
+ * zone (UTC when the zone is not valid yet). Later edits may keep a past date (a late roundup stays late).
+ */
+export const createRoundupRequestSchema = z
+  .strictObject({
+    title: requiredTextSchema(200, 'Give the roundup a title.'),
+    category: productCategorySchema.default('motherboard'),
+    platform: requiredTextSchema(80, 'Enter the platform.'),
+    priceBand: priceBandSchema,
+    targetPublishDate: planningDateSchema.nullable().default(null),
+    /** The outlet's time zone for this roundup: due dates and loan return-by dates end at its midnight. */
+    timeZone: timeZoneSchema.default('UTC'),
+    benchProfileId: idSchema.nullable().default(null),
+    /** Load configurations in test order. */
+    loadConfigurationIds: uniqueIds.default([]),
+  })
+  .superRefine(
+    (roundup, ctx) => {
+      if (!roundup.targetPublishDate) return;
+      const today = todayIn(isValidTimeZone(roundup.timeZone) ? roundup.timeZone : 'UTC');
+      if (roundup.targetPublishDate < today) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['targetPublishDate'],
+          message: `The target publish date has passed: choose today (${today}) or later.`,
+        });
+      }
+    },
+    { when: whenValid('targetPublishDate') },
+  );
 export type CreateRoundupRequest = z.input<typeof createRoundupRequestSchema>;
 
 /** Partial update of the plan's header. The state changes through POST /api/roundups/:id/state. */
 export const updateRoundupRequestSchema = z
-  .object({
+  .strictObject({
     title: requiredTextSchema(200, 'Give the roundup a title.'),
     category: productCategorySchema,
     platform: requiredTextSchema(80, 'Enter the platform.'),
     priceBand: priceBandSchema,
-    targetPublishDate: calendarDateSchema.nullable(),
+    targetPublishDate: planningDateSchema.nullable(),
     timeZone: timeZoneSchema,
     benchProfileId: idSchema.nullable(),
   })
@@ -66,10 +89,10 @@ export const updateRoundupRequestSchema = z
 export type UpdateRoundupRequest = z.input<typeof updateRoundupRequestSchema>;
 
 /** Replace the ordered list of load configurations (adds and removes matrix columns). */
-export const setRoundupLoadConfigurationsRequestSchema = z.object({ loadConfigurationIds: uniqueIds });
+export const setRoundupLoadConfigurationsRequestSchema = z.strictObject({ loadConfigurationIds: uniqueIds });
 export type SetRoundupLoadConfigurationsRequest = z.input<typeof setRoundupLoadConfigurationsRequestSchema>;
 
-export const roundupStateChangeRequestSchema = z.object({ to: roundupStateSchema });
+export const roundupStateChangeRequestSchema = z.strictObject({ to: roundupStateSchema });
 
 export const roundupListQuerySchema = z.object({
   state: z.preprocess((v) => (v === '' ? undefined : v), roundupStateSchema.optional()),
@@ -164,7 +187,7 @@ export const roundupDetailSchema = roundupSummarySchema.extend({
 export type RoundupDetail = z.infer<typeof roundupDetailSchema>;
 
 /** Add a catalog product. A reference entry needs the product to have accepted results in an earlier roundup. */
-export const addRoundupEntryRequestSchema = z.object({
+export const addRoundupEntryRequestSchema = z.strictObject({
   productId: idSchema,
   kind: entryKindSchema.default('tested'),
   /** Reference entries: which earlier roundup's results to show; defaults to the latest one that tested it. */

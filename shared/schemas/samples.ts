@@ -8,6 +8,9 @@ import {
   moneySchema,
   optionalTextSchema,
 } from './planning-fields';
+import { planningDateSchema } from './dates';
+import { optionalMultiLineText } from './text';
+import { whenValid } from './checks';
 
 export const sampleSources = ['retail', 'vendor-loan'] as const;
 export const sampleSourceSchema = z.enum(sampleSources);
@@ -66,25 +69,50 @@ export const sampleListSchema = z.object({ timeZone: z.string(), samples: z.arra
 /**
  * Partial update. The server checks the merged record: a retail purchase needs an order reference and a
  * cost; a vendor loan needs a contact and a return-by date; received and later statuses need a received
- * date; returned needs a vendor loan and a returned date.
+ * date; returned needs a vendor loan and a returned date. Dates keep their order: a loan's return-by date and a
+ * returned date are not before the received date (checked here when sent together, and on the merged record).
  */
 export const updateSampleRequestSchema = z
-  .object({
+  .strictObject({
     source: sampleSourceSchema.nullable(),
     orderReference: optionalTextSchema(120),
     costMinor: amountMinorSchema.nullable(),
     costCurrency: currencySchema.nullable(),
     vendorContact: optionalTextSchema(200),
-    returnBy: calendarDateSchema.nullable(),
-    receivedOn: calendarDateSchema.nullable(),
-    returnedOn: calendarDateSchema.nullable(),
+    returnBy: planningDateSchema.nullable(),
+    receivedOn: planningDateSchema.nullable(),
+    returnedOn: planningDateSchema.nullable(),
     serialNumber: optionalTextSchema(80),
-    conditionNotes: optionalTextSchema(1000),
+    conditionNotes: optionalMultiLineText(1000),
     firmwareOnArrival: optionalTextSchema(80),
     status: sampleStatusSchema,
   })
-  .partial();
+  .partial()
+  .superRefine(
+    (sample, ctx) => {
+      for (const [path, message] of Object.entries(sampleDateOrderProblems(sample))) {
+        ctx.addIssue({ code: 'custom', path: [path], message });
+      }
+    },
+    { when: whenValid('returnBy', 'receivedOn', 'returnedOn') },
+  );
 export type UpdateSampleRequest = z.input<typeof updateSampleRequestSchema>;
+
+/** Dates of one sample that cannot all be true, by field (ISO dates compare as text). */
+export function sampleDateOrderProblems(sample: {
+  receivedOn?: string | null;
+  returnBy?: string | null;
+  returnedOn?: string | null;
+}): Record<string, string> {
+  const problems: Record<string, string> = {};
+  if (sample.receivedOn && sample.returnBy && sample.returnBy < sample.receivedOn) {
+    problems.returnBy = `The return-by date cannot be before the day it arrived (${sample.receivedOn}).`;
+  }
+  if (sample.receivedOn && sample.returnedOn && sample.returnedOn < sample.receivedOn) {
+    problems.returnedOn = 'It cannot go back before it arrived.';
+  }
+  return problems;
+}
 
 export const sampleParamsSchema = z.object({
   id: z.coerce.number().int().positive(),

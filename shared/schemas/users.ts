@@ -1,8 +1,9 @@
 import { z } from 'zod';
 import { instantSchema, roleSchema } from './common';
 import { emailSchema, newPasswordSchema } from './auth';
+import { singleLineText } from './text';
 
-export const displayNameSchema = z.string().trim().min(1, 'Enter a name.').max(120, 'Use at most 120 characters.');
+export const displayNameSchema = singleLineText(120, 'Enter a name.');
 
 export const userSchema = z.object({
   id: z.number().int(),
@@ -17,7 +18,7 @@ export const userSchema = z.object({
 export type User = z.infer<typeof userSchema>;
 export const userListSchema = z.object({ users: z.array(userSchema) });
 
-export const createUserRequestSchema = z.object({
+export const createUserRequestSchema = z.strictObject({
   email: emailSchema,
   displayName: displayNameSchema,
   role: roleSchema,
@@ -27,7 +28,7 @@ export type CreateUserRequest = z.infer<typeof createUserRequestSchema>;
 
 /** Partial update: role, name, e-mail, active flag, or a new password set by the admin. */
 export const updateUserRequestSchema = z
-  .object({
+  .strictObject({
     email: emailSchema,
     displayName: displayNameSchema,
     role: roleSchema,

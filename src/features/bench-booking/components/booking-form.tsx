@@ -10,6 +10,7 @@ import { isApiError } from '../../../lib/api-client';
 import { formatCalendarDate, formatSlot } from '../../../lib/format-time';
 import { productName } from '../../../lib/product-name';
 import { useZodForm } from '../../../lib/use-zod-form';
+import { formSchema } from '../../../lib/form-schema';
 import {
   createBookingRequestSchema,
   MAX_BOOKING_HOURS,
@@ -30,39 +31,46 @@ const labels = {
   overrideReason: 'Why book it anyway',
 };
 
-const bookingTarget = z.object({ benchId: idSchema }).and(createBookingRequestSchema);
+/** The bench travels in the path; the rest is the shared booking request. */
+const bookingTarget = z.object({ benchId: idSchema, booking: createBookingRequestSchema });
 
 /**
  * Wall times typed in the device's zone become UTC instants; the chosen cells travel as a comma list in the
- * form's text values. The shared booking schema then checks the slot (ends after it starts, at most 72 h).
+ * form's text values. The shared booking schema checks the slot (ends after it starts, at most 72 h) in the same
+ * pass, so every problem shows at once.
  */
-const bookingFormSchema = z
-  .object({
-    benchId: z.string(),
-    startsAt: z.string(),
-    endsAt: z.string(),
-    cellIds: z.string(),
-    note: z.string(),
-    overrideReason: z.string(),
-  })
-  .transform((values, ctx): z.input<typeof bookingTarget> => {
+const bookingFormSchema = formSchema(
+  bookingTarget,
+  (
+    values: {
+      benchId: string;
+      startsAt: string;
+      endsAt: string;
+      cellIds: string;
+      note: string;
+      overrideReason: string;
+    },
+    flag,
+  ): z.input<typeof bookingTarget> => {
     const startsAt = instantFromLocalInput(values.startsAt);
     const endsAt = instantFromLocalInput(values.endsAt);
-    if (!values.benchId) ctx.addIssue({ code: 'custom', path: ['benchId'], message: 'Choose a bench.' });
-    if (!startsAt) ctx.addIssue({ code: 'custom', path: ['startsAt'], message: 'Enter the date and time it starts.' });
-    if (!endsAt) ctx.addIssue({ code: 'custom', path: ['endsAt'], message: 'Enter the date and time it ends.' });
-    if (!values.cellIds)
-      ctx.addIssue({ code: 'custom', path: ['cellIds'], message: 'Choose the assigned cells this slot is for.' });
+    if (!values.benchId) flag('benchId', 'Choose a bench.');
+    if (!startsAt) flag('startsAt', 'Enter the date and time it starts.');
+    if (!endsAt) flag('endsAt', 'Enter the date and time it ends.');
+    if (!values.cellIds) flag('cellIds', 'Choose the assigned cells this slot is for.');
     return {
       benchId: Number(values.benchId),
-      startsAt: startsAt ?? '',
-      endsAt: endsAt ?? '',
-      cellIds: values.cellIds ? values.cellIds.split(',').map(Number) : [],
-      note: values.note,
-      overrideReason: values.overrideReason,
+      booking: {
+        startsAt: startsAt ?? '',
+        endsAt: endsAt ?? '',
+        cellIds: values.cellIds ? values.cellIds.split(',').map(Number) : [],
+        note: values.note,
+        overrideReason: values.overrideReason,
+      },
     };
-  })
-  .pipe(bookingTarget);
+  },
+  (path) => path.replace(/^booking\./, ''),
+);
 
 export interface BookingFormProps {
   benches: readonly Bench[];
@@ -126,7 +134,7 @@ export function BookingForm({ benches, cells, initialBenchId = null, suggestedSt
     setBooked(null);
     const input = form.validate();
     if (!input) return;
-    const { benchId, ...booking } = input;
+    const { benchId, booking } = input;
     book.mutate(
       { benchId, booking: mismatch ? booking : { ...booking, overrideReason: null } },
       {

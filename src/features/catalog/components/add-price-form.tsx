@@ -1,13 +1,12 @@
 import { useId, useState, type FormEvent } from 'react';
-import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { TextField } from '../../../components/ui/text-field';
 import { ApiError, isApiError } from '../../../lib/api-client';
 import { useZodForm } from '../../../lib/use-zod-form';
+import { formSchema } from '../../../lib/form-schema';
 import { parseMajorAmount } from '../../../../shared/domain/planning/money';
 import { createPriceRequestSchema, type CreatePriceRequest, type Price } from '../../../../shared/schemas/catalog';
-import { calendarDateSchema, currencySchema, regionSchema } from '../../../../shared/schemas/planning-fields';
 import { useAddPrice } from '../api/prices';
 import { formatPrice } from '../../../lib/format-money';
 
@@ -15,31 +14,30 @@ import { formatPrice } from '../../../lib/format-money';
  * The form works in major units ("189.99"), as a price tag shows it; the request carries integer minor units, parsed
  * without floating point by the shared money rules, then checked by the same schema the server uses.
  */
-const priceFormSchema = z
-  .object({
-    region: regionSchema,
-    currency: currencySchema,
-    amount: z.string().trim().min(1, 'Enter the price.'),
-    observedOn: calendarDateSchema,
-    source: z.string(),
-  })
-  .transform((values, ctx): CreatePriceRequest => {
-    const parsed = parseMajorAmount(values.amount, values.currency);
-    if (!parsed.ok) {
-      ctx.addIssue({ code: 'custom', path: ['amount'], message: parsed.message });
-      return z.NEVER;
+const priceFormSchema = formSchema(
+  createPriceRequestSchema,
+  (
+    values: { region: string; currency: string; amount: string; observedOn: string; source: string },
+    flag,
+  ): CreatePriceRequest => {
+    const currency = values.currency.trim().toUpperCase();
+    let amountMinor = Number.NaN;
+    if (!values.amount.trim()) flag('amount', 'Enter the price.');
+    else {
+      const parsed = parseMajorAmount(values.amount, /^[A-Z]{3}$/.test(currency) ? currency : 'EUR');
+      if (parsed.ok) amountMinor = parsed.amountMinor;
+      else flag('amount', parsed.message);
     }
-    const request = { ...values, amountMinor: parsed.amountMinor };
-    const checked = createPriceRequestSchema.safeParse(request);
-    if (!checked.success) {
-      for (const issue of checked.error.issues) {
-        const field = issue.path[0] === 'amountMinor' ? 'amount' : issue.path[0];
-        ctx.addIssue({ code: 'custom', path: [String(field)], message: issue.message });
-      }
-      return z.NEVER;
-    }
-    return checked.data;
-  });
+    return {
+      region: values.region,
+      currency: values.currency,
+      amountMinor,
+      observedOn: values.observedOn,
+      source: values.source,
+    };
+  },
+  (path) => (path === 'amountMinor' ? 'amount' : path),
+);
 
 const today = () => new Date().toLocaleDateString('en-CA');
 

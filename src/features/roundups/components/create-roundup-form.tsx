@@ -1,5 +1,4 @@
 import { useId, useMemo, useState, type FormEvent } from 'react';
-import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Panel } from '../../../components/ui/panel';
@@ -8,6 +7,7 @@ import { TextField } from '../../../components/ui/text-field';
 import { ApiError, isApiError } from '../../../lib/api-client';
 import { userTimeZone } from '../../../lib/format-time';
 import { useZodForm } from '../../../lib/use-zod-form';
+import { formSchema } from '../../../lib/form-schema';
 import { minorUnitDigits, parseMajorAmount } from '../../../../shared/domain/planning/money';
 import { productCategoryLabels, productCategories, type ProductCategory } from '../../../../shared/schemas/catalog';
 import {
@@ -57,23 +57,22 @@ const labels: Record<keyof FormValues, string> = {
 
 /**
  * The form's text values become the create request: amounts typed in major units ("189.99") are read into
- * integer minor units for the band's currency without floating point, then the shared schema checks the whole.
+ * integer minor units for the band's currency without floating point, and the shared schema checks the whole in
+ * the same pass, so an empty form shows every missing field at once.
  */
-const roundupFormSchema = z
-  .object(
-    Object.fromEntries(Object.keys(emptyForm).map((key) => [key, z.string()])) as Record<keyof FormValues, z.ZodString>,
-  )
-  .transform((values, ctx): CreateRoundupRequest => {
+export const roundupFormSchema = formSchema(
+  createRoundupRequestSchema,
+  (values: FormValues, flag): CreateRoundupRequest => {
     const currency = values['priceBand.currency'].trim().toUpperCase();
     const amount = (key: 'priceBand.minMinor' | 'priceBand.maxMinor', empty: string) => {
       const text = values[key].trim();
       if (!text) {
-        ctx.addIssue({ code: 'custom', path: key.split('.'), message: empty });
+        flag(key, empty);
         return Number.NaN;
       }
       const parsed = parseMajorAmount(text, /^[A-Z]{3}$/.test(currency) ? currency : 'EUR');
       if (!parsed.ok) {
-        ctx.addIssue({ code: 'custom', path: key.split('.'), message: parsed.message });
+        flag(key, parsed.message);
         return Number.NaN;
       }
       return parsed.amountMinor;
@@ -89,8 +88,8 @@ const roundupFormSchema = z
       timeZone: values.timeZone,
       benchProfileId: values.benchProfileId ? Number(values.benchProfileId) : null,
     };
-  })
-  .pipe(createRoundupRequestSchema);
+  },
+);
 
 const categoryOptions = productCategories.map((category) => ({
   value: category,

@@ -7,8 +7,10 @@ import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { useZodForm } from '../../../lib/use-zod-form';
+import { whenValid } from '../../../../shared/schemas/checks';
 import {
   createLoadConfigurationRequestSchema,
+  fixedNeedsClock,
   loadSettingsModeLabels,
   type CreateLoadConfigurationRequest,
   loadSettingsModes,
@@ -19,7 +21,10 @@ import { numberFromText, optionalNumberFromText } from './form-numbers';
 
 const shape = createLoadConfigurationRequestSchema.shape;
 
-/** Text fields read into numbers, then the shared schema (with its fixed-needs-a-clock rule) checks the whole. */
+/**
+ * Text fields read into numbers, checked field by field with the shared schema's rules; the fixed-needs-a-clock
+ * rule runs in the same pass as soon as its two fields are readable.
+ */
 const loadConfigurationFormSchema = z
   .object({
     ...shape,
@@ -28,6 +33,7 @@ const loadConfigurationFormSchema = z
     coreVoltageV: numberFromText(shape.coreVoltageV),
     soakMinutes: numberFromText(shape.soakMinutes),
   })
+  .superRefine(fixedNeedsClock, { when: whenValid('settingsMode', 'fixedClockMhz') })
   // A clock typed before switching back to stock is not part of a stock configuration.
   .transform((value): CreateLoadConfigurationRequest =>
     value.settingsMode === 'stock' ? { ...value, fixedClockMhz: null } : value,

@@ -1,11 +1,11 @@
 import { useId, type FormEvent } from 'react';
-import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { useZodForm } from '../../../lib/use-zod-form';
+import { formSchema } from '../../../lib/form-schema';
 import { minorToMajorString, parseMajorAmount } from '../../../../shared/domain/planning/money';
 import {
   sampleSourceLabels,
@@ -36,37 +36,32 @@ const labels = {
 };
 type FormValues = Record<keyof typeof labels, string>;
 
-const sampleFormSchema = z
-  .object(
-    Object.fromEntries(Object.keys(labels).map((key) => [key, z.string()])) as Record<keyof FormValues, z.ZodString>,
-  )
-  .transform((values, ctx): UpdateSampleRequest => {
-    const source = values.source === 'retail' || values.source === 'vendor-loan' ? values.source : null;
-    const currency = values.costCurrency.trim().toUpperCase();
-    let costMinor: number | null = null;
-    if (source === 'retail' && values.costMinor.trim()) {
-      const parsed = parseMajorAmount(values.costMinor, /^[A-Z]{3}$/.test(currency) ? currency : 'EUR');
-      if (!parsed.ok) ctx.addIssue({ code: 'custom', path: ['costMinor'], message: parsed.message });
-      else costMinor = parsed.amountMinor;
-    }
-    const date = (text: string) => text.trim() || null;
-    return {
-      source,
-      // Only the chosen source's fields are sent; the other source's are cleared.
-      orderReference: source === 'retail' ? values.orderReference : null,
-      costMinor,
-      costCurrency: source === 'retail' && (costMinor !== null || values.costMinor.trim()) ? currency : null,
-      vendorContact: source === 'vendor-loan' ? values.vendorContact : null,
-      returnBy: source === 'vendor-loan' ? date(values.returnBy) : null,
-      receivedOn: date(values.receivedOn),
-      returnedOn: date(values.returnedOn),
-      serialNumber: values.serialNumber,
-      conditionNotes: values.conditionNotes,
-      firmwareOnArrival: values.firmwareOnArrival,
-      status: values.status as SampleStatus,
-    };
-  })
-  .pipe(updateSampleRequestSchema);
+const sampleFormSchema = formSchema(updateSampleRequestSchema, (values: FormValues, flag): UpdateSampleRequest => {
+  const source = values.source === 'retail' || values.source === 'vendor-loan' ? values.source : null;
+  const currency = values.costCurrency.trim().toUpperCase();
+  let costMinor: number | null = null;
+  if (source === 'retail' && values.costMinor.trim()) {
+    const parsed = parseMajorAmount(values.costMinor, /^[A-Z]{3}$/.test(currency) ? currency : 'EUR');
+    if (!parsed.ok) flag('costMinor', parsed.message);
+    else costMinor = parsed.amountMinor;
+  }
+  const date = (text: string) => text.trim() || null;
+  return {
+    source,
+    // Only the chosen source's fields are sent; the other source's are cleared.
+    orderReference: source === 'retail' ? values.orderReference : null,
+    costMinor,
+    costCurrency: source === 'retail' && (costMinor !== null || values.costMinor.trim()) ? currency : null,
+    vendorContact: source === 'vendor-loan' ? values.vendorContact : null,
+    returnBy: source === 'vendor-loan' ? date(values.returnBy) : null,
+    receivedOn: date(values.receivedOn),
+    returnedOn: date(values.returnedOn),
+    serialNumber: values.serialNumber,
+    conditionNotes: values.conditionNotes,
+    firmwareOnArrival: values.firmwareOnArrival,
+    status: values.status as SampleStatus,
+  };
+});
 
 function valuesOf(sample: Sample, defaultCurrency: string): FormValues {
   return {

@@ -132,10 +132,17 @@ function hasBody(req: Request): boolean {
   return (length !== undefined && length !== '0') || req.headers['transfer-encoding'] !== undefined;
 }
 
-/** A JSON route takes application/json (and multipart/form-data when it declares file fields); else 415. */
-function checkContentType(req: Request, multipart: boolean) {
+/**
+ * A JSON route takes application/json; an upload route multipart/form-data, and JSON too when it says `orJson`.
+ * Anything else is 415 (the upload middleware answers for the forms themselves).
+ */
+function checkContentType(req: Request, multipart: MultipartSpec | undefined) {
   if (!hasBody(req)) return;
-  const accepted = multipart ? ['application/json', 'multipart/form-data'] : ['application/json'];
+  const accepted = !multipart
+    ? ['application/json']
+    : multipart.orJson
+      ? ['application/json', 'multipart/form-data']
+      : ['multipart/form-data'];
   if (req.is(accepted)) return;
   const sent = req.headers['content-type'] ?? 'none';
   throw new AppError(
@@ -169,7 +176,7 @@ export class ApiRegistry {
     const guard: RequestHandler = (req, res, next) => {
       checkAccess(spec.access, res.locals.user ?? null);
       checkPathIds(pathIds, req.params as Record<string, string>);
-      if (spec.body || spec.multipart) checkContentType(req, !!spec.multipart);
+      if (spec.body || spec.multipart) checkContentType(req, spec.multipart);
       next();
     };
     const handle: RequestHandler = async (req, res) => {

@@ -85,7 +85,8 @@ export function buildOpenApiDocument(routes: RegisteredRoute[]) {
         ),
       },
     };
-    if (route.body) {
+    // An upload route's body schema checks its form fields; it is a JSON body only when the route says orJson.
+    if (route.body && (!route.multipart || route.multipart.orJson)) {
       operation.requestBody = {
         required: true,
         content: { 'application/json': { schema: jsonSchema(route.body, 'input') } },

@@ -1,4 +1,4 @@
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { client, signedIn, testApp, testDataSource, type Client, type TestApp } from './support/test-app';
 import { roles } from '../../shared/schemas/common';
 
@@ -80,6 +80,9 @@ const ids = { id: '1' };
 function concretePath(path: string, overrides: Record<string, string> = {}) {
   return path.replace(/\{(\w+)\}/g, (_, name: string) => overrides[name] ?? ids.id);
 }
+
+// Hundreds of requests per test: room for a busy machine.
+vi.setConfig({ testTimeout: 300_000, hookTimeout: 120_000 });
 
 let app: TestApp;
 let routes: Route[];

@@ -101,8 +101,8 @@ export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, whe
   return parsed.data;
 }
 
-/** Path ids are plain decimal integers: no sign, spaces, hex, exponent or decimal point. */
-const plainDecimal = /^[0-9]{1,15}$/;
+/** Path ids are plain positive decimal integers: no sign, spaces, leading zeros, hex, exponent or decimal point. */
+const plainDecimal = /^[1-9][0-9]{0,14}$/;
 
 /** Names of the path parameters the route's params schema reads as numbers. */
 function numericPathParams(params: z.ZodType | undefined): string[] {
@@ -119,7 +119,7 @@ function checkPathIds(names: string[], params: Record<string, string>) {
   const fields: Record<string, string> = {};
   for (const name of names) {
     const value = params[name];
-    if (value !== undefined && !plainDecimal.test(value)) fields[name] = 'Use a plain whole number, e.g. 42.';
+    if (value !== undefined && !plainDecimal.test(value)) fields[name] = 'Use a plain whole number above 0, e.g. 42.';
   }
   if (Object.keys(fields).length > 0) {
     throw new AppError('validation_failed', 400, 'Some path values are not valid.', fields);

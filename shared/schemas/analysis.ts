@@ -11,6 +11,7 @@
  * preview.guessedMapping and ask the tester to confirm it, never store the guess silently.
  */
 import { z } from 'zod';
+import { singleLineText } from './text';
 
 export const temperatureUnits = ['C', 'F', 'K', 'mV'] as const;
 export const temperatureUnitSchema = z.enum(temperatureUnits);
@@ -25,7 +26,7 @@ export const timeFormats = ['seconds', 'milliseconds', 'minutes', 'clock', 'date
 export const timeFormatSchema = z.enum(timeFormats);
 export type TimeFormat = z.infer<typeof timeFormatSchema>;
 
-const columnReference = z.string().trim().min(1);
+const columnReference = singleLineText(200, 'Name the column.');
 
 /** Columns are named by their header text (case-insensitive) or by 1-based position ("3"). */
 export const columnMappingSchema = z.object({
@@ -70,10 +71,10 @@ export const verdictRubricSchema = z
     warmUpToC: z.number().min(0).max(250).default(100),
     labels: z
       .object({
-        comfortable: z.string().trim().min(1).max(40).default('Comfortable'),
-        warm: z.string().trim().min(1).max(40).default('Warm'),
-        'hot-but-held': z.string().trim().min(1).max(40).default('Hot but held'),
-        throttled: z.string().trim().min(1).max(40).default('Throttled'),
+        comfortable: singleLineText(40).default('Comfortable'),
+        warm: singleLineText(40).default('Warm'),
+        'hot-but-held': singleLineText(40).default('Hot but held'),
+        throttled: singleLineText(40).default('Throttled'),
       })
       .prefault({}),
   })

@@ -8,7 +8,9 @@ import {
   verdictStatusSchema,
   verdictRubricSchema,
 } from './analysis';
-import { decimalSchema, idSchema, optionalTextSchema, personRefSchema, requiredTextSchema } from './planning-fields';
+import { decimalSchema, idSchema, personRefSchema, requiredTextSchema } from './planning-fields';
+import { dateRanges, zonedInstant } from './dates';
+import { optionalMultiLineText } from './text';
 
 export const runSources = ['logger', 'manual'] as const;
 export const runSourceSchema = z.enum(runSources);
@@ -25,14 +27,14 @@ const runFacts = {
   firmwareVersion: requiredTextSchema(100, 'Enter the firmware (BIOS) version the board ran.'),
   benchId: idSchema.nullable().optional(),
   /** When the soak started, as an instant (the client converts the tester's local time and names the zone). */
-  startedAt: instantSchema,
-  notes: optionalTextSchema(4000),
+  startedAt: zonedInstant(dateRanges.booking),
+  notes: optionalMultiLineText(4000),
   /** Required when the run starts outside every booking of the cell; kept with the run. */
-  outsideBookingReason: optionalTextSchema(500),
+  outsideBookingReason: optionalMultiLineText(500),
 };
 
 /** The JSON part of a logger-file run (multipart field `request`, beside the `file`). */
-export const loggerRunRequestSchema = z.object({
+export const loggerRunRequestSchema = z.strictObject({
   ...runFacts,
   mapping: columnMappingSchema,
   options: analysisOptionsSchema.optional(),
@@ -42,7 +44,7 @@ export const loggerRunRequestSchema = z.object({
 export type LoggerRunRequest = z.input<typeof loggerRunRequestSchema>;
 
 /** A run entered by hand when no log exists: peak and ambient. Marked "manual" everywhere it is shown. */
-export const manualRunRequestSchema = z.object({
+export const manualRunRequestSchema = z.strictObject({
   ...runFacts,
   manualPeakC: decimalSchema(-20, 200, 1, '°C'),
   manualAmbientC: decimalSchema(-20, 60, 1, '°C'),
@@ -157,19 +159,19 @@ export const createRunResponseSchema = z.object({
 export const runParamsSchema = z.object({ runId: z.coerce.number().int().positive() });
 export const cellRunsParamsSchema = z.object({ cellId: z.coerce.number().int().positive() });
 
-export const reviewRunRequestSchema = z.object({
+export const reviewRunRequestSchema = z.strictObject({
   decision: z.enum(['accept', 'send-back']),
   /** Required to accept a flagged run and to send a run back. */
-  reason: optionalTextSchema(2000),
+  reason: optionalMultiLineText(2000),
 });
 export type ReviewRunRequest = z.input<typeof reviewRunRequestSchema>;
 
-export const reanalyseRunRequestSchema = z.object({
+export const reanalyseRunRequestSchema = z.strictObject({
   mapping: columnMappingSchema.optional(),
   options: analysisOptionsSchema.optional(),
 });
 
-export const roundupRubricRequestSchema = z.object({ rubric: verdictRubricSchema.nullable() });
+export const roundupRubricRequestSchema = z.strictObject({ rubric: verdictRubricSchema.nullable() });
 
 /** One cell of the results matrix: the run of record's figures (or the newest run's when none is chosen). */
 export const resultCellSchema = z.object({

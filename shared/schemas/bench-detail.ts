@@ -3,6 +3,8 @@ import { instantSchema } from './common';
 import { benchProfileSchema } from './bench-profiles';
 import { benchSchema } from './benches';
 import { calendarDateSchema, optionalTextSchema, personRefSchema, requiredTextSchema } from './planning-fields';
+import { planningDateSchema } from './dates';
+import { multiLineText } from './text';
 
 export const instrumentKinds = ['probe', 'logger'] as const;
 export const instrumentKindLabels: Record<(typeof instrumentKinds)[number], string> = {
@@ -11,12 +13,12 @@ export const instrumentKindLabels: Record<(typeof instrumentKinds)[number], stri
 };
 
 /** A probe or logger that belongs to a bench, with its calibration. */
-export const createInstrumentRequestSchema = z.object({
+export const createInstrumentRequestSchema = z.strictObject({
   kind: z.enum(instrumentKinds, { error: 'Choose probe or logger.' }),
   label: requiredTextSchema(120, 'Name it, e.g. “Probe 1, V-core rear”.'),
   model: optionalTextSchema(120),
   serialNumber: optionalTextSchema(80),
-  calibratedOn: calendarDateSchema.nullable().default(null),
+  calibratedOn: planningDateSchema.nullable().default(null),
   /** Months between calibrations; a year is common practice for thermocouples and loggers (no source). */
   calibrationIntervalMonths: z
     .number({ error: 'Enter the months between calibrations.' })
@@ -44,9 +46,9 @@ export const instrumentSchema = z.object({
 });
 export type Instrument = z.infer<typeof instrumentSchema>;
 
-export const createMaintenanceRequestSchema = z.object({
-  doneOn: calendarDateSchema,
-  description: requiredTextSchema(500, 'Say what was done.'),
+export const createMaintenanceRequestSchema = z.strictObject({
+  doneOn: planningDateSchema,
+  description: multiLineText(500, 'Say what was done.'),
 });
 export type CreateMaintenanceRequest = z.input<typeof createMaintenanceRequestSchema>;
 

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { instantSchema } from './common';
 import { idSchema, personRefSchema, requiredTextSchema } from './planning-fields';
+import { optionalSingleLineText } from './text';
 
 export const photoKinds = ['overview', 'power-delivery', 'heatsinks', 'thermal-image', 'other'] as const;
 export const photoKindSchema = z.enum(photoKinds, { error: 'Choose what the photo shows.' });
@@ -12,7 +13,7 @@ export const photoKindLabels: Record<(typeof photoKinds)[number], string> = {
   other: 'Other',
 };
 
-const captionSchema = z.string().trim().max(300, 'Use at most 300 characters.').default('');
+const captionSchema = optionalSingleLineText(300).transform((value) => value ?? '');
 /** Alt text is required: it is what a screen reader says, and what shows when the image cannot load. */
 const altTextMessage = 'Describe the photo for people who cannot see it.';
 const altTextSchema = z.string({ error: altTextMessage }).pipe(requiredTextSchema(300, altTextMessage));
@@ -25,13 +26,13 @@ export const photoUploadFieldsSchema = z.object({
 });
 export type PhotoUploadFields = z.input<typeof photoUploadFieldsSchema>;
 
-export const updatePhotoRequestSchema = z.object({
+export const updatePhotoRequestSchema = z.strictObject({
   kind: photoKindSchema.optional(),
   caption: captionSchema.optional(),
   altText: altTextSchema.optional(),
 });
 
-export const reorderPhotosRequestSchema = z.object({
+export const reorderPhotosRequestSchema = z.strictObject({
   photoIds: z.array(idSchema).min(1, 'List the photos in their new order.').max(200),
 });
 

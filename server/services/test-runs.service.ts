@@ -5,6 +5,7 @@ import { BenchBookingCellEntity } from '../entities/bench-booking-cell.entity';
 import { BenchBookingEntity } from '../entities/bench-booking.entity';
 import { BenchProfileEntity } from '../entities/bench-profile.entity';
 import { BenchEntity } from '../entities/bench.entity';
+import { BenchInstrumentEntity } from '../entities/bench-instrument.entity';
 import { LoadConfigurationEntity } from '../entities/load-configuration.entity';
 import { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { ProductEntity } from '../entities/product.entity';
@@ -22,6 +23,7 @@ import { analysisEngineVersion } from '../../shared/domain/analysis/engine-versi
 import { repeatRunStatistics } from '../../shared/domain/analysis/repeat-run-statistics';
 import { judgeRun } from '../../shared/domain/analysis/verdict-rubric';
 import { qaFlagLabels } from '../../shared/domain/analysis/qa-flag-labels';
+import { calibrationOverdue, nextCalibrationDue } from '../../shared/domain/planning/calibration';
 import { vrmElectricalLoad } from '../../shared/domain/analysis/vrm-electrical-load';
 import type { PhaseMultiplication } from '../../shared/domain/planning/power-design';
 import {
@@ -520,8 +522,11 @@ export class TestRunsService {
     actor: CurrentUser,
     runId: number,
     parameters: Record<string, unknown>,
-    result: AnalysisResult | ManualResult,
+    analysed: AnalysisResult | ManualResult,
   ) {
+    const run = await manager.getRepository(TestRunEntity).findOneByOrFail({ id: runId });
+    const calibration = await calibrationFlags(manager, run.benchId, run.startedAt);
+    const result = calibration.length ? { ...analysed, flags: [...analysed.flags, ...calibration] } : analysed;
     const repo = manager.getRepository(RunAnalysisEntity);
     const fixed = (value: number | null | undefined, scale: number) => (value == null ? null : value.toFixed(scale));
     const full = 'throttle' in result ? (result as AnalysisResult) : null;
@@ -647,6 +652,34 @@ export class TestRunsService {
       };
     });
   }
+}
+
+/**
+ * A QA flag for each probe or logger of the run's bench that was past its calibration when the run started (or was
+ * never calibrated): its readings may be off by more than the tolerance the analysis assumes.
+ */
+async function calibrationFlags(manager: EntityManager, benchId: number | null, startedAt: Date): Promise<QaFlag[]> {
+  if (benchId === null) return [];
+  const day = startedAt.toISOString().slice(0, 10);
+  const instruments = await manager.getRepository(BenchInstrumentEntity).findBy({ benchId });
+  return instruments.flatMap((instrument) => {
+    const due = instrument.calibratedOn
+      ? nextCalibrationDue(instrument.calibratedOn, instrument.calibrationIntervalMonths)
+      : null;
+    if (instrument.calibratedOn && !calibrationOverdue(due, day)) return [];
+    return [
+      {
+        code: 'calibration-overdue' as const,
+        label: qaFlagLabels['calibration-overdue'],
+        severity: 'warning' as const,
+        message: instrument.calibratedOn
+          ? `The ${instrument.kind} “${instrument.label}” was due for calibration on ${due}, before this run.`
+          : `The ${instrument.kind} “${instrument.label}” has no calibration on record.`,
+        channel: null,
+        atS: null,
+      },
+    ];
+  });
 }
 
 function throttledSeconds(result: AnalysisResult) {

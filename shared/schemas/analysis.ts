@@ -237,6 +237,7 @@ export const qaFlagCodes = [
   'probe-spike',
   'manual-entry',
   'mapping-guessed',
+  'calibration-overdue',
 ] as const;
 export const qaFlagCodeSchema = z.enum(qaFlagCodes);
 export type QaFlagCode = z.infer<typeof qaFlagCodeSchema>;

@@ -17,4 +17,5 @@ export const qaFlagLabels: Record<QaFlagCode, string> = {
   'probe-spike': 'Spikes ignored',
   'manual-entry': 'Entered by hand',
   'mapping-guessed': 'Column mapping guessed',
+  'calibration-overdue': 'Instrument past calibration',
 };

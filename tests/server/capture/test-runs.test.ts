@@ -156,6 +156,25 @@ describe('test runs on matrix cells', () => {
     expect(await ds.getRepository(TestRunEntity).countBy({ matrixCellId: cellId })).toBe(0);
   });
 
+  it('when a probe of the bench was past its calibration at the run’s start, then the analysis says so in words', async () => {
+    const { editor, tester, cellId, benchId, startedAt } = await setUp();
+    // Calibrated 2 years before the run with a 12-month interval: due a year before it.
+    const calibratedOn = `${Number(startedAt.slice(0, 4)) - 2}${startedAt.slice(4, 10)}`;
+    const probe = await editor.agent
+      .post(`/api/benches/${benchId}/instruments`)
+      .send({ kind: 'probe', label: 'Probe 1, rear of VRM', calibratedOn, calibrationIntervalMonths: 12 });
+    expect(probe.status, probe.text).toBe(201);
+    const response = await uploadRun(tester.agent, cellId, Buffer.from(soakLog(7)), {
+      firmwareVersion: 'F1.2',
+      startedAt,
+      mapping,
+    });
+    expect(response.status, response.text).toBe(201);
+    const flag = response.body.run.analysis.flags.find((f: { code: string }) => f.code === 'calibration-overdue');
+    expect(flag).toMatchObject({ label: 'Instrument past calibration', severity: 'warning' });
+    expect(flag.message).toContain('Probe 1, rear of VRM');
+  });
+
   it('when a run starts outside every booking, then the tester is warned and may record it with a reason', async () => {
     const { tester, cellId } = await setUp();
     const body = { firmwareVersion: 'F1.2', startedAt: `${dayFromToday(2)}T20:00:00.000Z`, mapping };

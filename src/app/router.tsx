@@ -58,6 +58,7 @@ export function createAppRouter(queryClient: QueryClient) {
                 { path: 'roundups', lazy: lazy(() => import('./routes/roundups')) },
                 { path: 'roundups/new', lazy: lazy(() => import('./routes/roundup-new')) },
                 { path: 'roundups/:id', lazy: lazy(() => import('./routes/roundup-detail')) },
+                { path: 'roundups/:id/cells/:cellId', lazy: lazy(() => import('./routes/roundup-cell')) },
                 { path: 'my-bench', lazy: lazy(() => import('./routes/my-bench')) },
                 { path: '*', lazy: lazy(() => import('./routes/not-found')) },
               ],

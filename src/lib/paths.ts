@@ -14,6 +14,7 @@ export const paths = {
   roundups: '/roundups',
   newRoundup: '/roundups/new',
   roundup: (id: number) => `/roundups/${id}`,
+  roundupCell: (roundupId: number, cellId: number) => `/roundups/${roundupId}/cells/${cellId}`,
   myBench: '/my-bench',
   signIn: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
 } as const;

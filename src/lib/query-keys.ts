@@ -15,6 +15,7 @@ export const queryRoots = [
   'my-bench',
   'roundups',
   'samples',
+  'test-runs',
   'users',
 ] as const;
 export type QueryRoot = (typeof queryRoots)[number];

@@ -28,6 +28,11 @@ export const staleAfter = {
   user: ['users', 'matrix'],
   /** The tester's private calendar feed made, reset or turned off. */
   calendarFeed: ['bench-booking'],
+  /**
+   * A test run recorded, reviewed, re-analysed or made the run of record, or a roundup's rubric changed: the cell's
+   * runs, the results, the matrix, the tester's queue and the dashboards.
+   */
+  run: ['test-runs', 'matrix', 'my-bench', 'roundups', 'dashboard'],
   /** The signed-in person's own account (password, sessions). */
   account: ['account'],
 } as const satisfies Record<string, readonly QueryRoot[]>;

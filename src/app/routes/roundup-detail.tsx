@@ -14,6 +14,8 @@ import { RoundupHeader } from '../../features/roundups/components/roundup-header
 import { TestPlanPanel } from '../../features/roundups/components/test-plan-panel';
 import { matrixQueryOptions } from '../../features/matrix/api/get-matrix';
 import { MatrixGrid } from '../../features/matrix/components/matrix-grid';
+import { ResultsMatrix } from '../../features/test-runs/components/results-matrix';
+import { productName } from '../../lib/product-name';
 import { SamplesTable } from '../../features/samples/components/samples-table';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
@@ -52,7 +54,7 @@ export function Component() {
   );
 }
 
-const tabIds = ['products', 'matrix', 'samples', 'plan'] as const;
+const tabIds = ['products', 'matrix', 'results', 'samples', 'plan'] as const;
 
 function RoundupPage() {
   const params = useParams();
@@ -102,6 +104,24 @@ function RoundupPage() {
               <Suspense fallback={<LoadingState label="Loading the matrix…" />}>
                 <MatrixGrid roundupId={roundup.id} canAssign={isEditor} />
               </Suspense>
+            ),
+          },
+          {
+            id: 'results',
+            label: 'Results',
+            content: (
+              <ResultsMatrix
+                roundupId={roundup.id}
+                rows={roundup.entries
+                  .filter((entry) => entry.kind === 'tested')
+                  .map((entry) => ({ entryId: entry.id, name: productName(entry.product) }))}
+                columns={roundup.loadConfigurations.map((configuration) => ({
+                  id: configuration.id,
+                  name: configuration.name,
+                }))}
+                cellPath={(cellId) => paths.roundupCell(roundup.id, cellId)}
+                canEditRubric={isEditor}
+              />
             ),
           },
           {

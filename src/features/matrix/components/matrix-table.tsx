@@ -1,8 +1,10 @@
 import { useId, useMemo } from 'react';
+import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import { CellStateBadge } from '../../../components/ui/cell-state-badge';
 import { cx } from '../../../lib/class-names';
 import { formatCalendarDate } from '../../../lib/format-time';
+import { paths } from '../../../lib/paths';
 import { productName } from '../../../lib/product-name';
 import { cellActionRules, type CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
 import type { MatrixCell, RoundupMatrix } from '../../../../shared/schemas/matrix';
@@ -61,6 +63,7 @@ export function MatrixTable({ matrix, assigning, selection, pendingCellId, onAct
             <MatrixRow
               key={row.entryId}
               row={row}
+              roundupId={matrix.roundupId}
               columnCount={matrix.columns.length}
               columnName={columnName}
               assigning={assigning}
@@ -77,6 +80,7 @@ export function MatrixTable({ matrix, assigning, selection, pendingCellId, onAct
 
 interface MatrixRowProps {
   row: Row;
+  roundupId: number;
   columnCount: number;
   columnName: ReadonlyMap<number, string>;
   assigning: boolean;
@@ -85,7 +89,16 @@ interface MatrixRowProps {
   onAction: (cell: MatrixCell, name: string, action: CellAction) => void;
 }
 
-function MatrixRow({ row, columnCount, columnName, assigning, selection, pendingCellId, onAction }: MatrixRowProps) {
+function MatrixRow({
+  row,
+  roundupId,
+  columnCount,
+  columnName,
+  assigning,
+  selection,
+  pendingCellId,
+  onAction,
+}: MatrixRowProps) {
   const name = productName(row.product);
   const rowChosen = selection.isRowChosen(row.entryId);
   const rowAssignable = row.kind === 'tested' && row.cells.some(selection.isAssignable);
@@ -127,6 +140,7 @@ function MatrixRow({ row, columnCount, columnName, assigning, selection, pending
             key={cell.id}
             cell={cell}
             cellName={`${name} · ${columnName.get(cell.loadConfigurationId) ?? ''}`}
+            runsPath={paths.roundupCell(roundupId, cell.id)}
             className={line}
             choosable={assigning && selection.isAssignable(cell)}
             rowChosen={rowChosen}
@@ -144,6 +158,8 @@ function MatrixRow({ row, columnCount, columnName, assigning, selection, pending
 interface MatrixCellViewProps {
   cell: MatrixCell;
   cellName: string;
+  /** The cell's runs: its results, review and recording. */
+  runsPath: string;
   className: string;
   choosable: boolean;
   rowChosen: boolean;
@@ -156,6 +172,7 @@ interface MatrixCellViewProps {
 function MatrixCellView({
   cell,
   cellName,
+  runsPath,
   className,
   choosable,
   rowChosen,
@@ -179,6 +196,15 @@ function MatrixCellView({
         )}
         <div className="min-w-0 space-y-0.5">
           <CellStateBadge state={cell.state} />
+          <p className="text-[0.8125rem]">
+            <Link
+              to={runsPath}
+              aria-label={`Runs of ${cellName}`}
+              className="text-copper underline-offset-2 hover:underline"
+            >
+              Runs
+            </Link>
+          </p>
           <p className="text-[0.8125rem]">
             {cell.tester ? cell.tester.displayName : <span className="text-muted">No tester</span>}
           </p>

@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { Link } from 'react-router';
-import { Button } from '../../../components/ui/button';
+import { Button, buttonStyles } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { cx } from '../../../lib/class-names';
@@ -8,6 +8,7 @@ import { cellActionRules, cellStates, type CellAction } from '../../../../shared
 import type { Booking } from '../../../../shared/schemas/benches';
 import type { QueueItem } from '../../../../shared/schemas/matrix';
 import { formatCalendarDate, formatSlot } from '../../../lib/format-time';
+import { paths } from '../../../lib/paths';
 import { productName } from '../../../lib/product-name';
 import { CellStateBadge } from '../../../components/ui/cell-state-badge';
 import { useMediaQuery } from '../../../lib/use-media-query';
@@ -157,6 +158,13 @@ function QueueActions({
   const name = `${productName(item.product)} · ${item.loadConfiguration.name}`;
   return (
     <span className="flex flex-wrap gap-1.5">
+      <Link
+        to={paths.roundupCell(item.roundup.id, item.cell.id)}
+        aria-label={`Record a run: ${name}`}
+        className={buttonStyles('secondary', 'sm')}
+      >
+        Record a run
+      </Link>
       {item.cell.actions.map((action) => (
         <Button
           key={action}

@@ -1,0 +1,193 @@
+import { useState } from 'react';
+import { Link } from 'react-router';
+import { Alert } from '../../../components/ui/alert';
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { PageHeader } from '../../../components/ui/page-header';
+import { Panel } from '../../../components/ui/panel';
+import { formatInstant } from '../../../lib/format-time';
+import type { TestRun } from '../../../../shared/schemas/test-runs';
+import { formatC, formatDeltaC } from '../../log-check/components/format-figures';
+import { VerdictMark } from '../../log-check/components/verdict-mark';
+import { useCellRuns } from '../api/test-runs-api';
+import { ManualRunForm } from './manual-run-form';
+import { RecordLoggerRun } from './record-run';
+import { ManualMark, ReviewStateBadge, RunDetail } from './run-detail';
+
+export interface CellRunsPageProps {
+  cellId: number;
+  /** Link back to the roundup's matrix. */
+  matrixPath: string;
+  signInPath: string;
+  /** Testers record runs; editors review them. */
+  canRecord: boolean;
+}
+
+function RunsTable({
+  runs,
+  selectedId,
+  onSelect,
+}: {
+  runs: TestRun[];
+  selectedId: number | null;
+  onSelect: (id: number) => void;
+}) {
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full min-w-[36rem] text-left text-sm">
+        <thead>
+          <tr className="border-b border-rule text-muted">
+            <th scope="col" className="px-2 py-2 font-medium">
+              Firmware
+            </th>
+            <th scope="col" className="px-2 py-2 font-medium">
+              Started
+            </th>
+            <th scope="col" className="px-2 py-2 font-medium">
+              Source
+            </th>
+            <th scope="col" className="px-2 py-2 font-medium">
+              Peak
+            </th>
+            <th scope="col" className="px-2 py-2 font-medium">
+              Verdict
+            </th>
+            <th scope="col" className="px-2 py-2 font-medium">
+              Review
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {runs.map((run) => (
+            <tr key={run.id} className={run.id === selectedId ? 'bg-wash' : undefined}>
+              <td className="px-2 py-2">
+                <Button size="sm" variant="quiet" aria-pressed={run.id === selectedId} onClick={() => onSelect(run.id)}>
+                  {run.firmwareVersion}
+                </Button>
+                {run.isRunOfRecord && (
+                  <span className="ml-1 text-teal" title="Run of record">
+                    <span aria-hidden="true">★</span>
+                    <span className="sr-only">Run of record</span>
+                  </span>
+                )}
+              </td>
+              <td className="numeric px-2 py-2">{formatInstant(run.startedAt)}</td>
+              <td className="px-2 py-2">{run.source === 'manual' ? <ManualMark /> : 'Logger'}</td>
+              <td className="numeric px-2 py-2">{formatC(run.analysis.peakC)}</td>
+              <td className="px-2 py-2">
+                <VerdictMark code={run.analysis.verdict} label={run.analysis.verdictLabel ?? 'No verdict yet'} />
+                {run.analysis.flags.length > 0 && (
+                  <span className="ml-2 text-amber">
+                    ! {run.analysis.flags.length} flag{run.analysis.flags.length > 1 ? 's' : ''}
+                  </span>
+                )}
+              </td>
+              <td className="px-2 py-2">
+                <ReviewStateBadge state={run.reviewState} />
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+/** A matrix cell (product × load configuration): its runs, firmware comparison, the chosen run, and recording a new one. */
+export function CellRunsPage({ cellId, matrixPath, signInPath, canRecord }: CellRunsPageProps) {
+  const cell = useCellRuns(cellId);
+  const [chosenId, setChosenId] = useState<number | null>(null);
+  const [recording, setRecording] = useState<'logger' | 'manual' | null>(null);
+  const [recorded, setRecorded] = useState(false);
+  const selected =
+    cell.runs.find((run) => run.id === chosenId) ??
+    cell.runs.find((run) => run.id === cell.runOfRecordId) ??
+    cell.runs[0] ??
+    null;
+
+  const onRecorded = (runId: number) => {
+    setRecording(null);
+    setChosenId(runId);
+    setRecorded(true);
+  };
+
+  return (
+    <>
+      <p className="mb-2 text-sm">
+        <Link to={matrixPath} className="text-copper underline-offset-2 hover:underline">
+          ← Matrix
+        </Link>
+      </p>
+      <PageHeader eyebrow="Test runs" title={`${cell.productName} · ${cell.loadConfigurationName}`} />
+      <div className="space-y-6">
+        {recorded && (
+          <Alert tone="success" announce title="Run submitted">
+            The run is stored with its analysis and waits for review.
+          </Alert>
+        )}
+        <Panel title="Runs" description="Every run of this cell, newest first; the run of record is starred.">
+          {cell.runs.length === 0 ? (
+            <p className="text-sm text-muted">No runs yet.</p>
+          ) : (
+            <RunsTable runs={cell.runs} selectedId={selected?.id ?? null} onSelect={setChosenId} />
+          )}
+        </Panel>
+        {cell.byFirmware.length > 0 && (
+          <section aria-labelledby="firmware-heading">
+            <h2 id="firmware-heading" className="mb-3 text-lg font-semibold text-ink">
+              By firmware
+            </h2>
+            <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+              {cell.byFirmware.map((group) => (
+                <li key={group.firmwareVersion} className="rounded-[3px] border border-rule bg-surface p-3 text-sm">
+                  <p className="font-semibold">Firmware {group.firmwareVersion}</p>
+                  <p className="numeric">
+                    Mean peak {formatC(group.meanPeakC)} over {group.runs} run{group.runs > 1 ? 's' : ''}
+                  </p>
+                  <p className="numeric text-muted">
+                    {group.ciLowC !== null && group.ciHighC !== null
+                      ? `95\u2009% interval ${formatC(group.ciLowC)} to ${formatC(group.ciHighC)}`
+                      : 'One run: no interval yet'}
+                  </p>
+                  {group.differenceFromFirstC !== null && (
+                    <p className="numeric">
+                      Difference from the first firmware {formatDeltaC(group.differenceFromFirstC, true)}
+                    </p>
+                  )}
+                </li>
+              ))}
+            </ul>
+          </section>
+        )}
+        {selected && <RunDetail run={selected} />}
+        {canRecord && (
+          <Panel
+            title="Record a run"
+            description="Upload the soak's logger file, or enter peak and ambient by hand when no log exists."
+            actions={
+              <div className="flex flex-wrap gap-2">
+                <Button size="sm" aria-pressed={recording === 'logger'} onClick={() => setRecording('logger')}>
+                  Upload a log
+                </Button>
+                <Button size="sm" aria-pressed={recording === 'manual'} onClick={() => setRecording('manual')}>
+                  Enter by hand
+                </Button>
+              </div>
+            }
+          >
+            {recording === 'logger' && (
+              <RecordLoggerRun
+                cellId={cellId}
+                rememberedMapping={cell.rememberedMapping}
+                signInPath={signInPath}
+                onRecorded={onRecorded}
+              />
+            )}
+            {recording === 'manual' && <ManualRunForm cellId={cellId} onRecorded={onRecorded} />}
+            {recording === null && <Badge tone="muted">Choose how to record</Badge>}
+          </Panel>
+        )}
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,219 @@
+import { useState, type FormEvent } from 'react';
+import { Link } from 'react-router';
+import type { FieldErrors } from '../../../lib/form-errors';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { LoadingState } from '../../../components/ui/loading-state';
+import { TextField } from '../../../components/ui/text-field';
+import { cx } from '../../../lib/class-names';
+import { describeSubmitError } from '../../../lib/form-errors';
+import { defaultVerdictRubric, type VerdictCode, type VerdictRubric } from '../../../../shared/schemas/analysis';
+import type { ResultCell } from '../../../../shared/schemas/test-runs';
+import { formatC, formatDeltaC } from '../../log-check/components/format-figures';
+import { useRoundupResults, useSetRubric } from '../api/test-runs-api';
+
+export interface ResultsMatrixProps {
+  roundupId: number;
+  rows: { entryId: number; name: string }[];
+  columns: { id: number; name: string }[];
+  cellPath: (cellId: number) => string;
+  canEditRubric: boolean;
+}
+
+// The DESIGN palette per verdict; every cell also says its verdict in words and marks flags, manual values and throttling.
+const verdictStyles: Record<VerdictCode, string> = {
+  comfortable: 'border-l-teal bg-teal/10',
+  warm: 'border-l-amber bg-amber/10',
+  'hot-but-held': 'border-l-copper bg-copper/10',
+  throttled: 'border-l-red bg-red/10',
+};
+
+function ResultCellView({ cell, figure, href }: { cell: ResultCell; figure: 'peak' | 'delta'; href: string }) {
+  if (cell.runId === null) {
+    return (
+      <Link to={href} className="block px-3 py-2 text-muted underline-offset-2 hover:underline">
+        No run yet
+      </Link>
+    );
+  }
+  const value = figure === 'peak' ? formatC(cell.peakC) : formatDeltaC(cell.deltaOverAmbientC);
+  return (
+    <Link
+      to={href}
+      className={cx(
+        'block border-l-4 px-3 py-2 hover:underline',
+        cell.verdict ? verdictStyles[cell.verdict] : 'border-l-rule',
+      )}
+    >
+      <span className="numeric block font-semibold text-ink">{value}</span>
+      <span className="block text-[0.8125rem] text-ink">{cell.verdictLabel ?? 'No verdict yet'}</span>
+      <span className="flex flex-wrap gap-x-2 text-[0.8125rem]">
+        {cell.flagCount > 0 && (
+          <span className="text-amber">
+            ! {cell.flagCount} flag{cell.flagCount > 1 ? 's' : ''}
+          </span>
+        )}
+        {cell.source === 'manual' && <span className="text-copper">✎ Manual</span>}
+        {cell.throttled && <span className="text-red">✕ Throttled</span>}
+        {!cell.isRunOfRecord && <span className="text-muted">Newest run</span>}
+      </span>
+    </Link>
+  );
+}
+
+function RubricForm({
+  roundupId,
+  rubric,
+  isDefault,
+}: {
+  roundupId: number;
+  rubric: VerdictRubric;
+  isDefault: boolean;
+}) {
+  const [comfortable, setComfortable] = useState(String(rubric.comfortableBelowC));
+  const [warm, setWarm] = useState(String(rubric.warmUpToC));
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const [message, setMessage] = useState<string | null>(null);
+  const save = useSetRubric();
+
+  const send = (next: VerdictRubric | null) => {
+    setMessage(null);
+    save.mutate(
+      { roundupId, rubric: next },
+      {
+        onSuccess: () => {
+          if (next === null) {
+            setComfortable(String(defaultVerdictRubric.comfortableBelowC));
+            setWarm(String(defaultVerdictRubric.warmUpToC));
+          }
+        },
+        onError: (error) => {
+          const described = describeSubmitError(error);
+          setErrors({
+            comfortableBelowC: described.fields['rubric.comfortableBelowC'] ?? described.fields.comfortableBelowC,
+            warmUpToC: described.fields['rubric.warmUpToC'] ?? described.fields.warmUpToC,
+          });
+          setMessage(described.message);
+        },
+      },
+    );
+  };
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    const comfortableBelowC = Number(comfortable);
+    const warmUpToC = Number(warm);
+    const found: FieldErrors = {};
+    if (!comfortable.trim() || !Number.isFinite(comfortableBelowC))
+      found.comfortableBelowC = 'Enter a temperature in °C.';
+    if (!warm.trim() || !Number.isFinite(warmUpToC)) found.warmUpToC = 'Enter a temperature in °C.';
+    else if (comfortableBelowC > warmUpToC) found.warmUpToC = 'The warm limit must not be below the comfortable limit.';
+    setErrors(found);
+    if (Object.keys(found).length > 0) return;
+    send({ ...rubric, comfortableBelowC, warmUpToC });
+  };
+
+  return (
+    <form noValidate onSubmit={submit} aria-label="Verdict rubric" className="flex flex-wrap items-end gap-3">
+      <TextField
+        id="rubric-comfortable"
+        label="Comfortable below (°C)"
+        inputMode="decimal"
+        value={comfortable}
+        onChange={(event) => setComfortable(event.target.value)}
+        error={errors.comfortableBelowC}
+        className="w-44"
+      />
+      <TextField
+        id="rubric-warm"
+        label="Warm up to (°C)"
+        inputMode="decimal"
+        value={warm}
+        onChange={(event) => setWarm(event.target.value)}
+        error={errors.warmUpToC}
+        className="w-44"
+      />
+      <Button type="submit" pending={save.isPending && save.variables?.rubric !== null}>
+        Save the rubric
+      </Button>
+      {!isDefault && (
+        <Button type="button" variant="quiet" onClick={() => send(null)}>
+          Reset to defaults
+        </Button>
+      )}
+      {message && (
+        <Alert tone="danger" announce className="w-full">
+          {message}
+        </Alert>
+      )}
+    </form>
+  );
+}
+
+/** The results matrix: per cell the run of record's peak or delta over ambient, coloured and named by its verdict. */
+export function ResultsMatrix({ roundupId, rows, columns, cellPath, canEditRubric }: ResultsMatrixProps) {
+  const results = useRoundupResults(roundupId);
+  const [figure, setFigure] = useState<'peak' | 'delta'>('peak');
+  if (results.isPending) return <LoadingState label="Loading the results…" />;
+  if (results.isError) return <Alert tone="danger">The results could not be loaded. {results.error.message}</Alert>;
+  const { cells, rubric, rubricIsDefault } = results.data;
+  const byPlace = new Map(cells.map((cell) => [`${cell.entryId}:${cell.loadConfigurationId}`, cell]));
+
+  return (
+    <div className="space-y-4">
+      <fieldset className="flex flex-wrap items-center gap-2">
+        <legend className="sr-only">Figure shown</legend>
+        <Button size="sm" aria-pressed={figure === 'peak'} onClick={() => setFigure('peak')}>
+          Peak
+        </Button>
+        <Button size="sm" aria-pressed={figure === 'delta'} onClick={() => setFigure('delta')}>
+          Delta over ambient
+        </Button>
+        <span className="text-sm text-muted">
+          Comfortable below {formatC(rubric.comfortableBelowC, 0)}, warm up to {formatC(rubric.warmUpToC, 0)}
+          {rubricIsDefault ? ' (defaults)' : ''}.
+        </span>
+      </fieldset>
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm" aria-label="Results">
+          <thead>
+            <tr className="border-b border-rule">
+              <th scope="col" className="px-3 py-2 text-left font-medium text-muted">
+                Product
+              </th>
+              {columns.map((column) => (
+                <th key={column.id} scope="col" className="px-3 py-2 text-left font-medium text-muted">
+                  {column.name}
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((row) => (
+              <tr key={row.entryId} className="border-b border-rule">
+                <th scope="row" className="px-3 py-2 text-left font-medium">
+                  {row.name}
+                </th>
+                {columns.map((column) => {
+                  const cell = byPlace.get(`${row.entryId}:${column.id}`);
+                  return (
+                    <td key={column.id} className="p-0 align-top">
+                      {cell ? (
+                        <ResultCellView cell={cell} figure={figure} href={cellPath(cell.cellId)} />
+                      ) : (
+                        <span className="block px-3 py-2 text-muted">Not planned</span>
+                      )}
+                    </td>
+                  );
+                })}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {canEditRubric && (
+        <RubricForm key={JSON.stringify(rubric)} roundupId={roundupId} rubric={rubric} isDefault={rubricIsDefault} />
+      )}
+    </div>
+  );
+}

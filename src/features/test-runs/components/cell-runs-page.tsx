@@ -75,7 +75,11 @@ function RunsTable({
               <td className="px-2 py-2">{run.source === 'manual' ? <ManualMark /> : 'Logger'}</td>
               <td className="numeric px-2 py-2">{formatC(run.analysis.peakC)}</td>
               <td className="px-2 py-2">
-                <VerdictMark code={run.analysis.verdict} label={run.analysis.verdictLabel ?? 'No verdict yet'} />
+                <VerdictMark
+                  code={run.analysis.verdict}
+                  label={run.analysis.verdictLabel ?? 'No verdict yet'}
+                  status={run.analysis.verdictStatus ?? undefined}
+                />
                 {run.analysis.flags.length > 0 && (
                   <span className="ml-2 text-amber">
                     ! {run.analysis.flags.length} flag{run.analysis.flags.length > 1 ? 's' : ''}

@@ -42,7 +42,7 @@ function ResultCellView({ cell, figure, href }: { cell: ResultCell; figure: 'pea
       to={href}
       className={cx(
         'block border-l-4 px-3 py-2 hover:underline',
-        cell.verdict ? verdictStyles[cell.verdict] : 'border-l-rule',
+        cell.verdict && cell.verdictStatus !== 'withheld' ? verdictStyles[cell.verdict] : 'border-l-rule',
       )}
     >
       <span className="numeric block font-semibold text-ink">{value}</span>

@@ -117,7 +117,12 @@ export function RunDetail({ run }: { run: TestRun }) {
           <ReviewStateBadge state={run.reviewState} />
           {run.isRunOfRecord && <Badge tone="positive">★ Run of record</Badge>}
         </div>
-        <VerdictMark code={analysis.verdict} label={analysis.verdictLabel ?? 'No verdict yet'} size="lg" />
+        <VerdictMark
+          code={analysis.verdict}
+          label={analysis.verdictLabel ?? 'No verdict yet'}
+          status={analysis.verdictStatus ?? undefined}
+          size="lg"
+        />
         {analysis.verdictRule && <p className="text-sm text-muted">{analysis.verdictRule}</p>}
         <dl className="grid grid-cols-2 gap-3 sm:grid-cols-3">
           <Figure label="Peak" value={formatC(analysis.peakC)} />

@@ -1,5 +1,6 @@
 import { render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { MemoryRouter } from 'react-router';
 import { describe, expect, it } from 'vitest';
 import { MatrixBoard } from '../../src/features/matrix/components/matrix-board';
 import type { CellAction } from '../../shared/domain/planning/matrix-cell-states';
@@ -104,7 +105,7 @@ function fakeServer() {
 describe('MatrixBoard', () => {
   it('names each product once, with the product column as the row header', () => {
     const server = fakeServer();
-    render(<MatrixBoard matrix={matrix} canAssign testers={testers} {...server} />);
+    render(<MatrixBoard matrix={matrix} canAssign testers={testers} {...server} />, { wrapper: MemoryRouter });
     expect(screen.getAllByRole('rowheader', { name: /Vesk Halden B70/ })[0]).toBeTruthy();
     expect(screen.queryByText(/Vesk Vesk/)).toBeNull();
   });
@@ -112,7 +113,7 @@ describe('MatrixBoard', () => {
   it('when an editor assigns with nothing filled in, then every problem shows at once and nothing is sent', async () => {
     const user = userEvent.setup();
     const server = fakeServer();
-    render(<MatrixBoard matrix={matrix} canAssign testers={testers} {...server} />);
+    render(<MatrixBoard matrix={matrix} canAssign testers={testers} {...server} />, { wrapper: MemoryRouter });
 
     await user.click(screen.getByRole('button', { name: 'Assign chosen cells' }));
 
@@ -125,7 +126,7 @@ describe('MatrixBoard', () => {
   it('when an editor chooses a row and a single cell, then both go to the tester in one assignment', async () => {
     const user = userEvent.setup();
     const server = fakeServer();
-    render(<MatrixBoard matrix={matrix} canAssign testers={testers} {...server} />);
+    render(<MatrixBoard matrix={matrix} canAssign testers={testers} {...server} />, { wrapper: MemoryRouter });
 
     await user.click(screen.getByRole('checkbox', { name: 'Choose the whole row: Vesk Halden B70' }));
     await user.click(screen.getByRole('checkbox', { name: 'Choose Ostrel Works Holloway B50 · Stock, 200 W' }));
@@ -144,7 +145,7 @@ describe('MatrixBoard', () => {
   it('when an editor accepts a recorded cell, then the move is sent and its outcome is announced', async () => {
     const user = userEvent.setup();
     const server = fakeServer();
-    render(<MatrixBoard matrix={matrix} canAssign testers={testers} {...server} />);
+    render(<MatrixBoard matrix={matrix} canAssign testers={testers} {...server} />, { wrapper: MemoryRouter });
 
     const row = screen.getByRole('row', { name: /Holloway B50/ });
     await user.click(within(row).getByRole('button', { name: 'Accept: Ostrel Works Holloway B50 · Stock, 125 W' }));
@@ -157,7 +158,9 @@ describe('MatrixBoard', () => {
 
   it('when the roundup has left the bench, then nothing can be assigned', () => {
     const server = fakeServer();
-    render(<MatrixBoard matrix={{ ...matrix, roundupState: 'writing' }} canAssign testers={testers} {...server} />);
+    render(<MatrixBoard matrix={{ ...matrix, roundupState: 'writing' }} canAssign testers={testers} {...server} />, {
+      wrapper: MemoryRouter,
+    });
     expect(screen.queryByRole('button', { name: 'Assign chosen cells' })).toBeNull();
     expect(screen.getByText(/closed to changes/)).toBeTruthy();
   });

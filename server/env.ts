@@ -37,6 +37,10 @@ const envSchema = z
     S3_SECRET_ACCESS_KEY: z.string().optional(),
     S3_PREFIX: z.string().optional(),
     S3_FORCE_PATH_STYLE: booleanFlag,
+    /** Run scheduled work (publishing at embargo time, mail) in this process; every process may run it. */
+    JOB_RUNNER: z.enum(['on', 'off']).default('on'),
+    /** How often the job runner looks for due work, in milliseconds. */
+    JOB_POLL_MS: z.coerce.number().int().min(50).max(60_000).default(1_000),
   })
   .superRefine((env, context) => {
     if (env.STORAGE_DRIVER !== 's3') return;

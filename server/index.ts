@@ -4,6 +4,8 @@ import { createApp } from './app';
 import { createServices } from './compose-services';
 import { createDataSource, initializeDataSource } from './data-source';
 import { loadEnv } from './env';
+import { createJobRegistry } from './jobs/all';
+import { JobRunner } from './jobs/job-runner';
 
 const env = loadEnv();
 const dataSource = await initializeDataSource(createDataSource(env.DATABASE_URL, { logging: env.DB_LOGGING }));
@@ -25,12 +27,17 @@ const server = app.listen(env.PORT, env.HOST, () => {
   console.log(`Benchwire is running at http://${env.HOST}:${env.PORT}  (Ctrl-C stops it)`);
 });
 
+// Scheduled work runs beside the requests; overdue jobs (the server was down at their time) go first.
+const jobRunner = new JobRunner(dataSource, createJobRegistry(services), { pollIntervalMs: env.JOB_POLL_MS });
+if (env.JOB_RUNNER === 'on') jobRunner.start();
+
 let closing = false;
 async function shutdown() {
   if (closing) return;
   closing = true;
   server.close();
   server.closeIdleConnections();
+  await jobRunner.stop().catch(() => {});
   await services.logFileAnalyser.close().catch(() => {});
   await dataSource.destroy().catch(() => {});
   process.exit(0);

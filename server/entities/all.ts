@@ -22,6 +22,7 @@ import { PhotoEntity } from './photo.entity';
 import { CalendarFeedEntity } from './calendar-feed.entity';
 import { BenchInstrumentEntity } from './bench-instrument.entity';
 import { BenchMaintenanceEntryEntity } from './bench-maintenance-entry.entity';
+import { JobEntity } from './job.entity';
 
 export const entities = [
   UserEntity,
@@ -47,4 +48,5 @@ export const entities = [
   PasswordGuessCounterEntity,
   BenchInstrumentEntity,
   BenchMaintenanceEntryEntity,
+  JobEntity,
 ];

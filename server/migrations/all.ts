@@ -21,6 +21,7 @@ import { AddBookingOverrideReason1765200031000 } from './1765200031000-add-booki
 import { CreateCalendarFeeds1765200032000 } from './1765200032000-create-calendar-feeds';
 import { CreatePasswordGuessCounters1765300001000 } from './1765300001000-create-password-guess-counters';
 import { CreateBenchInstrumentsAndMaintenance1765400033000 } from './1765400033000-create-bench-instruments-and-maintenance';
+import { CreateJobs1765700001000 } from './1765700001000-create-jobs';
 
 export const migrations = [
   CreateUsersSessionsAudit1764600000000,
@@ -45,4 +46,5 @@ export const migrations = [
   CreateCalendarFeeds1765200032000,
   CreatePasswordGuessCounters1765300001000,
   CreateBenchInstrumentsAndMaintenance1765400033000,
+  CreateJobs1765700001000,
 ];

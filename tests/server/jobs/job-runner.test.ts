@@ -1,0 +1,220 @@
+import { randomBytes } from 'node:crypto';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { z } from 'zod';
+import type { DataSource } from 'typeorm';
+import { JobEntity } from '../../../server/entities/job.entity';
+import { ManualClock } from '../../../server/jobs/clock';
+import { cancelJob, enqueueJob } from '../../../server/jobs/enqueue';
+import { JobRegistry, PermanentJobError, RetryJobLater } from '../../../server/jobs/job-registry';
+import { JobRunner } from '../../../server/jobs/job-runner';
+import { testDataSource } from '../support/test-app';
+
+const quiet = { error: () => {}, warn: () => {} };
+const payload = z.object({ n: z.number() });
+let dataSource: DataSource;
+
+/** A kind of its own per test, so runners of other tests sharing the database never claim these jobs. */
+function kindName() {
+  return `test-${randomBytes(4).toString('hex')}`;
+}
+
+async function jobsOf(kind: string) {
+  return dataSource.getRepository(JobEntity).find({ where: { kind }, order: { id: 'ASC' } });
+}
+
+beforeAll(async () => {
+  dataSource = await testDataSource();
+});
+
+describe('job runner', () => {
+  it('runs a job only once its time has come, by the runner clock', async () => {
+    const kind = kindName();
+    const seen: number[] = [];
+    const registry = new JobRegistry().register(kind, {
+      payload,
+      handler: async ({ job }) => void seen.push(job.payload.n),
+    });
+    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
+    const runner = new JobRunner(dataSource, registry, { clock, log: quiet });
+    await enqueueJob(dataSource.manager, { kind, payload: { n: 1 }, runAt: new Date('2031-03-01T12:00:10.000Z') });
+
+    clock.set('2031-03-01T12:00:09.999Z');
+    expect(await runner.runDue()).toBe(0);
+    expect(seen).toEqual([]);
+
+    clock.set('2031-03-01T12:00:10.000Z');
+    expect(await runner.runDue()).toBe(1);
+    expect(seen).toEqual([1]);
+    const [job] = await jobsOf(kind);
+    expect(job.state).toBe('done');
+    expect(job.attempts).toBe(1);
+    expect(job.lockedBy).toBeNull();
+    expect(await runner.runDue()).toBe(0);
+  });
+
+  it('keeps one job per unique key; replace re-times it; cancel stops it', async () => {
+    const kind = kindName();
+    const seen: number[] = [];
+    const registry = new JobRegistry().register(kind, {
+      payload,
+      handler: async ({ job }) => void seen.push(job.payload.n),
+    });
+    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
+    const runner = new JobRunner(dataSource, registry, { clock, log: quiet });
+    const key = `${kind}:one`;
+    await enqueueJob(dataSource.manager, { kind, payload: { n: 1 }, runAt: clock.now(), uniqueKey: key });
+    await enqueueJob(dataSource.manager, { kind, payload: { n: 2 }, runAt: clock.now(), uniqueKey: key });
+    expect(await jobsOf(kind)).toHaveLength(1);
+
+    await enqueueJob(
+      dataSource.manager,
+      { kind, payload: { n: 3 }, runAt: new Date('2031-03-01T13:00:00.000Z'), uniqueKey: key },
+      'replace',
+    );
+    expect(await runner.runDue()).toBe(0);
+    clock.set('2031-03-01T13:00:00.000Z');
+    expect(await runner.runDue()).toBe(1);
+    expect(seen).toEqual([3]);
+
+    const other = `${kind}:two`;
+    await enqueueJob(dataSource.manager, { kind, payload: { n: 4 }, runAt: clock.now(), uniqueKey: other });
+    await cancelJob(dataSource.manager, other, clock.now());
+    expect(await runner.runDue()).toBe(0);
+    expect((await jobsOf(kind)).map((j) => j.state)).toEqual(['done', 'cancelled']);
+  });
+
+  it('retries a failed job with a growing delay, then succeeds', async () => {
+    const kind = kindName();
+    let calls = 0;
+    const registry = new JobRegistry().register(kind, {
+      payload,
+      handler: async () => {
+        calls += 1;
+        if (calls < 3) throw new Error(`relay busy (${calls})`);
+      },
+    });
+    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
+    const runner = new JobRunner(dataSource, registry, { clock, log: quiet });
+    await enqueueJob(dataSource.manager, { kind, payload: { n: 1 }, runAt: clock.now() });
+
+    expect(await runner.runDue()).toBe(1);
+    let [job] = await jobsOf(kind);
+    expect(job.state).toBe('pending');
+    expect(job.lastError).toContain('relay busy (1)');
+    // Default back-off: 5 s after the first failure, 10 s after the second (server/jobs/job-registry.ts).
+    expect(job.runAt.toISOString()).toBe('2031-03-01T12:00:05.000Z');
+
+    clock.advance(4_999);
+    expect(await runner.runDue()).toBe(0);
+    clock.advance(1);
+    expect(await runner.runDue()).toBe(1);
+    [job] = await jobsOf(kind);
+    expect(job.runAt.toISOString()).toBe('2031-03-01T12:00:15.000Z');
+
+    clock.set(job.runAt);
+    expect(await runner.runDue()).toBe(1);
+    [job] = await jobsOf(kind);
+    expect(job.state).toBe('done');
+    expect(job.attempts).toBe(3);
+    expect(job.lastError).toBeNull();
+  });
+
+  it('honours a handler that asks to retry later, and fails for good on a permanent error or too many attempts', async () => {
+    const kind = kindName();
+    const registry = new JobRegistry().register(kind, {
+      payload,
+      maxAttempts: 2,
+      handler: async ({ job }) => {
+        if (job.payload.n === 1) throw new RetryJobLater('try in a minute', 60_000);
+        if (job.payload.n === 2) throw new PermanentJobError('address refused');
+      },
+    });
+    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
+    const runner = new JobRunner(dataSource, registry, { clock, log: quiet });
+    await enqueueJob(dataSource.manager, { kind, payload: { n: 1 }, runAt: clock.now() });
+    await enqueueJob(dataSource.manager, { kind, payload: { n: 2 }, runAt: clock.now() });
+    await enqueueJob(dataSource.manager, { kind, payload: { wrong: true }, runAt: clock.now() });
+
+    expect(await runner.runDue()).toBe(3);
+    const [pending, refused, malformed] = await jobsOf(kind);
+    expect(pending.state).toBe('pending');
+    expect(pending.runAt.toISOString()).toBe('2031-03-01T12:01:00.000Z');
+    expect(refused.state).toBe('failed');
+    expect(refused.lastError).toContain('address refused');
+    expect(malformed.state).toBe('failed');
+
+    clock.advance(60_000);
+    expect(await runner.runDue()).toBe(1);
+    const [later] = await jobsOf(kind);
+    expect(later.state).toBe('failed');
+    expect(later.attempts).toBe(2);
+  });
+
+  it('two runners sharing the queue run each job exactly once', async () => {
+    const kind = kindName();
+    const runs = new Map<number, number>();
+    const handler = async ({ job }: { job: { payload: { n: number } } }) => {
+      runs.set(job.payload.n, (runs.get(job.payload.n) ?? 0) + 1);
+      await new Promise((resolve) => setTimeout(resolve, 2));
+    };
+    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
+    const first = new JobRunner(dataSource, new JobRegistry().register(kind, { payload, handler }), {
+      clock,
+      log: quiet,
+    });
+    const second = new JobRunner(dataSource, new JobRegistry().register(kind, { payload, handler }), {
+      clock,
+      log: quiet,
+    });
+    for (let n = 0; n < 30; n += 1) {
+      await enqueueJob(dataSource.manager, { kind, payload: { n }, runAt: clock.now() });
+    }
+    const [a, b] = await Promise.all([first.runDue(), second.runDue()]);
+    expect(a + b).toBe(30);
+    expect([...runs.values()].every((count) => count === 1)).toBe(true);
+    expect(runs.size).toBe(30);
+  });
+
+  it('takes over a job whose runner died once its lease has run out', async () => {
+    const kind = kindName();
+    const seen: number[] = [];
+    const registry = new JobRegistry().register(kind, {
+      payload,
+      handler: async ({ job }) => void seen.push(job.payload.n),
+    });
+    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
+    await dataSource.query(
+      `INSERT INTO jobs (kind, payload, run_at, state, attempts, locked_by, locked_at)
+       VALUES (?, '{"n":7}', ?, 'running', 1, 'a process that died', ?)`,
+      [kind, clock.now(), clock.now()],
+    );
+    const runner = new JobRunner(dataSource, registry, { clock, leaseMs: 60_000, log: quiet });
+    clock.advance(59_999);
+    expect(await runner.runDue()).toBe(0);
+    clock.advance(1);
+    expect(await runner.runDue()).toBe(1);
+    expect(seen).toEqual([7]);
+    const [job] = await jobsOf(kind);
+    expect(job.state).toBe('done');
+    expect(job.attempts).toBe(2);
+  });
+
+  it('started, it runs overdue jobs at once and keeps polling until stopped', async () => {
+    const kind = kindName();
+    const seen: number[] = [];
+    const registry = new JobRegistry().register(kind, {
+      payload,
+      handler: async ({ job }) => void seen.push(job.payload.n),
+    });
+    await enqueueJob(dataSource.manager, { kind, payload: { n: 1 }, runAt: new Date(Date.now() - 3_600_000) });
+    const runner = new JobRunner(dataSource, registry, { pollIntervalMs: 50, log: quiet });
+    runner.start();
+    try {
+      await expect.poll(() => seen, { timeout: 5_000 }).toEqual([1]);
+      await enqueueJob(dataSource.manager, { kind, payload: { n: 2 }, runAt: new Date() });
+      await expect.poll(() => seen, { timeout: 5_000 }).toEqual([1, 2]);
+    } finally {
+      await runner.stop();
+    }
+  });
+});

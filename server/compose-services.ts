@@ -19,6 +19,7 @@ import { SamplesService } from './services/samples.service';
 import { TestRunsService } from './services/test-runs.service';
 import { PhotosService } from './services/photos.service';
 import { UsersService } from './services/users.service';
+import { WriteUpsService } from './services/write-ups.service';
 import { createFileStore } from './storage/create-file-store';
 
 /**
@@ -53,6 +54,7 @@ export function createServices(dataSource: DataSource, env: Env) {
   const logCheck = new LogCheckService(logFileAnalyser);
   const testRuns = new TestRunsService(dataSource, files, logFileAnalyser);
   const photos = new PhotosService(dataSource, files);
+  const writeUps = new WriteUpsService(dataSource);
 
   return {
     sessions,
@@ -76,6 +78,7 @@ export function createServices(dataSource: DataSource, env: Env) {
     calendarFeeds,
     testRuns,
     photos,
+    writeUps,
   };
 }
 

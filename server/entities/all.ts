@@ -23,6 +23,9 @@ import { CalendarFeedEntity } from './calendar-feed.entity';
 import { BenchInstrumentEntity } from './bench-instrument.entity';
 import { BenchMaintenanceEntryEntity } from './bench-maintenance-entry.entity';
 import { JobEntity } from './job.entity';
+import { WriteUpSectionEntity } from './write-up-section.entity';
+import { WriteUpRevisionEntity } from './write-up-revision.entity';
+import { WriteUpCommentEntity } from './write-up-comment.entity';
 
 export const entities = [
   UserEntity,
@@ -49,4 +52,7 @@ export const entities = [
   BenchInstrumentEntity,
   BenchMaintenanceEntryEntity,
   JobEntity,
+  WriteUpSectionEntity,
+  WriteUpRevisionEntity,
+  WriteUpCommentEntity,
 ];

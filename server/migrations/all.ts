@@ -22,6 +22,7 @@ import { CreateCalendarFeeds1765200032000 } from './1765200032000-create-calenda
 import { CreatePasswordGuessCounters1765300001000 } from './1765300001000-create-password-guess-counters';
 import { CreateBenchInstrumentsAndMaintenance1765400033000 } from './1765400033000-create-bench-instruments-and-maintenance';
 import { CreateJobs1765700001000 } from './1765700001000-create-jobs';
+import { CreateWriteUps1765600001000 } from './1765600001000-create-write-ups';
 
 export const migrations = [
   CreateUsersSessionsAudit1764600000000,
@@ -47,4 +48,5 @@ export const migrations = [
   CreatePasswordGuessCounters1765300001000,
   CreateBenchInstrumentsAndMaintenance1765400033000,
   CreateJobs1765700001000,
+  CreateWriteUps1765600001000,
 ];

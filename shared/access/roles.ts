@@ -21,6 +21,11 @@ export const bookers: readonly Role[] = ['tester'];
 /** Check a logger file from a soak. */
 export const logCheckers: readonly Role[] = ['tester', 'editor'];
 
+/** Write and revise a roundup's write-up, ask for its review, and comment on its sections. */
+export const writeUpWriters: readonly Role[] = ['editor', 'writer'];
+/** Sign off write-up sections, or hand them back to the writer. */
+export const writeUpApprovers: readonly Role[] = ['editor'];
+
 /** Whether a role is among those a rule names. */
 export function may(role: Role, rule: readonly Role[]): boolean {
   return rule.includes(role);

@@ -73,7 +73,8 @@ export function registerTestRunRoutes(api: ApiRegistry, { services }: AppContext
     path: '/api/runs/:runId',
     access: planningReaders,
     tag: 'Test runs',
-    summary: 'One run with its current analysis, earlier analyses, VRM electrical load and review.',
+    summary:
+      'One run with its current analysis, earlier analyses, VRM electrical load and review (a tester: their own runs).',
     params: runParamsSchema,
     response: testRunSchema,
     handler: ({ params, user }) => runs.run(params.runId, user),
@@ -84,11 +85,11 @@ export function registerTestRunRoutes(api: ApiRegistry, { services }: AppContext
     path: '/api/runs/:runId/logger-file',
     access: planningReaders,
     tag: 'Test runs',
-    summary: 'Download the stored logger file exactly as it was uploaded.',
+    summary: 'Download the stored logger file exactly as it was uploaded (a tester: their own runs).',
     params: runParamsSchema,
     produces: 'text/plain',
-    handler: async ({ params, res }) => {
-      const { file, body } = await runs.loggerFile(params.runId);
+    handler: async ({ params, res, user }) => {
+      const { file, body } = await runs.loggerFile(params.runId, user);
       const asciiName = file.originalName.replace(/[^A-Za-z0-9._-]/g, '_');
       res.setHeader('Content-Type', 'application/octet-stream');
       res.setHeader(

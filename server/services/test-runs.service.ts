@@ -77,6 +77,9 @@ export class TestRunsService {
   async cellRuns(cellId: number, user: CurrentUser): Promise<CellRuns> {
     const manager = this.dataSource.manager;
     const { cell, profile, product, configuration } = await this.cellContext(manager, cellId);
+    if (user.role === 'tester' && cell.testerId !== user.id) {
+      throw forbidden('This cell is assigned to another tester; its runs are open to them and the editors.');
+    }
     const runs = await manager
       .getRepository(TestRunEntity)
       .find({ where: { matrixCellId: cellId }, order: { id: 'ASC' } });
@@ -114,14 +117,17 @@ export class TestRunsService {
     const run = await manager.getRepository(TestRunEntity).findOneBy({ id: runId });
     if (!run) throw notFound('That test run');
     const cell = await manager.getRepository(MatrixCellEntity).findOneByOrFail({ id: run.matrixCellId });
+    assertMayReadRun(user, run, cell);
     return (await this.runDtos(manager, [run], cell, user))[0];
   }
 
-  /** The stored logger file, byte for byte, for staff to download. */
-  async loggerFile(runId: number): Promise<{ file: StoredFileEntity; body: Buffer }> {
+  /** The stored logger file, byte for byte, for staff to download (a tester: their own runs). */
+  async loggerFile(runId: number, user: CurrentUser): Promise<{ file: StoredFileEntity; body: Buffer }> {
     const manager = this.dataSource.manager;
     const run = await manager.getRepository(TestRunEntity).findOneBy({ id: runId });
     if (!run) throw notFound('That test run');
+    const cell = await manager.getRepository(MatrixCellEntity).findOneByOrFail({ id: run.matrixCellId });
+    assertMayReadRun(user, run, cell);
     if (run.loggerFileId === null) throw notFound('A logger file for that run');
     const file = await manager.getRepository(StoredFileEntity).findOneByOrFail({ id: run.loggerFileId });
     const body = await this.files.get(file.storageKey);
@@ -658,6 +664,15 @@ export class TestRunsService {
  * A QA flag for each probe or logger of the run's bench that was past its calibration when the run started (or was
  * never calibrated): its readings may be off by more than the tolerance the analysis assumes.
  */
+/**
+ * Runs are the work of one tester: a tester reads the runs they recorded and those of cells assigned to them,
+ * never another tester's; editors, writers and admins read every run (results and write-ups need them).
+ */
+function assertMayReadRun(user: CurrentUser, run: TestRunEntity, cell: MatrixCellEntity) {
+  if (user.role !== 'tester' || run.testerId === user.id || cell.testerId === user.id) return;
+  throw forbidden('This run belongs to another tester; it is open to them and the editors.');
+}
+
 async function calibrationFlags(manager: EntityManager, benchId: number | null, startedAt: Date): Promise<QaFlag[]> {
   if (benchId === null) return [];
   const day = startedAt.toISOString().slice(0, 10);

@@ -11,6 +11,9 @@ import { authenticate } from './middleware/authenticate';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { verifyOrigin } from './middleware/verify-origin';
 import { registerFeatureRoutes } from './routes/all';
+import { createReaderRouter } from './public-site/reader-routes';
+import { LivePublishedRoundups } from './public-site/published-roundup-source';
+import { readerAssetsFrom } from './public-site/reader-assets';
 import { installHumanMessages } from '../shared/schemas/human-messages';
 
 export interface CreateAppOptions {
@@ -62,6 +65,18 @@ export function createApp({
   app.use('/api', express.json({ limit: '1mb' }), verifyOrigin, authenticate(services.sessions));
   app.use(api.router);
   app.use('/api', apiNotFound);
+
+  // The reader site: server-rendered pages under /read (see server/public-site/public-paths.ts for the URL map).
+  app.use(
+    createReaderRouter({
+      dataSource,
+      files: services.files,
+      source: new LivePublishedRoundups(dataSource),
+      assets: readerAssetsFrom(clientDir),
+      publicSiteUrl: env.PUBLIC_SITE_URL,
+      photoFile: (photoId, size) => services.photos.file(photoId, size),
+    }),
+  );
 
   if (clientDir && existsSync(resolve(clientDir, 'index.html'))) {
     app.use(express.static(clientDir, { index: false, maxAge: '1h', setHeaders: immutableAssets }));

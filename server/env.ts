@@ -41,6 +41,8 @@ const envSchema = z
     JOB_RUNNER: z.enum(['on', 'off']).default('on'),
     /** How often the job runner looks for due work, in milliseconds. */
     JOB_POLL_MS: z.coerce.number().int().min(50).max(60_000).default(1_000),
+    /** Public address of the reader site for canonical URLs, feeds and previews (https://results.example); the request's own origin when unset. */
+    PUBLIC_SITE_URL: z.url().optional(),
   })
   .superRefine((env, context) => {
     if (env.STORAGE_DRIVER !== 's3') return;

@@ -18,6 +18,7 @@ import { UserEntity } from './user.entity';
 import { StoredFileEntity } from './stored-file.entity';
 import { TestRunEntity } from './test-run.entity';
 import { RunAnalysisEntity } from './run-analysis.entity';
+import { ReaderSiteSettingsEntity } from './reader-site-settings.entity';
 import { PhotoEntity } from './photo.entity';
 import { CalendarFeedEntity } from './calendar-feed.entity';
 import { BenchInstrumentEntity } from './bench-instrument.entity';
@@ -55,4 +56,5 @@ export const entities = [
   WriteUpSectionEntity,
   WriteUpRevisionEntity,
   WriteUpCommentEntity,
+  ReaderSiteSettingsEntity,
 ];

@@ -44,6 +44,10 @@ export class RoundupEntity {
   @Column({ type: 'json', name: 'verdict_rubric', nullable: true })
   verdictRubric: VerdictRubric | null;
 
+  /** Whether the published open data offers the raw logger files of the runs of record (the editor's choice). */
+  @Column({ type: 'boolean', name: 'open_data_raw_files', default: false })
+  openDataRawFiles: boolean;
+
   @Column({ type: 'int', unsigned: true, name: 'bench_profile_id', nullable: true })
   benchProfileId: number | null;
 

@@ -23,6 +23,7 @@ import { CreatePasswordGuessCounters1765300001000 } from './1765300001000-create
 import { CreateBenchInstrumentsAndMaintenance1765400033000 } from './1765400033000-create-bench-instruments-and-maintenance';
 import { CreateJobs1765700001000 } from './1765700001000-create-jobs';
 import { CreateWriteUps1765600001000 } from './1765600001000-create-write-ups';
+import { ReaderSiteSettings1765710001000 } from './1765710001000-reader-site-settings';
 
 export const migrations = [
   CreateUsersSessionsAudit1764600000000,
@@ -49,4 +50,5 @@ export const migrations = [
   CreateBenchInstrumentsAndMaintenance1765400033000,
   CreateJobs1765700001000,
   CreateWriteUps1765600001000,
+  ReaderSiteSettings1765710001000,
 ];

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import { ReaderSiteSettingsEntity } from '../entities/reader-site-settings.entity';
 import { UserEntity } from '../entities/user.entity';
 import { seedPlanning } from './demo-planning';
 import { seedStaff } from './demo-staff';
@@ -11,6 +12,11 @@ export async function seedDemoOnce(dataSource: DataSource, files: FileStore): Pr
   await dataSource.transaction(async (manager) => {
     const staff = await seedStaff(manager);
     await seedPlanning(manager, { editor: staff.editor, tester: staff.tester, secondTester: staff.secondTester });
+    await manager.getRepository(ReaderSiteSettingsEntity).insert({
+      id: 1,
+      outletName: 'The Soak Sheet',
+      openDataLicence: 'Results and logs by The Soak Sheet, free to reuse with credit and a link to the roundup.',
+    });
   });
   // Runs go through the test-run service (its own transactions, the file store), after the plan they hang on.
   await seedDemoRuns(dataSource, files);

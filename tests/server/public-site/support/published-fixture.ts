@@ -1,0 +1,141 @@
+import { expect } from 'vitest';
+import { RoundupEntity } from '../../../../server/entities/roundup.entity';
+import { RunAnalysisEntity } from '../../../../server/entities/run-analysis.entity';
+import { SampleEntity } from '../../../../server/entities/sample.entity';
+import type { RoundupState } from '../../../../shared/domain/planning/roundup-states';
+import { signedIn, testApp, testDataSource, type Client } from '../../support/test-app';
+import {
+  addEntry,
+  addPrice,
+  createProduct,
+  createRoundup,
+  dayFromToday,
+  matrixOf,
+  moveToBench,
+  tag,
+} from '../../planning/support/planning-fixtures';
+
+export interface PlannedRun {
+  peakC: number;
+  ambientC?: number;
+  throttled?: boolean;
+  /** The analysis is doctored afterwards to a withheld verdict, as the QA checks give an unfinished soak. */
+  withheld?: boolean;
+  /** No run of record is chosen for the cell. */
+  notOfRecord?: boolean;
+}
+
+export interface PublishedFixture {
+  roundupId: number;
+  title: string;
+  platform: string;
+  configurationIds: number[];
+  products: { productId: number; entryId: number; model: string; maker: string }[];
+  runIds: number[][];
+  editor: Client;
+  tester: Client;
+}
+
+async function manualRun(agent: Client, cellId: number, run: PlannedRun) {
+  const response = await agent.post(`/api/cells/${cellId}/manual-runs`).send({
+    firmwareVersion: 'F1.0',
+    startedAt: new Date(Date.now() - 86_400_000).toISOString(),
+    manualPeakC: run.peakC,
+    manualAmbientC: run.ambientC ?? 21.0,
+    throttled: run.throttled ?? false,
+    outsideBookingReason: 'Recorded from the bench display.',
+  });
+  expect(response.status, response.text).toBe(201);
+  return response.body.run.id as number;
+}
+
+/**
+ * A roundup with the given boards × configurations measured by hand (one run per cell, accepted and of record), put
+ * into `state` (Live by default). Runs are grid[product][configuration].
+ */
+export async function publishedFixture(
+  grid: PlannedRun[][],
+  options: {
+    state?: RoundupState;
+    models?: string[];
+    platform?: string;
+    configurationIds?: number[];
+    prices?: { amountMinor: number; observedOn: string }[][];
+  } = {},
+): Promise<PublishedFixture> {
+  const app = await testApp();
+  const editor = await signedIn(app, 'editor');
+  const tester = await signedIn(app, 'tester');
+  const ds = await testDataSource();
+  const configurations = grid[0]?.length ?? 1;
+  const setup = await createRoundup(editor.agent, { configurations, platform: options.platform });
+  let configurationIds = setup.loadConfigurationIds;
+  if (options.configurationIds) {
+    const put = await editor.agent
+      .put(`/api/roundups/${setup.roundupId}/load-configurations`)
+      .send({ loadConfigurationIds: options.configurationIds });
+    expect(put.status, put.text).toBe(200);
+    configurationIds = options.configurationIds;
+  }
+  const products: PublishedFixture['products'] = [];
+  for (const [index] of grid.entries()) {
+    const model = options.models?.[index] ?? `Testboard ${tag()}`;
+    const maker = `Vendrel ${tag()}`;
+    const productId = await createProduct(editor.agent, setup.platform, { maker, model });
+    for (const price of options.prices?.[index] ?? []) {
+      await addPrice(editor.agent, productId, { region: 'DE', currency: 'EUR', ...price });
+    }
+    const { entry } = await addEntry(editor.agent, setup.roundupId, productId);
+    products.push({ productId, entryId: entry.id, model, maker });
+  }
+  await moveToBench(editor.agent, setup.roundupId);
+  const matrix = await matrixOf(editor.agent, setup.roundupId);
+  const cellIds = matrix.rows.flatMap((row) => row.cells.map((cell) => cell.id));
+  const assigned = await editor.agent
+    .post(`/api/roundups/${setup.roundupId}/assignments`)
+    .send({ cellIds, testerId: tester.user.id, dueDate: dayFromToday(3) });
+  expect(assigned.status, assigned.text).toBe(200);
+
+  const runIds: number[][] = [];
+  for (const [row, runs] of grid.entries()) {
+    const entryRow = matrix.rows.find((r) => r.entryId === products[row].entryId);
+    runIds.push([]);
+    for (const [column, planned] of runs.entries()) {
+      const cell = entryRow?.cells[column];
+      if (!cell) throw new Error('cell missing');
+      const runId = await manualRun(tester.agent, cell.id, planned);
+      runIds[row].push(runId);
+      const review = await editor.agent
+        .post(`/api/runs/${runId}/review`)
+        .send({ decision: 'accept', reason: 'Checked.' });
+      expect(review.status, review.text).toBe(200);
+      if (!planned.notOfRecord) {
+        const marked = await editor.agent.post(`/api/runs/${runId}/run-of-record`);
+        expect(marked.status, marked.text).toBe(200);
+      }
+      if (planned.withheld) {
+        const analysis = await ds.getRepository(RunAnalysisEntity).findOneByOrFail({ testRunId: runId });
+        const result = analysis.result as { verdict: Record<string, unknown> };
+        result.verdict = { ...result.verdict, status: 'withheld', code: null, label: 'No verdict yet', judgedC: null };
+        await ds.getRepository(RunAnalysisEntity).update({ id: analysis.id }, { result, verdict: null });
+      }
+    }
+  }
+  for (const product of products) {
+    await ds
+      .getRepository(SampleEntity)
+      .update({ entryId: product.entryId }, { source: 'retail', firmwareOnArrival: '1.01' });
+  }
+  await ds.getRepository(RoundupEntity).update({ id: setup.roundupId }, { state: options.state ?? 'live' });
+  const roundup = await ds.getRepository(RoundupEntity).findOneByOrFail({ id: setup.roundupId });
+  return {
+    roundupId: setup.roundupId,
+    title: roundup.title,
+    platform: setup.platform,
+    configurationIds,
+    products,
+    runIds,
+    editor: editor.agent,
+    tester: tester.agent,
+  };
+}

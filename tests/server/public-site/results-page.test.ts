@@ -1,20 +1,10 @@
-import { HtmlValidate } from 'html-validate';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { buildPublishedRoundup } from '../../../server/public-site/published-roundup';
 import { renderRoundupPage } from '../../../server/public-site/render-roundup-page';
 import { testApp, testDataSource } from '../support/test-app';
+import { expectValidHtml } from './support/html-check';
 import { publishedFixture } from './support/published-fixture';
-
-const validator = new HtmlValidate({ extends: ['html-validate:recommended'] });
-
-async function expectValidHtml(markup: string) {
-  const report = await validator.validateString(markup);
-  const messages = report.results.flatMap((r) =>
-    r.messages.map((m) => `${m.line}:${m.column} ${m.ruleId} ${m.message}`),
-  );
-  expect(messages).toEqual([]);
-}
 
 const site = {
   baseUrl: 'https://results.test',

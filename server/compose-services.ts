@@ -54,7 +54,7 @@ export function createServices(dataSource: DataSource, env: Env) {
   const logCheck = new LogCheckService(logFileAnalyser);
   const testRuns = new TestRunsService(dataSource, files, logFileAnalyser);
   const photos = new PhotosService(dataSource, files);
-  const writeUps = new WriteUpsService(dataSource);
+  const writeUps = new WriteUpsService(dataSource, testRuns);
 
   return {
     sessions,

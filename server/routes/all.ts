@@ -17,6 +17,7 @@ import { registerRoundupRoutes } from './roundups.routes';
 import { registerSampleRoutes } from './samples.routes';
 import { registerTestRunRoutes } from './test-runs.routes';
 import { registerPhotoRoutes } from './photos.routes';
+import { registerWriteUpRoutes } from './write-ups.routes';
 
 /** Every feature's routes. A new feature adds one line here. */
 export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
@@ -37,4 +38,5 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerCalendarFeedRoutes(api, context);
   registerTestRunRoutes(api, context);
   registerPhotoRoutes(api, context);
+  registerWriteUpRoutes(api, context);
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textProblem } from './text';
 
 // The stored form of a write-up section: the editor's JSON document, limited to the nodes and marks Benchwire
 // offers. The server refuses anything else, so a body sent around the editor cannot smuggle a node or attribute
@@ -109,6 +110,14 @@ export interface WriteUpDocument {
 }
 
 const maxTextLength = 20_000;
+
+/** Text in the document follows the house text rule: well-formed, no hidden controls (shared/schemas/text.ts). */
+function checkedText(kind: 'single-line' | 'multi-line') {
+  return z.string().check((payload) => {
+    const problem = textProblem(payload.value, kind);
+    if (problem) payload.issues.push({ code: 'custom', message: problem, input: payload.value, abort: true });
+  });
+}
 const positiveId = z.number().int().positive().max(4_294_967_295);
 
 const linkMark = z.strictObject({
@@ -133,7 +142,7 @@ const markSchema: z.ZodType<Mark> = z.union([
 
 const textNode: z.ZodType<TextNode> = z.strictObject({
   type: z.literal('text'),
-  text: z.string().min(1).max(maxTextLength),
+  text: checkedText('multi-line').min(1).max(maxTextLength),
   marks: z.array(markSchema).max(3).optional(),
 });
 const hardBreakNode: z.ZodType<HardBreakNode> = z.strictObject({ type: z.literal('hardBreak') });
@@ -186,10 +195,10 @@ const imageNode: z.ZodType<ImageNode> = z.strictObject({
   type: z.literal('image'),
   attrs: z.strictObject({
     photoId: positiveId,
-    alt: z.string().trim().min(1, 'Every photo needs its alt text.').max(300),
+    alt: checkedText('single-line').trim().min(1, 'Every photo needs its alt text.').max(300),
     // The address is decided when the page is rendered, from the photo id; what the editor had is ignored.
     src: z.string().max(2000).nullable().optional(),
-    title: z.string().max(300).nullable().optional(),
+    title: checkedText('single-line').max(300).nullable().optional(),
     width: z.number().int().positive().nullable().optional(),
     height: z.number().int().positive().nullable().optional(),
   }),

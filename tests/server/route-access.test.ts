@@ -100,6 +100,21 @@ const allowed: Record<string, Caller[]> = {
   'PATCH /api/photos/:photoId': ['editor', 'tester'],
   'DELETE /api/photos/:photoId': ['editor', 'tester'],
   'GET /api/photos/:photoId/files/:size': staff,
+  // Write-up (issue 9): writers and editors write and comment, editors sign off; every role reads.
+  'GET /api/roundups/:id/write-up': staff,
+  'GET /api/roundups/:id/write-up/preview': staff,
+  'GET /api/write-up/sections/:sectionId': staff,
+  'PUT /api/write-up/sections/:sectionId': ['editor', 'writer'],
+  'POST /api/write-up/sections/:sectionId/review-request': ['editor', 'writer'],
+  'POST /api/write-up/sections/:sectionId/sign-off': ['editor'],
+  'POST /api/write-up/sections/:sectionId/hand-back': ['editor'],
+  'GET /api/write-up/sections/:sectionId/revisions': staff,
+  'GET /api/write-up/sections/:sectionId/revisions/:revisionId': staff,
+  'POST /api/write-up/sections/:sectionId/revisions/:revisionId/restore': ['editor', 'writer'],
+  'GET /api/write-up/sections/:sectionId/comments': staff,
+  'POST /api/write-up/sections/:sectionId/comments': ['editor', 'writer'],
+  'POST /api/write-up/comments/:commentId/resolve': ['editor', 'writer'],
+  'POST /api/write-up/comments/:commentId/reopen': ['editor', 'writer'],
 };
 
 interface RouteLayer {

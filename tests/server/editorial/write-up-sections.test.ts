@@ -1,14 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { WriteUpSectionEntity } from '../../../server/entities/write-up-section.entity';
-import { WriteUpsService } from '../../../server/services/write-ups.service';
-import { testApp, testDataSource } from '../support/test-app';
+import { createServices } from '../../../server/compose-services';
+import { testApp, testDataSource, testEnv } from '../support/test-app';
 import { roundupInWriting } from './support/write-up-fixtures';
 
 describe('write-up sections of a roundup', () => {
   it('when a roundup reaches Writing, then it gets an introduction, how we tested, a section per product and a conclusion, and each blocks readiness until signed off', async () => {
     const app = await testApp();
     const { roundupId, entryIds } = await roundupInWriting(app, { products: 2 });
-    const service = new WriteUpsService(await testDataSource());
+    const service = createServices(await testDataSource(), testEnv()).writeUps;
 
     const blocking = await service.sectionsBlocking(roundupId);
     const sections = await (

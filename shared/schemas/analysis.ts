@@ -219,6 +219,8 @@ export const logPreviewSchema = z.object({
   rows: z.array(z.array(z.string())),
   /** Lines after the header, blank lines within the data included; the analysis counts the samples exactly. */
   dataRowCount: z.number().int().nonnegative(),
+  /** How the time column reads in the first rows when that needs saying (stamps repeating at a steady rate), else null. */
+  timeNote: z.string().nullable(),
   /** Best guess from header names, null when no VRM column could be guessed. Always needs the tester's confirmation. */
   guessedMapping: columnMappingSchema.nullable(),
 });

@@ -13,7 +13,9 @@ import { lineTooLong, tableTooLarge, type LogShapeLimits } from './log-shape-lim
 import { loggerFileText } from './logger-file-text';
 import { isBlankRow, parseLoggerTable, type LoggerTable } from './logger-table';
 import { readMappedLog, type MappedLog } from './read-mapped-log';
-import { firstDataRowIndex, guessTimeColumn } from './read-time-column';
+import { firstDataRowIndex, guessTimeColumn, openTimeColumn } from './read-time-column';
+import { ParseErrorList } from './parse-error-list';
+import { repeatedStampsNote, spreadRepeatedStamps } from './repeated-time-stamps';
 import { analyseRun } from './run-analysis';
 
 /** Data rows shown in the preview. */
@@ -55,6 +57,33 @@ function previewRows(table: LoggerTable): string[][] {
   return rows;
 }
 
+/**
+ * The repeated-stamp note from the first rows, before any analysis: a 2 Hz logger stamping whole seconds is told
+ * about on the read panel already. Null when the first rows' stamps do not repeat at a steady rate (or do not read).
+ */
+function previewTimeNote(table: LoggerTable, timeIndex: number): string | null {
+  if (timeIndex < 0) return null;
+  const errors = new ParseErrorList();
+  const reader = openTimeColumn(table, timeIndex, errors);
+  if (!reader) return null;
+  const times: number[] = [];
+  const rowNumbers: number[] = [];
+  table.sampleRows.forEach((row, index) => {
+    if (isBlankRow(row)) return;
+    const rowNumber = table.firstRowNumber + index;
+    times.push(reader.next(row[timeIndex] ?? '', rowNumber));
+    rowNumbers.push(rowNumber);
+  });
+  if (!errors.isEmpty || times.length < 2) return null;
+  const repeated = spreadRepeatedStamps(
+    Float64Array.from(times),
+    Int32Array.from(rowNumbers),
+    table.columns[timeIndex],
+    errors,
+  );
+  return repeated && errors.isEmpty ? repeatedStampsNote(repeated, { ahead: true }) : null;
+}
+
 function buildPreview(table: LoggerTable): LogPreview {
   const timeIndex = guessTimeColumn(table);
   const timeColumn = timeIndex < 0 ? null : table.columns[timeIndex];
@@ -74,6 +103,7 @@ function buildPreview(table: LoggerTable): LogPreview {
       timeColumn === null ? null : detectTimeFormat(table.sampleRows[firstDataRowIndex(table)][timeIndex], timeColumn),
     rows: previewRows(table),
     dataRowCount: table.lineCount,
+    timeNote: previewTimeNote(table, timeIndex),
     guessedMapping: guessColumnMapping(table.columns, timeColumn),
   };
 }

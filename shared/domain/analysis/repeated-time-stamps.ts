@@ -66,8 +66,12 @@ export function spreadRepeatedStamps(
   return { perStamp, stampStepS };
 }
 
-/** The read summary's sentence for spread stamps. */
-export function repeatedStampsNote({ perStamp, stampStepS }: RepeatedStamps): string {
+/**
+ * The read summary's sentence for spread stamps; `{ ahead: true }` says it before the analysis, from the first rows
+ * (the preview), when nothing has been spread yet.
+ */
+export function repeatedStampsNote({ perStamp, stampStepS }: RepeatedStamps, { ahead = false } = {}): string {
   const step = formatDuration(stampStepS);
-  return `The time stamps repeat: about ${perStamp} rows share each stamp ${step} apart, so Benchwire spread them evenly within each ${step} step (every ${formatDuration(stampStepS / perStamp)}).`;
+  const spread = ahead ? 'the analysis spreads them' : 'Benchwire spread them';
+  return `The time stamps repeat: about ${perStamp} rows share each stamp ${step} apart, so ${spread} evenly within each ${step} step (every ${formatDuration(stampStepS / perStamp)}).`;
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { analyseLog } from '../../../shared/domain/analysis/analyse-log';
+import { analyseLog, previewLog } from '../../../shared/domain/analysis/analyse-log';
 import { qaFlagLabels } from '../../../shared/domain/analysis/qa-flag-labels';
 import { syntheticLoggerLog, type SyntheticLogSpec } from '../../../shared/generators/synthetic-logger-log';
 import { qaFlagCodes, type AnalysisRequestInput } from '../../../shared/schemas/analysis';
@@ -94,6 +94,18 @@ describe('repeated whole-second stamps', () => {
     expect(analysis.readNotes).toEqual([
       'The time stamps repeat: about 2 rows share each stamp 1\u2009s apart, so Benchwire spread them evenly within each 1\u2009s step (every 0.50\u2009s).',
     ]);
+  });
+
+  it('before any analysis, the read panel (the preview) already says the stamps repeat and will be spread', () => {
+    const previewed = previewLog(twiceASecond(600));
+    expect(previewed.ok).toBe(true);
+    if (previewed.ok) {
+      expect(previewed.preview.timeNote).toBe(
+        'The time stamps repeat: about 2 rows share each stamp 1\u2009s apart, so the analysis spreads them evenly within each 1\u2009s step (every 0.50\u2009s).',
+      );
+    }
+    const plain = previewLog('Time,VRM 1\n0,50\n1,51\n2,52\n');
+    expect(plain.ok && plain.preview.timeNote).toBeNull();
   });
 
   it('when the logger started mid-second (one row on the first stamp), then that row sits at the end of its second', () => {

@@ -71,6 +71,11 @@ export function LogPreviewPanel({ preview, fileName }: LogPreviewPanelProps) {
               <span className="text-red">none found</span>
             )}
           </Fact>
+          {preview.timeNote && (
+            <Fact term="Time stamps">
+              <span className="text-ink">{preview.timeNote}</span>
+            </Fact>
+          )}
         </dl>
 
         <div className="overflow-x-auto rounded-[3px] border border-rule">

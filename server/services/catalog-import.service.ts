@@ -7,6 +7,7 @@ import { recordAudit } from './audit.service';
 import { parseCatalogCsv } from '../lib/catalog-csv';
 import { changedProductFields, productColumnsFromInput, productInputFromEntity } from '../mappers/product-fields';
 import { isDuplicateKey } from '../lib/database-errors';
+import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 import type {
   CatalogImportPreview,
   CatalogImportResult,
@@ -147,7 +148,7 @@ export class CatalogImportService {
           errors.push({
             rowNumber: row.rowNumber,
             column: 'model',
-            message: `Row ${earlier} already has ${row.maker} ${row.model}; each product once per file.`,
+            message: `Row ${earlier} already has ${productDisplayName(row)}; each product once per file.`,
           });
         } else {
           firstRowFor.set(key, row.rowNumber);

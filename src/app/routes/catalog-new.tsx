@@ -9,7 +9,7 @@ import { PageHeader } from '../../components/ui/page-header';
 import { ForbiddenState } from '../../components/ui/forbidden-state';
 import { roleLabels } from '../../../shared/schemas/common';
 import { RoleGate } from '../role-gate';
-import { productName } from '../../lib/product-name';
+import { productDisplayName } from '../../../shared/domain/planning/product-display-name';
 import { catalogEditors, may } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
@@ -49,7 +49,7 @@ function NewProductPage() {
         save={(input) => createProduct.mutateAsync(input)}
         onSaved={(product) =>
           navigate(paths.catalogProduct(product.id), {
-            state: { notice: `${productName(product)} is in the catalog.` },
+            state: { notice: `${productDisplayName(product)} is in the catalog.` },
           })
         }
       />

@@ -12,7 +12,7 @@ import { ForbiddenState } from '../../components/ui/forbidden-state';
 import { roleLabels } from '../../../shared/schemas/common';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
-import { productName } from '../../lib/product-name';
+import { productDisplayName } from '../../../shared/domain/planning/product-display-name';
 import { catalogEditors, may } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
@@ -49,7 +49,7 @@ function EditProduct({ id }: { id: number }) {
     <>
       <PageHeader
         eyebrow="Catalog"
-        title={`Edit ${productName(product)}`}
+        title={`Edit ${productDisplayName(product)}`}
         description="Changes show in the catalog and in every roundup plan that lists this board."
       />
       <ProductForm

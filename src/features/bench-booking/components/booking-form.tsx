@@ -8,7 +8,7 @@ import { TextArea } from '../../../components/ui/text-area';
 import { TextField } from '../../../components/ui/text-field';
 import { isApiError } from '../../../lib/api-client';
 import { formatCalendarDate, formatSlot } from '../../../lib/format-time';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { formSchema } from '../../../lib/form-schema';
 import {
@@ -232,7 +232,7 @@ export function BookingForm({ benches, cells, initialBenchId = null, suggestedSt
                   />
                   <label htmlFor={id} className="text-sm">
                     <span className="font-medium">
-                      {productName(item.product)} · {item.loadConfiguration.name}
+                      {productDisplayName(item.product)} · {item.loadConfiguration.name}
                     </span>
                     <span className="block text-xs text-muted">
                       {item.roundup.title}

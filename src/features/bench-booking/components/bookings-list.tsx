@@ -6,7 +6,7 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { describeSubmitError } from '../../../lib/form-errors';
 import { formatSlot, userTimeZone } from '../../../lib/format-time';
 import type { Booking } from '../../../../shared/schemas/benches';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 import { useCancelBooking } from '../api/cancel-booking';
 
 /** The tester's upcoming slots, soonest first, each with the cells it covers. */
@@ -52,7 +52,7 @@ export function BookingsList({ bookings }: { bookings: readonly Booking[] }) {
                 <ul className="mt-0.5 text-[0.8125rem] text-muted">
                   {booking.cells.map((item) => (
                     <li key={item.cell.id}>
-                      {productName(item.product)} · {item.loadConfiguration.name}
+                      {productDisplayName(item.product)} · {item.loadConfiguration.name}
                     </li>
                   ))}
                 </ul>

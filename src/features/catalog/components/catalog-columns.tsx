@@ -22,7 +22,7 @@ import {
   stageTypeLong,
   stageTypeShort,
 } from './catalog-format';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 
 export interface CatalogColumn extends DataTableColumn<Product> {
   /** Name in the column chooser (the header may be shorter). */
@@ -281,7 +281,7 @@ export function catalogColumns(options: { regions: readonly string[]; canEdit: b
         <Link
           to={paths.catalogProductEdit(product.id)}
           className={buttonStyles('secondary', 'sm')}
-          aria-label={`Edit ${productName(product)}`}
+          aria-label={`Edit ${productDisplayName(product)}`}
         >
           Edit
         </Link>

@@ -2,6 +2,7 @@ import { Badge } from '../../../components/ui/badge';
 import type { CatalogImportPreview, ImportRowPreview } from '../../../../shared/schemas/catalog-import';
 import { formatPrice } from '../../../lib/format-money';
 import { formatCalendarDate } from '../../../lib/format-time';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 
 const th = 'px-3 py-1.5 text-xs font-semibold tracking-wide whitespace-nowrap text-muted uppercase';
 const td = 'px-3 py-1.5 align-top';
@@ -93,9 +94,7 @@ export function ImportRowTable({ preview }: { preview: CatalogImportPreview }) {
               <td className={`${td} numeric text-right`}>{row.rowNumber}</td>
               <th scope="row" className={`${td} text-left font-medium`}>
                 {row.maker || row.model ? (
-                  <>
-                    {row.maker} {row.model}
-                  </>
+                  productDisplayName(row)
                 ) : (
                   <span className="font-normal text-muted">No maker or model</span>
                 )}

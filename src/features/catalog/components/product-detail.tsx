@@ -18,7 +18,7 @@ import { AddPriceForm } from './add-price-form';
 import { formatFormFactor } from './catalog-format';
 import { PriceHistory } from './price-history';
 import { ProductSpec } from './product-spec';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 
 export interface ProductDetailViewProps {
   productId: number;
@@ -40,7 +40,7 @@ export function ProductDetailView({ productId, canEdit, canDelete }: ProductDeta
   const [deleteError, setDeleteError] = useState<string | undefined>();
   const [archiveMessage, setArchiveMessage] = useState<{ tone: 'success' | 'danger'; text: string } | null>(null);
   const notice = (location.state as { notice?: string } | null)?.notice;
-  const name = productName(product);
+  const name = productDisplayName(product);
 
   const latestIds = new Set(product.latestPrices.map((price) => price.id));
   const knownRegions = [...new Set(product.prices.map((price) => price.region))].sort();

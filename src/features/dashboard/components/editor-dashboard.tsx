@@ -4,7 +4,7 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { Panel } from '../../../components/ui/panel';
 import type { Dashboard } from '../../../../shared/schemas/dashboard';
 import { formatCalendarDate } from '../../../lib/format-time';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 import { byTargetDate } from './dashboard-format';
 import { RoundupProgressList } from './roundup-progress-list';
 import { StateStrip } from './state-strip';
@@ -64,7 +64,7 @@ export function EditorDashboard({ dashboard, roundupPath }: EditorDashboardProps
                 {dashboard.overdueSamples.map((sample) => (
                   <li key={sample.id} className="py-2 first:pt-0 last:pb-0">
                     <div className="flex flex-wrap items-center justify-between gap-2">
-                      <span className="font-semibold">{productName(sample.product)}</span>
+                      <span className="font-semibold">{productDisplayName(sample.product)}</span>
                       <Badge tone="negative">
                         Overdue by {sample.daysOverdue} day{sample.daysOverdue === 1 ? '' : 's'}
                       </Badge>

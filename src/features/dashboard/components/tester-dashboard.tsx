@@ -6,7 +6,7 @@ import { cx } from '../../../lib/class-names';
 import { formatCalendarDate, formatSlot, userTimeZone } from '../../../lib/format-time';
 import type { Dashboard } from '../../../../shared/schemas/dashboard';
 import { CellStateBadge } from '../../../components/ui/cell-state-badge';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 
 export interface TesterDashboardProps {
   dashboard: Extract<Dashboard, { view: 'tester' }>;
@@ -44,7 +44,7 @@ export function TesterDashboard({ dashboard, myBenchPath }: TesterDashboardProps
               <li key={item.cell.id} className="grid grid-cols-[minmax(0,1fr)_auto] items-start gap-3 py-2 first:pt-0">
                 <div className="min-w-0">
                   <p className="font-medium">
-                    {productName(item.product)} · {item.loadConfiguration.name}
+                    {productDisplayName(item.product)} · {item.loadConfiguration.name}
                   </p>
                   <p className="text-[0.8125rem] text-muted">{item.roundup.title}</p>
                 </div>

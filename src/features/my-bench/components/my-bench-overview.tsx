@@ -6,7 +6,7 @@ import { Panel } from '../../../components/ui/panel';
 import { TextArea } from '../../../components/ui/text-area';
 import { isApiError } from '../../../lib/api-client';
 import { describeSubmitError } from '../../../lib/form-errors';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 import { cellStateLabels, type CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
 import type { MyBench } from '../../../../shared/schemas/benches';
 import type { MatrixCell, QueueItem } from '../../../../shared/schemas/matrix';
@@ -31,7 +31,7 @@ export interface MyBenchOverviewProps {
 
 type Notice = { tone: 'success' | 'danger'; text: string } | null;
 
-const cellName = (item: QueueItem) => `${productName(item.product)} · ${item.loadConfiguration.name}`;
+const cellName = (item: QueueItem) => `${productDisplayName(item.product)} · ${item.loadConfiguration.name}`;
 
 /** A tester's own work: the queue and what waits for the editor. */
 export function MyBenchOverview({ myBench, matrixPath, moveCell }: MyBenchOverviewProps) {

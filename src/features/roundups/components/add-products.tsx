@@ -9,7 +9,7 @@ import type { RoundupDetail } from '../../../../shared/schemas/roundups';
 import { useCatalogProducts } from '../api/get-catalog-products';
 import { useReferenceCandidates } from '../api/get-reference-candidates';
 import { useSuggestions } from '../api/get-suggestions';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 import { formatBand } from './planning-format';
 import { PriceCheckCell } from './price-check-cell';
 
@@ -70,7 +70,7 @@ function Suggestions({ roundup, pendingProductId, onAdd }: AddProductsProps) {
           {list.map(({ product, priceCheck }) => (
             <li key={product.id} className="flex flex-wrap items-center gap-x-3 gap-y-2 px-3 py-2">
               <div className="min-w-0 flex-1 basis-48">
-                <p className="font-medium">{productName(product)}</p>
+                <p className="font-medium">{productDisplayName(product)}</p>
                 <p className="text-xs text-muted">{product.chipset}</p>
               </div>
               <PriceCheckCell check={priceCheck} />
@@ -78,7 +78,7 @@ function Suggestions({ roundup, pendingProductId, onAdd }: AddProductsProps) {
                 size="sm"
                 onClick={() => onAdd(product, 'tested')}
                 pending={pendingProductId === product.id}
-                aria-label={`Add ${productName(product)}`}
+                aria-label={`Add ${productDisplayName(product)}`}
               >
                 Add
               </Button>
@@ -127,7 +127,7 @@ function CatalogSearch({ roundup, pendingProductId, onAdd }: AddProductsProps) {
                 return (
                   <li key={product.id} className="flex flex-wrap items-center gap-x-3 gap-y-1 px-3 py-2">
                     <div className="min-w-0 flex-1 basis-48">
-                      <p className="font-medium">{productName(product)}</p>
+                      <p className="font-medium">{productDisplayName(product)}</p>
                       <p className="text-xs text-muted">
                         {product.platform} · {product.chipset}
                       </p>
@@ -143,7 +143,7 @@ function CatalogSearch({ roundup, pendingProductId, onAdd }: AddProductsProps) {
                       size="sm"
                       onClick={() => onAdd(product, 'tested')}
                       pending={pendingProductId === product.id}
-                      aria-label={`Add ${productName(product)}`}
+                      aria-label={`Add ${productDisplayName(product)}`}
                     >
                       Add
                     </Button>
@@ -182,7 +182,7 @@ function ReferencePicker({ roundup, pendingProductId, onAdd }: AddProductsProps)
         <div className="mt-3 flex flex-wrap items-end gap-3">
           <Select
             label="Product"
-            options={list.map((c) => ({ value: String(c.product.id), label: productName(c.product) }))}
+            options={list.map((c) => ({ value: String(c.product.id), label: productDisplayName(c.product) }))}
             placeholder="Choose a product…"
             value={productId}
             onChange={(event) => {

@@ -6,7 +6,7 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { formFactorLabels } from '../../../../shared/schemas/catalog';
 import { sampleStatusLabels } from '../../../../shared/schemas/samples';
 import type { RoundupEntry } from '../../../../shared/schemas/roundups';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 import { PriceCheckCell } from './price-check-cell';
 
 export interface EntriesTableProps {
@@ -31,10 +31,10 @@ export function EntriesTable({ entries, onRemove }: EntriesTableProps) {
         header: 'Product',
         rowHeader: true,
         className: 'min-w-40',
-        sortValue: (e) => productName(e.product),
+        sortValue: (e) => productDisplayName(e.product),
         cell: (e) => (
           <span>
-            {productName(e.product)}
+            {productDisplayName(e.product)}
             <span className="block text-xs font-normal text-muted">
               {e.product.chipset} · {formFactorLabels[e.product.formFactor]}
               {e.product.archived && ' · archived in the catalog'}
@@ -89,7 +89,12 @@ export function EntriesTable({ entries, onRemove }: EntriesTableProps) {
         id: 'actions',
         header: 'Actions',
         cell: (e) => (
-          <Button size="sm" variant="quiet" onClick={() => onRemove(e)} aria-label={`Remove ${productName(e.product)}`}>
+          <Button
+            size="sm"
+            variant="quiet"
+            onClick={() => onRemove(e)}
+            aria-label={`Remove ${productDisplayName(e.product)}`}
+          >
             Remove
           </Button>
         ),

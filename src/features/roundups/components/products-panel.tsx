@@ -9,7 +9,7 @@ import { useAddEntry } from '../api/add-entry';
 import { useRemoveEntry } from '../api/remove-entry';
 import { AddProducts } from './add-products';
 import { EntriesTable } from './entries-table';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 
 export interface ProductsPanelProps {
   roundup: RoundupDetail;
@@ -30,7 +30,7 @@ export function ProductsPanel({ roundup, canEdit }: ProductsPanelProps) {
 
   const add = (product: ProductBrief, kind: 'tested' | 'reference', referenceRoundupId?: number) => {
     setNotice(null);
-    const name = productName(product);
+    const name = productDisplayName(product);
     addEntry.mutate(
       { roundupId: roundup.id, entry: { productId: product.id, kind, referenceRoundupId: referenceRoundupId ?? null } },
       {
@@ -57,7 +57,7 @@ export function ProductsPanel({ roundup, canEdit }: ProductsPanelProps) {
 
   const confirmRemove = () => {
     if (!removing) return;
-    const name = productName(removing.product);
+    const name = productDisplayName(removing.product);
     removeEntry.mutate(
       { roundupId: roundup.id, entryId: removing.id },
       {
@@ -101,7 +101,7 @@ export function ProductsPanel({ roundup, canEdit }: ProductsPanelProps) {
 
       <ConfirmDialog
         open={removing !== null}
-        title={removing ? `Remove ${productName(removing.product)}?` : 'Remove product?'}
+        title={removing ? `Remove ${productDisplayName(removing.product)}?` : 'Remove product?'}
         confirmLabel="Remove from roundup"
         pending={removeEntry.isPending}
         error={removeError}

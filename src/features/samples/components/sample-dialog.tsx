@@ -18,7 +18,7 @@ import {
   type UpdateSampleRequest,
 } from '../../../../shared/schemas/samples';
 import { useUpdateSample } from '../api/update-sample';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 
 const labels = {
   source: 'Source',
@@ -128,7 +128,7 @@ export function SampleDialog({
       open={open}
       onClose={onClose}
       size="lg"
-      title={`Sample: ${productName(sample.product)}`}
+      title={`Sample: ${productDisplayName(sample.product)}`}
       description={`Dates are calendar days in ${timeZone}.`}
       footer={
         <>

@@ -8,7 +8,7 @@ import { sampleSourceLabels, sampleStatuses, type Sample } from '../../../../sha
 import { useSamples } from '../api/get-samples';
 import { formatPrice } from '../../../lib/format-money';
 import { formatCalendarDate } from '../../../lib/format-time';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 import { overdueText } from './samples-format';
 import { SampleDialog } from './sample-dialog';
 import { SampleStatusBadge } from './sample-status-badge';
@@ -41,8 +41,8 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
         header: 'Product',
         rowHeader: true,
         className: 'min-w-40',
-        sortValue: (s) => productName(s.product),
-        cell: (s) => productName(s.product),
+        sortValue: (s) => productDisplayName(s.product),
+        cell: (s) => productDisplayName(s.product),
       },
       {
         id: 'source',
@@ -116,7 +116,11 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
         id: 'actions',
         header: 'Actions',
         cell: (s) => (
-          <Button size="sm" onClick={() => startEditing(s)} aria-label={`Edit sample: ${productName(s.product)}`}>
+          <Button
+            size="sm"
+            onClick={() => startEditing(s)}
+            aria-label={`Edit sample: ${productDisplayName(s.product)}`}
+          >
             Edit
           </Button>
         ),
@@ -129,8 +133,10 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
     <div className="space-y-3">
       {overdue.length > 0 && (
         <Alert tone="danger" title={`${countOf(overdue.length, 'loan is', 'loans are')} overdue`}>
-          {overdue.map((s) => `${productName(s.product)} (${overdueText(s.daysOverdue).toLowerCase()})`).join('; ')}.{' '}
-          {plural(overdue.length, 'Return it or mark it kept.', 'Return them or mark them kept.')}
+          {overdue
+            .map((s) => `${productDisplayName(s.product)} (${overdueText(s.daysOverdue).toLowerCase()})`)
+            .join('; ')}
+          . {plural(overdue.length, 'Return it or mark it kept.', 'Return them or mark them kept.')}
         </Alert>
       )}
       {notice && (
@@ -165,7 +171,7 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
           onClose={() => setEditing((current) => (current ? { ...current, open: false } : null))}
           onSaved={(saved) => {
             setEditing((current) => (current ? { ...current, open: false } : null));
-            setNotice(`Saved the sample record of ${productName(saved.product)}.`);
+            setNotice(`Saved the sample record of ${productDisplayName(saved.product)}.`);
           }}
         />
       )}

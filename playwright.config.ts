@@ -13,6 +13,8 @@ export default defineConfig({
   reporter: process.env.CI ? 'line' : 'list',
   use: {
     baseURL: `http://127.0.0.1:${port}`,
+    // Dates and times follow the browser's locale; the specs read them as a British English user sees them.
+    locale: 'en-GB',
     trace: 'retain-on-failure',
     screenshot: 'only-on-failure',
     launchOptions: {

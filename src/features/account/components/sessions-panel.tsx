@@ -5,7 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import { DateTime } from '../../../components/ui/date-time';
 import { Panel } from '../../../components/ui/panel';
-import { userTimeZone } from '../../../lib/format-time';
+import { formatInstant, userTimeZone } from '../../../lib/format-time';
 import type { SessionInfo } from '../../../../shared/schemas/auth';
 import { useSessions } from '../api/get-sessions';
 import { useRevokeSession } from '../api/revoke-session';
@@ -73,7 +73,7 @@ export function SessionsPanel({ className }: { className?: string }) {
               variant="danger"
               pending={revoke.isPending && revoke.variables === session.id}
               onClick={() => revoke.mutate(session.id)}
-              aria-label={`Revoke the session signed in ${new Date(session.createdAt).toLocaleString()}`}
+              aria-label={`Revoke the session signed in ${formatInstant(session.createdAt)}`}
             >
               Revoke
             </Button>

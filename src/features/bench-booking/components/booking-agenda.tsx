@@ -6,19 +6,10 @@ import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { cx } from '../../../lib/class-names';
 import { describeSubmitError } from '../../../lib/form-errors';
 import type { Bench, Booking } from '../../../../shared/schemas/benches';
-import { formatSlot } from '../../../lib/format-time';
-import { productName } from '../../../lib/product-name';
+import { formatDayHeading, formatLongDay, formatShortDate, formatSlot } from '../../../lib/format-time';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 import { useCancelBooking } from '../api/cancel-booking';
-import {
-  addDays,
-  dateParam,
-  dayShare,
-  formatDayHeading,
-  formatDuration,
-  formatLongDay,
-  formatShortDate,
-  overlapsDay,
-} from './booking-time';
+import { addDays, dateParam, dayShare, formatDuration, overlapsDay } from './booking-time';
 
 export interface BookingAgendaProps {
   weekStart: Date;
@@ -180,7 +171,7 @@ function BookingLine({ booking, own, onCancel }: { booking: Booking; own: boolea
           <ul className="mt-0.5 text-[0.8125rem] text-muted">
             {booking.cells.map((item) => (
               <li key={item.cell.id}>
-                {productName(item.product)} · {item.loadConfiguration.name}{' '}
+                {productDisplayName(item.product)} · {item.loadConfiguration.name}{' '}
                 <span className="whitespace-nowrap">({item.roundup.title})</span>
               </li>
             ))}

@@ -6,7 +6,8 @@ import type { Bench, Booking } from '../../../../shared/schemas/benches';
 import type { QueueItem } from '../../../../shared/schemas/matrix';
 import { BookingAgenda } from './booking-agenda';
 import { BookingForm } from './booking-form';
-import { dateParam, formatDayHeading, startOfWeek, weekFromParams, zoneLabel } from './booking-time';
+import { dateParam, startOfWeek, weekFromParams, zoneLabel } from './booking-time';
+import { formatDayHeading } from '../../../lib/format-time';
 
 export interface BookingCalendarProps {
   benches: readonly Bench[];

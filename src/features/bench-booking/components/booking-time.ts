@@ -48,25 +48,6 @@ export function instantFromLocalInput(value: string): string | null {
   return Number.isNaN(date.getTime()) ? null : date.toISOString();
 }
 
-const dayHeading = new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short' });
-const longDay = new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' });
-const shortDate = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short' });
-
-/** "Tue 2 Dec" */
-export function formatDayHeading(date: Date): string {
-  return dayHeading.format(date);
-}
-
-/** "Tuesday 2 December 2026" */
-export function formatLongDay(date: Date): string {
-  return longDay.format(date);
-}
-
-/** "2 Dec" */
-export function formatShortDate(date: Date): string {
-  return shortDate.format(date);
-}
-
 /** "3 h", "1 h 30 min", "45 min" */
 export function formatDuration(startsAt: string, endsAt: string): string {
   const minutes = Math.round((Date.parse(endsAt) - Date.parse(startsAt)) / 60_000);

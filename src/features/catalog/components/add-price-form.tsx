@@ -9,6 +9,8 @@ import { parseMajorAmount } from '../../../../shared/domain/planning/money';
 import { createPriceRequestSchema, type CreatePriceRequest, type Price } from '../../../../shared/schemas/catalog';
 import { useAddPrice } from '../api/prices';
 import { formatPrice } from '../../../lib/format-money';
+import { userTimeZone } from '../../../lib/format-time';
+import { todayIn } from '../../../../shared/schemas/dates';
 
 /**
  * The form works in major units ("189.99"), as a price tag shows it; the request carries integer minor units, parsed
@@ -39,7 +41,7 @@ const priceFormSchema = formSchema(
   (path) => (path === 'amountMinor' ? 'amount' : path),
 );
 
-const today = () => new Date().toLocaleDateString('en-CA');
+const today = () => todayIn(userTimeZone());
 
 /** The server names the amount field amountMinor; this form calls it amount. */
 function renameAmountField(error: unknown) {

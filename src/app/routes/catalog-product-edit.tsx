@@ -1,43 +1,26 @@
-import type { QueryClient } from '@tanstack/react-query';
-import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { useNavigate, useParams } from 'react-router';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { productQueryOptions, useProduct } from '../../features/catalog/api/get-product';
 import { useUpdateProduct } from '../../features/catalog/api/save-product';
 import { ProductForm } from '../../features/catalog/components/product-form';
 import { productFormValuesFrom } from '../../features/catalog/components/product-form-values';
 import { productIdFrom } from '../../features/catalog/components/product-id';
 import { PageHeader } from '../../components/ui/page-header';
-import { ForbiddenState } from '../../components/ui/forbidden-state';
-import { roleLabels } from '../../../shared/schemas/common';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
 import { productDisplayName } from '../../../shared/domain/planning/product-display-name';
-import { catalogEditors, may } from '../../../shared/access/roles';
+import { catalogEditors } from '../../../shared/access/roles';
 
-export function loader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    const id = productIdFrom(params.productId);
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (user && canOpen(paths.catalog, user.role)) await queryClient.ensureQueryData(productQueryOptions(id));
-    return null;
-  };
-}
+import { gatedPage, pageLoader } from '../page-route';
+export const loader = pageLoader(paths.catalog, (queryClient, { params }) =>
+  queryClient.ensureQueryData(productQueryOptions(productIdFrom(params.productId))),
+);
 
-export function Component() {
-  return (
-    <RoleGate path={paths.catalog} pageName="Catalog">
-      <EditProductPage />
-    </RoleGate>
-  );
-}
+export const Component = gatedPage(
+  { path: paths.catalog, pageName: 'Edit product', rule: catalogEditors },
+  EditProductPage,
+);
 
 function EditProductPage() {
-  const user = useSession();
   const id = productIdFrom(useParams().productId);
-  if (!user) return null;
-  if (!may(user.role, catalogEditors))
-    return <ForbiddenState pageName="Edit product" roleLabel={roleLabels[user.role]} />;
   return <EditProduct key={id} id={id} />;
 }
 

@@ -1,35 +1,20 @@
-import type { QueryClient } from '@tanstack/react-query';
-import { useParams, type LoaderFunctionArgs } from 'react-router';
+import { useParams } from 'react-router';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { productQueryOptions } from '../../features/catalog/api/get-product';
 import { ProductDetailView } from '../../features/catalog/components/product-detail';
 import { productIdFrom } from '../../features/catalog/components/product-id';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
 import { catalogEditors, planEditors, may } from '../../../shared/access/roles';
 
-export function loader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    const id = productIdFrom(params.productId);
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (user && canOpen(paths.catalog, user.role)) await queryClient.ensureQueryData(productQueryOptions(id));
-    return null;
-  };
-}
+import { gatedPage, pageLoader } from '../page-route';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+export const loader = pageLoader(paths.catalog, (queryClient, { params }) =>
+  queryClient.ensureQueryData(productQueryOptions(productIdFrom(params.productId))),
+);
 
-export function Component() {
-  return (
-    <RoleGate path={paths.catalog} pageName="Catalog">
-      <ProductPage />
-    </RoleGate>
-  );
-}
+export const Component = gatedPage({ path: paths.catalog, pageName: 'Catalog' }, ProductPage);
 
-function ProductPage() {
-  const user = useSession();
+function ProductPage({ user }: { user: CurrentUser }) {
   const id = productIdFrom(useParams().productId);
-  if (!user) return null;
   return (
     // Keyed by product, so moving to another product starts its forms afresh.
     <ProductDetailView

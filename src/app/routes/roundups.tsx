@@ -1,40 +1,24 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { Link } from 'react-router';
 import { buttonStyles } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page-header';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { roundupsQueryOptions, useRoundups } from '../../features/roundups/api/get-roundups';
 import { RoundupsTable } from '../../features/roundups/components/roundups-table';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
 import { may, planEditors } from '../../../shared/access/roles';
 
-export function loader(queryClient: QueryClient) {
-  return async () => {
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (user && canOpen(paths.roundups, user.role)) await queryClient.ensureQueryData(roundupsQueryOptions());
-    return null;
-  };
-}
+import { gatedPage, pageLoader } from '../page-route';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+export const loader = pageLoader(paths.roundups, (queryClient) => queryClient.ensureQueryData(roundupsQueryOptions()));
 
-export function Component() {
-  return (
-    <RoleGate path={paths.roundups} pageName="Roundups">
-      <RoundupsPage />
-    </RoleGate>
-  );
-}
+export const Component = gatedPage({ path: paths.roundups, pageName: 'Roundups' }, RoundupsPage);
 
-function RoundupsPage() {
-  const user = useSession();
+function RoundupsPage({ user }: { user: CurrentUser }) {
   const roundups = useRoundups();
-  const newRoundup =
-    user && may(user.role, planEditors) ? (
-      <Link to={paths.newRoundup} className={buttonStyles('primary')}>
-        New roundup
-      </Link>
-    ) : null;
+  const newRoundup = may(user.role, planEditors) ? (
+    <Link to={paths.newRoundup} className={buttonStyles('primary')}>
+      New roundup
+    </Link>
+  ) : null;
   return (
     <>
       <PageHeader

@@ -1,13 +1,11 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { RecordedEntity } from './base-entities';
 
 /** A tester's slot [startsAt, endsAt) on one bench. No two bookings on a bench overlap. */
 @Entity({ name: 'bench_bookings' })
 @Index('ix_bench_bookings_calendar', ['benchId', 'startsAt', 'endsAt'])
 @Index('ix_bench_bookings_tester', ['testerId', 'startsAt'])
-export class BenchBookingEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class BenchBookingEntity extends RecordedEntity {
   @Column({ type: 'int', unsigned: true, name: 'bench_id' })
   benchId: number;
 
@@ -26,7 +24,4 @@ export class BenchBookingEntity {
   /** Why it was booked although the bench's set-up differs from a roundup's bench profile. */
   @Column({ type: 'varchar', length: 300, nullable: true, name: 'override_reason' })
   overrideReason: string | null;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
 }

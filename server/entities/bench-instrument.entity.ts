@@ -1,11 +1,9 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity } from 'typeorm';
+import { EditedEntity } from './base-entities';
 
 /** A probe or logger that belongs to a bench, with its last calibration and the interval to the next. */
 @Entity({ name: 'bench_instruments' })
-export class BenchInstrumentEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class BenchInstrumentEntity extends EditedEntity {
   @Column({ type: 'int', unsigned: true, name: 'bench_id' })
   benchId: number;
 
@@ -26,10 +24,4 @@ export class BenchInstrumentEntity {
 
   @Column({ type: 'tinyint', unsigned: true, name: 'calibration_interval_months' })
   calibrationIntervalMonths: number;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

@@ -1,11 +1,9 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity } from 'typeorm';
+import { RecordedEntity } from './base-entities';
 
 /** One line of a bench's maintenance log: what was done, on which day, recorded by whom. */
 @Entity({ name: 'bench_maintenance_entries' })
-export class BenchMaintenanceEntryEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class BenchMaintenanceEntryEntity extends RecordedEntity {
   @Column({ type: 'int', unsigned: true, name: 'bench_id' })
   benchId: number;
 
@@ -17,7 +15,4 @@ export class BenchMaintenanceEntryEntity {
 
   @Column({ type: 'int', unsigned: true, nullable: true, name: 'recorded_by' })
   recordedBy: number | null;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
 }

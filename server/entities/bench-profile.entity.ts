@@ -1,12 +1,10 @@
 import type { ColumnMapping } from '../../shared/schemas/analysis';
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity } from 'typeorm';
+import { ArchivableEntity } from './base-entities';
 
 /** A reusable description of the test system and the conditions a roundup is measured under. */
 @Entity({ name: 'bench_profiles' })
-export class BenchProfileEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class BenchProfileEntity extends ArchivableEntity {
   @Column({ type: 'varchar', length: 120, unique: true })
   name: string;
 
@@ -45,16 +43,4 @@ export class BenchProfileEntity {
   /** The logger column mapping last confirmed on this profile; the next upload starts from it. */
   @Column({ type: 'json', name: 'log_mapping', nullable: true })
   logMapping: ColumnMapping | null;
-
-  @Column({ type: 'datetime', precision: 3, name: 'archived_at', nullable: true })
-  archivedAt: Date | null;
-
-  @Column({ type: 'int', unsigned: true, name: 'created_by', nullable: true })
-  createdBy: number | null;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

@@ -1,11 +1,9 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity } from 'typeorm';
+import { EditedEntity } from './base-entities';
 
 /** A physical test system with a booking calendar. Its row is the lock that serialises bookings. */
 @Entity({ name: 'benches' })
-export class BenchEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class BenchEntity extends EditedEntity {
   @Column({ type: 'varchar', length: 80, unique: true })
   name: string;
 
@@ -20,10 +18,4 @@ export class BenchEntity {
 
   @Column({ type: 'boolean', default: true })
   active: boolean;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

@@ -1,11 +1,9 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity } from 'typeorm';
+import { ArchivableEntity } from './base-entities';
 
 /** A reusable CPU + settings + load; each one a roundup uses becomes a matrix column. */
 @Entity({ name: 'load_configurations' })
-export class LoadConfigurationEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class LoadConfigurationEntity extends ArchivableEntity {
   @Column({ type: 'varchar', length: 120, unique: true })
   name: string;
 
@@ -31,16 +29,4 @@ export class LoadConfigurationEntity {
 
   @Column({ type: 'smallint', unsigned: true, name: 'soak_minutes' })
   soakMinutes: number;
-
-  @Column({ type: 'datetime', precision: 3, name: 'archived_at', nullable: true })
-  archivedAt: Date | null;
-
-  @Column({ type: 'int', unsigned: true, name: 'created_by', nullable: true })
-  createdBy: number | null;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { EditedEntity } from './base-entities';
 import type { CellState } from '../../shared/domain/planning/matrix-cell-states';
 import { cellStates } from '../../shared/domain/planning/matrix-cell-states';
 
@@ -10,10 +11,7 @@ import { cellStates } from '../../shared/domain/planning/matrix-cell-states';
 @Index('uq_matrix_cells_entry_config', ['entryId', 'loadConfigurationId'], { unique: true })
 @Index('ix_matrix_cells_tester_queue', ['testerId', 'state', 'dueDate'])
 @Index('ix_matrix_cells_roundup_state', ['roundupId', 'state'])
-export class MatrixCellEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class MatrixCellEntity extends EditedEntity {
   @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
   roundupId: number;
 
@@ -44,10 +42,4 @@ export class MatrixCellEntity {
 
   @Column({ type: 'datetime', precision: 3, name: 'state_changed_at' })
   stateChangedAt: Date;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

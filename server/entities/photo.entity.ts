@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { EditedEntity } from './base-entities';
 
 export const photoKinds = ['overview', 'power-delivery', 'heatsinks', 'thermal-image', 'other'] as const;
 
@@ -13,10 +14,7 @@ export interface PhotoDerivativeRecord {
 /** A photo of a product within a roundup. Only the web sizes are kept; the upload itself is not stored. */
 @Entity({ name: 'photos' })
 @Index('ix_photos_entry', ['entryId', 'position'])
-export class PhotoEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class PhotoEntity extends EditedEntity {
   @Index('ix_photos_roundup')
   @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
   roundupId: number;
@@ -50,10 +48,4 @@ export class PhotoEntity {
 
   @Column({ type: 'int', unsigned: true, name: 'uploaded_by' })
   uploadedBy: number;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

@@ -1,12 +1,10 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { RecordedEntity } from './base-entities';
 
 /** One observed price of a product in a region; prices are history and are never edited in place. */
 @Entity({ name: 'product_prices' })
 @Index('ix_product_prices_latest', ['productId', 'region', 'observedOn', 'id'])
-export class ProductPriceEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class ProductPriceEntity extends RecordedEntity {
   @Column({ type: 'int', unsigned: true, name: 'product_id' })
   productId: number;
 
@@ -28,7 +26,4 @@ export class ProductPriceEntity {
 
   @Column({ type: 'int', unsigned: true, name: 'recorded_by', nullable: true })
   recordedBy: number | null;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
 }

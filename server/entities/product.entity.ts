@@ -1,12 +1,10 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { ArchivableEntity } from './base-entities';
 
 /** A catalog product (a motherboard) with its power design and the features buyers compare. */
 @Entity({ name: 'products' })
 @Index('uq_products_maker_model', ['maker', 'model'], { unique: true })
-export class ProductEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class ProductEntity extends ArchivableEntity {
   @Column({ type: 'varchar', length: 80 })
   maker: string;
 
@@ -101,16 +99,4 @@ export class ProductEntity {
 
   @Column({ type: 'boolean', name: 'io_shield_prefitted', nullable: true })
   ioShieldPrefitted: boolean | null;
-
-  @Column({ type: 'datetime', precision: 3, name: 'archived_at', nullable: true })
-  archivedAt: Date | null;
-
-  @Column({ type: 'int', unsigned: true, name: 'created_by', nullable: true })
-  createdBy: number | null;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

@@ -1,14 +1,12 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { RecordedEntity } from './base-entities';
 
 export type EntryKind = 'tested' | 'reference';
 
 /** A catalog product in a roundup: tested here, or a reference entry showing an earlier roundup's results. */
 @Entity({ name: 'roundup_entries' })
 @Index('uq_roundup_entries_product', ['roundupId', 'productId'], { unique: true })
-export class RoundupEntryEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class RoundupEntryEntity extends RecordedEntity {
   @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
   roundupId: number;
 
@@ -26,7 +24,4 @@ export class RoundupEntryEntity {
 
   @Column({ type: 'int', unsigned: true, name: 'added_by', nullable: true })
   addedBy: number | null;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
 }

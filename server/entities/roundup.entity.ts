@@ -1,14 +1,12 @@
 import type { VerdictRubric } from '../../shared/schemas/analysis';
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity } from 'typeorm';
+import { EditedEntity } from './base-entities';
 import type { RoundupState } from '../../shared/domain/planning/roundup-states';
 import { roundupStates } from '../../shared/domain/planning/roundup-states';
 
 /** A roundup: its plan (band, dates, bench profile) and its state, which later issues extend. */
 @Entity({ name: 'roundups' })
-export class RoundupEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class RoundupEntity extends EditedEntity {
   @Column({ type: 'varchar', length: 200 })
   title: string;
 
@@ -56,10 +54,4 @@ export class RoundupEntity {
 
   @Column({ type: 'datetime', precision: 3, name: 'state_changed_at' })
   stateChangedAt: Date;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

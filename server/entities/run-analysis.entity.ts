@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { RecordedEntity } from './base-entities';
 
 /**
  * One analysis of a run, never edited: re-analysing with another mapping or rubric adds a row. The headline figures
@@ -6,10 +7,7 @@ import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 
  */
 @Entity({ name: 'run_analyses' })
 @Index('ix_run_analyses_run', ['testRunId', 'id'])
-export class RunAnalysisEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class RunAnalysisEntity extends RecordedEntity {
   @Column({ type: 'int', unsigned: true, name: 'test_run_id' })
   testRunId: number;
 
@@ -48,7 +46,4 @@ export class RunAnalysisEntity {
 
   @Column({ type: 'int', unsigned: true, name: 'created_by' })
   createdBy: number;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
 }

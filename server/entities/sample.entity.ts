@@ -1,14 +1,12 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { EditedEntity } from './base-entities';
 import type { SampleSource, SampleStatus } from '../../shared/schemas/samples';
 import { sampleSources, sampleStatuses } from '../../shared/schemas/samples';
 
 /** The physical sample behind a tested roundup entry: where it came from and where it is. */
 @Entity({ name: 'samples' })
 @Index('ix_samples_loans', ['source', 'status', 'returnBy'])
-export class SampleEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class SampleEntity extends EditedEntity {
   @Column({ type: 'int', unsigned: true, name: 'roundup_entry_id', unique: true })
   entryId: number;
 
@@ -48,10 +46,4 @@ export class SampleEntity {
 
   @Column({ type: 'enum', enum: sampleStatuses, default: 'ordered' })
   status: SampleStatus;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

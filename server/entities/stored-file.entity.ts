@@ -1,11 +1,9 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { RecordedEntity } from './base-entities';
 
 /** An uploaded file kept byte for byte in the file store, with its SHA-256. Never edited. */
 @Entity({ name: 'stored_files' })
-export class StoredFileEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class StoredFileEntity extends RecordedEntity {
   @Index('uq_stored_files_key', { unique: true })
   @Column({ type: 'varchar', length: 512, name: 'storage_key' })
   storageKey: string;
@@ -26,7 +24,4 @@ export class StoredFileEntity {
 
   @Column({ type: 'int', unsigned: true, name: 'uploaded_by' })
   uploadedBy: number;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
 }

@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { EditedEntity } from './base-entities';
 
 export const runSources = ['logger', 'manual'] as const;
 export const runReviewStates = ['pending', 'accepted', 'sent-back'] as const;
@@ -6,10 +7,7 @@ export const runReviewStates = ['pending', 'accepted', 'sent-back'] as const;
 /** One test run on one matrix cell. Its analyses are rows of run_analyses; the newest is the current one. */
 @Entity({ name: 'test_runs' })
 @Index('ix_test_runs_cell', ['matrixCellId', 'submittedAt'])
-export class TestRunEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class TestRunEntity extends EditedEntity {
   @Column({ type: 'int', unsigned: true, name: 'matrix_cell_id' })
   matrixCellId: number;
 
@@ -67,10 +65,4 @@ export class TestRunEntity {
 
   @Column({ type: 'datetime', precision: 3, name: 'submitted_at' })
   submittedAt: Date;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

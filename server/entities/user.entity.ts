@@ -1,11 +1,9 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity } from 'typeorm';
+import { EditedEntity } from './base-entities';
 import type { Role } from '../../shared/schemas/common';
 
 @Entity({ name: 'users' })
-export class UserEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
+export class UserEntity extends EditedEntity {
   @Column({ type: 'varchar', length: 254, unique: true })
   email: string;
 
@@ -23,10 +21,4 @@ export class UserEntity {
 
   @Column({ type: 'datetime', precision: 3, name: 'last_sign_in_at', nullable: true })
   lastSignInAt: Date | null;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

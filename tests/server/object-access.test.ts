@@ -111,14 +111,12 @@ describe('staff accounts', () => {
       const { agent, user } = await signedIn(app, role);
       const refused = [
         await agent.get('/api/users'),
-        await agent
-          .post('/api/users')
-          .send({
-            email: `made-by-${role}@test.soaksheet.example`,
-            displayName: 'Made',
-            role: 'admin',
-            password: 'x'.repeat(16),
-          }),
+        await agent.post('/api/users').send({
+          email: `made-by-${role}@test.soaksheet.example`,
+          displayName: 'Made',
+          role: 'admin',
+          password: 'x'.repeat(16),
+        }),
         await agent.patch(`/api/users/${target.id}`).send({ role: 'admin' }),
         await agent.patch(`/api/users/${target.id}`).send({ active: false }),
         await agent.patch(`/api/users/${user.id}`).send({ role: 'admin' }),

@@ -86,8 +86,44 @@ function safeCell(value: string): string {
   return formulaStart.test(value) ? `'${value}` : value;
 }
 
+/**
+ * A spreadsheet that splits on semicolons or tabs (common in locales with a decimal comma) starts a new cell after
+ * each one, so "Codec;=1+1" would run a formula there. Such cells are written in quotes, which keep them one cell
+ * whatever the separator (OWASP, CSV injection: wrap each cell in double quotes).
+ */
+const formulaAfterSeparator = /[;\t]\s*[=+\-@\t\r]/;
+
+function needsQuotes(value: string): boolean {
+  return formulaAfterSeparator.test(value) || /[;\t]/.test(value);
+}
+
+/** The first line (1-based) holding U+FFFD, or 0: where bytes were not valid UTF-8 when the file was decoded. */
+function firstLineWithReplacement(text: string): number {
+  const at = text.indexOf('\uFFFD');
+  if (at < 0) return 0;
+  let line = 1;
+  for (let i = text.indexOf('\n'); i >= 0 && i < at; i = text.indexOf('\n', i + 1)) line++;
+  return line;
+}
+
 export function parseCatalogCsv(text: string): ParsedCatalogCsv {
   const source = text.replace(/^\uFEFF/, '');
+  // A file saved in another encoding (Latin-1, Windows-1252) decodes with replacement characters where its accented
+  // letters were; committing them would store "Gr\uFFFDn" for "Grün". Refuse it and say how to save it instead.
+  const undecodable = firstLineWithReplacement(source);
+  if (undecodable > 0) {
+    return {
+      rows: [],
+      fileErrors: [
+        {
+          rowNumber: undecodable,
+          column: null,
+          message: `Row ${undecodable} holds characters that are not UTF-8: the file seems to be saved in another encoding (such as Latin-1 or Windows-1252). Save it as “CSV UTF-8” and import it again.`,
+        },
+      ],
+      ignoredColumns: [],
+    };
+  }
   const parsed = Papa.parse<Record<string, string>>(source, {
     header: true,
     skipEmptyLines: 'greedy',
@@ -108,12 +144,17 @@ export function parseCatalogCsv(text: string): ParsedCatalogCsv {
       fileErrors.push({ rowNumber: 1, column: column.name, message: `The header has no “${column.name}” column.` });
     }
   }
-  const seenHeaders = new Set<string>();
-  for (const header of headers) {
-    if (seenHeaders.has(header) && columnNames.has(header)) {
-      fileErrors.push({ rowNumber: 1, column: header, message: `The column “${header}” appears twice.` });
+  // Papa renames a repeated header ("model" again becomes "model_1") and reads on; which of the two holds the
+  // model would be a guess, so a catalog column named twice is refused by name.
+  const renamed = parsed.meta.renamedHeaders ?? {};
+  for (const header of new Set(Object.values(renamed))) {
+    if (columnNames.has(header)) {
+      fileErrors.push({
+        rowNumber: 1,
+        column: header,
+        message: `The column “${header}” appears twice in the header: keep one of them.`,
+      });
     }
-    seenHeaders.add(header);
   }
   if (parsed.data.length > CATALOG_IMPORT_MAX_ROWS) {
     fileErrors.push({
@@ -122,7 +163,9 @@ export function parseCatalogCsv(text: string): ParsedCatalogCsv {
       message: `The file has ${parsed.data.length} rows; import at most ${CATALOG_IMPORT_MAX_ROWS} at a time.`,
     });
   }
-  const ignoredColumns = headers.filter((h) => h !== '' && !columnNames.has(h) && !h.startsWith('__'));
+  const ignoredColumns = headers.filter(
+    (h) => h !== '' && !columnNames.has(h) && !h.startsWith('__') && !(h in renamed),
+  );
   if (fileErrors.length > 0) return { rows: [], fileErrors, ignoredColumns };
 
   // Papa reports shape problems (too few or too many fields, bad quotes) by data-row index.
@@ -319,5 +362,8 @@ export function formatCatalogCsv(products: Product[], priceFor: (product: Produc
     };
     return catalogCsvColumns.map((column) => safeCell(values[column.name]));
   });
-  return Papa.unparse({ fields: catalogCsvColumns.map((c) => c.name), data: rows }, { quotes: false, newline: '\r\n' });
+  return Papa.unparse(
+    { fields: catalogCsvColumns.map((c) => c.name), data: rows },
+    { quotes: (value: unknown) => typeof value === 'string' && needsQuotes(value), newline: '\r\n' },
+  );
 }

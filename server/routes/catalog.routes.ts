@@ -1,5 +1,6 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
+import { textFileContent } from '../../shared/domain/text-file-content';
 import { AppError } from '../errors';
 import { formatCatalogCsv } from '../lib/catalog-csv';
 import { catalogEditors, planEditors, planningReaders } from '../../shared/access/roles';
@@ -27,7 +28,17 @@ import {
 
 /** The CSV text from a multipart file (field `file`) or the JSON body's `csv`. */
 function csvFrom(file: Express.Multer.File | undefined, body: { csv?: string }): string {
-  const text = file ? file.buffer.toString('utf8') : body.csv;
+  const text = file ? textFileContent(file.buffer) : body.csv;
+  if (text === null) {
+    throw new AppError(
+      'unsupported_file',
+      415,
+      'This is not a text file: save the catalog as “CSV UTF-8” and import it.',
+      {
+        file: 'Not a text file.',
+      },
+    );
+  }
   if (text === undefined || text.trim() === '') {
     throw new AppError('validation_failed', 400, 'Send the CSV as a file (field “file”) or as text (field “csv”).', {
       csv: 'Choose a CSV file.',

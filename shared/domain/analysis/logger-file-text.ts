@@ -1,12 +1,9 @@
+import { textFileContent } from '../text-file-content';
+
 /**
- * The text of a logger export. Loggers write UTF-8 (with or without a byte-order mark) or, from some desktop
- * software, UTF-16 with a byte-order mark. Returns null for anything with NUL bytes and no UTF-16 mark: a binary file
- * (a spreadsheet, an image), not a text export.
+ * The text of a logger export: UTF-8 (with or without a byte-order mark) or UTF-16 with a byte-order mark, as every
+ * uploaded text file is read (see textFileContent). Null for a binary file (a spreadsheet, an image).
  */
 export function loggerFileText(bytes: Uint8Array): string | null {
-  if (bytes[0] === 0xff && bytes[1] === 0xfe) return new TextDecoder('utf-16le').decode(bytes.subarray(2));
-  if (bytes[0] === 0xfe && bytes[1] === 0xff) return new TextDecoder('utf-16be').decode(bytes.subarray(2));
-  if (bytes.includes(0)) return null;
-  // TextDecoder drops a leading UTF-8 byte-order mark by default.
-  return new TextDecoder('utf-8').decode(bytes);
+  return textFileContent(bytes);
 }

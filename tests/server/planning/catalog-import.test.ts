@@ -168,4 +168,81 @@ describe('catalog CSV import', () => {
       price: { action: 'duplicate' },
     });
   });
+
+  it('a catalog column named twice in the header is refused by name, not read from one of the two', async () => {
+    const app = await testApp();
+    const { agent: editor } = await signedIn(app, 'editor');
+    const maker = `Brightmoor ${tag()}`;
+    const csv = `maker,model,platform,socket,chipset,form_factor,model\n${maker},B70,Helix-1700,HX4,HX-B50,atx,B71\n`;
+    const preview = await editor.post('/api/catalog/import/preview').send({ csv });
+    expect(preview.status, preview.text).toBe(200);
+    expect(preview.body.canCommit).toBe(false);
+    expect(preview.body.errors).toEqual([
+      { rowNumber: 1, column: 'model', message: expect.stringContaining('“model” appears twice') },
+    ]);
+    expect(preview.body.ignoredColumns).toEqual([]);
+  });
+
+  it('a UTF-16 file with its byte-order mark reads as UTF-8 does; a Latin-1 file and a binary file are refused, nothing is saved', async () => {
+    const app = await testApp();
+    const { agent: editor } = await signedIn(app, 'editor');
+    const maker = `Kühlstrand ${tag()}`;
+    const csv = [header, goodRow(maker, 'G50 Feld', `Helix-1700 ${tag()}`)].join('\r\n');
+
+    // Byte-order marks from the Unicode Standard §23.8: FF FE starts UTF-16LE.
+    const utf16 = Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(csv, 'utf16le')]);
+    const read = await editor.post('/api/catalog/import/preview').attach('file', utf16, 'boards.csv');
+    expect(read.status, read.text).toBe(200);
+    expect(read.body.canCommit, JSON.stringify(read.body.errors)).toBe(true);
+    expect(read.body.rows[0]).toMatchObject({ maker, model: 'G50 Feld' });
+
+    // ISO 8859-1 writes "ü" as the single byte 0xFC, which is not valid UTF-8 (RFC 3629 §3).
+    const latin1 = Buffer.from(csv, 'latin1');
+    const refused = await editor.post('/api/catalog/import/preview').attach('file', latin1, 'boards.csv');
+    expect(refused.status).toBe(200);
+    expect(refused.body.canCommit).toBe(false);
+    expect(refused.body.errors).toEqual([
+      { rowNumber: 2, column: null, message: expect.stringContaining('not UTF-8') },
+    ]);
+    const commit = await editor
+      .post('/api/catalog/import/commit')
+      .attach('file', latin1, 'boards.csv')
+      .field('checksum', refused.body.checksum);
+    expect(commit.status).toBe(422);
+
+    const workbook = await editor
+      .post('/api/catalog/import/preview')
+      .attach('file', Buffer.from([0x50, 0x4b, 0x03, 0x04, 0x14, 0x00, 0x00, 0x00]), 'boards.csv');
+    expect(workbook.status).toBe(415);
+    expect(workbook.body.error.code).toBe('unsupported_file');
+    expect(await countProducts(maker)).toBe(0);
+  });
+
+  it('export quotes and neutralises formula triggers at the start of a cell and after a semicolon or tab (OWASP CSV injection)', async () => {
+    const app = await testApp();
+    const { agent: editor } = await signedIn(app, 'editor');
+    const maker = `Ostrel Works ${tag()}`;
+    const platform = `Helix-1700 ${tag()}`;
+    const row = goodRow(maker, '=HYPERLINK("x") Runner', platform).replace('Brightmoor Direct', '"Shop;=1+2"');
+    const csv = [header, row].join('\n');
+    const preview = await editor.post('/api/catalog/import/preview').send({ csv });
+    expect(preview.body.canCommit, JSON.stringify(preview.body.errors)).toBe(true);
+    await editor.post('/api/catalog/import/commit').send({ csv, checksum: preview.body.checksum });
+
+    const exported = await editor.get(
+      `/api/catalog/export.csv?platform=${encodeURIComponent(platform)}&priceRegion=DE`,
+    );
+    const line = exported.text
+      .replace(/^\uFEFF/, '')
+      .trim()
+      .split('\r\n')[1];
+    // A cell starting with = gets a leading apostrophe (and its quotes doubled inside quotes, RFC 4180 §2.7).
+    expect(line).toContain(`,"'=HYPERLINK(""x"") Runner",`);
+    // A semicolon followed by = stays inside one quoted cell in a spreadsheet that splits on semicolons.
+    expect(line).toMatch(/,"Shop;=1\+2"$/);
+
+    // The file imports back to the same names.
+    const back = await editor.post('/api/catalog/import/preview').send({ csv: exported.text });
+    expect(back.body.rows[0]).toMatchObject({ model: '=HYPERLINK("x") Runner', action: 'update' });
+  });
 });

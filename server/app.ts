@@ -1,5 +1,4 @@
 import express from 'express';
-import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { DataSource } from 'typeorm';
@@ -9,6 +8,7 @@ import { createServices, type Services } from './compose-services';
 import { parseTrustProxy, secureCookieFor, type Env } from './env';
 import { authenticate } from './middleware/authenticate';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { securityHeaders } from './middleware/security-headers';
 import { verifyOrigin } from './middleware/verify-origin';
 import { registerFeatureRoutes } from './routes/all';
 import { createReaderRouter } from './public-site/reader-routes';
@@ -40,23 +40,7 @@ export function createApp({
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', parseTrustProxy(env.TRUST_PROXY));
-  app.use(
-    helmet({
-      contentSecurityPolicy: {
-        useDefaults: true,
-        directives: {
-          'script-src': ["'self'"],
-          'style-src': ["'self'", "'unsafe-inline'"],
-          'img-src': ["'self'", 'data:', 'blob:'],
-          'font-src': ["'self'", 'data:'],
-          'connect-src': ["'self'"],
-          // Plain-HTTP local use must not be forced onto HTTPS.
-          'upgrade-insecure-requests': secureCookie ? [] : null,
-        },
-      },
-      strictTransportSecurity: secureCookie,
-    }),
-  );
+  app.use(securityHeaders(secureCookie));
 
   const api = new ApiRegistry();
   registerFeatureRoutes(api, context);

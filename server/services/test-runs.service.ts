@@ -15,6 +15,7 @@ import { RunAnalysisEntity } from '../entities/run-analysis.entity';
 import { StoredFileEntity } from '../entities/stored-file.entity';
 import { TestRunEntity } from '../entities/test-run.entity';
 import { AppError, forbidden, notFound } from '../errors';
+import { mayReadCellRuns } from '../../shared/access/roles';
 import { loadPeople, personOrNull } from '../mappers/people';
 import type { FileStore } from '../storage/file-store';
 import { recordAudit } from './audit.service';
@@ -77,7 +78,7 @@ export class TestRunsService {
   async cellRuns(cellId: number, user: CurrentUser): Promise<CellRuns> {
     const manager = this.dataSource.manager;
     const { cell, profile, product, configuration } = await this.cellContext(manager, cellId);
-    if (user.role === 'tester' && cell.testerId !== user.id) {
+    if (!mayReadCellRuns(user, cell.testerId)) {
       throw forbidden('This cell is assigned to another tester; its runs are open to them and the editors.');
     }
     const runs = await manager
@@ -669,7 +670,7 @@ export class TestRunsService {
  * never another tester's; editors, writers and admins read every run (results and write-ups need them).
  */
 function assertMayReadRun(user: CurrentUser, run: TestRunEntity, cell: MatrixCellEntity) {
-  if (user.role !== 'tester' || run.testerId === user.id || cell.testerId === user.id) return;
+  if (run.testerId === user.id || mayReadCellRuns(user, cell.testerId)) return;
   throw forbidden('This run belongs to another tester; it is open to them and the editors.');
 }
 

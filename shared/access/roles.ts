@@ -26,6 +26,14 @@ export const writeUpWriters: readonly Role[] = ['editor', 'writer'];
 /** Sign off write-up sections, or hand them back to the writer. */
 export const writeUpApprovers: readonly Role[] = ['editor'];
 
+/**
+ * Runs are one tester's work: a tester reads the runs of cells assigned to them (and those they recorded, which the
+ * server also knows); editors, writers and admins read every cell's runs.
+ */
+export function mayReadCellRuns(viewer: { id: number; role: Role }, cellTesterId: number | null): boolean {
+  return viewer.role !== 'tester' || cellTesterId === viewer.id;
+}
+
 /** Whether a role is among those a rule names. */
 export function may(role: Role, rule: readonly Role[]): boolean {
   return rule.includes(role);

@@ -102,7 +102,7 @@ function RoundupPage() {
             ),
             content: (
               <Suspense fallback={<LoadingState label="Loading the matrix…" />}>
-                <MatrixGrid roundupId={roundup.id} canAssign={isEditor} />
+                <MatrixGrid roundupId={roundup.id} canAssign={isEditor} viewer={user} />
               </Suspense>
             ),
           },

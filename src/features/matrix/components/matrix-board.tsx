@@ -5,7 +5,7 @@ import { cellStates } from '../../../../shared/domain/planning/matrix-cell-state
 import type { RoundupMatrix } from '../../../../shared/schemas/matrix';
 import type { PersonRef } from '../../../../shared/schemas/planning-fields';
 import { AssignBar } from './assign-bar';
-import { MatrixTable } from './matrix-table';
+import { MatrixTable, type MatrixViewer } from './matrix-table';
 import { SendBackDialog } from './send-back-dialog';
 import { useMatrixBoard, type MatrixBoardIo } from './use-matrix-board';
 
@@ -14,6 +14,8 @@ export interface MatrixBoardProps extends MatrixBoardIo {
   /** Editors may assign (the server checks again); only while the roundup is planned or on the bench. */
   canAssign: boolean;
   testers: readonly PersonRef[] | undefined;
+  /** Who looks: a tester sees the runs links of their own cells only. */
+  viewer?: MatrixViewer;
 }
 
 const openStates = new Set(['planning', 'on-the-bench']);
@@ -24,7 +26,7 @@ export function isAssigning(matrix: RoundupMatrix, canAssign: boolean): boolean 
 }
 
 /** The matrix with its counts, the assignment controls, the grid and the send-back dialog. */
-export function MatrixBoard({ matrix, canAssign, testers, assignCells, transitionCell }: MatrixBoardProps) {
+export function MatrixBoard({ matrix, canAssign, testers, viewer, assignCells, transitionCell }: MatrixBoardProps) {
   const open = openStates.has(matrix.roundupState);
   const assigning = isAssigning(matrix, canAssign);
   const board = useMatrixBoard({ matrix, assigning, testers, assignCells, transitionCell });
@@ -75,6 +77,7 @@ export function MatrixBoard({ matrix, canAssign, testers, assignCells, transitio
 
       <MatrixTable
         matrix={matrix}
+        viewer={viewer}
         assigning={assigning}
         selection={board.selection}
         pendingCellId={board.moves.pendingCellId}

@@ -8,12 +8,21 @@ import { paths } from '../../../lib/paths';
 import { productName } from '../../../lib/product-name';
 import { cellActionRules, type CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
 import type { MatrixCell, RoundupMatrix } from '../../../../shared/schemas/matrix';
+import type { Role } from '../../../../shared/schemas/common';
+import { mayReadCellRuns } from '../../../../shared/access/roles';
 import type { MatrixBoardState } from './use-matrix-board';
 
 type Row = RoundupMatrix['rows'][number];
 
+/** Who looks at the matrix: a tester sees the runs links of their own cells only (the server refuses the rest). */
+export interface MatrixViewer {
+  id: number;
+  role: Role;
+}
+
 export interface MatrixTableProps {
   matrix: RoundupMatrix;
+  viewer?: MatrixViewer;
   assigning: boolean;
   selection: MatrixBoardState['selection'];
   pendingCellId: number | undefined;
@@ -21,7 +30,7 @@ export interface MatrixTableProps {
 }
 
 /** Products down, load configurations across; the product column stays in view while scrolling sideways. */
-export function MatrixTable({ matrix, assigning, selection, pendingCellId, onAction }: MatrixTableProps) {
+export function MatrixTable({ matrix, viewer, assigning, selection, pendingCellId, onAction }: MatrixTableProps) {
   const captionId = useId();
   const columnName = useMemo(
     () => new Map(matrix.columns.map((column) => [column.loadConfigurationId, column.name])),
@@ -64,6 +73,7 @@ export function MatrixTable({ matrix, assigning, selection, pendingCellId, onAct
               key={row.entryId}
               row={row}
               roundupId={matrix.roundupId}
+              viewer={viewer}
               columnCount={matrix.columns.length}
               columnName={columnName}
               assigning={assigning}
@@ -81,6 +91,7 @@ export function MatrixTable({ matrix, assigning, selection, pendingCellId, onAct
 interface MatrixRowProps {
   row: Row;
   roundupId: number;
+  viewer: MatrixViewer | undefined;
   columnCount: number;
   columnName: ReadonlyMap<number, string>;
   assigning: boolean;
@@ -92,6 +103,7 @@ interface MatrixRowProps {
 function MatrixRow({
   row,
   roundupId,
+  viewer,
   columnCount,
   columnName,
   assigning,
@@ -140,7 +152,9 @@ function MatrixRow({
             key={cell.id}
             cell={cell}
             cellName={`${name} · ${columnName.get(cell.loadConfigurationId) ?? ''}`}
-            runsPath={paths.roundupCell(roundupId, cell.id)}
+            runsPath={
+              !viewer || mayReadCellRuns(viewer, cell.tester?.id ?? null) ? paths.roundupCell(roundupId, cell.id) : null
+            }
             className={line}
             choosable={assigning && selection.isAssignable(cell)}
             rowChosen={rowChosen}
@@ -158,8 +172,8 @@ function MatrixRow({
 interface MatrixCellViewProps {
   cell: MatrixCell;
   cellName: string;
-  /** The cell's runs: its results, review and recording. */
-  runsPath: string;
+  /** The cell's runs: its results, review and recording; null when they are another tester's. */
+  runsPath: string | null;
   className: string;
   choosable: boolean;
   rowChosen: boolean;
@@ -196,15 +210,17 @@ function MatrixCellView({
         )}
         <div className="min-w-0 space-y-0.5">
           <CellStateBadge state={cell.state} />
-          <p className="text-[0.8125rem]">
-            <Link
-              to={runsPath}
-              aria-label={`Runs of ${cellName}`}
-              className="text-copper underline-offset-2 hover:underline"
-            >
-              Runs
-            </Link>
-          </p>
+          {runsPath && (
+            <p className="text-[0.8125rem]">
+              <Link
+                to={runsPath}
+                aria-label={`Runs of ${cellName}`}
+                className="text-copper underline-offset-2 hover:underline"
+              >
+                Runs
+              </Link>
+            </p>
+          )}
           <p className="text-[0.8125rem]">
             {cell.tester ? cell.tester.displayName : <span className="text-muted">No tester</span>}
           </p>

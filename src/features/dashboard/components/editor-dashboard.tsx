@@ -74,7 +74,7 @@ export function EditorDashboard({ dashboard, roundupPath }: EditorDashboardProps
                       {sample.vendorContact && ` to ${sample.vendorContact}`} ·{' '}
                       <Link
                         to={roundupPath(sample.roundupId, 'samples')}
-                        className="text-copper underline-offset-2 hover:underline"
+                        className="text-copper underline underline-offset-2"
                       >
                         {sample.roundupTitle}
                       </Link>

@@ -261,6 +261,69 @@ export function TemperatureChart({ series, analysis }: TemperatureChartProps) {
         {analysis.loadEndS !== null &&
           ` The shaded stretch from ${formatDuration(analysis.loadEndS)} is after the load ended: a cool-down, left out of the analysis.`}
       </p>
+      <ChartTable lines={lines} endS={series.endS} ambient={series.ambient} />
     </figure>
+  );
+}
+
+const minutesOf = (s: number) => (Number.isInteger(s / 60) ? String(s / 60) : (s / 60).toFixed(1));
+
+/** The highest reading of the line within [fromS, toS), or null when it logged nothing there. */
+function highestIn(line: ChartLine, fromS: number, toS: number): number | null {
+  let highest: number | null = null;
+  for (const [s, c] of line.points) {
+    if (s < fromS || s >= toS || Number.isNaN(c)) continue;
+    if (highest === null || c > highest) highest = c;
+  }
+  return highest;
+}
+
+/**
+ * The chart as a table for screen readers and for anyone who wants the numbers: the highest reading of each probe
+ * per stretch of the log (at most 30 rows, whole minutes), folded away until opened.
+ */
+function ChartTable({ lines, endS, ambient }: { lines: ChartLine[]; endS: number; ambient: ChartLine | null }) {
+  const stepS = Math.max(60, Math.ceil(endS / 30 / 60) * 60);
+  const rows: number[] = [];
+  for (let from = 0; from < endS; from += stepS) rows.push(from);
+  return (
+    <details className="mt-2 text-[0.8125rem]">
+      <summary className="cursor-pointer text-copper">The chart as a table</summary>
+      <div className="mt-2 max-h-80 overflow-auto">
+        <table className="w-full border-collapse">
+          <caption className="sr-only">Highest reading per probe, every {stepS / 60} minutes of the log</caption>
+          <thead>
+            <tr>
+              <th scope="col" className="border-b border-rule px-2 py-1 text-left">
+                Minutes
+              </th>
+              {lines.map((line) => (
+                <th key={line.column} scope="col" className="border-b border-rule px-2 py-1 text-right font-mono">
+                  {line.column}
+                  {line === ambient ? ' (ambient)' : ''}
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((from) => (
+              <tr key={from}>
+                <th scope="row" className="numeric px-2 py-0.5 text-left font-normal">
+                  {from / 60}–{minutesOf(Math.min(from + stepS, endS))}
+                </th>
+                {lines.map((line) => {
+                  const highest = highestIn(line, from, from + stepS);
+                  return (
+                    <td key={line.column} className="numeric px-2 py-0.5 text-right">
+                      {highest === null ? '—' : formatC(highest)}
+                    </td>
+                  );
+                })}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </details>
   );
 }

@@ -1,0 +1,102 @@
+import AxeBuilder from '@axe-core/playwright';
+import { expect, test, type Page } from '@playwright/test';
+import type { Role } from '../shared/schemas/common';
+import { clientRoutePatterns } from '../tests/support/client-routes';
+import { signInAs } from './support/sign-in';
+
+/**
+ * Every staff page, in the light and the dark theme, has no serious or critical accessibility violation that
+ * axe-core finds against WCAG 2.1 A and AA, and breaks no rule of the Content-Security-Policy. The pages are the
+ * route table of src/app/router.tsx: a page added there without a line below fails this test.
+ */
+const pages: Record<string, { role: Role | null; url: string | ((page: Page) => Promise<string>) }> = {
+  '/sign-in': { role: null, url: '/sign-in' },
+  '/': { role: 'editor', url: '/' },
+  '/users': { role: 'admin', url: '/users' },
+  '/account': { role: 'writer', url: '/account' },
+  '/catalog': { role: 'editor', url: '/catalog' },
+  '/catalog/new': { role: 'editor', url: '/catalog/new' },
+  '/catalog/import': { role: 'editor', url: '/catalog/import' },
+  // The demo outlet's first rows (server/seed): a board, a bench and a roundup.
+  '/catalog/:productId': { role: 'tester', url: '/catalog/1' },
+  '/catalog/:productId/edit': { role: 'editor', url: '/catalog/1/edit' },
+  '/benches': { role: 'tester', url: '/benches' },
+  '/benches/:benchId': { role: 'editor', url: '/benches/1' },
+  '/log-check': { role: 'tester', url: '/log-check' },
+  '/roundups': { role: 'editor', url: '/roundups' },
+  '/roundups/new': { role: 'editor', url: '/roundups/new' },
+  '/roundups/:id': { role: 'editor', url: '/roundups/1' },
+  '/roundups/:id/cells/:cellId': { role: 'editor', url: firstCellWithRuns },
+  '/my-bench': { role: 'tester', url: '/my-bench' },
+  '/*': { role: 'writer', url: '/no-such-page' },
+};
+
+/** A cell of the demo outlet that has runs (server/seed/demo-runs.ts), found through the API as the editor. */
+async function firstCellWithRuns(page: Page): Promise<string> {
+  const { roundups } = (await (await page.request.get('/api/roundups')).json()) as { roundups: { id: number }[] };
+  for (const { id } of roundups) {
+    const matrix = (await (await page.request.get(`/api/roundups/${id}/matrix`)).json()) as {
+      rows: { cells: { id: number; state: string }[] }[];
+    };
+    const cell = matrix.rows.flatMap((row) => row.cells).find((c) => c.state === 'accepted' || c.state === 'recorded');
+    if (cell) return `/roundups/${id}/cells/${cell.id}`;
+  }
+  throw new Error('The demo outlet has no cell with runs.');
+}
+
+test('every page of the staff app is listed here', () => {
+  const missing = clientRoutePatterns().filter((pattern) => !(pattern in pages));
+  expect(missing, 'pages of src/app/router.tsx without a line in accessibility.spec.ts').toEqual([]);
+});
+
+/** CSP refusals the browser reports on the console while the page loads and runs. */
+function watchPolicy(page: Page): string[] {
+  const refusals: string[] = [];
+  page.on('console', (message) => {
+    if (/Content Security Policy/i.test(message.text())) refusals.push(message.text());
+  });
+  return refusals;
+}
+
+async function seriousViolations(page: Page) {
+  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
+  return results.violations
+    .filter((violation) => violation.impact === 'serious' || violation.impact === 'critical')
+    .map(
+      (violation) =>
+        `${violation.id} (${violation.impact}): ${violation.help} — ${violation.nodes
+          .slice(0, 3)
+          .map((node) => node.target.join(' '))
+          .join(' | ')}`,
+    );
+}
+
+for (const theme of ['light', 'dark'] as const) {
+  test(`every staff page in the ${theme} theme: no serious or critical violation, nothing the CSP refuses`, async ({
+    browser,
+  }) => {
+    test.setTimeout(300_000);
+    const found: string[] = [];
+    const byRole = new Map<Role | null, string[]>();
+    for (const [pattern, entry] of Object.entries(pages)) {
+      byRole.set(entry.role, [...(byRole.get(entry.role) ?? []), pattern]);
+    }
+    for (const [role, patterns] of byRole) {
+      const context = await browser.newContext({ colorScheme: theme });
+      const page = await context.newPage();
+      const refusals = watchPolicy(page);
+      if (role) await signInAs(page, role);
+      for (const pattern of patterns) {
+        const { url } = pages[pattern];
+        const address = typeof url === 'string' ? url : await url(page);
+        await page.goto(address);
+        await expect(page.locator('h1').first()).toBeVisible();
+        await page.waitForLoadState('networkidle');
+        for (const violation of await seriousViolations(page)) found.push(`${address}: ${violation}`);
+      }
+      for (const refusal of refusals) found.push(`CSP as ${role ?? 'visitor'}: ${refusal}`);
+      await context.close();
+    }
+    expect(found).toEqual([]);
+  });
+}

@@ -59,6 +59,10 @@ export function createAppRouter(queryClient: QueryClient) {
                 { path: 'roundups/new', lazy: lazy(() => import('./routes/roundup-new')) },
                 { path: 'roundups/:id', lazy: lazy(() => import('./routes/roundup-detail')) },
                 { path: 'roundups/:id/cells/:cellId', lazy: lazy(() => import('./routes/roundup-cell')) },
+                {
+                  path: 'roundups/:id/products/:entryId/photos',
+                  lazy: lazy(() => import('./routes/roundup-entry-photos')),
+                },
                 { path: 'my-bench', lazy: lazy(() => import('./routes/my-bench')) },
                 { path: '*', lazy: lazy(() => import('./routes/not-found')) },
               ],

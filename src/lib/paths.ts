@@ -15,6 +15,7 @@ export const paths = {
   newRoundup: '/roundups/new',
   roundup: (id: number) => `/roundups/${id}`,
   roundupCell: (roundupId: number, cellId: number) => `/roundups/${roundupId}/cells/${cellId}`,
+  roundupEntryPhotos: (roundupId: number, entryId: number) => `/roundups/${roundupId}/products/${entryId}/photos`,
   myBench: '/my-bench',
   signIn: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
 } as const;

@@ -13,6 +13,7 @@ export const queryRoots = [
   'log-check',
   'matrix',
   'my-bench',
+  'photos',
   'roundups',
   'samples',
   'test-runs',

@@ -33,6 +33,8 @@ export const staleAfter = {
    * runs, the results, the matrix, the tester's queue and the dashboards.
    */
   run: ['test-runs', 'matrix', 'my-bench', 'roundups', 'dashboard'],
+  /** A product's photo added, changed, reordered or removed: the photo pages. */
+  photo: ['photos'],
   /** The signed-in person's own account (password, sessions). */
   account: ['account'],
 } as const satisfies Record<string, readonly QueryRoot[]>;

@@ -1,4 +1,5 @@
 import { useMemo } from 'react';
+import { Link } from 'react-router';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
@@ -7,15 +8,17 @@ import { formFactorLabels } from '../../../../shared/schemas/catalog';
 import { sampleStatusLabels } from '../../../../shared/schemas/samples';
 import type { RoundupEntry } from '../../../../shared/schemas/roundups';
 import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
+import { paths } from '../../../lib/paths';
 import { PriceCheckCell } from './price-check-cell';
 
 export interface EntriesTableProps {
+  roundupId: number;
   entries: readonly RoundupEntry[];
   /** Editors may remove entries while the plan is editable. */
   onRemove?: (entry: RoundupEntry) => void;
 }
 
-export function EntriesTable({ entries, onRemove }: EntriesTableProps) {
+export function EntriesTable({ roundupId, entries, onRemove }: EntriesTableProps) {
   const columns = useMemo<DataTableColumn<RoundupEntry>[]>(() => {
     const list: DataTableColumn<RoundupEntry>[] = [
       {
@@ -83,6 +86,19 @@ export function EntriesTable({ entries, onRemove }: EntriesTableProps) {
             <span className="text-muted">None (not re-tested)</span>
           ),
       },
+      {
+        id: 'photos',
+        header: 'Photos',
+        cell: (e) => (
+          <Link
+            to={paths.roundupEntryPhotos(roundupId, e.id)}
+            aria-label={`Photos of ${productDisplayName(e.product)}`}
+            className="text-copper underline-offset-2 hover:underline"
+          >
+            Photos
+          </Link>
+        ),
+      },
     ];
     if (onRemove) {
       list.push({
@@ -101,7 +117,7 @@ export function EntriesTable({ entries, onRemove }: EntriesTableProps) {
       });
     }
     return list;
-  }, [onRemove]);
+  }, [onRemove, roundupId]);
 
   return (
     <DataTable

@@ -84,7 +84,7 @@ export function ProductsPanel({ roundup, canEdit }: ProductsPanelProps) {
         </Alert>
       )}
 
-      <EntriesTable entries={roundup.entries} onRemove={editable ? startRemoving : undefined} />
+      <EntriesTable roundupId={roundup.id} entries={roundup.entries} onRemove={editable ? startRemoving : undefined} />
 
       {editable && (
         <Panel title="Add products" description="Tested products get a row in the matrix and a sample record.">

@@ -11,13 +11,32 @@ import type { PersonRef } from '../../shared/schemas/planning-fields';
 /** Cells that are done (or waiting for the editor) are never overdue. */
 const finishedStates = new Set<CellState>(['recorded', 'accepted']);
 
+/** Submitted test runs per cell, for the cells given (cells without runs are absent). */
+export async function runCountsByCell(manager: EntityManager, cellIds: number[]): Promise<Map<number, number>> {
+  const counts = new Map<number, number>();
+  if (cellIds.length === 0) return counts;
+  const rows: { matrix_cell_id: number; n: string }[] = await manager.query(
+    `SELECT matrix_cell_id, COUNT(*) AS n FROM test_runs
+     WHERE matrix_cell_id IN (${cellIds.map(() => '?').join(',')}) GROUP BY matrix_cell_id`,
+    cellIds,
+  );
+  for (const row of rows) counts.set(Number(row.matrix_cell_id), Number(row.n));
+  return counts;
+}
+
 export function toMatrixCellDto(
   cell: MatrixCellEntity,
   timeZone: string,
   people: Map<number, PersonRef>,
   user: CurrentUser,
   now: Date,
+  runCounts: Map<number, number>,
 ): MatrixCell {
+  const runCount = runCounts.get(cell.id) ?? 0;
+  // "Mark recorded" needs a submitted run: without one it is not offered (the server refuses it too).
+  const actions = availableCellActions({ state: cell.state, testerId: cell.testerId }, user).filter(
+    (action) => action !== 'record' || runCount > 0,
+  );
   return {
     id: cell.id,
     roundupId: cell.roundupId,
@@ -29,7 +48,8 @@ export function toMatrixCellDto(
     overdue: cell.dueDate != null && !finishedStates.has(cell.state) && hasDateEnded(cell.dueDate, timeZone, now),
     note: cell.note,
     stateChangedAt: cell.stateChangedAt.toISOString(),
-    actions: availableCellActions({ state: cell.state, testerId: cell.testerId }, user),
+    runCount,
+    actions,
   };
 }
 

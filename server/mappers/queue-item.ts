@@ -5,7 +5,7 @@ import { LoadConfigurationEntity } from '../entities/load-configuration.entity';
 import type { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
-import { toMatrixCellDto } from './matrix-cell';
+import { runCountsByCell, toMatrixCellDto } from './matrix-cell';
 import { loadPeople } from './people';
 import { productBriefs } from './product-fields';
 import type { CurrentUser } from '../../shared/schemas/auth';
@@ -41,12 +41,16 @@ export async function queueItems(
     manager,
     cells.map((c) => c.testerId),
   );
+  const runCounts = await runCountsByCell(
+    manager,
+    cells.map((c) => c.id),
+  );
   return cells.map((cell) => {
     const roundup = roundupById.get(cell.roundupId) as RoundupEntity;
     const entry = entryById.get(cell.entryId) as RoundupEntryEntity;
     const config = configById.get(cell.loadConfigurationId) as LoadConfigurationEntity;
     return {
-      cell: toMatrixCellDto(cell, roundup.timeZone, people, user, now),
+      cell: toMatrixCellDto(cell, roundup.timeZone, people, user, now, runCounts),
       roundup: { id: roundup.id, title: roundup.title, state: roundup.state, timeZone: roundup.timeZone },
       product: products.get(entry.productId) as ProductBrief,
       loadConfiguration: { id: config.id, name: config.name },

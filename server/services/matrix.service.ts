@@ -9,7 +9,7 @@ import { UserEntity } from '../entities/user.entity';
 import { AppError, conflict, forbidden, invalid, notFound } from '../errors';
 import { loadPeople } from '../mappers/people';
 import { recordPlanChange } from '../lib/roundup-audit';
-import { emptyProgress, progressByRoundup, toMatrixCellDto } from '../mappers/matrix-cell';
+import { emptyProgress, progressByRoundup, runCountsByCell, toMatrixCellDto } from '../mappers/matrix-cell';
 import { productBriefs } from '../mappers/product-fields';
 import { assertPlanEditable, findRoundup, lockRoundup } from '../lib/roundup-access';
 import { cellBookingAt } from './benches.service';
@@ -59,6 +59,10 @@ export class MatrixService {
       cells.map((c) => c.testerId),
     );
     const cellAt = new Map(cells.map((c) => [`${c.entryId}:${c.loadConfigurationId}`, c]));
+    const runCounts = await runCountsByCell(
+      manager,
+      cells.map((c) => c.id),
+    );
     return {
       roundupId,
       roundupState: roundup.state,
@@ -78,7 +82,7 @@ export class MatrixService {
             : links
                 .map((link) => cellAt.get(`${entry.id}:${link.loadConfigurationId}`))
                 .filter((cell): cell is MatrixCellEntity => cell !== undefined)
-                .map((cell) => toMatrixCellDto(cell, roundup.timeZone, people, user, now)),
+                .map((cell) => toMatrixCellDto(cell, roundup.timeZone, people, user, now, runCounts)),
       })),
       progress: (await progressByRoundup(manager, [roundupId])).get(roundupId) ?? emptyProgress(),
     };
@@ -178,7 +182,11 @@ export class MatrixService {
         manager,
         updated.map((c) => c.testerId),
       );
-      return updated.map((cell) => toMatrixCellDto(cell, roundup.timeZone, people, actor, now));
+      const runCounts = await runCountsByCell(
+        manager,
+        updated.map((c) => c.id),
+      );
+      return updated.map((cell) => toMatrixCellDto(cell, roundup.timeZone, people, actor, now, runCounts));
     });
   }
 
@@ -255,7 +263,7 @@ export class MatrixService {
       });
       const updated = await repo.findOneByOrFail({ id: cellId });
       const people = await loadPeople(manager, [updated.testerId]);
-      return toMatrixCellDto(updated, roundup.timeZone, people, actor, now);
+      return toMatrixCellDto(updated, roundup.timeZone, people, actor, now, await runCountsByCell(manager, [cellId]));
     });
   }
 }

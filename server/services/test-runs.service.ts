@@ -16,6 +16,7 @@ import { StoredFileEntity } from '../entities/stored-file.entity';
 import { TestRunEntity } from '../entities/test-run.entity';
 import { AppError, forbidden, notFound } from '../errors';
 import { mayReadCellRuns } from '../../shared/access/roles';
+import { recordPlanChange } from '../lib/roundup-audit';
 import { loadPeople, personOrNull } from '../mappers/people';
 import type { FileStore } from '../storage/file-store';
 import { recordAudit } from './audit.service';
@@ -223,6 +224,7 @@ export class TestRunsService {
           loggerFileId: file.id,
         });
         await this.insertAnalysis(manager, actor, run.id, parameters, analysis);
+        await this.startCellWithRun(manager, actor, context, run.id);
         if (input.rememberMapping && context.profile) {
           await manager
             .getRepository(BenchProfileEntity)
@@ -254,6 +256,7 @@ export class TestRunsService {
       });
       const parameters = { manual: true, options: { rubric: context.rubric, referenceRoomC: 21 } };
       await this.insertAnalysis(manager, actor, run.id, parameters, manualAnalysis(input, context.rubric));
+      await this.startCellWithRun(manager, actor, context, run.id);
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'test-run.created',
@@ -492,6 +495,31 @@ export class TestRunsService {
       );
     }
     return { bookingId: booking?.id ?? null, benchId };
+  }
+
+  /**
+   * A submitted run means the soak took place: a cell still waiting in the queue (assigned, or sent back for a retest)
+   * is now running, so the tester can mark it recorded without first pressing Start. Only while the roundup is on the
+   * bench, as for a start by hand; the move is kept in the roundup's history with the run that caused it.
+   */
+  private async startCellWithRun(
+    manager: EntityManager,
+    actor: CurrentUser,
+    context: Awaited<ReturnType<TestRunsService['cellContext']>>,
+    runId: number,
+  ) {
+    const { cell, roundup } = context;
+    if (roundup.state !== 'on-the-bench' || !['assigned', 'needs-retest'].includes(cell.state)) return;
+    await manager
+      .getRepository(MatrixCellEntity)
+      .update({ id: cell.id }, { state: 'running', stateChangedAt: new Date() });
+    await recordPlanChange(manager, actor, roundup.id, 'roundup.cell_moved', {
+      cellId: cell.id,
+      action: 'start',
+      from: cell.state,
+      to: 'running',
+      byRunId: runId,
+    });
   }
 
   private async insertRun(

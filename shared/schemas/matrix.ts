@@ -28,6 +28,8 @@ export const matrixCellSchema = z.object({
   /** The editor's reason when sending back for retest, or the last transition's note. */
   note: z.string().nullable(),
   stateChangedAt: instantSchema,
+  /** Submitted test runs on the cell; "Mark recorded" is offered only with at least one. */
+  runCount: z.number().int(),
   /** What the signed-in user may do with this cell now. */
   actions: z.array(cellActionSchema),
 });

@@ -19,6 +19,7 @@ function cell(id: number, entryId: number, loadConfigurationId: number, override
     overdue: false,
     note: null,
     stateChangedAt: '2026-11-30T09:00:00.000Z',
+    runCount: 0,
     actions: [],
     ...overrides,
   } satisfies MatrixCell;

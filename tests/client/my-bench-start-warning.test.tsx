@@ -18,6 +18,7 @@ const cell: MatrixCell = {
   overdue: false,
   note: null,
   stateChangedAt: '2026-12-01T08:00:00.000Z',
+  runCount: 0,
   actions: ['start'],
 };
 const item: QueueItem = {

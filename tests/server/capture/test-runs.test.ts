@@ -221,6 +221,22 @@ describe('test runs on matrix cells', () => {
     expect(noReason.status).toBe(422);
   });
 
+  it('when a run is submitted on a cell still in the queue, then the cell is running and may be marked recorded', async () => {
+    const { tester, editor, cellId, roundupId } = await setUp();
+    const cellOf = async () =>
+      (await matrixOf(tester.agent, roundupId)).rows.flatMap((row) => row.cells).find((cell) => cell.id === cellId);
+    expect(await cellOf()).toMatchObject({ state: 'assigned', runCount: 0, actions: ['start'] });
+    await recordManualRun(tester.agent, cellId);
+    expect(await cellOf()).toMatchObject({ state: 'running', runCount: 1, actions: ['pause', 'record'] });
+    const recorded = await tester.agent
+      .post(`/api/roundups/${roundupId}/cells/${cellId}/transitions`)
+      .send({ action: 'record' });
+    expect(recorded.status, recorded.text).toBe(200);
+    expect(recorded.body.state).toBe('recorded');
+    const history = await editor.agent.get(`/api/roundups/${roundupId}/history`);
+    expect(JSON.stringify(history.body)).toMatch(/"byRunId":\d+/);
+  });
+
   it('the editor marks the run of record; the results matrix shows its figures and verdict', async () => {
     const { tester, editor, cellId, roundupId } = await setUp();
     const first = await recordManualRun(tester.agent, cellId, 70.0);

@@ -93,7 +93,8 @@ describe('the test matrix', () => {
 
     const started = await move(tester.agent, roundupId, a.id, 'start');
     expect(started.status, started.text).toBe(200);
-    expect(started.body).toMatchObject({ state: 'running', actions: ['pause', 'record'] });
+    // No run yet, so "Mark recorded" is not offered.
+    expect(started.body).toMatchObject({ state: 'running', runCount: 0, actions: ['pause'] });
     // A tester cannot accept their own work, and nothing is accepted before it is recorded.
     expect((await move(tester.agent, roundupId, a.id, 'accept')).status).toBe(403);
     const notRecorded = await move(editor.agent, roundupId, a.id, 'accept');
@@ -105,6 +106,8 @@ describe('the test matrix', () => {
     expect(noRun.status).toBe(409);
     expect(noRun.body.error.code).toBe('no_run');
     await recordManualRun(tester.agent, a.id);
+    const withRun = (await matrixOf(tester.agent, roundupId)).rows.flatMap((r) => r.cells).find((c) => c.id === a.id);
+    expect(withRun).toMatchObject({ runCount: 1, actions: ['pause', 'record'] });
     expect((await move(tester.agent, roundupId, a.id, 'record')).body.state).toBe('recorded');
     const accepted = await move(editor.agent, roundupId, a.id, 'accept');
     expect(accepted.body.state).toBe('accepted');

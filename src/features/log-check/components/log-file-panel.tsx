@@ -10,16 +10,18 @@ import type { LogCheck } from './use-log-check';
 export interface LogFilePanelProps {
   check: LogCheck;
   signInPath: string;
+  /** Recording a run: the file is kept as evidence once the run is submitted. */
+  kept?: boolean;
 }
 
 /** Step 1: the file, its upload, and what became of it (read, cancelled, or why the request failed). */
-export function LogFilePanel({ check, signInPath }: LogFilePanelProps) {
+export function LogFilePanel({ check, signInPath, kept = false }: LogFilePanelProps) {
   const { file, fileError, reading, failure, sending, cancelled, requestError } = check;
   const readWell = file && reading && !sending && !cancelled && failure?.stage !== 'reading';
 
   return (
     <Panel title="1 · The soak log" description="One soak of one load configuration: time, VRM probes, ambient.">
-      <LogFilePicker file={file} onChoose={check.choose} error={fileError} />
+      <LogFilePicker file={file} onChoose={check.choose} error={fileError} kept={kept} />
       {sending && (
         <div className="mt-3">
           <UploadProgress

@@ -9,6 +9,8 @@ export interface LogFilePickerProps {
   /** Why the last file was refused (type, size, an empty file): shown beside the input. */
   error?: string | null;
   disabled?: boolean;
+  /** The file is stored with a test run as evidence (recording a run), rather than read and forgotten (Log check). */
+  kept?: boolean;
 }
 
 const accept = `${acceptAttribute(logFileUploadLimit)},text/csv,text/plain,text/tab-separated-values`;
@@ -17,7 +19,7 @@ const accept = `${acceptAttribute(logFileUploadLimit)},text/csv,text/plain,text/
  * A drop area around an ordinary file input: dragging a file from the desktop works, and so does the keyboard (Tab to
  * the input, Enter or Space opens the browser's file chooser).
  */
-export function LogFilePicker({ file, onChoose, error, disabled = false }: LogFilePickerProps) {
+export function LogFilePicker({ file, onChoose, error, disabled = false, kept = false }: LogFilePickerProps) {
   const inputId = useId();
   const hintId = useId();
   const errorId = useId();
@@ -100,8 +102,10 @@ export function LogFilePicker({ file, onChoose, error, disabled = false }: LogFi
           </p>
         )}
         <p id={hintId} className="mt-1 text-[0.8125rem] text-muted">
-          A CSV, TSV or text export of the logger, up to {formatBytes(logFileUploadLimit.maxFileBytes)}. Nothing is
-          saved: the file is read and analysed, then forgotten.
+          A CSV, TSV or text export of the logger, up to {formatBytes(logFileUploadLimit.maxFileBytes)}.{' '}
+          {kept
+            ? 'When you submit the run, the file is stored byte for byte with its SHA-256 as the run’s evidence.'
+            : 'Nothing is saved: the file is read and analysed, then forgotten.'}
         </p>
       </div>
       {file && (

@@ -3,9 +3,13 @@ import { Link } from 'react-router';
 import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
+import { CellStateBadge } from '../../../components/ui/cell-state-badge';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Panel } from '../../../components/ui/panel';
+import { describeSubmitError } from '../../../lib/form-errors';
 import { formatInstant } from '../../../lib/format-time';
+import { cellStateLabels, type CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
+import type { MatrixCell } from '../../../../shared/schemas/matrix';
 import type { TestRun } from '../../../../shared/schemas/test-runs';
 import { formatC, formatDeltaC } from '../../log-check/components/format-figures';
 import { VerdictMark } from '../../log-check/components/verdict-mark';
@@ -16,6 +20,12 @@ import { ManualMark, ReviewStateBadge, RunDetail } from './run-detail';
 
 export interface CellRunsPageProps {
   cellId: number;
+  /** The cell as the matrix shows it (state, the editor's retest reason, the moves open to the user). */
+  matrixCell: MatrixCell | null;
+  /** Sends one of the cell's moves (the page wires in the matrix's one transition request). */
+  moveCell: (action: CellAction) => Promise<MatrixCell>;
+  /** The photos page of the cell's product in this roundup. */
+  photosPath: (entryId: number) => string;
   /** Link back to the roundup's matrix. */
   matrixPath: string;
   signInPath: string;
@@ -98,7 +108,73 @@ function RunsTable({
 }
 
 /** A matrix cell (product × load configuration): its runs, firmware comparison, the chosen run, and recording a new one. */
-export function CellRunsPage({ cellId, matrixPath, signInPath, canRecord }: CellRunsPageProps) {
+/** The cell's state, the editor's retest reason, and "Mark recorded" once a run is submitted. */
+function CellStatus({
+  cell,
+  runCount,
+  canRecord,
+  moveCell,
+}: {
+  cell: MatrixCell;
+  runCount: number;
+  canRecord: boolean;
+  moveCell: (action: CellAction) => Promise<MatrixCell>;
+}) {
+  const [pending, setPending] = useState(false);
+  const [notice, setNotice] = useState<{ tone: 'success' | 'danger'; text: string } | null>(null);
+  const mark = async () => {
+    setPending(true);
+    setNotice(null);
+    try {
+      const moved = await moveCell('record');
+      setNotice({ tone: 'success', text: `The cell is ${cellStateLabels[moved.state]}: the editor reviews it next.` });
+    } catch (error) {
+      setNotice({ tone: 'danger', text: `The cell did not move. ${describeSubmitError(error).message}` });
+    } finally {
+      setPending(false);
+    }
+  };
+  const canMark = cell.actions.includes('record');
+  const waitsForRun = canRecord && runCount === 0 && ['running', 'assigned', 'needs-retest'].includes(cell.state);
+  return (
+    <div className="space-y-2">
+      <div className="flex flex-wrap items-center gap-3 text-sm">
+        <span>
+          Cell: <CellStateBadge state={cell.state} />
+        </span>
+        {cell.tester && <span className="text-muted">Tester: {cell.tester.displayName}</span>}
+        {canMark && (
+          <Button size="sm" variant="primary" pending={pending} onClick={() => void mark()}>
+            Mark recorded
+          </Button>
+        )}
+      </div>
+      {cell.state === 'needs-retest' && cell.note && (
+        <p className="text-sm">
+          <span className="font-semibold">Sent back for retest:</span> {cell.note}
+        </p>
+      )}
+      {waitsForRun && (
+        <p className="text-sm text-muted">Submit a run below; the cell can be marked recorded once it has one.</p>
+      )}
+      {notice && (
+        <Alert tone={notice.tone} announce>
+          {notice.text}
+        </Alert>
+      )}
+    </div>
+  );
+}
+
+export function CellRunsPage({
+  cellId,
+  matrixCell,
+  moveCell,
+  photosPath,
+  matrixPath,
+  signInPath,
+  canRecord,
+}: CellRunsPageProps) {
   const cell = useCellRuns(cellId);
   const [chosenId, setChosenId] = useState<number | null>(null);
   const [recording, setRecording] = useState<'logger' | 'manual' | null>(null);
@@ -124,9 +200,19 @@ export function CellRunsPage({ cellId, matrixPath, signInPath, canRecord }: Cell
       </p>
       <PageHeader eyebrow="Test runs" title={`${cell.productName} · ${cell.loadConfigurationName}`} />
       <div className="space-y-6">
+        {matrixCell && (
+          <CellStatus cell={matrixCell} runCount={cell.runs.length} canRecord={canRecord} moveCell={moveCell} />
+        )}
+        {matrixCell && (
+          <p className="text-sm">
+            <Link to={photosPath(matrixCell.entryId)} className="text-copper underline-offset-2 hover:underline">
+              Photos of {cell.productName}
+            </Link>
+          </p>
+        )}
         {recorded && (
           <Alert tone="success" announce title="Run submitted">
-            The run is stored with its analysis and waits for review.
+            The run is stored with its analysis and waits for review. Mark the cell recorded when its runs are complete.
           </Alert>
         )}
         <Panel title="Runs" description="Every run of this cell, newest first; the run of record is starred.">
@@ -163,7 +249,7 @@ export function CellRunsPage({ cellId, matrixPath, signInPath, canRecord }: Cell
             </ul>
           </section>
         )}
-        {selected && <RunDetail run={selected} />}
+        {selected && <RunDetail key={selected.id} run={selected} />}
         {canRecord && (
           <Panel
             title="Record a run"

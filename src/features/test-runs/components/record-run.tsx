@@ -205,7 +205,7 @@ export function RecordLoggerRun({ cellId, rememberedMapping, signInPath, onRecor
 
   return (
     <div className="space-y-6">
-      <LogFilePanel check={check} signInPath={signInPath} />
+      <LogFilePanel check={check} signInPath={signInPath} kept />
       {failure?.stage === 'reading' && (
         <ParseErrorTable
           errors={failure.errors}

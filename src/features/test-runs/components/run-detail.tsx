@@ -10,7 +10,7 @@ import { runReviewStateLabels, type TestRun } from '../../../../shared/schemas/t
 import { formatBytes, formatC, formatDeltaC, formatDuration } from '../../log-check/components/format-figures';
 import { QaFlagList } from '../../log-check/components/qa-flag-list';
 import { VerdictMark } from '../../log-check/components/verdict-mark';
-import { useMarkRunOfRecord, useReviewRun } from '../api/test-runs-api';
+import { useMarkRunOfRecord, useReanalyseRun, useReviewRun } from '../api/test-runs-api';
 
 function Figure({ label, value }: { label: string; value: string }) {
   return (
@@ -106,6 +106,7 @@ function ReviewForm({ run }: { run: TestRun }) {
 export function RunDetail({ run }: { run: TestRun }) {
   const { analysis } = run;
   const markOfRecord = useMarkRunOfRecord();
+  const reanalyse = useReanalyseRun();
   return (
     <Panel
       title={`Run on firmware ${run.firmwareVersion}`}
@@ -181,10 +182,27 @@ export function RunDetail({ run }: { run: TestRun }) {
           </section>
         )}
         <ReviewForm key={run.id} run={run} />
-        {run.actions.includes('mark-of-record') && !run.isRunOfRecord && (
-          <Button pending={markOfRecord.isPending} onClick={() => markOfRecord.mutate(run.id)}>
-            Mark as run of record
-          </Button>
+        <div className="flex flex-wrap gap-2">
+          {run.actions.includes('mark-of-record') && !run.isRunOfRecord && (
+            <Button pending={markOfRecord.isPending} onClick={() => markOfRecord.mutate(run.id)}>
+              Mark as run of record
+            </Button>
+          )}
+          {run.actions.includes('reanalyse') && (
+            <Button variant="quiet" pending={reanalyse.isPending} onClick={() => reanalyse.mutate(run.id)}>
+              Run the engine again with the current rubric
+            </Button>
+          )}
+        </div>
+        {(markOfRecord.isError || reanalyse.isError) && (
+          <Alert tone="danger" announce>
+            {describeSubmitError(markOfRecord.error ?? reanalyse.error).message}
+          </Alert>
+        )}
+        {reanalyse.isSuccess && (
+          <p role="status" className="text-sm">
+            A new analysis is stored beside the earlier ones; the file and earlier analyses are unchanged.
+          </p>
         )}
       </div>
     </Panel>

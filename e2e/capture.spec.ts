@@ -1,6 +1,7 @@
 import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import sharp from 'sharp';
 import { expect, test, type APIRequestContext, type PlaywrightWorkerArgs } from '@playwright/test';
 import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
 import { demoAccounts } from './support/demo-accounts';
@@ -14,6 +15,7 @@ async function ok<T = { id: number }>(response: Awaited<ReturnType<APIRequestCon
 
 interface CaptureSetup {
   roundupId: number;
+  entryId: number;
   productLabel: string;
   cellLabel: string;
 }
@@ -95,7 +97,12 @@ async function prepareCell(playwright: PlaywrightWorkerArgs['playwright'], baseU
         data: { entryIds: [entry.id], testerId: tester?.id, dueDate: day(5) },
       }),
     );
-    return { roundupId: roundup.id, productLabel: `${maker} ${model}`, cellLabel: `${maker} ${model} · ${loadName}` };
+    return {
+      roundupId: roundup.id,
+      entryId: entry.id,
+      productLabel: `${maker} ${model}`,
+      cellLabel: `${maker} ${model} · ${loadName}`,
+    };
   } finally {
     await api.dispose();
   }
@@ -152,6 +159,8 @@ test('a tester records runs from logger files; the editor accepts a flagged run 
     await page.getByLabel('Room target').fill('21');
     await page.getByRole('button', { name: 'Analyse' }).click();
     await expect(page.getByRole('region', { name: 'Result' })).toBeVisible();
+    // The log's chart is there before anything is submitted.
+    await expect(page.getByRole('img', { name: /VRM probes and ambient over this log/ })).toBeVisible();
     const form = page.getByRole('form', { name: 'Run details' });
     await form.getByLabel('Firmware (BIOS) version').fill(firmware);
     await form.getByRole('button', { name: 'Submit the run' }).click();
@@ -164,11 +173,27 @@ test('a tester records runs from logger files; the editor accepts a flagged run 
     await expect(page.getByText('Run submitted')).toBeVisible();
   };
 
+  // No run yet: the cell cannot be marked recorded.
+  await expect(page.getByRole('button', { name: 'Mark recorded' })).toHaveCount(0);
   await recordRun(firstFile, '1.02', false);
   await expect(page.getByRole('table').first()).toContainText('1.02');
   await recordRun(secondFile, '1.03', true);
   await expect(page.getByRole('heading', { name: 'By firmware' })).toBeVisible();
   await expect(page.getByText(/Difference from the first firmware/)).toBeVisible();
+
+  // The same file again is recognised by its hash, and said; nothing is added.
+  await page.getByRole('button', { name: 'Upload a log' }).click();
+  await page.getByLabel('Logger file').setInputFiles(firstFile);
+  await page.getByLabel('Room target').fill('21');
+  await page.getByRole('button', { name: 'Analyse', exact: true }).click();
+  const again = page.getByRole('form', { name: 'Run details' });
+  await again.getByLabel('Firmware (BIOS) version').fill('1.02');
+  await again.getByRole('button', { name: 'Submit the run' }).click();
+  await expect(again.getByText(/This exact file \(same SHA-256\) is already stored/)).toBeVisible();
+  await expect(page.getByRole('table').first().getByRole('row')).toHaveCount(3);
+
+  await page.getByRole('button', { name: 'Mark recorded' }).click();
+  await expect(page.getByText(/The cell is Recorded/)).toBeVisible();
   await signOut(page);
 
   await signInAs(page, 'editor');
@@ -196,4 +221,106 @@ test('a tester records runs from logger files; the editor accepts a flagged run 
   await expect(row).toContainText(/flag/);
   await page.getByRole('button', { name: 'Delta over ambient' }).click();
   await expect(page.getByRole('button', { name: 'Delta over ambient' })).toHaveAttribute('aria-pressed', 'true');
+});
+
+/** A camera-sized JPEG of random noise (noise does not compress, so the upload takes a while on a slow link). */
+async function noisePhoto(width: number, height: number, format: 'jpeg' | 'png'): Promise<Buffer> {
+  const pixels = Buffer.alloc(width * height * 3);
+  for (let index = 0; index < pixels.length; index += 1) pixels[index] = Math.imul(index, 2654435761) >>> 24;
+  const image = sharp(pixels, { raw: { width, height, channels: 3 } });
+  return format === 'jpeg' ? image.jpeg({ quality: 95 }).toBuffer() : image.png().toBuffer();
+}
+
+test('a tester adds photos to a product with progress and thumbnails, reorders them by keyboard, edits and removes one', async ({
+  page,
+  playwright,
+  baseURL,
+}) => {
+  test.setTimeout(120_000);
+  const setup = await prepareCell(playwright, baseURL ?? '');
+  const notAPhoto = path.join(folder, 'board-overview.jpg');
+  const overview = path.join(folder, 'overview.jpg');
+  const closeUp = path.join(folder, 'power-stages.png');
+  await writeFile(notAPhoto, 'Time,VRM 1\n0,21.0\n');
+  await writeFile(overview, await noisePhoto(1600, 1200, 'jpeg'));
+  await writeFile(closeUp, await noisePhoto(640, 480, 'png'));
+
+  await signInAs(page, 'tester');
+  await page.goto(`/roundups/${setup.roundupId}`);
+  await page.getByRole('link', { name: `Photos of ${setup.productLabel}` }).click();
+  await expect(page.getByRole('heading', { level: 1, name: setup.productLabel })).toBeVisible();
+  const form = page.getByRole('form', { name: 'Add a photo' });
+
+  // Alt text is required, and a file that is not an image is refused by its content whatever its name; nothing
+  // typed is lost.
+  await form.getByLabel('Photo file').setInputFiles(notAPhoto);
+  await form.getByLabel('What it shows').selectOption({ label: 'Board overview' });
+  await form.getByLabel('Caption').fill('The whole board, heatsinks on');
+  await form.getByRole('button', { name: 'Add the photo' }).click();
+  await expect(form.getByLabel('Alt text')).toHaveAttribute('aria-invalid', 'true');
+  await form.getByLabel('Alt text').fill('A black ATX board seen from above with two finned VRM heatsinks');
+  await form.getByRole('button', { name: 'Add the photo' }).click();
+  await expect(form.getByText(/not a JPEG, PNG or WebP image/)).toBeVisible();
+  await expect(form.getByLabel('Caption')).toHaveValue('The whole board, heatsinks on');
+  await expect(form.getByLabel('Alt text')).toHaveValue(/two finned VRM heatsinks/);
+
+  // On a slow link the upload shows how far it got, then its thumbnail.
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send('Network.enable');
+  await cdp.send('Network.emulateNetworkConditions', {
+    offline: false,
+    latency: 20,
+    downloadThroughput: -1,
+    uploadThroughput: 256 * 1024,
+  });
+  await form.getByLabel('Photo file').setInputFiles(overview);
+  await form.getByRole('button', { name: 'Add the photo' }).click();
+  const progress = form.getByRole('progressbar', { name: 'Uploading the photo' });
+  await expect(progress).toBeVisible();
+  await expect(progress).toHaveAttribute('aria-valuetext', /Uploading .* of /);
+  await expect(page.getByText('Photo added as number 1.')).toBeVisible({ timeout: 30_000 });
+  await cdp.send('Network.emulateNetworkConditions', {
+    offline: false,
+    latency: 0,
+    downloadThroughput: -1,
+    uploadThroughput: -1,
+  });
+  const photos = page.getByRole('list', { name: 'Photos in order' });
+  const first = photos.getByRole('img', { name: /two finned VRM heatsinks/ });
+  await expect(first).toBeVisible();
+  await expect.poll(() => first.evaluate((image: HTMLImageElement) => image.naturalWidth)).toBeGreaterThan(0);
+  // The form is empty again for the next photo.
+  await expect(form.getByLabel('Caption')).toHaveValue('');
+
+  await form.getByLabel('Photo file').setInputFiles(closeUp);
+  await form.getByLabel('What it shows').selectOption({ label: 'Power delivery close-up' });
+  await form.getByLabel('Alt text').fill('Close-up of the power stages under the left heatsink');
+  await form.getByRole('button', { name: 'Add the photo' }).click();
+  await expect(page.getByText('Photo added as number 2.')).toBeVisible();
+  await expect(photos.getByRole('listitem')).toHaveCount(2);
+
+  // Reorder with the keyboard: focus the second photo's "earlier" button and press Enter.
+  const earlier = photos.getByRole('button', { name: /Move photo 2 earlier/ });
+  await earlier.focus();
+  await page.keyboard.press('Enter');
+  await expect(photos.getByRole('listitem').first()).toContainText('Power delivery close-up');
+  await expect(page.getByText('Photo moved to place 1 of 2.')).toBeAttached();
+  await page.reload();
+  await expect(photos.getByRole('listitem').first()).toContainText('Power delivery close-up');
+
+  // Edit a caption; an emptied alt text is refused beside the field.
+  await photos.getByRole('button', { name: 'Edit photo 2 (The whole board, heatsinks on)' }).click();
+  const edit = page.getByRole('form', { name: 'Edit photo 2' });
+  await edit.getByLabel('Alt text').fill('');
+  await edit.getByRole('button', { name: 'Save' }).click();
+  await expect(edit.getByLabel('Alt text')).toHaveAttribute('aria-invalid', 'true');
+  await edit.getByLabel('Alt text').fill('The board from above, both heatsinks fitted');
+  await edit.getByLabel('Caption').fill('Board overview as shipped');
+  await edit.getByRole('button', { name: 'Save' }).click();
+  await expect(photos.getByText('Board overview as shipped')).toBeVisible();
+
+  await photos.getByRole('button', { name: /Remove photo 1/ }).click();
+  await page.getByRole('dialog').getByRole('button', { name: 'Remove the photo' }).click();
+  await expect(photos.getByRole('listitem')).toHaveCount(1);
+  await expect(photos.getByRole('img', { name: 'The board from above, both heatsinks fitted' })).toBeVisible();
 });

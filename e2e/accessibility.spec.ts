@@ -27,6 +27,7 @@ const pages: Record<string, { role: Role | null; url: string | ((page: Page) => 
   '/roundups/new': { role: 'editor', url: '/roundups/new' },
   '/roundups/:id': { role: 'editor', url: '/roundups/1' },
   '/roundups/:id/cells/:cellId': { role: 'editor', url: firstCellWithRuns },
+  '/roundups/:id/products/:entryId/photos': { role: 'tester', url: firstProductPhotos },
   '/my-bench': { role: 'tester', url: '/my-bench' },
   '/*': { role: 'writer', url: '/no-such-page' },
 };
@@ -42,6 +43,12 @@ async function firstCellWithRuns(page: Page): Promise<string> {
     if (cell) return `/roundups/${id}/cells/${cell.id}`;
   }
   throw new Error('The demo outlet has no cell with runs.');
+}
+
+/** The photos page of the demo roundup's first product, with its upload form (testers add photos). */
+async function firstProductPhotos(page: Page): Promise<string> {
+  const roundup = (await (await page.request.get('/api/roundups/1')).json()) as { entries: { id: number }[] };
+  return `/roundups/1/products/${roundup.entries[0].id}/photos`;
 }
 
 test('every page of the staff app is listed here', () => {

@@ -21,6 +21,8 @@ export interface CreateAppOptions {
   env: Env;
   /** Serve the built client from this folder (production); omitted in API tests and in development. */
   clientDir?: string;
+  /** The clock sessions are timed by (tests move it); the system clock when omitted. */
+  now?: () => number;
   /** The services built once by the caller (server start-up shares them with jobs); built here when omitted. */
   services?: Services;
 }
@@ -30,6 +32,7 @@ export function createApp({
   dataSource,
   env,
   clientDir,
+  now,
   services = createServices(dataSource, env),
 }: CreateAppOptions) {
   // Field errors in API answers read as words a person can act on, the same as the forms'.
@@ -46,7 +49,12 @@ export function createApp({
   registerFeatureRoutes(api, context);
   app.locals.api = api;
 
-  app.use('/api', express.json({ limit: '1mb' }), verifyOrigin, authenticate(services.sessions));
+  app.use(
+    '/api',
+    express.json({ limit: '1mb' }),
+    verifyOrigin,
+    authenticate(services.sessions, { absoluteMs: env.SESSION_ABSOLUTE_DAYS * 86_400_000, now }),
+  );
   app.use(api.router);
   app.use('/api', apiNotFound);
 

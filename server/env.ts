@@ -26,6 +26,8 @@ const envSchema = z
     SIGN_IN_LOCK_SECONDS: z.coerce.number().positive().default(30),
     SIGN_IN_LOCK_MAX_MINUTES: z.coerce.number().positive().default(15),
     SESSION_DAYS: z.coerce.number().int().positive().default(14),
+    /** A session ends this many days after sign-in however much it is used (the idle limit is SESSION_DAYS). */
+    SESSION_ABSOLUTE_DAYS: z.coerce.number().positive().default(30),
     DB_LOGGING: booleanFlag,
     /** Where uploaded files are kept: local disk (UPLOADS_DIR) or S3-compatible object storage (S3_*). */
     STORAGE_DRIVER: z.enum(['local', 's3']).default('local'),

@@ -75,6 +75,14 @@ class TypeormSessionAdapter implements Adapter {
 export const SESSION_COOKIE = 'benchwire_session';
 
 /**
+ * On HTTPS the cookie carries the `__Host-` prefix: browsers then accept it only with Secure, Path=/ and no Domain,
+ * so neither a sibling subdomain nor a plain-HTTP page can plant or overwrite it (RFC 6265bis §4.1.3.2).
+ */
+export function sessionCookieName(secureCookie: boolean): string {
+  return secureCookie ? `__Host-${SESSION_COOKIE}` : SESSION_COOKIE;
+}
+
+/**
  * The name a session is listed and revoked by. The session id is the cookie's secret value, so it never leaves
  * the server except in Set-Cookie; this one-way hash of it (132 bits, URL-safe) tells sessions apart instead.
  */
@@ -87,7 +95,7 @@ export function createSessionStore(dataSource: DataSource, options: { secureCook
   return new Lucia(new TypeormSessionAdapter(dataSource), {
     sessionExpiresIn: new TimeSpan(options.sessionDays, 'd'),
     sessionCookie: {
-      name: SESSION_COOKIE,
+      name: sessionCookieName(options.secureCookie),
       expires: true,
       attributes: { secure: options.secureCookie, sameSite: 'lax' },
     },

@@ -14,6 +14,9 @@ import type { ReaderAssets } from './reader-assets';
 import { renderHomePage } from './render-home-page';
 import { renderPage, type ReaderSite } from './render-layout';
 import { renderRoundupPage } from './render-roundup-page';
+import { atomFeed, robotsTxt, sitemapXml } from './feeds';
+import { readCompareChoice, renderComparePage } from './render-compare-page';
+import { estimatePointsFor, productAppearances, readEstimateForm, renderProductPage } from './render-product-page';
 
 export interface ReaderRoutesOptions {
   dataSource: DataSource;
@@ -159,6 +162,60 @@ export function createReaderRouter(options: ReaderRoutesOptions) {
     } catch {
       return notFound(req, res);
     }
+  });
+
+  router.get(`${readerBase}/products/:slug`, async (req, res) => {
+    const productId = idFromSlug(req.params.slug);
+    const appearances = productId === null ? [] : productAppearances(await options.source.list(), productId);
+    if (appearances.length === 0) return notFound(req, res);
+    const canonical = (appearances.find((a) => a.product.kind === 'tested') ?? appearances[0]).product.path;
+    if (req.path !== canonical) {
+      const query = req.url.includes('?') ? req.url.slice(req.url.indexOf('?')) : '';
+      return res.redirect(301, `${canonical}${query}`);
+    }
+    const unit = readerUnit(req, res);
+    const points = estimatePointsFor(appearances);
+    const estimate = readEstimateForm(req.query as Record<string, unknown>, unit, points);
+    sendHtml(
+      res,
+      200,
+      renderProductPage(await siteFor(req), appearances, {
+        unit,
+        estimate,
+        pointCount: points.length,
+        query: queryWithoutUnit(req),
+      }),
+    );
+  });
+
+  router.get(publicPaths.compare(), async (req, res) => {
+    const unit = readerUnit(req, res);
+    const choice = readCompareChoice(req.query as Record<string, unknown>);
+    sendHtml(
+      res,
+      200,
+      renderComparePage(await siteFor(req), await options.source.list(), choice, {
+        unit,
+        query: queryWithoutUnit(req),
+      }),
+    );
+  });
+
+  router.get(publicPaths.feed(), async (req, res) => {
+    res.setHeader('Content-Type', 'application/atom+xml; charset=utf-8');
+    res.setHeader('Cache-Control', 'no-cache');
+    res.end(atomFeed(await siteFor(req), await options.source.list()));
+  });
+
+  router.get(publicPaths.sitemap(), async (req, res) => {
+    res.setHeader('Content-Type', 'application/xml; charset=utf-8');
+    res.setHeader('Cache-Control', 'no-cache');
+    res.end(sitemapXml(await siteFor(req), await options.source.list()));
+  });
+
+  router.get(publicPaths.robots(), async (req, res) => {
+    res.setHeader('Content-Type', 'text/plain; charset=utf-8');
+    res.end(robotsTxt(await siteFor(req)));
   });
 
   router.get(`${readerBase}/{*rest}`, notFound);

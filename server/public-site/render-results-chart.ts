@@ -150,9 +150,9 @@ export function renderResultsChart(spec: ChartSpec, unit: DisplayUnit): SafeHtml
             ${spec.sourceColumn ? html`<th scope="col">${spec.sourceColumn}</th>` : ''}
             <th scope="col">Board</th>
             <th scope="col" class="num">${figureLabel}</th>
-            <th scope="col" class="num">Peak</th>
+            ${spec.metric === 'absolute' ? '' : html`<th scope="col" class="num">Peak</th>`}
             <th scope="col" class="num">Room</th>
-            <th scope="col" class="num">Over ambient</th>
+            ${spec.metric === 'absolute' ? html`<th scope="col" class="num">Over ambient</th>` : ''}
             <th scope="col" class="num">Probe tolerance</th>
             <th scope="col">Verdict</th>
             <th scope="col">Notes</th>
@@ -178,11 +178,19 @@ export function renderResultsChart(spec: ChartSpec, unit: DisplayUnit): SafeHtml
                     row.manual ? html`<span class="marker" title="Entered by hand"> (by hand)</span>` : ''
                   }
                 </td>
-                <td class="num">${row.peakC === null ? '—' : temperature(row.peakC, unit)}</td>
+                ${
+                  spec.metric === 'absolute'
+                    ? ''
+                    : html`<td class="num">${row.peakC === null ? '—' : temperature(row.peakC, unit)}</td>`
+                }
                 <td class="num">${row.ambientC === null ? '—' : temperature(row.ambientC, unit)}</td>
-                <td class="num">
-                  ${row.deltaOverAmbientC === null ? '—' : temperature(row.deltaOverAmbientC, unit, 'difference')}
-                </td>
+                ${
+                  spec.metric === 'absolute'
+                    ? html`<td class="num">
+                        ${row.deltaOverAmbientC === null ? '—' : temperature(row.deltaOverAmbientC, unit, 'difference')}
+                      </td>`
+                    : ''
+                }
                 <td class="num">${row.toleranceC === null ? '—' : plusMinusTemperature(row.toleranceC, unit)}</td>
                 ${verdictCell(row)}
                 <td>

@@ -162,11 +162,14 @@ function renderMethodology(model: PublishedRoundup, unit: DisplayUnit): SafeHtml
       profile
         ? html`<p>
               Every board was tested on the same open test system in a room held at
-              ${temperature(profile.roomTargetC, unit)} ${plusMinusTemperature(profile.roomToleranceC, unit)}, with a
-              ${profile.probeType} probe ${profile.probePlacement}. Each load ran for at least
-              ${profile.requiredSoakMinutes} minutes.
+              ${temperature(profile.roomTargetC, unit)} ${plusMinusTemperature(profile.roomToleranceC, unit)}. Each load
+              ran for at least ${profile.requiredSoakMinutes} minutes.
             </p>
             <dl class="facts">
+              <dt>Probe</dt>
+              <dd>${profile.probeType}</dd>
+              <dt>Placement</dt>
+              <dd>${profile.probePlacement}</dd>
               <dt>Case and fans</dt>
               <dd>${profile.caseAndFans}</dd>
               <dt>CPU cooler</dt>
@@ -215,10 +218,7 @@ function renderMethodology(model: PublishedRoundup, unit: DisplayUnit): SafeHtml
     <p>
       We report the hottest reading of the power-delivery probes (filtered with a short moving median), the room
       temperature beside the system, and the rise over it. A run counts only when an editor checked its log and chose it
-      as the run of
-      record.${
-        model.steadyStateRule ? html` A soak counts as settled when ${model.steadyStateRule.replace(/\.$/, '')}.` : ''
-      }
+      as the run of record.${model.steadyStateRule ? html` Our settling rule: ${model.steadyStateRule}` : ''}
     </p>
     <p>
       Verdicts: below ${temperature(rubric.comfortableBelowC, unit)} is ${rubric.labels.comfortable}; up to

@@ -164,6 +164,41 @@ export async function seedPlanning(manager: EntityManager, staff: PlanningStaff,
     });
   }
 
+  // --- A roundup readers can already read: published (Live), every cell accepted, so the reader site has a demo.
+  const published = await createRoundup(manager, staff, {
+    title: 'Helix-1700 boards under €150',
+    state: 'live',
+    band: [9000, 15000],
+    targetPublishDate: date(-20),
+    benchProfileId,
+    configIds,
+    createdDaysAgo: 40,
+    now,
+  });
+  // The editor allows the raw logger files in this roundup's open data.
+  await manager.getRepository(RoundupEntity).update({ id: published.id }, { openDataRawFiles: true });
+  for (const [position, model] of ['KV Ridgeline B50', 'Holloway B50', 'Cinderline B50', 'Wend B50'].entries()) {
+    const entryId = await addEntry(manager, staff, published, product(model), position, 'tested', null);
+    for (const configId of configIds) {
+      await addCell(manager, published, entryId, configId, 'accepted', staff.tester.id, date(-26), null, now);
+    }
+    const retail = position % 2 === 0;
+    await manager.getRepository(SampleEntity).insert({
+      entryId,
+      source: retail ? 'retail' : 'vendor-loan',
+      orderReference: retail ? `KC-2025-2${position}118` : null,
+      costMinor: retail ? 12990 + position * 500 : null,
+      costCurrency: retail ? 'EUR' : null,
+      vendorContact: retail ? null : 'Press desk, by e-mail',
+      returnBy: retail ? null : date(-10),
+      receivedOn: date(-38),
+      returnedOn: retail ? null : date(-12),
+      serialNumber: `HB5-${7310 + position}-0042`,
+      firmwareOnArrival: '1.03',
+      status: retail ? 'kept' : 'returned',
+    });
+  }
+
   // --- The roundup on the bench now.
   const roundup = await createRoundup(manager, staff, {
     title: 'Helix-1700 boards from €150 to €220',

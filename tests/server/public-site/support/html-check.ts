@@ -2,12 +2,17 @@ import { HtmlValidate } from 'html-validate';
 import { expect } from 'vitest';
 
 /**
- * html-validate's recommended rules, with two style rules set to how the templates are formatted: void elements
- * self-closed (`<meta />`, valid HTML) and the blank space left where a template's interpolation renders nothing.
+ * html-validate's recommended rules, with two style rules set to how the templates are formatted — void elements
+ * self-closed (`<meta />`, valid HTML) and the blank space left where a template's interpolation renders nothing —
+ * and checkbox groups sharing one name (the compare form's boards, valid HTML sent as a repeated GET field).
  */
 const validator = new HtmlValidate({
   extends: ['html-validate:recommended'],
-  rules: { 'void-style': ['error', { style: 'selfclosing' }], 'no-trailing-whitespace': 'off' },
+  rules: {
+    'void-style': ['error', { style: 'selfclosing' }],
+    'no-trailing-whitespace': 'off',
+    'form-dup-name': ['error', { shared: ['radio', 'checkbox', 'button', 'reset', 'submit'] }],
+  },
 });
 
 export async function expectValidHtml(markup: string) {

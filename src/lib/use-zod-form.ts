@@ -98,5 +98,46 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
     [errors, labels, fieldId],
   );
 
-  return { values, setValue, errors, formError, attempt, field, validate, fail, reset, summaryItems, fieldId };
+  /** The error summary of the form under `title` (for FormDialog). */
+  const problems = (title: string) => ({ title, items: summaryItems, message: formError, attempt });
+
+  /**
+   * Validates, then sends the parsed input; on success the form starts afresh and `onSaved` gets the answer, on
+   * failure the server's problems show beside the fields.
+   */
+  const submitWith = <Result>(
+    mutation: {
+      mutate: (
+        input: z.output<Schema>,
+        callbacks: { onSuccess: (result: Result) => void; onError: (error: unknown) => void },
+      ) => void;
+    },
+    onSaved: (result: Result) => void,
+  ) => {
+    const input = validate();
+    if (!input) return;
+    mutation.mutate(input, {
+      onSuccess: (result) => {
+        reset();
+        onSaved(result);
+      },
+      onError: fail,
+    });
+  };
+
+  return {
+    values,
+    setValue,
+    errors,
+    formError,
+    attempt,
+    field,
+    validate,
+    fail,
+    reset,
+    summaryItems,
+    fieldId,
+    problems,
+    submitWith,
+  };
 }

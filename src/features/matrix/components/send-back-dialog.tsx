@@ -1,9 +1,8 @@
-import { useId, useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
 import { TextField } from '../../../components/ui/text-field';
 import { cellTransitionRequestSchema } from '../../../../shared/schemas/matrix';
+import { FormDialog } from '../../../components/ui/form-dialog';
 
 export interface SendBackDialogProps {
   open: boolean;
@@ -17,12 +16,10 @@ export interface SendBackDialogProps {
 
 /** The editor's reason for a retest: the tester sees it in their queue. */
 export function SendBackDialog({ open, cellName, pending, error, onSend, onClose }: SendBackDialogProps) {
-  const formId = useId();
   const [note, setNote] = useState('');
   const [problem, setProblem] = useState<string | undefined>();
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
+  const submit = () => {
     const parsed = cellTransitionRequestSchema.safeParse({ action: 'send-back', note });
     if (!parsed.success) {
       setProblem(parsed.error.issues[0]?.message);
@@ -33,40 +30,35 @@ export function SendBackDialog({ open, cellName, pending, error, onSend, onClose
   };
 
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
       size="sm"
       title="Send back for retest"
       description={cellName}
-      footer={
-        <>
-          <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" form={formId} variant="danger" pending={pending}>
-            Send back
-          </Button>
-        </>
-      }
+      submitLabel="Send back"
+      submitVariant="danger"
+      pending={pending}
+      onSubmit={submit}
+      className="space-y-3"
     >
-      <form id={formId} noValidate onSubmit={submit} className="space-y-3">
-        <TextField
-          label="Why it needs a retest"
-          value={note}
-          onChange={(event) => {
-            setNote(event.target.value);
-            setProblem(undefined);
-          }}
-          error={problem}
-          maxLength={500}
-          autoComplete="off"
-          description="e.g. room drifted past the tolerance during the soak."
-        />
-        {error && (
-          <Alert tone="danger" announce>
-            {error}
-          </Alert>
-        )}
-      </form>
-    </Dialog>
+      <TextField
+        label="Why it needs a retest"
+        value={note}
+        onChange={(event) => {
+          setNote(event.target.value);
+          setProblem(undefined);
+        }}
+        error={problem}
+        maxLength={500}
+        autoComplete="off"
+        description="e.g. room drifted past the tolerance during the soak."
+      />
+      {error && (
+        <Alert tone="danger" announce>
+          {error}
+        </Alert>
+      )}
+    </FormDialog>
   );
 }

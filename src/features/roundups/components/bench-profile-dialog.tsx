@@ -1,13 +1,10 @@
-import { useId, type FormEvent } from 'react';
 import { z } from 'zod';
-import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
-import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { TextField } from '../../../components/ui/text-field';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { createBenchProfileRequestSchema, type BenchProfile } from '../../../../shared/schemas/bench-profiles';
 import { useCreateBenchProfile } from '../api/create-bench-profile';
 import { numberFromText } from './form-numbers';
+import { FormDialog } from '../../../components/ui/form-dialog';
 
 const shape = createBenchProfileRequestSchema.shape;
 
@@ -55,75 +52,47 @@ export interface BenchProfileDialogProps {
 
 /** A new reusable bench profile: the test system and the room every result of a roundup comes from. */
 export function BenchProfileDialog({ open, onClose, onCreated }: BenchProfileDialogProps) {
-  const formId = useId();
   const create = useCreateBenchProfile();
   const form = useZodForm({ schema: benchProfileFormSchema, initialValues: emptyForm, labels });
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    // The bench profile form sits inside the roundup form's page; keep its submit to itself.
-    event.stopPropagation();
-    const input = form.validate();
-    if (!input) return;
-    create.mutate(input, {
-      onSuccess: (profile) => {
-        form.reset();
-        onCreated(profile);
-      },
-      onError: (error) => form.fail(error),
-    });
-  };
-
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
       size="lg"
       title="New bench profile"
       description="Saved for reuse: later roundups can pick the same test system."
-      footer={
-        <>
-          <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" form={formId} variant="primary" pending={create.isPending}>
-            Save profile
-          </Button>
-        </>
-      }
+      submitLabel="Save profile"
+      pending={create.isPending}
+      onSubmit={() => form.submitWith(create, onCreated)}
+      problems={form.problems('The profile was not saved')}
     >
-      <form id={formId} noValidate onSubmit={submit} className="space-y-4">
-        <FormErrorSummary
-          title="The profile was not saved"
-          items={form.summaryItems}
-          message={form.formError}
-          attempt={form.attempt}
-        />
-        <TextField {...form.field('name')} autoComplete="off" placeholder="Open bench, 360 mm loop" />
-        <div className="grid gap-4 sm:grid-cols-2">
-          <TextField
-            {...form.field('caseAndFans')}
-            autoComplete="off"
-            description="Case or open bench, fans and their speeds."
-          />
-          <TextField {...form.field('cooler')} autoComplete="off" />
-          <TextField {...form.field('psu')} autoComplete="off" />
-          <TextField {...form.field('memory')} autoComplete="off" description="Kit, speed, timings, voltage." />
-          <TextField {...form.field('roomTempTargetC')} inputMode="decimal" autoComplete="off" placeholder="21.0" />
-          <TextField {...form.field('roomTempToleranceC')} inputMode="decimal" autoComplete="off" placeholder="1.0" />
-          <TextField {...form.field('probeType')} autoComplete="off" placeholder="Type K thermocouple, 0.1 mm bead" />
-          <TextField
-            {...form.field('requiredSoakMinutes')}
-            inputMode="numeric"
-            autoComplete="off"
-            description="Readings count only after this long under load."
-          />
-        </div>
+      <TextField {...form.field('name')} autoComplete="off" placeholder="Open bench, 360 mm loop" />
+      <div className="grid gap-4 sm:grid-cols-2">
         <TextField
-          {...form.field('probePlacement')}
+          {...form.field('caseAndFans')}
           autoComplete="off"
-          description="Where the probes go, e.g. board rear under the V-core stages, taped."
+          description="Case or open bench, fans and their speeds."
         />
-        <TextField {...form.field('notes')} optional autoComplete="off" />
-      </form>
-    </Dialog>
+        <TextField {...form.field('cooler')} autoComplete="off" />
+        <TextField {...form.field('psu')} autoComplete="off" />
+        <TextField {...form.field('memory')} autoComplete="off" description="Kit, speed, timings, voltage." />
+        <TextField {...form.field('roomTempTargetC')} inputMode="decimal" autoComplete="off" placeholder="21.0" />
+        <TextField {...form.field('roomTempToleranceC')} inputMode="decimal" autoComplete="off" placeholder="1.0" />
+        <TextField {...form.field('probeType')} autoComplete="off" placeholder="Type K thermocouple, 0.1 mm bead" />
+        <TextField
+          {...form.field('requiredSoakMinutes')}
+          inputMode="numeric"
+          autoComplete="off"
+          description="Readings count only after this long under load."
+        />
+      </div>
+      <TextField
+        {...form.field('probePlacement')}
+        autoComplete="off"
+        description="Where the probes go, e.g. board rear under the V-core stages, taped."
+      />
+      <TextField {...form.field('notes')} optional autoComplete="off" />
+    </FormDialog>
   );
 }

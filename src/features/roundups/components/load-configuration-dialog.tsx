@@ -1,9 +1,5 @@
-import { useId, type FormEvent } from 'react';
 import { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
-import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { useZodForm } from '../../../lib/use-zod-form';
@@ -18,6 +14,7 @@ import {
 } from '../../../../shared/schemas/load-configurations';
 import { useCreateLoadConfiguration } from '../api/create-load-configuration';
 import { numberFromText, optionalNumberFromText } from './form-numbers';
+import { FormDialog } from '../../../components/ui/form-dialog';
 
 const shape = createLoadConfigurationRequestSchema.shape;
 
@@ -72,7 +69,6 @@ export interface LoadConfigurationDialogProps {
 
 /** A new reusable load configuration: one CPU, one set of settings, the load it puts on the board. */
 export function LoadConfigurationDialog({ open, onClose, onCreated }: LoadConfigurationDialogProps) {
-  const formId = useId();
   const create = useCreateLoadConfiguration();
   const form = useZodForm({
     schema: loadConfigurationFormSchema,
@@ -82,85 +78,59 @@ export function LoadConfigurationDialog({ open, onClose, onCreated }: LoadConfig
   });
   const fixed = form.values.settingsMode === 'fixed';
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    event.stopPropagation();
-    const input = form.validate();
-    if (!input) return;
-    create.mutate(input, {
-      onSuccess: (configuration) => {
-        form.reset();
-        onCreated(configuration);
-      },
-      onError: (error) => form.fail(error),
-    });
-  };
-
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
       size="lg"
       title="New load configuration"
       description="Saved for reuse; in this roundup it becomes one column of the test matrix."
-      footer={
-        <>
-          <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" form={formId} variant="primary" pending={create.isPending}>
-            Save configuration
-          </Button>
-        </>
-      }
+      submitLabel="Save configuration"
+      pending={create.isPending}
+      onSubmit={() => form.submitWith(create, onCreated)}
+      problems={form.problems('The configuration was not saved')}
     >
-      <form id={formId} noValidate onSubmit={submit} className="space-y-4">
-        <FormErrorSummary
-          title="The configuration was not saved"
-          items={form.summaryItems}
-          message={form.formError}
-          attempt={form.attempt}
-        />
-        <div className="grid gap-4 sm:grid-cols-2">
-          <TextField {...form.field('name')} autoComplete="off" placeholder="Stock all-core" />
-          <TextField {...form.field('cpuDescription')} autoComplete="off" description="The CPU used, in words." />
-          <Select {...form.field('settingsMode')} options={modeOptions} />
-          {fixed ? (
-            <TextField {...form.field('fixedClockMhz')} inputMode="numeric" autoComplete="off" placeholder="5200" />
-          ) : (
-            <div aria-hidden="true" className="hidden sm:block" />
-          )}
-          <TextField
-            {...form.field('expectedPackagePowerW')}
-            inputMode="decimal"
-            autoComplete="off"
-            placeholder="230.0"
-          />
-          <TextField
-            {...form.field('coreVoltageV')}
-            inputMode="decimal"
-            autoComplete="off"
-            placeholder="1.250"
-            description={fixed ? 'The voltage you set.' : 'The voltage expected under this load.'}
-          />
-          <TextField
-            {...form.field('soakMinutes')}
-            inputMode="numeric"
-            autoComplete="off"
-            description="How long the load runs before readings count."
-          />
-        </div>
-        <TextField
-          {...form.field('settingsNotes')}
-          optional
-          autoComplete="off"
-          description="Power limits, load-line calibration, the load program."
-        />
-        {fixed && (
-          <Alert tone="caution">
-            Fixed clocks and raised voltages can shorten component life and void warranties. Stay within the maker’s
-            limits.
-          </Alert>
+      <div className="grid gap-4 sm:grid-cols-2">
+        <TextField {...form.field('name')} autoComplete="off" placeholder="Stock all-core" />
+        <TextField {...form.field('cpuDescription')} autoComplete="off" description="The CPU used, in words." />
+        <Select {...form.field('settingsMode')} options={modeOptions} />
+        {fixed ? (
+          <TextField {...form.field('fixedClockMhz')} inputMode="numeric" autoComplete="off" placeholder="5200" />
+        ) : (
+          <div aria-hidden="true" className="hidden sm:block" />
         )}
-      </form>
-    </Dialog>
+        <TextField
+          {...form.field('expectedPackagePowerW')}
+          inputMode="decimal"
+          autoComplete="off"
+          placeholder="230.0"
+        />
+        <TextField
+          {...form.field('coreVoltageV')}
+          inputMode="decimal"
+          autoComplete="off"
+          placeholder="1.250"
+          description={fixed ? 'The voltage you set.' : 'The voltage expected under this load.'}
+        />
+        <TextField
+          {...form.field('soakMinutes')}
+          inputMode="numeric"
+          autoComplete="off"
+          description="How long the load runs before readings count."
+        />
+      </div>
+      <TextField
+        {...form.field('settingsNotes')}
+        optional
+        autoComplete="off"
+        description="Power limits, load-line calibration, the load program."
+      />
+      {fixed && (
+        <Alert tone="caution">
+          Fixed clocks and raised voltages can shorten component life and void warranties. Stay within the maker’s
+          limits.
+        </Alert>
+      )}
+    </FormDialog>
   );
 }

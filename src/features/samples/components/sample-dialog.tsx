@@ -1,7 +1,3 @@
-import { useId, type FormEvent } from 'react';
-import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
-import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { useZodForm } from '../../../lib/use-zod-form';
@@ -19,6 +15,7 @@ import {
 } from '../../../../shared/schemas/samples';
 import { useUpdateSample } from '../api/update-sample';
 import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
+import { FormDialog } from '../../../components/ui/form-dialog';
 
 const labels = {
   source: 'Source',
@@ -104,7 +101,6 @@ export function SampleDialog({
   onClose,
   onSaved,
 }: SampleDialogProps) {
-  const formId = useId();
   const update = useUpdateSample();
   const form = useZodForm({
     schema: sampleFormSchema,
@@ -113,8 +109,7 @@ export function SampleDialog({
   });
   const source = form.values.source;
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
+  const submit = () => {
     const changes = form.validate();
     if (!changes) return;
     update.mutate(
@@ -124,71 +119,59 @@ export function SampleDialog({
   };
 
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
       size="lg"
       title={`Sample: ${productDisplayName(sample.product)}`}
       description={`Dates are calendar days in ${timeZone}.`}
-      footer={
-        <>
-          <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" form={formId} variant="primary" pending={update.isPending}>
-            Save sample
-          </Button>
-        </>
-      }
+      submitLabel="Save sample"
+      pending={update.isPending}
+      onSubmit={submit}
+      problems={form.problems('The sample was not saved')}
     >
-      <form id={formId} noValidate onSubmit={submit} className="space-y-4">
-        <FormErrorSummary
-          title="The sample was not saved"
-          items={form.summaryItems}
-          message={form.formError}
-          attempt={form.attempt}
-        />
-        <div className="grid gap-4 sm:grid-cols-2">
-          <Select {...form.field('source')} options={sourceOptions} placeholder="Not known yet" optional />
-          <Select {...form.field('status')} options={statusOptions} />
+      <div className="grid gap-4 sm:grid-cols-2">
+        <Select {...form.field('source')} options={sourceOptions} placeholder="Not known yet" optional />
+        <Select {...form.field('status')} options={statusOptions} />
+      </div>
+      {source === 'retail' && (
+        <div className="grid gap-4 sm:grid-cols-[minmax(0,2fr)_minmax(0,1fr)_minmax(0,1fr)]">
+          <TextField {...form.field('orderReference')} autoComplete="off" />
+          <TextField {...form.field('costMinor')} inputMode="decimal" autoComplete="off" placeholder="189.99" />
+          <TextField {...form.field('costCurrency')} autoComplete="off" maxLength={3} inputClassName="uppercase" />
         </div>
-        {source === 'retail' && (
-          <div className="grid gap-4 sm:grid-cols-[minmax(0,2fr)_minmax(0,1fr)_minmax(0,1fr)]">
-            <TextField {...form.field('orderReference')} autoComplete="off" />
-            <TextField {...form.field('costMinor')} inputMode="decimal" autoComplete="off" placeholder="189.99" />
-            <TextField {...form.field('costCurrency')} autoComplete="off" maxLength={3} inputClassName="uppercase" />
-          </div>
-        )}
-        {source === 'vendor-loan' && (
-          <div className="grid gap-4 sm:grid-cols-2">
-            <TextField
-              {...form.field('vendorContact')}
-              autoComplete="off"
-              description="Who lent it: name, e-mail or phone."
-            />
-            <TextField
-              {...form.field('returnBy')}
-              type="date"
-              description={`Overdue once this day has ended in ${timeZone}.`}
-            />
-          </div>
-        )}
+      )}
+      {source === 'vendor-loan' && (
         <div className="grid gap-4 sm:grid-cols-2">
-          <TextField {...form.field('receivedOn')} type="date" optional />
           <TextField
-            {...form.field('returnedOn')}
-            type="date"
-            optional
-            description="Only for a loan that has gone back."
+            {...form.field('vendorContact')}
+            autoComplete="off"
+            description="Who lent it: name, e-mail or phone."
           />
-          <TextField {...form.field('serialNumber')} optional autoComplete="off" />
-          <TextField {...form.field('firmwareOnArrival')} optional autoComplete="off" placeholder="1.02" />
+          <TextField
+            {...form.field('returnBy')}
+            type="date"
+            description={`Overdue once this day has ended in ${timeZone}.`}
+          />
         </div>
+      )}
+      <div className="grid gap-4 sm:grid-cols-2">
+        <TextField {...form.field('receivedOn')} type="date" optional />
         <TextField
-          {...form.field('conditionNotes')}
+          {...form.field('returnedOn')}
+          type="date"
           optional
-          autoComplete="off"
-          description="Box, accessories, marks, bent pins — anything worth knowing before it goes on the bench."
+          description="Only for a loan that has gone back."
         />
-      </form>
-    </Dialog>
+        <TextField {...form.field('serialNumber')} optional autoComplete="off" />
+        <TextField {...form.field('firmwareOnArrival')} optional autoComplete="off" placeholder="1.02" />
+      </div>
+      <TextField
+        {...form.field('conditionNotes')}
+        optional
+        autoComplete="off"
+        description="Box, accessories, marks, bent pins — anything worth knowing before it goes on the bench."
+      />
+    </FormDialog>
   );
 }

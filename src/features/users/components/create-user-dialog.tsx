@@ -1,7 +1,3 @@
-import { useId, type FormEvent } from 'react';
-import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
-import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { PasswordField } from '../../../components/ui/password-field';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
@@ -12,6 +8,7 @@ import { createUserRequestSchema, type User } from '../../../../shared/schemas/u
 import type { Role } from '../../../../shared/schemas/common';
 import { useCreateUser } from '../api/create-user';
 import { roleOptions } from './role-options';
+import { FormDialog } from '../../../components/ui/form-dialog';
 
 export interface CreateUserDialogProps {
   open: boolean;
@@ -22,7 +19,6 @@ export interface CreateUserDialogProps {
 const emptyForm = { displayName: '', email: '', role: '', password: '' };
 
 export function CreateUserDialog({ open, onClose, onCreated }: CreateUserDialogProps) {
-  const formId = useId();
   const createUser = useCreateUser();
   const form = useZodForm({
     schema: createUserRequestSchema,
@@ -32,55 +28,30 @@ export function CreateUserDialog({ open, onClose, onCreated }: CreateUserDialogP
   });
   const chosenRole = form.values.role as Role | '';
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    const input = form.validate();
-    if (!input) return;
-    createUser.mutate(input, {
-      onSuccess: (user) => {
-        form.reset();
-        onCreated(user);
-      },
-      onError: (error) => form.fail(error),
-    });
-  };
-
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
       title="New user"
       description="The account can sign in as soon as it is created."
-      footer={
-        <>
-          <Button onClick={onClose}>Cancel</Button>
-          <Button type="submit" form={formId} variant="primary" pending={createUser.isPending}>
-            Create account
-          </Button>
-        </>
-      }
+      submitLabel="Create account"
+      pending={createUser.isPending}
+      onSubmit={() => form.submitWith(createUser, onCreated)}
+      problems={form.problems('The account was not created')}
     >
-      <form id={formId} noValidate onSubmit={submit} className="space-y-4">
-        <FormErrorSummary
-          title="The account was not created"
-          items={form.summaryItems}
-          message={form.formError}
-          attempt={form.attempt}
-        />
-        <TextField {...form.field('displayName')} autoComplete="off" description="As colleagues know them." />
-        <TextField {...form.field('email')} type="email" autoComplete="off" inputMode="email" />
-        <Select
-          {...form.field('role')}
-          options={roleOptions}
-          placeholder="Choose a role…"
-          description={chosenRole ? roleGuides[chosenRole].summary : 'The role decides what they can open.'}
-        />
-        <PasswordField
-          {...form.field('password')}
-          autoComplete="new-password"
-          description={`At least ${PASSWORD_MIN} characters. Hand it over in person; they can change it under Account.`}
-        />
-      </form>
-    </Dialog>
+      <TextField {...form.field('displayName')} autoComplete="off" description="As colleagues know them." />
+      <TextField {...form.field('email')} type="email" autoComplete="off" inputMode="email" />
+      <Select
+        {...form.field('role')}
+        options={roleOptions}
+        placeholder="Choose a role…"
+        description={chosenRole ? roleGuides[chosenRole].summary : 'The role decides what they can open.'}
+      />
+      <PasswordField
+        {...form.field('password')}
+        autoComplete="new-password"
+        description={`At least ${PASSWORD_MIN} characters. Hand it over in person; they can change it under Account.`}
+      />
+    </FormDialog>
   );
 }

@@ -1,4 +1,4 @@
-import type { QueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { QueryRoot } from './query-keys';
 
 /**
@@ -47,4 +47,10 @@ export function invalidateAfter(queryClient: QueryClient, change: Change) {
   return queryClient.invalidateQueries({
     predicate: (query) => roots.includes(query.queryKey[0] as QueryRoot),
   });
+}
+
+/** A mutation whose success makes `change` stale: how features send a change and refresh what shows it. */
+export function useChangeMutation<Input, Result>(mutationFn: (input: Input) => Promise<Result>, change: Change) {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn, onSuccess: () => invalidateAfter(queryClient, change) });
 }

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { invalidateAfter, useChangeMutation } from '../../../lib/stale-after';
 import {
   calendarFeedCreatedSchema,
   calendarFeedSchema,
@@ -39,9 +39,5 @@ export function useResetCalendarFeed() {
 }
 
 export function useDisableCalendarFeed() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: disableCalendarFeed,
-    onSuccess: () => invalidateAfter(queryClient, 'calendarFeed'),
-  });
+  return useChangeMutation(disableCalendarFeed, 'calendarFeed');
 }

@@ -1,4 +1,3 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import {
   benchSchema,
@@ -6,7 +5,7 @@ import {
   type CreateBenchRequest,
   type UpdateBenchRequest,
 } from '../../../../shared/schemas/benches';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export function createBench(input: CreateBenchRequest): Promise<Bench> {
   return apiClient.post('/api/benches', input, { schema: benchSchema });
@@ -22,17 +21,9 @@ export function updateBench({ id, changes }: UpdateBenchInput): Promise<Bench> {
 }
 
 export function useCreateBench() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: createBench,
-    onSuccess: () => invalidateAfter(queryClient, 'bench'),
-  });
+  return useChangeMutation(createBench, 'bench');
 }
 
 export function useUpdateBench() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: updateBench,
-    onSuccess: () => invalidateAfter(queryClient, 'bench'),
-  });
+  return useChangeMutation(updateBench, 'bench');
 }

@@ -1,4 +1,4 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { uploadFile, type UploadFile, type UploadProgress } from '../../../lib/upload';
 import { catalogImportUploadLimit } from '../../../../shared/upload-limits';
 import {
@@ -7,7 +7,7 @@ import {
   type CatalogImportPreview,
   type CatalogImportResult,
 } from '../../../../shared/schemas/catalog-import';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface CsvRequestInput {
   /** The CSV as the user gave it: a chosen file, or pasted text sent as a file of its own. */
@@ -47,11 +47,7 @@ export function usePreviewCatalogImport() {
 }
 
 export function useCommitCatalogImport() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: commitCatalogImport,
-    onSuccess: () => invalidateAfter(queryClient, 'product'),
-  });
+  return useChangeMutation(commitCatalogImport, 'product');
 }
 
 /** The export link; the same archived/platform filters as the list, and the region whose prices fill the columns. */

@@ -1,7 +1,6 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { priceSchema, type CreatePriceRequest, type Price } from '../../../../shared/schemas/catalog';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface AddPriceInput {
   productId: number;
@@ -18,17 +17,9 @@ export function removePrice({ productId, priceId }: { productId: number; priceId
 
 /** A price changes the product's history and the latest price the list shows: refresh the whole catalog. */
 export function useAddPrice() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: addPrice,
-    onSuccess: () => invalidateAfter(queryClient, 'product'),
-  });
+  return useChangeMutation(addPrice, 'product');
 }
 
 export function useRemovePrice() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: removePrice,
-    onSuccess: () => invalidateAfter(queryClient, 'product'),
-  });
+  return useChangeMutation(removePrice, 'product');
 }

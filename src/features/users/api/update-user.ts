@@ -1,7 +1,6 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { userSchema, type UpdateUserRequest, type User } from '../../../../shared/schemas/users';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface UpdateUserInput {
   id: number;
@@ -14,9 +13,5 @@ export function updateUser({ id, changes }: UpdateUserInput): Promise<User> {
 }
 
 export function useUpdateUser() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: updateUser,
-    onSuccess: () => invalidateAfter(queryClient, 'user'),
-  });
+  return useChangeMutation(updateUser, 'user');
 }

@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { useId, type ReactNode } from 'react';
 
 export interface FieldIds {
   inputId: string;
@@ -15,26 +15,50 @@ export function fieldIds(baseId: string, hasDescription: boolean, hasError: bool
   return { inputId: baseId, descriptionId, errorId, describedBy };
 }
 
-export interface FieldShellProps {
-  ids: FieldIds;
+/** What every labelled field takes besides its control's own attributes. */
+export interface FieldProps {
   label: ReactNode;
+  /** A hint read with the field, e.g. the rule a password must follow. */
   description?: ReactNode;
+  /** The field's error; shown in red beside it and announced with it. */
   error?: string;
   /** Marks the label as optional; fields are required unless they say so. */
   optional?: boolean;
-  children: ReactNode;
+  /** Override the generated id, so an error summary can link to the field. */
+  id?: string;
   className?: string;
 }
 
+/** The attributes that tie a control to its label, hint and error. */
+export interface ControlLink {
+  id: string;
+  'aria-invalid': true | undefined;
+  'aria-describedby': string | undefined;
+  required: boolean;
+}
+
+export interface FieldShellProps extends FieldProps {
+  /** The control, given the attributes that link it to the label, hint and error. */
+  children: (control: ControlLink) => ReactNode;
+}
+
 /** Label above, control, then the error (when there is one) and the hint. */
-export function FieldShell({ ids, label, description, error, optional, children, className }: FieldShellProps) {
+export function FieldShell({ label, description, error, optional, id, className, children }: FieldShellProps) {
+  const generated = useId();
+  const ids = fieldIds(id ?? generated, Boolean(description), Boolean(error));
+  const control: ControlLink = {
+    id: ids.inputId,
+    'aria-invalid': error ? true : undefined,
+    'aria-describedby': ids.describedBy,
+    required: !optional,
+  };
   return (
     <div className={className}>
       <label htmlFor={ids.inputId} className="mb-1 block text-sm font-semibold text-ink">
         {label}
         {optional && <span className="ml-1.5 font-normal text-muted">(optional)</span>}
       </label>
-      {children}
+      {children(control)}
       {error && (
         <p id={ids.errorId} className="mt-1 flex gap-1.5 text-sm font-medium text-red">
           <span aria-hidden="true">✕</span>

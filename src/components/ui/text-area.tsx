@@ -1,17 +1,9 @@
-import { useId, type ReactNode, type Ref, type TextareaHTMLAttributes } from 'react';
+import type { Ref, TextareaHTMLAttributes } from 'react';
 import { cx } from '../../lib/class-names';
-import { controlStyles, fieldIds, FieldShell } from './field-shell';
+import { controlStyles, FieldShell, type FieldProps } from './field-shell';
 
-export interface TextAreaProps extends Omit<TextareaHTMLAttributes<HTMLTextAreaElement>, 'id'> {
-  label: ReactNode;
-  /** A hint read with the field, e.g. what a note is for. */
-  description?: ReactNode;
-  /** The field's error; shown in red beside it and announced with it. */
-  error?: string;
-  optional?: boolean;
-  /** Override the generated id, so an error summary can link to the field. */
-  id?: string;
-  className?: string;
+export interface TextAreaProps
+  extends FieldProps, Omit<TextareaHTMLAttributes<HTMLTextAreaElement>, 'id' | 'className'> {
   textAreaClassName?: string;
   ref?: Ref<HTMLTextAreaElement>;
 }
@@ -25,31 +17,19 @@ export function TextArea({
   id,
   className,
   textAreaClassName,
-  ref,
   rows = 3,
   ...textAreaProps
 }: TextAreaProps) {
-  const generated = useId();
-  const ids = fieldIds(id ?? generated, Boolean(description), Boolean(error));
   return (
-    <FieldShell
-      ids={ids}
-      label={label}
-      description={description}
-      error={error}
-      optional={optional}
-      className={className}
-    >
-      <textarea
-        ref={ref}
-        id={ids.inputId}
-        rows={rows}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={ids.describedBy}
-        required={!optional}
-        className={cx(controlStyles, 'resize-y', textAreaClassName)}
-        {...textAreaProps}
-      />
+    <FieldShell {...{ label, description, error, optional, id, className }}>
+      {(control) => (
+        <textarea
+          rows={rows}
+          {...control}
+          className={cx(controlStyles, 'resize-y', textAreaClassName)}
+          {...textAreaProps}
+        />
+      )}
     </FieldShell>
   );
 }

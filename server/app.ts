@@ -63,7 +63,7 @@ export function createApp({
     createReaderRouter({
       dataSource,
       files: services.files,
-      source: new LivePublishedRoundups(dataSource),
+      source: new LivePublishedRoundups(dataSource, services.writeUps),
       assets: readerAssetsFrom(clientDir),
       publicSiteUrl: env.PUBLIC_SITE_URL,
       photoFile: (photoId, size) => services.photos.file(photoId, size),

@@ -1,6 +1,9 @@
 import { In, type DataSource } from 'typeorm';
 import { ReaderSiteSettingsEntity } from '../entities/reader-site-settings.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
+import { WriteUpSectionEntity } from '../entities/write-up-section.entity';
+import type { WriteUpsService } from '../services/write-ups.service';
+import { publicPaths } from './public-paths';
 import {
   buildPublishedRoundup,
   defaultOpenDataLicence,
@@ -34,14 +37,49 @@ export async function loadReaderSiteSettings(dataSource: DataSource): Promise<Re
   };
 }
 
+/**
+ * The write-up sections an editor signed off, rendered by the editorial renderer with public photo addresses: only
+ * signed-off text reaches readers. A roundup without sections (none were ever written) gets none, and reading never
+ * creates them.
+ */
+export async function signedOffWriteUp(
+  dataSource: DataSource,
+  writeUps: Pick<WriteUpsService, 'renderedSections'> | undefined,
+  roundupId: number,
+) {
+  const byEntry = new Map<number, string>();
+  const sections: { introductionHtml?: string; methodologyHtml?: string; conclusionHtml?: string } = {};
+  if (!writeUps) return { byEntry, sections };
+  const rows = await dataSource.getRepository(WriteUpSectionEntity).findBy({ roundupId });
+  if (rows.length === 0) return { byEntry, sections };
+  const rendered = await writeUps.renderedSections(roundupId, (photoId, width, format) =>
+    publicPaths.photo(photoId, width, format),
+  );
+  for (const section of rendered.sections) {
+    if (section.reviewState !== 'signed-off') continue;
+    const row = rows.find((r) => r.id === section.id);
+    if (section.kind === 'product' && row?.entryId) byEntry.set(row.entryId, section.html);
+    if (section.kind === 'introduction') sections.introductionHtml = section.html;
+    if (section.kind === 'methodology') sections.methodologyHtml = section.html;
+    if (section.kind === 'conclusion') sections.conclusionHtml = section.html;
+  }
+  return { byEntry, sections };
+}
+
 /** Builds published roundups on request from the live data of roundups in the Live or Updated state. */
 export class LivePublishedRoundups implements PublishedRoundupSource {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly writeUps?: Pick<WriteUpsService, 'renderedSections'>,
+  ) {}
 
   private async build(roundup: RoundupEntity, licence: string): Promise<PublishedRoundup> {
+    const written = await signedOffWriteUp(this.dataSource, this.writeUps, roundup.id);
     return buildPublishedRoundup(this.dataSource.manager, roundup.id, {
       publishedAt: roundup.stateChangedAt,
       licence,
+      writeUps: written.byEntry,
+      writeUpSections: written.sections,
     });
   }
 

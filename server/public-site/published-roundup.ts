@@ -177,6 +177,8 @@ export interface PublishedRoundup {
   rubric: VerdictRubric;
   steadyStateRule: string | null;
   toleranceStandard: string | null;
+  /** Signed-off write-up sections as sanitised HTML (the editorial renderer); null where there is none. */
+  writeUp: { introductionHtml: string | null; methodologyHtml: string | null; conclusionHtml: string | null };
   products: PublishedProduct[];
   results: PublishedResult[];
   /** The picks summary, in the order the editor gave: products with a label. */
@@ -203,6 +205,12 @@ export interface BuildPublishedRoundupOptions {
   standfirst?: string | null;
   /** Sanitised write-up HTML per roundup entry. */
   writeUps?: Map<number, string>;
+  /** Sanitised HTML of the write-up's introduction, how-we-tested and conclusion sections. */
+  writeUpSections?: {
+    introductionHtml?: string | null;
+    methodologyHtml?: string | null;
+    conclusionHtml?: string | null;
+  };
   chartImages?: PublishedRoundup['chartImages'];
   /** Whether raw logger files are offered; the roundup's own setting when omitted. */
   rawFilesAllowed?: boolean;
@@ -508,6 +516,11 @@ export async function buildPublishedRoundup(
     steadyStateRule: firstResult?.steadyStateRule ?? null,
     toleranceStandard:
       analyses.map((a) => (a.result as Partial<AnalysisResult>).uncertainty?.standard).find(Boolean) ?? null,
+    writeUp: {
+      introductionHtml: options.writeUpSections?.introductionHtml ?? null,
+      methodologyHtml: options.writeUpSections?.methodologyHtml ?? null,
+      conclusionHtml: options.writeUpSections?.conclusionHtml ?? null,
+    },
     products,
     results: results.filter((r) => shownEntries.has(r.entryId)),
     picks: labels.filter((l) => shownEntries.has(l.entryId)),

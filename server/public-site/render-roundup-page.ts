@@ -158,6 +158,7 @@ function renderMethodology(model: PublishedRoundup, unit: DisplayUnit): SafeHtml
   const rubric = model.rubric;
   return html`<section class="methodology" aria-labelledby="methodology-title">
     <h2 id="methodology-title">How we tested</h2>
+    ${model.writeUp?.methodologyHtml ? html`<div class="write-up">${trustedHtml(model.writeUp.methodologyHtml)}</div>` : ''}
     ${
       profile
         ? html`<p>
@@ -486,6 +487,13 @@ export function renderRoundupPage(
         · ${tested.length} boards tested${reference.length ? `, ${reference.length} shown for reference` : ''}
       </p>
     </header>
+    ${
+      model.writeUp?.introductionHtml
+        ? html`<section class="write-up" aria-label="Introduction">
+            ${trustedHtml(model.writeUp.introductionHtml)}
+          </section>`
+        : ''
+    }
     ${renderPicks(model, unit)} ${renderCautions()} ${renderMethodology(model, unit)}
     <section class="results" aria-labelledby="results-title">
       <h2 id="results-title">Results</h2>
@@ -500,6 +508,14 @@ export function renderRoundupPage(
       <h2 id="boards-title">The boards</h2>
       ${model.products.map((p) => renderProductSection(model, p, unit))}
     </section>
+    ${
+      model.writeUp?.conclusionHtml
+        ? html`<section class="write-up" aria-labelledby="conclusion-title">
+            <h2 id="conclusion-title">Our conclusion</h2>
+            ${trustedHtml(model.writeUp.conclusionHtml)}
+          </section>`
+        : ''
+    }
     ${renderSamples(model)} ${renderOpenData(model)} ${renderCorrections(model)}
   </article>`;
   const chartImage = model.chartImages[0];

@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
+import { RoundupEntity } from '../../../server/entities/roundup.entity';
 import { buildPublishedRoundup } from '../../../server/public-site/published-roundup';
 import { renderRoundupPage } from '../../../server/public-site/render-roundup-page';
 import { testApp, testDataSource } from '../support/test-app';
@@ -139,5 +140,39 @@ describe('published roundup model and results page', () => {
     expect(markup).toContain('Correction:</strong> The &lt;b&gt;price&lt;/b&gt; was wrong.');
     expect(markup).toContain('<span class="pick-label">Recommended</span>');
     expect(markup).toContain('<link rel="canonical" href="https://results.test/read/roundups/');
+  });
+});
+
+describe('write-up on the results page', () => {
+  it('when the write-up has a signed-off introduction and a drafting conclusion, then readers see only the signed-off text', async () => {
+    const fixture = await publishedFixture([[{ peakC: 70.0 }]], { state: 'writing' });
+    const paragraph = (text: string) => ({
+      type: 'doc',
+      content: [{ type: 'paragraph', content: [{ type: 'text', text }] }],
+    });
+    const overview = await fixture.editor.get(`/api/roundups/${fixture.roundupId}/write-up`);
+    expect(overview.status, overview.text).toBe(200);
+    const sections = overview.body.sections as { id: number; kind: string; version: number }[];
+    const intro = sections.find((s) => s.kind === 'introduction') as { id: number; version: number };
+    const conclusion = sections.find((s) => s.kind === 'conclusion') as { id: number; version: number };
+    const saved = await fixture.editor
+      .put(`/api/write-up/sections/${intro.id}`)
+      .send({ baseVersion: intro.version, content: paragraph('Budget boards held up better than we feared.') });
+    expect(saved.status, saved.text).toBe(200);
+    await fixture.editor
+      .put(`/api/write-up/sections/${conclusion.id}`)
+      .send({ baseVersion: conclusion.version, content: paragraph('Unfinished conclusion draft.') });
+    expect((await fixture.editor.post(`/api/write-up/sections/${intro.id}/review-request`)).status).toBe(200);
+    const signed = await fixture.editor.post(`/api/write-up/sections/${intro.id}/sign-off`);
+    expect(signed.status, signed.text).toBe(200);
+    await (await testDataSource()).getRepository(RoundupEntity).update({ id: fixture.roundupId }, { state: 'live' });
+
+    const app = await testApp();
+    const first = await request(app).get(`/read/roundups/${fixture.roundupId}`);
+    const page = await request(app).get(first.headers.location as string);
+    expect(page.status).toBe(200);
+    await expectValidHtml(page.text);
+    expect(page.text).toContain('Budget boards held up better than we feared.');
+    expect(page.text).not.toContain('Unfinished conclusion draft.');
   });
 });

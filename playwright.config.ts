@@ -43,6 +43,9 @@ export default defineConfig({
       HOST: '127.0.0.1',
       COOKIE_SECURE: 'false',
       DATABASE_URL: process.env.DATABASE_URL ?? '',
+      // The local relay npm test started (its dev inbox is where e2e specs read mail).
+      SMTP_URL: process.env.SMTP_URL ?? '',
+      LOCAL_MAIL_RELAY: process.env.LOCAL_MAIL_RELAY ?? '',
       // The e2e suite signs in many times from one address.
       SIGN_IN_LIMIT_PER_IP: '1000',
       SIGN_IN_LIMIT_PER_ACCOUNT: '1000',

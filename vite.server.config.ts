@@ -32,6 +32,7 @@ export default defineConfig({
         index: 'server/index.ts',
         'start-production': 'server/start-production.ts',
         'setup-database': 'server/cli/setup-database.ts',
+        'mail-relay': 'server/cli/mail-relay.ts',
         ...workerEntries,
       },
       output: {

@@ -3,6 +3,7 @@
 // with plain Node.js.
 // `npm run dev`: the same database, with Vite's dev server and an API server that restarts on change (tsx watch).
 import { ensureBuilt } from './lib/build.mjs';
+import { startMailRelay } from './lib/mail-relay.mjs';
 import { SetupError } from './lib/mariadb.mjs';
 import { ensureDatabase, ensureDependencies, runStep, startNode, startProcess } from './lib/setup.mjs';
 
@@ -33,6 +34,11 @@ try {
   const env = { ...process.env, DATABASE_URL: database.url, NODE_ENV: dev ? 'development' : 'production' };
   if (dev) {
     runStep('tsx', ['server/cli/setup-database.ts', '--seed'], env);
+    const relay = await startMailRelay(env, { built: false });
+    if (relay) {
+      children.push(relay.child);
+      Object.assign(env, relay.env);
+    }
     children.push(
       startProcess('tsx', ['watch', '--clear-screen=false', 'server/index.ts'], {
         ...env,
@@ -42,6 +48,12 @@ try {
     children.push(startProcess('vite', [], env));
   } else {
     ensureBuilt(['client', 'server'], env);
+    // The server migrates as it starts; until then the relay answers "try again later", which senders honour.
+    const relay = await startMailRelay(env, { built: true });
+    if (relay) {
+      children.push(relay.child);
+      Object.assign(env, relay.env);
+    }
     // Migrates and seeds in the server's own process, then serves: one Node.js start.
     children.push(startNode(['--enable-source-maps', 'dist/server/start-production.js'], env));
   }

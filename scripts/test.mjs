@@ -5,6 +5,7 @@
 import { randomBytes } from 'node:crypto';
 import { createServer } from 'node:net';
 import { ensureBuilt } from './lib/build.mjs';
+import { startMailRelay } from './lib/mail-relay.mjs';
 import { ensureDebianPackages, SetupError } from './lib/mariadb.mjs';
 import { ensureDatabase, ensureDependencies, runStep } from './lib/setup.mjs';
 
@@ -30,6 +31,7 @@ const withDatabase = (name) => {
 const unitUrl = withDatabase(`benchwire_test_unit_${suffix}`);
 const e2eUrl = withDatabase(`benchwire_test_e2e_${suffix}`);
 const created = [];
+let mailRelay = null;
 
 function freePort() {
   return new Promise((resolve, reject) => {
@@ -70,12 +72,23 @@ try {
     });
     ensureBuilt(['client', 'server']);
     const port = await freePort();
-    runStep('playwright', ['test'], { ...process.env, DATABASE_URL: e2eUrl, E2E_PORT: String(port) });
+    // The e2e server sends through the local relay, which keeps messages in the e2e database (the dev inbox).
+    mailRelay = await startMailRelay({ ...process.env, DATABASE_URL: e2eUrl }, { built: true });
+    runStep('playwright', ['test'], {
+      ...process.env,
+      ...mailRelay?.env,
+      DATABASE_URL: e2eUrl,
+      E2E_PORT: String(port),
+    });
   }
 } catch (error) {
   console.error(`\n[test] ${error.message}`);
   exitCode = error.exitCode ?? 1;
 } finally {
+  if (mailRelay) {
+    mailRelay.child.kill('SIGTERM');
+    await new Promise((r) => (mailRelay.child.exitCode !== null ? r() : mailRelay.child.once('exit', r)));
+  }
   for (const url of created) {
     try {
       runStep('tsx', ['server/cli/setup-database.ts', '--drop'], { ...process.env, DATABASE_URL: url });

@@ -21,6 +21,7 @@ import { PhotosService } from './services/photos.service';
 import { UsersService } from './services/users.service';
 import { WriteUpsService } from './services/write-ups.service';
 import { createFileStore } from './storage/create-file-store';
+import { DevInboxService } from './services/dev-inbox.service';
 
 /**
  * The one place that builds every service, each once, handing services their collaborators. Routes (through
@@ -55,6 +56,7 @@ export function createServices(dataSource: DataSource, env: Env) {
   const testRuns = new TestRunsService(dataSource, files, logFileAnalyser);
   const photos = new PhotosService(dataSource, files);
   const writeUps = new WriteUpsService(dataSource, testRuns);
+  const devInbox = new DevInboxService(dataSource, env.LOCAL_MAIL_RELAY && Boolean(env.SMTP_URL));
 
   return {
     sessions,
@@ -79,6 +81,7 @@ export function createServices(dataSource: DataSource, env: Env) {
     testRuns,
     photos,
     writeUps,
+    devInbox,
   };
 }
 

@@ -27,6 +27,7 @@ import { JobEntity } from './job.entity';
 import { WriteUpSectionEntity } from './write-up-section.entity';
 import { WriteUpRevisionEntity } from './write-up-revision.entity';
 import { WriteUpCommentEntity } from './write-up-comment.entity';
+import { RelayMessageEntity } from './relay-message.entity';
 
 export const entities = [
   UserEntity,
@@ -57,4 +58,5 @@ export const entities = [
   WriteUpRevisionEntity,
   WriteUpCommentEntity,
   ReaderSiteSettingsEntity,
+  RelayMessageEntity,
 ];

@@ -24,6 +24,7 @@ import { CreateBenchInstrumentsAndMaintenance1765400033000 } from './17654000330
 import { CreateJobs1765700001000 } from './1765700001000-create-jobs';
 import { CreateWriteUps1765600001000 } from './1765600001000-create-write-ups';
 import { ReaderSiteSettings1765710001000 } from './1765710001000-reader-site-settings';
+import { CreateRelayMessages1765800001000 } from './1765800001000-create-relay-messages';
 
 export const migrations = [
   CreateUsersSessionsAudit1764600000000,
@@ -51,4 +52,5 @@ export const migrations = [
   CreateJobs1765700001000,
   CreateWriteUps1765600001000,
   ReaderSiteSettings1765710001000,
+  CreateRelayMessages1765800001000,
 ];

@@ -18,6 +18,7 @@ import { registerSampleRoutes } from './samples.routes';
 import { registerTestRunRoutes } from './test-runs.routes';
 import { registerPhotoRoutes } from './photos.routes';
 import { registerWriteUpRoutes } from './write-ups.routes';
+import { registerDevInboxRoutes } from './dev-inbox.routes';
 
 /** Every feature's routes. A new feature adds one line here. */
 export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
@@ -39,4 +40,5 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerTestRunRoutes(api, context);
   registerPhotoRoutes(api, context);
   registerWriteUpRoutes(api, context);
+  registerDevInboxRoutes(api, context);
 }

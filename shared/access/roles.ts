@@ -49,6 +49,7 @@ export const placeAccess = {
   users: accountManagers,
   logCheck: logCheckers,
   account: staff,
+  devInbox: accountManagers,
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Place = keyof typeof placeAccess;

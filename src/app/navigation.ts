@@ -62,6 +62,12 @@ export const navigation: readonly NavigationEntry[] = [
     description: 'Upload a logger file from a soak: check how it reads, map the columns, get the figures and verdict.',
   },
   {
+    to: paths.devInbox,
+    label: 'Dev inbox',
+    roles: placeAccess.devInbox,
+    description: 'Every message the local mail relay received, as a reader would see it (development only).',
+  },
+  {
     to: paths.account,
     label: 'Account',
     roles: placeAccess.account,

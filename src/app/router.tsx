@@ -64,6 +64,7 @@ export function createAppRouter(queryClient: QueryClient) {
                   lazy: lazy(() => import('./routes/roundup-entry-photos')),
                 },
                 { path: 'my-bench', lazy: lazy(() => import('./routes/my-bench')) },
+                { path: 'dev-inbox', lazy: lazy(() => import('./routes/dev-inbox')) },
                 { path: '*', lazy: lazy(() => import('./routes/not-found')) },
               ],
             },

@@ -17,6 +17,7 @@ export const paths = {
   roundupCell: (roundupId: number, cellId: number) => `/roundups/${roundupId}/cells/${cellId}`,
   roundupEntryPhotos: (roundupId: number, entryId: number) => `/roundups/${roundupId}/products/${entryId}/photos`,
   myBench: '/my-bench',
+  devInbox: '/dev-inbox',
   signIn: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
 } as const;
 

@@ -11,6 +11,7 @@ export const queryRoots = [
   'catalog',
   'dashboard',
   'log-check',
+  'mail',
   'matrix',
   'my-bench',
   'photos',

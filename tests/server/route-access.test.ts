@@ -115,6 +115,9 @@ const allowed: Record<string, Caller[]> = {
   'POST /api/write-up/sections/:sectionId/comments': ['editor', 'writer'],
   'POST /api/write-up/comments/:commentId/resolve': ['editor', 'writer'],
   'POST /api/write-up/comments/:commentId/reopen': ['editor', 'writer'],
+  // Mail (issue 11): the local relay's dev inbox is for admins.
+  'GET /api/dev-inbox': ['admin'],
+  'GET /api/dev-inbox/:id': ['admin'],
 };
 
 interface RouteLayer {

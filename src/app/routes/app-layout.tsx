@@ -11,6 +11,8 @@ import { sessionQueryOptions, useSession } from '../../features/auth/api/get-ses
 import { useSignOut } from '../../features/auth/api/sign-out';
 import { roleLabels } from '../../../shared/schemas/common';
 import { navigationFor } from '../navigation';
+import { useDevInboxAvailable } from '../../features/mail/api/get-dev-inbox';
+import { may, placeAccess } from '../../../shared/access/roles';
 
 /** Every staff page sits below this route: without a session, the user is sent to sign in first. */
 export function loader(queryClient: QueryClient) {
@@ -31,6 +33,8 @@ export function Component() {
   const queryClient = useQueryClient();
   const signOut = useSignOut();
   const [signOutError, setSignOutError] = useState<string | null>(null);
+  // The dev inbox exists only with the local mail relay; with a real relay its entry is left out.
+  const devInbox = useDevInboxAvailable(Boolean(user && may(user.role, placeAccess.devInbox)));
 
   // Signed out a moment ago (or the session ended): the page is on its way to the sign-in screen.
   if (!user) return <LoadingState fullPage label="Signing out…" />;
@@ -57,7 +61,7 @@ export function Component() {
   return (
     <AppShell
       user={{ displayName: user.displayName, roleLabel: roleLabels[user.role] }}
-      navigation={navigationFor(user.role)}
+      navigation={navigationFor(user.role).filter((entry) => devInbox || entry.to !== paths.devInbox)}
       onSignOut={handleSignOut}
       signingOut={signOut.isPending}
       busy={navigation.state === 'loading'}

@@ -8,6 +8,8 @@ import { TesterDashboard } from '../../features/dashboard/components/tester-dash
 import { paths } from '../../lib/paths';
 import type { Dashboard } from '../../../shared/schemas/dashboard';
 import { canOpen, navigationFor } from '../navigation';
+import { useDevInboxAvailable } from '../../features/mail/api/get-dev-inbox';
+import { may, placeAccess } from '../../../shared/access/roles';
 
 export function loader(queryClient: QueryClient) {
   return async () => {
@@ -21,8 +23,11 @@ const roundupPath = (id: number, tab?: string) => (tab ? `${paths.roundup(id)}?t
 export function Component() {
   const user = useSession();
   const dashboard = useDashboard();
+  const devInbox = useDevInboxAvailable(Boolean(user && may(user.role, placeAccess.devInbox)));
   if (!user) return null;
-  const places = navigationFor(user.role).filter((entry) => entry.to !== paths.dashboard);
+  const places = navigationFor(user.role).filter(
+    (entry) => entry.to !== paths.dashboard && (devInbox || entry.to !== paths.devInbox),
+  );
   return (
     <RoleWelcome user={user} places={places}>
       <RoleWork dashboard={dashboard} canOpenRoundups={canOpen(paths.roundups, user.role)} />

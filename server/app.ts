@@ -14,6 +14,7 @@ import { registerFeatureRoutes } from './routes/all';
 import { createReaderRouter } from './public-site/reader-routes';
 import { LivePublishedRoundups } from './public-site/published-roundup-source';
 import { readerAssetsFrom } from './public-site/reader-assets';
+import { createSubscriberPages } from './mail/subscriber-pages';
 import { installHumanMessages } from '../shared/schemas/human-messages';
 
 export interface CreateAppOptions {
@@ -67,6 +68,15 @@ export function createApp({
       assets: readerAssetsFrom(clientDir),
       publicSiteUrl: env.PUBLIC_SITE_URL,
       photoFile: (photoId, size) => services.photos.file(photoId, size),
+    }),
+  );
+
+  // Readers' subscription pages: sign-up, confirmation, self-service and one-click unsubscribe (server-rendered).
+  app.use(
+    createSubscriberPages({
+      subscribers: services.subscribers,
+      outletName: services.subscribers.outletName,
+      signUpLimiter: services.signUpLimiter,
     }),
   );
 

@@ -22,6 +22,13 @@ import { UsersService } from './services/users.service';
 import { WriteUpsService } from './services/write-ups.service';
 import { createFileStore } from './storage/create-file-store';
 import { DevInboxService } from './services/dev-inbox.service';
+import { LinkSecret } from './mail/link-secret';
+import { MailSender } from './mail/mail-sender';
+import { parseFrom } from './mail/compose';
+import { createMailTransport } from './mail/transport';
+import { StaffMailService } from './services/staff-mail.service';
+import { SubscribersService } from './services/subscribers.service';
+import { signUpLimiter } from './middleware/sign-up-limit';
 
 /**
  * The one place that builds every service, each once, handing services their collaborators. Routes (through
@@ -57,6 +64,24 @@ export function createServices(dataSource: DataSource, env: Env) {
   const photos = new PhotosService(dataSource, files);
   const writeUps = new WriteUpsService(dataSource, testRuns);
   const devInbox = new DevInboxService(dataSource, env.LOCAL_MAIL_RELAY && Boolean(env.SMTP_URL));
+  // Mail: links in mail point at the public site; the outbox sender uses one pooled SMTP transport per process.
+  const siteUrl = (env.PUBLIC_SITE_URL ?? `http://${env.HOST}:${env.PORT}`).replace(/\/$/, '');
+  const outletName = parseFrom(env.MAIL_FROM).name || 'Benchwire';
+  const linkSecret = new LinkSecret(dataSource, env.MAIL_LINK_SECRET);
+  const subscribers = new SubscribersService(dataSource, linkSecret, {
+    siteUrl,
+    outletName,
+    sending: Boolean(env.SMTP_URL),
+  });
+  const staffMail = new StaffMailService(dataSource, siteUrl);
+  const mailSender = new MailSender({
+    dataSource,
+    transport: createMailTransport(env.SMTP_URL),
+    from: env.MAIL_FROM,
+    siteUrl,
+    secret: linkSecret,
+    content: { siteUrl, outletName },
+  });
 
   return {
     sessions,
@@ -82,6 +107,11 @@ export function createServices(dataSource: DataSource, env: Env) {
     photos,
     writeUps,
     devInbox,
+    linkSecret,
+    subscribers,
+    staffMail,
+    mailSender,
+    signUpLimiter: signUpLimiter(env),
   };
 }
 

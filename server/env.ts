@@ -59,22 +59,16 @@ const envSchema = z
     LOCAL_MAIL_RELAY: booleanFlag,
     /** The From of every mail: a display name and an address. */
     MAIL_FROM: z.string().default('Benchwire <mail@benchwire.localhost>'),
-    /** The site's public address, for links in mail (https:// in production: one-click unsubscribe needs it). */
-    PUBLIC_BASE_URL: z.preprocess(
-      emptyAsUnset,
-      z
-        .string()
-        .regex(
-          /^https?:\/\/[^/]+$/,
-          'PUBLIC_BASE_URL is a scheme and host without a path, e.g. https://soaksheet.example',
-        )
-        .optional(),
-    ),
+    /** Public address of the reader site for canonical URLs, feeds, previews and links in mail (https://results.example); the request's own origin when unset. */
+    PUBLIC_SITE_URL: z.preprocess(emptyAsUnset, z.url().optional()),
     /** Secret that signs subscribers' self-service links; unset: one is made once and kept in the database. */
     MAIL_LINK_SECRET: z.preprocess(
       emptyAsUnset,
       z.string().min(32, 'MAIL_LINK_SECRET needs at least 32 characters.').optional(),
     ),
+    /** Sign-ups (form and API) from one client address per SUBSCRIBE_WINDOW_MINUTES. */
+    SUBSCRIBE_LIMIT_PER_IP: z.coerce.number().int().positive().default(10),
+    SUBSCRIBE_WINDOW_MINUTES: z.coerce.number().positive().default(15),
     /** Shared secret a real relay sends with bounce and complaint reports (POST /api/mail/events). */
     MAIL_WEBHOOK_SECRET: z.preprocess(
       emptyAsUnset,

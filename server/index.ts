@@ -6,6 +6,7 @@ import { createDataSource, initializeDataSource } from './data-source';
 import { loadEnv } from './env';
 import { createJobRegistry } from './jobs/all';
 import { JobRunner } from './jobs/job-runner';
+import { MailWorker } from './mail/mail-worker';
 
 const env = loadEnv();
 const dataSource = await initializeDataSource(createDataSource(env.DATABASE_URL, { logging: env.DB_LOGGING }));
@@ -23,6 +24,17 @@ const app = createApp({
   clientDir: env.NODE_ENV === 'production' ? clientDir : undefined,
 });
 
+// The outbox sender and the staff reminder scan (at most every five minutes) run in the server process.
+let lastReminderScan = 0;
+const mailWorker = new MailWorker(services.mailSender, [
+  async () => {
+    if (Date.now() - lastReminderScan < 300_000) return;
+    lastReminderScan = Date.now();
+    await services.staffMail.scanReminders();
+  },
+]);
+if (env.JOB_RUNNER === 'on') mailWorker.start();
+
 const server = app.listen(env.PORT, env.HOST, () => {
   console.log(`Benchwire is running at http://${env.HOST}:${env.PORT}  (Ctrl-C stops it)`);
 });
@@ -38,6 +50,7 @@ async function shutdown() {
   server.close();
   server.closeIdleConnections();
   await jobRunner.stop().catch(() => {});
+  await mailWorker.stop().catch(() => {});
   await services.logFileAnalyser.close().catch(() => {});
   await dataSource.destroy().catch(() => {});
   process.exit(0);

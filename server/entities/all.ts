@@ -28,6 +28,16 @@ import { WriteUpSectionEntity } from './write-up-section.entity';
 import { WriteUpRevisionEntity } from './write-up-revision.entity';
 import { WriteUpCommentEntity } from './write-up-comment.entity';
 import { RelayMessageEntity } from './relay-message.entity';
+import {
+  AppSecretEntity,
+  MailCategoryEntity,
+  MailingEntity,
+  MailOptOutEntity,
+  MailSuppressionEntity,
+  OutboxEntity,
+  SubscriberCategoryEntity,
+  SubscriberEntity,
+} from './mail.entities';
 
 export const entities = [
   UserEntity,
@@ -59,4 +69,12 @@ export const entities = [
   WriteUpCommentEntity,
   ReaderSiteSettingsEntity,
   RelayMessageEntity,
+  AppSecretEntity,
+  MailCategoryEntity,
+  SubscriberEntity,
+  SubscriberCategoryEntity,
+  MailSuppressionEntity,
+  MailingEntity,
+  OutboxEntity,
+  MailOptOutEntity,
 ];

@@ -25,6 +25,7 @@ import { CreateJobs1765700001000 } from './1765700001000-create-jobs';
 import { CreateWriteUps1765600001000 } from './1765600001000-create-write-ups';
 import { ReaderSiteSettings1765710001000 } from './1765710001000-reader-site-settings';
 import { CreateRelayMessages1765800001000 } from './1765800001000-create-relay-messages';
+import { CreateSubscribersAndOutbox1765800002000 } from './1765800002000-create-subscribers-and-outbox';
 
 export const migrations = [
   CreateUsersSessionsAudit1764600000000,
@@ -53,4 +54,5 @@ export const migrations = [
   CreateWriteUps1765600001000,
   ReaderSiteSettings1765710001000,
   CreateRelayMessages1765800001000,
+  CreateSubscribersAndOutbox1765800002000,
 ];

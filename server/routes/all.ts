@@ -19,6 +19,7 @@ import { registerTestRunRoutes } from './test-runs.routes';
 import { registerPhotoRoutes } from './photos.routes';
 import { registerWriteUpRoutes } from './write-ups.routes';
 import { registerDevInboxRoutes } from './dev-inbox.routes';
+import { registerSubscriberRoutes } from './subscribers.routes';
 
 /** Every feature's routes. A new feature adds one line here. */
 export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
@@ -41,4 +42,5 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerPhotoRoutes(api, context);
   registerWriteUpRoutes(api, context);
   registerDevInboxRoutes(api, context);
+  registerSubscriberRoutes(api, context);
 }

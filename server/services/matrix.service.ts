@@ -14,6 +14,7 @@ import { productBriefs } from '../mappers/product-fields';
 import { assertPlanEditable, findRoundup, lockRoundup } from '../lib/roundup-access';
 import { cellBookingAt } from './benches.service';
 import { TestRunsService } from './test-runs.service';
+import { StaffMailService } from './staff-mail.service';
 import {
   cellStateLabels,
   decideCellTransition,
@@ -176,6 +177,13 @@ export class MatrixService {
           tester: tester.displayName,
           dueDate: input.dueDate,
         });
+        await StaffMailService.cellsAssigned(manager, {
+          testerId: input.testerId,
+          roundupId,
+          cellIds,
+          dueDate: input.dueDate ?? null,
+          at: now,
+        });
       }
       const updated = cellIds.length ? await repo.findBy({ id: In(cellIds) }) : [];
       const people = await loadPeople(
@@ -261,6 +269,9 @@ export class MatrixService {
         ...(note ? { note } : {}),
         ...(outsideBooking ? { startedOutsideBooking: true, overrideReason: outsideBooking.overrideReason } : {}),
       });
+      if (action === 'send-back') {
+        await StaffMailService.cellSentBack(manager, { cellId, testerId: cell.testerId, roundupId, note, at: now });
+      }
       const updated = await repo.findOneByOrFail({ id: cellId });
       const people = await loadPeople(manager, [updated.testerId]);
       return toMatrixCellDto(updated, roundup.timeZone, people, actor, now, await runCountsByCell(manager, [cellId]));

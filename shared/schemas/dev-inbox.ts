@@ -1,9 +1,10 @@
 import { z } from 'zod';
+import { queryText } from './text';
 
 export const devInboxQuerySchema = z
   .object({
     /** Only messages to this address (exact, case-insensitive). */
-    to: z.string().trim().max(320).optional(),
+    to: queryText(320).optional(),
     limit: z.coerce.number().int().min(1).max(200).default(50),
   })
   .strict();

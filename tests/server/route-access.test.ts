@@ -118,6 +118,21 @@ const allowed: Record<string, Caller[]> = {
   // Mail (issue 11): the local relay's dev inbox is for admins.
   'GET /api/dev-inbox': ['admin'],
   'GET /api/dev-inbox/:id': ['admin'],
+  // Readers sign up without an account (rate-limited; the same answer for every address); editors keep the subjects
+  // and the roundups' mailings; the relay's webhook carries a shared secret instead of a session.
+  'GET /api/mail-categories': everyone,
+  'POST /api/subscribers': everyone,
+  'POST /api/subscribers/confirm': everyone,
+  'GET /api/subscriber-categories': staff,
+  'POST /api/subscriber-categories': ['editor'],
+  'PATCH /api/subscriber-categories/:id': ['editor'],
+  'DELETE /api/subscriber-categories/:id': ['editor'],
+  'GET /api/roundups/:id/mailings': ['editor'],
+  'POST /api/roundups/:id/mailings': ['editor'],
+  'POST /api/roundups/:id/mailings/test': ['editor'],
+  'GET /api/account/mail': staff,
+  'PUT /api/account/mail': staff,
+  'POST /api/mail/events': everyone,
 };
 
 interface RouteLayer {

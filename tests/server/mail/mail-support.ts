@@ -1,0 +1,78 @@
+import { simpleParser, type ParsedMail } from 'mailparser';
+import { createApp } from '../../../server/app';
+import { createServices } from '../../../server/compose-services';
+import { RoundupEntity } from '../../../server/entities/roundup.entity';
+import { databaseRelayStore, startLocalRelay, type LocalRelay } from '../../../server/mail/local-relay';
+import type { Env } from '../../../server/env';
+import { testDataSource, testEnv } from '../support/test-app';
+
+/** A local relay keeping messages in the test database, and an app whose services send through it. */
+export async function mailTestContext(overrides: Partial<Record<keyof Env, string>> = {}) {
+  const relay = await startLocalRelay({ store: databaseRelayStore(testEnv().DATABASE_URL) });
+  const dataSource = await testDataSource();
+  const env = testEnv({
+    SMTP_URL: relay.url,
+    LOCAL_MAIL_RELAY: 'true',
+    PUBLIC_SITE_URL: 'https://results.soaksheet.example',
+    MAIL_FROM: 'The Soak Sheet <news@soaksheet.example>',
+    SUBSCRIBE_LIMIT_PER_IP: '100000',
+    ...overrides,
+  });
+  const services = createServices(dataSource, env);
+  const app = createApp({ dataSource, env, services });
+  return { relay, dataSource, env, services, app };
+}
+
+export type MailTestContext = Awaited<ReturnType<typeof mailTestContext>>;
+
+export async function closeMailTestContext(context: { relay: LocalRelay; services: { mailSender: unknown } }) {
+  await context.relay.close();
+}
+
+/** Every message the relay kept for an address, parsed. */
+export async function messagesTo(address: string): Promise<ParsedMail[]> {
+  const ds = await testDataSource();
+  const rows: { raw: Buffer }[] = await ds.query('SELECT raw FROM relay_messages WHERE recipient = ? ORDER BY id', [
+    address,
+  ]);
+  return Promise.all(rows.map((row) => simpleParser(row.raw)));
+}
+
+let roundupCounter = 0;
+/** A roundup straight into the table, in the given state (no planning steps needed for mail). */
+export async function createRoundup(overrides: Partial<RoundupEntity> = {}): Promise<RoundupEntity> {
+  const ds = await testDataSource();
+  roundupCounter += 1;
+  const repo = ds.getRepository(RoundupEntity);
+  return repo.save(
+    repo.create({
+      title: `Helix-1700 boards under a soak ${Date.now()}-${roundupCounter}`,
+      category: 'motherboard',
+      platform: 'Helix-1700',
+      state: 'live',
+      priceMinMinor: 10000,
+      priceMaxMinor: 30000,
+      currency: 'EUR',
+      region: 'EU',
+      timeZone: 'Europe/Berlin',
+      stateChangedAt: new Date(),
+      ...overrides,
+    }),
+  );
+}
+
+/** A header as it stands in the message, unfolded (mailparser turns List-* headers into objects). */
+export function rawHeader(mail: ParsedMail, name: string): string | undefined {
+  const line = mail.headerLines.find((h) => h.key === name.toLowerCase())?.line;
+  return line
+    ?.slice(line.indexOf(':') + 1)
+    .replace(/\r?\n[ \t]+/g, ' ')
+    .trim();
+}
+
+/** The link in a plain-text part that starts with `prefix`. */
+export function linkIn(text: string | undefined, prefix: string): string {
+  const found = (text ?? '').split(/\s+/).find((word) => word.startsWith(prefix));
+  if (!found) throw new Error(`no link starting with ${prefix} in:\n${text}`);
+  return found;
+}

@@ -81,6 +81,9 @@ export function createServices(dataSource: DataSource, env: Env) {
     siteUrl,
     secret: linkSecret,
     content: { siteUrl, outletName },
+    batchSize: env.MAIL_BATCH_SIZE,
+    leaseMs: env.MAIL_LEASE_SECONDS * 1000,
+    retryBaseMs: env.MAIL_RETRY_BASE_SECONDS * 1000,
   });
 
   return {

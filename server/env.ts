@@ -66,6 +66,10 @@ const envSchema = z
       emptyAsUnset,
       z.string().min(32, 'MAIL_LINK_SECRET needs at least 32 characters.').optional(),
     ),
+    /** The outbox sender: rows per batch, how long a claimed row is held, and the first retry's wait (doubling). */
+    MAIL_BATCH_SIZE: z.coerce.number().int().min(1).max(1000).default(100),
+    MAIL_LEASE_SECONDS: z.coerce.number().positive().default(120),
+    MAIL_RETRY_BASE_SECONDS: z.coerce.number().positive().default(30),
     /** Sign-ups (form and API) from one client address per SUBSCRIBE_WINDOW_MINUTES. */
     SUBSCRIBE_LIMIT_PER_IP: z.coerce.number().int().positive().default(10),
     SUBSCRIBE_WINDOW_MINUTES: z.coerce.number().positive().default(15),

@@ -59,8 +59,6 @@ const envSchema = z
     LOCAL_MAIL_RELAY: booleanFlag,
     /** The From of every mail: a display name and an address. */
     MAIL_FROM: z.string().default('Benchwire <mail@benchwire.localhost>'),
-    /** Public address of the reader site for canonical URLs, feeds, previews and links in mail (https://results.example); the request's own origin when unset. */
-    PUBLIC_SITE_URL: z.preprocess(emptyAsUnset, z.url().optional()),
     /** Secret that signs subscribers' self-service links; unset: one is made once and kept in the database. */
     MAIL_LINK_SECRET: z.preprocess(
       emptyAsUnset,

@@ -5,10 +5,11 @@ import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { productBriefs } from '../mappers/product-fields';
 import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 import type { GoLiveContent } from './compose';
+import { publicPaths } from '../public-site/public-paths';
 
 /** Where readers find a published roundup (the reader site's address for it). */
-export function publicRoundupUrl(siteUrl: string, roundup: { id: number }): string {
-  return `${siteUrl}/read/roundups/${roundup.id}`;
+export function publicRoundupUrl(siteUrl: string, roundup: { id: number; title: string }): string {
+  return `${siteUrl}${publicPaths.roundup(roundup.id, roundup.title)}`;
 }
 
 export interface ContentSettings {

@@ -83,7 +83,7 @@ describe('double opt-in', () => {
       /^<https:\/\/results\.soaksheet\.example\/unsubscribe\/[^>]+>, <mailto:/,
     );
     expect(rawHeader(mail, 'list-unsubscribe-post')).toBe('List-Unsubscribe=One-Click');
-    expect(mail.text).toContain(`${site}/read/roundups/${roundup.id}`);
+    expect(mail.text).toContain(`${site}/read/roundups/${roundup.id}-`);
     expect(mail.html).toContain('Read the results');
   });
 

@@ -50,6 +50,7 @@ export const placeAccess = {
   logCheck: logCheckers,
   account: staff,
   devInbox: accountManagers,
+  subscribers: planningReaders,
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Place = keyof typeof placeAccess;

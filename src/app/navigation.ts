@@ -62,6 +62,12 @@ export const navigation: readonly NavigationEntry[] = [
     description: 'Upload a logger file from a soak: check how it reads, map the columns, get the figures and verdict.',
   },
   {
+    to: paths.subscribers,
+    label: 'Subscribers',
+    roles: placeAccess.subscribers,
+    description: 'Readers who asked for mail, the subjects they choose from, and each roundup’s mailings.',
+  },
+  {
     to: paths.devInbox,
     label: 'Dev inbox',
     roles: placeAccess.devInbox,

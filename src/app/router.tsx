@@ -65,6 +65,7 @@ export function createAppRouter(queryClient: QueryClient) {
                 },
                 { path: 'my-bench', lazy: lazy(() => import('./routes/my-bench')) },
                 { path: 'dev-inbox', lazy: lazy(() => import('./routes/dev-inbox')) },
+                { path: 'subscribers', lazy: lazy(() => import('./routes/subscribers')) },
                 { path: '*', lazy: lazy(() => import('./routes/not-found')) },
               ],
             },

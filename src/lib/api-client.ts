@@ -162,6 +162,8 @@ export const apiClient = {
     apiRequest<T>(path, { ...options, method: 'POST', body: body ?? {} }),
   patch: <T>(path: string, body: unknown, options: Omit<RequestOptions<T>, 'method' | 'body'> = {}) =>
     apiRequest<T>(path, { ...options, method: 'PATCH', body }),
+  put: <T>(path: string, body: unknown, options: Omit<RequestOptions<T>, 'method' | 'body'> = {}) =>
+    apiRequest<T>(path, { ...options, method: 'PUT', body }),
   delete: <T>(path: string, options: Omit<RequestOptions<T>, 'method' | 'body'> = {}) =>
     apiRequest<T>(path, { ...options, method: 'DELETE' }),
 };

@@ -18,6 +18,7 @@ export const paths = {
   roundupEntryPhotos: (roundupId: number, entryId: number) => `/roundups/${roundupId}/products/${entryId}/photos`,
   myBench: '/my-bench',
   devInbox: '/dev-inbox',
+  subscribers: '/subscribers',
   signIn: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
 } as const;
 

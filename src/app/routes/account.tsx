@@ -9,6 +9,7 @@ import { calendarFeedQueryOptions } from '../../features/bench-booking/api/calen
 import { CalendarFeedPanel } from '../../features/bench-booking/components/calendar-feed-panel';
 import { sessionQueryOptions } from '../../features/auth/api/get-session';
 import { bookers, may } from '../../../shared/access/roles';
+import { MailPreferencesPanel } from '../../features/mail/components/mail-preferences-panel';
 
 export function loader(queryClient: QueryClient) {
   return async () => {
@@ -33,6 +34,7 @@ export function Component() {
         <ChangePasswordForm email={user.email} />
         <SessionsPanel className="lg:col-span-2" />
         {may(user.role, bookers) && <CalendarFeedPanel className="lg:col-span-2" />}
+        <MailPreferencesPanel className="lg:col-span-2" />
       </div>
     </>
   );

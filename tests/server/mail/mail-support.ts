@@ -29,6 +29,26 @@ export async function closeMailTestContext(context: { relay: LocalRelay; service
   await context.relay.close();
 }
 
+/**
+ * Sends what is due and waits until no due row is left: other test files send from the same outbox at the same
+ * time (SKIP LOCKED hands each row to one sender), so a row this file queued may be in another sender's hands.
+ */
+export async function sendAll(sender: { drain(): Promise<unknown> }, timeoutMs = 120_000) {
+  const ds = await testDataSource();
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    await sender.drain();
+    const [{ n }] = await ds.query(
+      `SELECT COUNT(*) AS n FROM mail_outbox o LEFT JOIN subscribers s ON s.id = o.subscriber_id
+        WHERE o.state IN ('queued', 'sending') AND o.next_attempt_at <= NOW(3)
+          AND (s.email IS NULL OR s.email NOT LIKE 'drill-%')`,
+    );
+    if (Number(n) === 0) return;
+    if (Date.now() > deadline) throw new Error('the outbox did not settle');
+    await new Promise((r) => setTimeout(r, 100));
+  }
+}
+
 /** Every message the relay kept for an address, parsed. */
 export async function messagesTo(address: string): Promise<ParsedMail[]> {
   const ds = await testDataSource();

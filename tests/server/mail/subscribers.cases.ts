@@ -4,6 +4,7 @@ import { SubscriberEntity, MailSuppressionEntity } from '../../../server/entitie
 import { enqueueGoLiveMailing } from '../../../server/mail/outbox';
 import { client, signedIn, TEST_HOST, TEST_ORIGIN, uniqueEmail } from '../support/test-app';
 import {
+  sendAll,
   closeMailTestContext,
   createRoundup,
   linkIn,
@@ -34,7 +35,7 @@ async function signUp(email: string, categoryIds = [everyRoundup]) {
 /** Signs up and opens the confirmation link from the mail; returns the self-service token. */
 async function subscribeAndConfirm(email: string) {
   await signUp(email);
-  await ctx.services.mailSender.drain();
+  await sendAll(ctx.services.mailSender);
   const [confirmation] = await messagesTo(email);
   const token = linkIn(confirmation.text, `${site}/subscribe/confirm/`).split('/').pop() as string;
   const confirmed = await client(ctx.app).post(`/subscribe/confirm/${token}`);
@@ -45,7 +46,7 @@ async function subscribeAndConfirm(email: string) {
 async function publishAndSend() {
   const roundup = await createRoundup();
   await ctx.dataSource.transaction((manager) => enqueueGoLiveMailing(manager, roundup.id));
-  await ctx.services.mailSender.drain();
+  await sendAll(ctx.services.mailSender);
   return roundup;
 }
 
@@ -61,7 +62,7 @@ describe('double opt-in', () => {
     const row = await ctx.dataSource.getRepository(SubscriberEntity).findOneByOrFail({ email: known });
     expect(row.status).toBe('confirmed');
     // The owner of the confirmed address hears about the attempt, with their self-service link.
-    await ctx.services.mailSender.drain();
+    await sendAll(ctx.services.mailSender);
     const mails = await messagesTo(known);
     expect(mails.at(-1)!.subject).toMatch(/already subscribed/);
   });
@@ -90,7 +91,7 @@ describe('double opt-in', () => {
   it('a confirmation link works once and expires', async () => {
     const email = uniqueEmail('once');
     await signUp(email);
-    await ctx.services.mailSender.drain();
+    await sendAll(ctx.services.mailSender);
     const token = linkIn((await messagesTo(email))[0].text, `${site}/subscribe/confirm/`)
       .split('/')
       .pop()!;
@@ -101,7 +102,7 @@ describe('double opt-in', () => {
 
     const late = uniqueEmail('late');
     await signUp(late);
-    await ctx.services.mailSender.drain();
+    await sendAll(ctx.services.mailSender);
     const lateToken = linkIn((await messagesTo(late))[0].text, `${site}/subscribe/confirm/`)
       .split('/')
       .pop()!;
@@ -262,7 +263,7 @@ describe('header injection', () => {
     ]);
     try {
       await ctx.dataSource.transaction((manager) => enqueueGoLiveMailing(manager, roundup.id));
-      await ctx.services.mailSender.drain();
+      await sendAll(ctx.services.mailSender);
     } finally {
       await ctx.dataSource.query("UPDATE mail_categories SET name = 'Every new roundup' WHERE id = ?", [everyRoundup]);
     }
@@ -283,7 +284,7 @@ describe('editors and the relay', () => {
     await subscribeAndConfirm(subscriber);
     const roundup = await createRoundup();
     expect((await agent.post(`/api/roundups/${roundup.id}/mailings/test`)).status).toBe(202);
-    await ctx.services.mailSender.drain();
+    await sendAll(ctx.services.mailSender);
     const test = await messagesTo(user.email);
     expect(test.at(-1)!.subject).toBe(`Test — new roundup: ${roundup.title}`);
 
@@ -293,7 +294,7 @@ describe('editors and the relay', () => {
     const before = await agent.get(`/api/roundups/${roundup.id}/mailings`);
     expect(before.body.mailings).toHaveLength(1);
     expect(before.body.mailings[0].counts.queued).toBe(before.body.mailings[0].counts.total);
-    await ctx.services.mailSender.drain();
+    await sendAll(ctx.services.mailSender);
     const after = await agent.get(`/api/roundups/${roundup.id}/mailings`);
     expect(after.body.mailings[0].counts.sent).toBe(after.body.mailings[0].counts.total);
     expect(after.body.mailings[0].counts.queued).toBe(0);
@@ -302,7 +303,7 @@ describe('editors and the relay', () => {
       .post(`/api/roundups/${roundup.id}/mailings`)
       .send({ kind: 'correction', note: 'The second board’s peak was 81.0 °C, not 18.0 °C.' });
     expect(update.status).toBe(201);
-    await ctx.services.mailSender.drain();
+    await sendAll(ctx.services.mailSender);
     const correction = (await messagesTo(subscriber)).at(-1)!;
     expect(correction.subject).toBe(`Correction: ${roundup.title}`);
     expect(correction.text).toContain('81.0 °C, not 18.0 °C');

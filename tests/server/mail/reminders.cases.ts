@@ -3,7 +3,14 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ManualClock } from '../../../server/jobs/clock';
 import { calendarDateIn } from '../../../shared/domain/planning/loan-overdue';
 import { createTestUser, signedIn, testDataSource } from '../support/test-app';
-import { closeMailTestContext, createRoundup, mailTestContext, messagesTo, type MailTestContext } from './mail-support';
+import {
+  sendAll,
+  closeMailTestContext,
+  createRoundup,
+  mailTestContext,
+  messagesTo,
+  type MailTestContext,
+} from './mail-support';
 
 let ctx: MailTestContext;
 beforeAll(async () => {
@@ -52,7 +59,7 @@ describe('staff reminders', () => {
       clock.advance(10 * 60_000);
     }
     expect(await outboxFor('loan-due-soon', sampleId)).toHaveLength(1);
-    await ctx.services.mailSender.drain();
+    await sendAll(ctx.services.mailSender);
     const mails = (await messagesTo(editor.email)).filter((m) => m.subject?.startsWith('Due back in three days'));
     expect(mails).toHaveLength(1);
 
@@ -74,7 +81,7 @@ describe('staff reminders', () => {
       .slice(0, 10);
     const sampleId = await loanDueOn(editor.id, returnBy);
     await ctx.services.staffMail.scanReminders(now);
-    await ctx.services.mailSender.drain();
+    await sendAll(ctx.services.mailSender);
     const rows: { state: string }[] = await (
       await testDataSource()
     ).query('SELECT state FROM mail_outbox WHERE idempotency_key LIKE ?', [`loan-due-soon:sample:${sampleId}:%`]);

@@ -21,7 +21,8 @@ let relay: LocalRelay;
 const children: ChildProcess[] = [];
 
 function startSender(): ChildProcess {
-  const child = spawn(resolve('node_modules/.bin/tsx'), ['server/cli/mail-sender.ts'], {
+  // One process (Node with tsx's loader), so SIGKILL reaches the sender itself, not a wrapper around it.
+  const child = spawn(process.execPath, ['--import', 'tsx', resolve('server/cli/mail-sender.ts')], {
     env: {
       ...process.env,
       NODE_ENV: 'test',

@@ -32,7 +32,7 @@ export const CautionNode = Node.create({
     return [
       'aside',
       mergeAttributes(HTMLAttributes, { class: 'caution', role: 'note' }),
-      ['p', { class: 'caution-title' }, cautionTitles[kind] ?? cautionTitles.overclocking],
+      ['p', { class: 'caution-title', contenteditable: 'false' }, cautionTitles[kind] ?? cautionTitles.overclocking],
       ['div', { class: 'caution-body' }, 0],
     ];
   },

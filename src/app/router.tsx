@@ -58,6 +58,8 @@ export function createAppRouter(queryClient: QueryClient) {
                 { path: 'roundups', lazy: lazy(() => import('./routes/roundups')) },
                 { path: 'roundups/new', lazy: lazy(() => import('./routes/roundup-new')) },
                 { path: 'roundups/:id', lazy: lazy(() => import('./routes/roundup-detail')) },
+                { path: 'roundups/:id/write-up', lazy: lazy(() => import('./routes/write-up')) },
+                { path: 'roundups/:id/write-up/:sectionId', lazy: lazy(() => import('./routes/write-up-section')) },
                 { path: 'roundups/:id/cells/:cellId', lazy: lazy(() => import('./routes/roundup-cell')) },
                 {
                   path: 'roundups/:id/products/:entryId/photos',

@@ -14,6 +14,10 @@ export const paths = {
   roundups: '/roundups',
   newRoundup: '/roundups/new',
   roundup: (id: number) => `/roundups/${id}`,
+  writeUp: (roundupId: number) => `/roundups/${roundupId}/write-up`,
+  writeUpSection: (roundupId: number, sectionId: number) => `/roundups/${roundupId}/write-up/${sectionId}`,
+  /** The server-rendered stand-in of the public page, opened in its own tab. */
+  writeUpPreview: (roundupId: number) => `/api/roundups/${roundupId}/write-up/preview`,
   roundupCell: (roundupId: number, cellId: number) => `/roundups/${roundupId}/cells/${cellId}`,
   roundupEntryPhotos: (roundupId: number, entryId: number) => `/roundups/${roundupId}/products/${entryId}/photos`,
   myBench: '/my-bench',

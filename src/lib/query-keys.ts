@@ -19,6 +19,7 @@ export const queryRoots = [
   'samples',
   'test-runs',
   'users',
+  'write-up',
 ] as const;
 export type QueryRoot = (typeof queryRoots)[number];
 

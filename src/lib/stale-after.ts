@@ -35,6 +35,8 @@ export const staleAfter = {
   run: ['test-runs', 'matrix', 'my-bench', 'roundups', 'dashboard'],
   /** A product's photo added, changed, reordered or removed: the photo pages. */
   photo: ['photos'],
+  /** A write-up section saved, moved in review, restored or commented on: the write-up screens. */
+  writeUp: ['write-up'],
   /** The signed-in person's own account (password, sessions). */
   account: ['account'],
 } as const satisfies Record<string, readonly QueryRoot[]>;

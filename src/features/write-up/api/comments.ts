@@ -1,0 +1,43 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { invalidateAfter } from '../../../lib/stale-after';
+import {
+  commentThreadListSchema,
+  commentThreadSchema,
+  type AddCommentRequest,
+  type CommentThread,
+} from '../../../../shared/schemas/write-ups';
+import { writeUpKeys } from './write-up-keys';
+
+export function useCommentThreads(sectionId: number) {
+  return useQuery({
+    queryKey: [...writeUpKeys.item('comments'), sectionId],
+    queryFn: async ({ signal }): Promise<CommentThread[]> =>
+      (
+        await apiClient.get(`/api/write-up/sections/${sectionId}/comments`, {
+          signal,
+          schema: commentThreadListSchema,
+        })
+      ).threads,
+  });
+}
+
+export function useAddComment(sectionId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: AddCommentRequest) =>
+      apiClient.post(`/api/write-up/sections/${sectionId}/comments`, body, { schema: commentThreadSchema }),
+    onSuccess: () => invalidateAfter(queryClient, 'writeUp'),
+  });
+}
+
+export function useResolveThread() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ commentId, resolved }: { commentId: number; resolved: boolean }) =>
+      apiClient.post(`/api/write-up/comments/${commentId}/${resolved ? 'resolve' : 'reopen'}`, undefined, {
+        schema: commentThreadSchema,
+      }),
+    onSuccess: () => invalidateAfter(queryClient, 'writeUp'),
+  });
+}

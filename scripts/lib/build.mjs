@@ -2,6 +2,7 @@
 // build when its inputs have not changed since it last succeeded: a hash of every input file's path and
 // content is kept in dist/build-inputs.json. Content, not modification times, so a checkout or a copy that
 // touches files without changing them does not rebuild, and an edit always does.
+import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, readdirSync, statSync, writeFileSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
@@ -65,6 +66,10 @@ export function ensureBuilt(names = ['client', 'server'], env = process.env) {
     }
     console.log(`[build] building the ${name}…`);
     runStep('vite', target.args, env);
+    // The first-load size, printed with every client build (scripts/report-bundle.mjs).
+    if (name === 'client') {
+      spawnSync(process.execPath, ['scripts/report-bundle.mjs'], { cwd: projectRoot, stdio: 'inherit', env });
+    }
     stamps[name] = hash;
     mkdirSync(resolve(projectRoot, 'dist'), { recursive: true });
     writeFileSync(stampFile, `${JSON.stringify(stamps, null, 2)}\n`);

@@ -4,6 +4,7 @@ import { UserEntity } from '../entities/user.entity';
 import { seedPlanning } from './demo-planning';
 import { seedStaff } from './demo-staff';
 import { seedDemoRuns } from './demo-runs';
+import { seedDemoWriteUp } from './demo-write-up';
 import type { FileStore } from '../storage/file-store';
 
 /** Seeds the invented demo outlet once: only into a database that has no users yet. Returns whether it ran. */
@@ -20,5 +21,7 @@ export async function seedDemoOnce(dataSource: DataSource, files: FileStore): Pr
   });
   // Runs go through the test-run service (its own transactions, the file store), after the plan they hang on.
   await seedDemoRuns(dataSource, files);
+  // Photos and the write-up's first drafts for the roundup in Writing, through the same services.
+  await seedDemoWriteUp(dataSource, files);
   return true;
 }

@@ -2,6 +2,7 @@ import { Suspense } from 'react';
 import type { QueryClient } from '@tanstack/react-query';
 import { Link, useLocation, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../components/ui/alert';
+import { buttonStyles } from '../../components/ui/button';
 import { LoadingState } from '../../components/ui/loading-state';
 import { paths } from '../../lib/paths';
 import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
@@ -20,6 +21,7 @@ import { SamplesTable } from '../../features/samples/components/samples-table';
 import { canOpen } from '../navigation';
 import { RoleGate } from '../role-gate';
 import { benchWorkers, may, planEditors } from '../../../shared/access/roles';
+import { writeUpReadableStates } from '../../../shared/domain/editorial/write-up-availability';
 
 function roundupIdFrom(value: string | undefined): number {
   const id = Number(value);
@@ -78,6 +80,13 @@ function RoundupPage() {
         </Link>
       </p>
       <RoundupHeader roundup={roundup} canChangeState={isEditor} />
+      {writeUpReadableStates.includes(roundup.state) && (
+        <p className="mb-4">
+          <Link to={paths.writeUp(roundup.id)} className={buttonStyles('secondary')}>
+            Write-up
+          </Link>
+        </p>
+      )}
       {justCreated && roundup.entries.length === 0 && (
         <Alert tone="success" title="The roundup is planned" className="mb-5">
           Next, add the products to compare: the catalog suggests boards inside the price band.

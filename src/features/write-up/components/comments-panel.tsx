@@ -45,7 +45,13 @@ function CommentForm({
         );
       }}
     >
-      <TextArea label={label} value={body} onChange={(e) => setBody(e.target.value)} error={error ?? undefined} rows={2} />
+      <TextArea
+        label={label}
+        value={body}
+        onChange={(e) => setBody(e.target.value)}
+        error={error ?? undefined}
+        rows={2}
+      />
       <Button type="submit" size="sm" pending={add.isPending}>
         {submitLabel}
       </Button>
@@ -60,10 +66,13 @@ function Thread({ thread, canComment }: { thread: CommentThread; canComment: boo
   return (
     <li className="rounded-[3px] border border-rule p-2.5" data-thread-resolved={resolved}>
       <p className="text-xs text-muted">
-        <span className="font-semibold text-ink">{thread.author.displayName}</span> · <DateTime value={thread.createdAt} />
+        <span className="font-semibold text-ink">{thread.author.displayName}</span> ·{' '}
+        <DateTime value={thread.createdAt} />
         {resolved && thread.resolvedBy && <> · resolved by {thread.resolvedBy.displayName}</>}
       </p>
-      <p className={resolved ? 'text-sm whitespace-pre-wrap text-muted' : 'text-sm whitespace-pre-wrap'}>{thread.body}</p>
+      <p className={resolved ? 'text-sm whitespace-pre-wrap text-muted' : 'text-sm whitespace-pre-wrap'}>
+        {thread.body}
+      </p>
       {thread.replies.length > 0 && (
         <ul className="mt-2 space-y-1.5 border-l-2 border-rule pl-2.5" aria-label="Replies">
           {thread.replies.map((reply) => (

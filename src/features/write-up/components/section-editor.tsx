@@ -312,11 +312,7 @@ function InsertBlocks({
       <div className="flex flex-wrap items-end gap-1.5">
         <label className="flex flex-col">
           <span className="text-xs font-medium text-muted">Caution</span>
-          <select
-            className={selectClass}
-            value={caution}
-            onChange={(e) => setCaution(e.target.value as CautionKind)}
-          >
+          <select className={selectClass} value={caution} onChange={(e) => setCaution(e.target.value as CautionKind)}>
             {cautionKinds.map((kind) => (
               <option key={kind} value={kind}>
                 {cautionTitles[kind].replace('Caution: ', '')}

@@ -119,12 +119,7 @@ export function SectionPage({ roundupId, sectionId }: { roundupId: number; secti
                 </Button>
               ),
             )}
-            <a
-              href={paths.writeUpPreview(roundupId)}
-              target="_blank"
-              rel="noopener"
-              className={buttonStyles('quiet')}
-            >
+            <a href={paths.writeUpPreview(roundupId)} target="_blank" rel="noopener" className={buttonStyles('quiet')}>
               Preview <span className="sr-only">the public page (opens in a new tab)</span>
             </a>
           </>

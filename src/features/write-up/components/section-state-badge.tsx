@@ -1,8 +1,5 @@
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
-import {
-  sectionReviewStateLabels,
-  type SectionReviewState,
-} from '../../../../shared/domain/editorial/section-states';
+import { sectionReviewStateLabels, type SectionReviewState } from '../../../../shared/domain/editorial/section-states';
 
 const tones: Record<SectionReviewState, BadgeTone> = {
   drafting: 'neutral',

@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { isApiError } from '../../../lib/api-client';
 import {
   staleVersionDetailsSchema,
@@ -34,7 +34,10 @@ export function useAutosave(options: {
   const inConflict = useRef(false);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const latest = useRef({ getContent, onSaved });
-  latest.current = { getContent, onSaved };
+  useLayoutEffect(() => {
+    latest.current = { getContent, onSaved };
+  });
+  const flushLater = useRef<() => void>(() => undefined);
 
   const flush = useCallback(async () => {
     if (timer.current) clearTimeout(timer.current);
@@ -68,9 +71,12 @@ export function useAutosave(options: {
       saving.current = false;
     }
     if (dirty.current && !inConflict.current && timer.current === null) {
-      timer.current = setTimeout(() => void flush(), autosaveDelayMs);
+      timer.current = setTimeout(() => flushLater.current(), autosaveDelayMs);
     }
   }, [sectionId]);
+  useEffect(() => {
+    flushLater.current = () => void flush();
+  }, [flush]);
 
   const markChanged = useCallback(() => {
     dirty.current = true;

@@ -226,10 +226,11 @@ function InsertBlocks({
   const insertPhoto = () => {
     const photo = photos.find((p) => String(p.id) === photoId);
     if (!photo) return;
+    // After the selection, never over it: a just-inserted photo or block stays selected and must not be replaced.
     editor
       .chain()
       .focus()
-      .insertContent({
+      .insertContentAt(editor.state.selection.to, {
         type: 'image',
         attrs: { photoId: photo.id, alt: photo.altText, src: photo.previewUrl, title: null },
       })
@@ -241,14 +242,14 @@ function InsertBlocks({
     editor
       .chain()
       .focus()
-      .insertContent({ type: 'liveBlock', attrs: { block: liveKind, entryId } })
+      .insertContentAt(editor.state.selection.to, { type: 'liveBlock', attrs: { block: liveKind, entryId } })
       .run();
   };
   const insertCaution = () => {
     editor
       .chain()
       .focus()
-      .insertContent({
+      .insertContentAt(editor.state.selection.to, {
         type: 'caution',
         attrs: { kind: caution },
         content: [{ type: 'paragraph', content: [{ type: 'text', text: cautionDefaultTexts[caution] }] }],

@@ -20,6 +20,9 @@ import { TestRunsService } from './services/test-runs.service';
 import { PhotosService } from './services/photos.service';
 import { UsersService } from './services/users.service';
 import { WriteUpsService } from './services/write-ups.service';
+import { VerdictsService } from './services/verdicts.service';
+import { ChartsService } from './services/charts.service';
+import { ReadinessService } from './services/readiness.service';
 import { createFileStore } from './storage/create-file-store';
 import { DevInboxService } from './services/dev-inbox.service';
 import { LinkSecret } from './mail/link-secret';
@@ -85,6 +88,17 @@ export function createServices(dataSource: DataSource, env: Env) {
     leaseMs: env.MAIL_LEASE_SECONDS * 1000,
     retryBaseMs: env.MAIL_RETRY_BASE_SECONDS * 1000,
   });
+  const verdicts = new VerdictsService(dataSource);
+  const charts = new ChartsService(dataSource, files);
+  // readiness.readiness(roundupId): "ready to schedule" and what still blocks it; the write-ups plug in their sections.
+  const readiness = new ReadinessService(dataSource, charts, roundups);
+  readiness.useSectionsBlocking(async (roundupId) =>
+    (await writeUps.sectionsBlocking(roundupId)).map((label) => ({
+      kind: 'section',
+      label,
+      link: `/roundups/${roundupId}/write-up`,
+    })),
+  );
 
   return {
     sessions,
@@ -115,6 +129,9 @@ export function createServices(dataSource: DataSource, env: Env) {
     staffMail,
     mailSender,
     signUpLimiter: signUpLimiter(env),
+    verdicts,
+    charts,
+    readiness,
   };
 }
 

@@ -38,6 +38,9 @@ import {
   SubscriberCategoryEntity,
   SubscriberEntity,
 } from './mail.entities';
+import { EditorialVerdictEntity } from './editorial-verdict.entity';
+import { RoundupChartEntity } from './roundup-chart.entity';
+import { MatrixCellExclusionEntity } from './matrix-cell-exclusion.entity';
 
 export const entities = [
   UserEntity,
@@ -77,4 +80,7 @@ export const entities = [
   MailingEntity,
   OutboxEntity,
   MailOptOutEntity,
+  EditorialVerdictEntity,
+  RoundupChartEntity,
+  MatrixCellExclusionEntity,
 ];

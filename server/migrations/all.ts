@@ -26,6 +26,7 @@ import { CreateWriteUps1765600001000 } from './1765600001000-create-write-ups';
 import { ReaderSiteSettings1765710001000 } from './1765710001000-reader-site-settings';
 import { CreateRelayMessages1765800001000 } from './1765800001000-create-relay-messages';
 import { CreateSubscribersAndOutbox1765800002000 } from './1765800002000-create-subscribers-and-outbox';
+import { CreateVerdictsChartsExclusions1765610001000 } from './1765610001000-create-verdicts-charts-exclusions';
 
 export const migrations = [
   CreateUsersSessionsAudit1764600000000,
@@ -55,4 +56,5 @@ export const migrations = [
   ReaderSiteSettings1765710001000,
   CreateRelayMessages1765800001000,
   CreateSubscribersAndOutbox1765800002000,
+  CreateVerdictsChartsExclusions1765610001000,
 ];

@@ -20,6 +20,9 @@ import { registerPhotoRoutes } from './photos.routes';
 import { registerWriteUpRoutes } from './write-ups.routes';
 import { registerDevInboxRoutes } from './dev-inbox.routes';
 import { registerSubscriberRoutes } from './subscribers.routes';
+import { registerVerdictRoutes } from './verdicts.routes';
+import { registerChartRoutes } from './charts.routes';
+import { registerReadinessRoutes } from './readiness.routes';
 
 /** Every feature's routes. A new feature adds one line here. */
 export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
@@ -43,4 +46,7 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerWriteUpRoutes(api, context);
   registerDevInboxRoutes(api, context);
   registerSubscriberRoutes(api, context);
+  registerVerdictRoutes(api, context);
+  registerChartRoutes(api, context);
+  registerReadinessRoutes(api, context);
 }

@@ -25,6 +25,10 @@ export const logCheckers: readonly Role[] = ['tester', 'editor'];
 export const writeUpWriters: readonly Role[] = ['editor', 'writer'];
 /** Sign off write-up sections, or hand them back to the writer. */
 export const writeUpApprovers: readonly Role[] = ['editor'];
+/** Decide the editorial verdicts, approve charts and leave matrix cells out of a roundup. */
+export const editorialDeciders: readonly Role[] = ['editor'];
+/** Send a roundup from Writing to In review. */
+export const reviewRequesters: readonly Role[] = ['editor', 'writer'];
 
 /**
  * Runs are one tester's work: a tester reads the runs of cells assigned to them (and those they recorded, which the

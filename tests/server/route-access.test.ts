@@ -133,6 +133,18 @@ const allowed: Record<string, Caller[]> = {
   'GET /api/account/mail': staff,
   'PUT /api/account/mail': staff,
   'POST /api/mail/events': everyone,
+  // Editorial: staff read verdicts, charts and readiness; editors decide verdicts, approve charts, leave cells out;
+  // writers and editors send a roundup to review.
+  'GET /api/roundups/:id/verdicts': staff,
+  'PUT /api/roundups/:id/verdicts/:entryId': ['editor'],
+  'GET /api/roundups/:id/charts': staff,
+  'PUT /api/roundups/:id/charts/:chartKey/settings': ['editor'],
+  'POST /api/roundups/:id/charts/:chartKey/approval': ['editor'],
+  'GET /api/roundups/:id/charts/:chartKey/image.png': staff,
+  'GET /api/roundups/:id/readiness': staff,
+  'POST /api/roundups/:id/review-request': ['editor', 'writer'],
+  'PUT /api/roundups/:id/cells/:cellId/exclusion': ['editor'],
+  'DELETE /api/roundups/:id/cells/:cellId/exclusion': ['editor'],
 };
 
 interface RouteLayer {

@@ -36,6 +36,7 @@ export const planEditableStates: readonly RoundupState[] = ['planning', 'on-the-
 export const implementedTransitions: ReadonlyArray<{ from: RoundupState; to: RoundupState }> = [
   { from: 'planning', to: 'on-the-bench' },
   { from: 'on-the-bench', to: 'writing' },
+  { from: 'writing', to: 'in-review' },
 ];
 
 export interface RoundupFacts {

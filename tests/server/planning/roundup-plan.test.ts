@@ -168,8 +168,8 @@ describe('roundup plans', () => {
     expect(writing.body).toMatchObject({ state: 'writing', planEditable: false, progress: { percentAccepted: 100 } });
     expect(writing.body.nextState).toMatchObject({
       to: 'in-review',
-      allowed: false,
-      problems: ['Moving to In review is not available yet.'],
+      allowed: true,
+      problems: [],
     });
 
     // Once writing, the plan is locked.

@@ -47,8 +47,9 @@ describe('roundup states', () => {
     expect(roundupTransitionProblems({ ...bench, acceptedCellCount: 21 }, 'writing')).toEqual([]);
     expect(roundupTransitionProblems(ready, 'writing')[0]).toMatch(/only move forward to On the bench/);
     expect(roundupTransitionProblems(bench, 'planning')[0]).toMatch(/only move forward to Writing/);
-    expect(roundupTransitionProblems({ ...ready, state: 'writing' }, 'in-review')).toEqual([
-      'Moving to In review is not available yet.',
+    expect(roundupTransitionProblems({ ...ready, state: 'writing' }, 'in-review')).toEqual([]);
+    expect(roundupTransitionProblems({ ...ready, state: 'in-review' }, 'scheduled')).toEqual([
+      'Moving to Scheduled is not available yet.',
     ]);
   });
 });

@@ -1,0 +1,30 @@
+import { z } from 'zod';
+import { optionalMultiLineText, multiLineText } from './text';
+
+export const readinessBlockerKinds = ['state', 'section', 'chart', 'cell'] as const;
+
+/** One thing that keeps a roundup from being ready to schedule, with the screen where it is fixed. */
+export const readinessBlockerSchema = z.object({
+  kind: z.string(),
+  label: z.string(),
+  link: z.string(),
+});
+export type ReadinessBlocker = z.infer<typeof readinessBlockerSchema>;
+
+export const readinessSchema = z.object({
+  roundupId: z.number().int(),
+  ready: z.boolean(),
+  blocking: z.array(readinessBlockerSchema),
+});
+export type Readiness = z.infer<typeof readinessSchema>;
+
+export const cellExclusionParamsSchema = z.object({
+  id: z.coerce.number().int().positive(),
+  cellId: z.coerce.number().int().positive(),
+});
+
+export const excludeCellRequestSchema = z.strictObject({
+  reason: multiLineText(1000, 'Write why this cell is left out of the roundup.'),
+});
+
+export const reviewRequestSchema = z.strictObject({ note: optionalMultiLineText(1000) });

@@ -22,7 +22,7 @@ export function registerReadinessRoutes(api: ApiRegistry, { services }: AppConte
       'Whether the roundup is ready to schedule, and what still blocks it, each with the screen where it is fixed.',
     params: idParamSchema,
     response: readinessSchema,
-    handler: ({ params }) => readiness.readiness(params.id),
+    handler: ({ params, user }) => readiness.readiness(params.id, user),
   });
 
   api.add({

@@ -7,6 +7,7 @@ import { lockRoundup } from '../lib/roundup-access';
 import { recordPlanChange } from '../lib/roundup-audit';
 import type { ChartsService } from './charts.service';
 import type { RoundupsService } from './roundups.service';
+import { may, reviewRequesters } from '../../shared/access/roles';
 import { cellStateLabels } from '../../shared/domain/planning/matrix-cell-states';
 import { roundupStateLabels, type RoundupState } from '../../shared/domain/planning/roundup-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
@@ -52,7 +53,7 @@ export class ReadinessService {
    * Whether the roundup is ready to schedule, and if not, exactly what blocks it, each with the screen where it is
    * fixed. The publishing side calls this before In review → Scheduled.
    */
-  async readiness(roundupId: number): Promise<Readiness> {
+  async readiness(roundupId: number, viewer?: CurrentUser): Promise<Readiness> {
     const manager = this.dataSource.manager;
     const facts = await loadEditorialFacts(manager, roundupId);
     const { roundup } = facts;
@@ -97,17 +98,33 @@ export class ReadinessService {
             kind: 'cell',
             label: `${where} is ${cellStateLabels[cell.state]}: accept a run or leave the cell out with a reason.`,
             link: matrixLink(roundupId),
+            cellId: cell.id,
           });
         } else if (cell.runOfRecordId === null) {
           blocking.push({
             kind: 'cell',
             label: `${where} is accepted but has no run of record: choose the run that stands for it.`,
             link: matrixLink(roundupId),
+            cellId: cell.id,
           });
         }
       }
     }
-    return { roundupId, ready: blocking.length === 0, blocking };
+    const excludedCells = facts.cells.flatMap((cell) => {
+      const exclusion = facts.exclusions.get(cell.id);
+      if (!exclusion) return [];
+      const product = facts.tested.find((t) => t.entry.id === cell.entryId)?.name ?? 'A product';
+      const configuration = facts.configurations.find((c) => c.id === cell.loadConfigurationId)?.name ?? '';
+      return [{ cellId: cell.id, label: `${product} × “${configuration}”`, reason: exclusion.reason }];
+    });
+    return {
+      roundupId,
+      ready: blocking.length === 0,
+      blocking,
+      excludedCells,
+      state: roundup.state,
+      canRequestReview: roundup.state === 'writing' && (viewer ? may(viewer.role, reviewRequesters) : false),
+    };
   }
 
   /** Leaves a cell out of the roundup with a reason (reversible); readiness then no longer waits for it. */
@@ -129,7 +146,7 @@ export class ReadinessService {
         previousReason: existing?.reason ?? null,
       });
     });
-    return this.readiness(roundupId);
+    return this.readiness(roundupId, actor);
   }
 
   /** Takes an excluded cell back into the roundup. */
@@ -143,7 +160,7 @@ export class ReadinessService {
       await repo.delete({ id: existing.id });
       await recordPlanChange(manager, actor, roundupId, 'matrix.cell_included', { cellId, reason: existing.reason });
     });
-    return this.readiness(roundupId);
+    return this.readiness(roundupId, actor);
   }
 
   /** Writing → In review, by a writer or an editor. */

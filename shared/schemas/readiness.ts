@@ -8,6 +8,8 @@ export const readinessBlockerSchema = z.object({
   kind: z.string(),
   label: z.string(),
   link: z.string(),
+  /** For a matrix cell: its id, so the editor can leave it out from the same list. */
+  cellId: z.number().int().optional(),
 });
 export type ReadinessBlocker = z.infer<typeof readinessBlockerSchema>;
 
@@ -15,6 +17,11 @@ export const readinessSchema = z.object({
   roundupId: z.number().int(),
   ready: z.boolean(),
   blocking: z.array(readinessBlockerSchema),
+  /** Cells the editor left out of the roundup, with why. */
+  excludedCells: z.array(z.object({ cellId: z.number().int(), label: z.string(), reason: z.string() })),
+  state: z.string(),
+  /** Whether the signed-in person's role may send the roundup to review now. */
+  canRequestReview: z.boolean(),
 });
 export type Readiness = z.infer<typeof readinessSchema>;
 

@@ -60,6 +60,9 @@ export function createAppRouter(queryClient: QueryClient) {
                 { path: 'roundups/:id', lazy: lazy(() => import('./routes/roundup-detail')) },
                 { path: 'roundups/:id/write-up', lazy: lazy(() => import('./routes/write-up')) },
                 { path: 'roundups/:id/write-up/:sectionId', lazy: lazy(() => import('./routes/write-up-section')) },
+                { path: 'roundups/:id/verdicts', lazy: lazy(() => import('./routes/roundup-verdicts')) },
+                { path: 'roundups/:id/charts', lazy: lazy(() => import('./routes/roundup-charts')) },
+                { path: 'roundups/:id/readiness', lazy: lazy(() => import('./routes/roundup-readiness')) },
                 { path: 'roundups/:id/cells/:cellId', lazy: lazy(() => import('./routes/roundup-cell')) },
                 {
                   path: 'roundups/:id/products/:entryId/photos',

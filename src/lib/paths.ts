@@ -18,6 +18,9 @@ export const paths = {
   writeUpSection: (roundupId: number, sectionId: number) => `/roundups/${roundupId}/write-up/${sectionId}`,
   /** The server-rendered stand-in of the public page, opened in its own tab. */
   writeUpPreview: (roundupId: number) => `/api/roundups/${roundupId}/write-up/preview`,
+  roundupVerdicts: (id: number) => `/roundups/${id}/verdicts`,
+  roundupCharts: (id: number) => `/roundups/${id}/charts`,
+  roundupReadiness: (id: number) => `/roundups/${id}/readiness`,
   roundupCell: (roundupId: number, cellId: number) => `/roundups/${roundupId}/cells/${cellId}`,
   roundupEntryPhotos: (roundupId: number, entryId: number) => `/roundups/${roundupId}/products/${entryId}/photos`,
   myBench: '/my-bench',

@@ -10,6 +10,7 @@ export const queryRoots = [
   'benches',
   'catalog',
   'dashboard',
+  'editorial',
   'log-check',
   'mail',
   'matrix',

@@ -19,7 +19,7 @@ export const staleAfter = {
    * A roundup's plan changed (created, edited, state, products, configurations), or a matrix cell moved or was
    * assigned: progress, matrix, samples, queues, bookings (they list their cells) and dashboards all move.
    */
-  plan: ['roundups', 'matrix', 'samples', 'my-bench', 'bench-booking', 'dashboard'],
+  plan: ['roundups', 'matrix', 'samples', 'my-bench', 'bench-booking', 'dashboard', 'editorial'],
   /** A vendor sample's loan changed: the samples table, the roundup's loan column and the dashboard. */
   sample: ['samples', 'roundups', 'dashboard'],
   /** A catalog product or price changed: the catalog and the roundups' product pickers and price checks. */
@@ -32,11 +32,13 @@ export const staleAfter = {
    * A test run recorded, reviewed, re-analysed or made the run of record, or a roundup's rubric changed: the cell's
    * runs, the results, the matrix, the tester's queue and the dashboards.
    */
-  run: ['test-runs', 'matrix', 'my-bench', 'roundups', 'dashboard'],
+  run: ['test-runs', 'matrix', 'my-bench', 'roundups', 'dashboard', 'editorial'],
   /** A product's photo added, changed, reordered or removed: the photo pages. */
   photo: ['photos'],
   /** A write-up section saved, moved in review, restored or commented on: the write-up screens. */
   writeUp: ['write-up'],
+  /** A verdict set, a chart's settings changed or approved, a cell left out, a roundup sent to review. */
+  editorial: ['editorial', 'roundups', 'dashboard'],
   /** The signed-in person's own account (password, sessions). */
   account: ['account'],
 } as const satisfies Record<string, readonly QueryRoot[]>;

@@ -12,6 +12,7 @@ import { roundupQueryOptions, useRoundup } from '../../features/roundups/api/get
 import { DetailTabs } from '../../features/roundups/components/detail-tabs';
 import { ProductsPanel } from '../../features/roundups/components/products-panel';
 import { RoundupHeader } from '../../features/roundups/components/roundup-header';
+import { RoundupEditorialLinks } from '../../features/editorial/components/roundup-editorial-links';
 import { TestPlanPanel } from '../../features/roundups/components/test-plan-panel';
 import { matrixQueryOptions } from '../../features/matrix/api/get-matrix';
 import { MatrixGrid } from '../../features/matrix/components/matrix-grid';
@@ -87,6 +88,7 @@ function RoundupPage() {
           </Link>
         </p>
       )}
+      <RoundupEditorialLinks roundupId={roundup.id} state={roundup.state} />
       {justCreated && roundup.entries.length === 0 && (
         <Alert tone="success" title="The roundup is planned" className="mb-5">
           Next, add the products to compare: the catalog suggests boards inside the price band.

@@ -64,7 +64,7 @@ describe('chart approval and readiness to schedule', () => {
     expect(sent.status, sent.text).toBe(200);
     expect(sent.body.state).toBe('in-review');
     const ready = await editor.agent.get(`/api/roundups/${roundupId}/readiness`);
-    expect(ready.body).toEqual({ roundupId, ready: true, blocking: [] });
+    expect(ready.body).toMatchObject({ roundupId, ready: true, blocking: [], state: 'in-review' });
 
     // The approved image is stored and served: a PNG of 1200 × 630.
     const image = await writer.agent

@@ -1,0 +1,3 @@
+import { createQueryKeys } from '../../../lib/query-keys';
+
+export const editorialKeys = createQueryKeys('editorial');

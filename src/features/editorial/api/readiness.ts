@@ -1,0 +1,49 @@
+import { queryOptions, useMutation, useQuery, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { apiClient, apiRequest } from '../../../lib/api-client';
+import { invalidateAfter } from '../../../lib/stale-after';
+import { readinessSchema, type Readiness } from '../../../../shared/schemas/readiness';
+import { roundupDetailSchema } from '../../../../shared/schemas/roundups';
+import { editorialKeys } from './editorial-keys';
+
+export function getReadiness(roundupId: number, signal?: AbortSignal): Promise<Readiness> {
+  return apiClient.get(`/api/roundups/${roundupId}/readiness`, { signal, schema: readinessSchema });
+}
+
+export function readinessQueryOptions(roundupId: number) {
+  return queryOptions({
+    queryKey: [...editorialKeys.detail(roundupId), 'readiness'],
+    queryFn: ({ signal }) => getReadiness(roundupId, signal),
+  });
+}
+
+export function useReadiness(roundupId: number) {
+  return useSuspenseQuery(readinessQueryOptions(roundupId)).data;
+}
+
+/** The same, without suspending: for a small summary on another page. */
+export function useReadinessSummary(roundupId: number, enabled: boolean) {
+  return useQuery({ ...readinessQueryOptions(roundupId), enabled });
+}
+
+export function useRequestReview(roundupId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiClient.post(`/api/roundups/${roundupId}/review-request`, {}, { schema: roundupDetailSchema }),
+    onSuccess: () => Promise.all([invalidateAfter(queryClient, 'editorial'), invalidateAfter(queryClient, 'plan')]),
+  });
+}
+
+export function useCellExclusion(roundupId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ cellId, reason }: { cellId: number; reason: string | null }) =>
+      reason === null
+        ? apiClient.delete(`/api/roundups/${roundupId}/cells/${cellId}/exclusion`, { schema: readinessSchema })
+        : apiRequest(`/api/roundups/${roundupId}/cells/${cellId}/exclusion`, {
+            method: 'PUT',
+            body: { reason },
+            schema: readinessSchema,
+          }),
+    onSuccess: () => Promise.all([invalidateAfter(queryClient, 'editorial'), invalidateAfter(queryClient, 'plan')]),
+  });
+}

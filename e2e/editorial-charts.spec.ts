@@ -228,6 +228,8 @@ test('an editor sets verdicts, approves every chart and sees the roundup become 
   }
   await page.reload();
   await expect(page.getByText('Ready to schedule', { exact: true })).toBeVisible();
+  // The roundup itself shows the computed condition.
+  await page.goto(`/roundups/${roundupId}`);
   await expect(
     page.getByRole('navigation', { name: 'Editorial' }).getByRole('link', { name: 'Ready to schedule ✓' }),
   ).toBeVisible();

@@ -5,6 +5,7 @@ import { seedPlanning } from './demo-planning';
 import { seedStaff } from './demo-staff';
 import { seedDemoRuns } from './demo-runs';
 import { seedDemoWriteUp } from './demo-write-up';
+import { seedDemoEditorial } from './demo-editorial';
 import type { FileStore } from '../storage/file-store';
 
 /** Seeds the invented demo outlet once: only into a database that has no users yet. Returns whether it ran. */
@@ -23,5 +24,7 @@ export async function seedDemoOnce(dataSource: DataSource, files: FileStore): Pr
   await seedDemoRuns(dataSource, files);
   // Photos and the write-up's first drafts for the roundup in Writing, through the same services.
   await seedDemoWriteUp(dataSource, files);
+  // Verdicts and approved charts for the flagship roundup, whose results are complete.
+  await seedDemoEditorial(dataSource, files);
   return true;
 }

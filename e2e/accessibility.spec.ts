@@ -28,6 +28,10 @@ const pages: Record<string, { role: Role | null; url: string | ((page: Page) => 
   '/roundups/:id': { role: 'editor', url: '/roundups/1' },
   '/roundups/:id/cells/:cellId': { role: 'editor', url: firstCellWithRuns },
   '/roundups/:id/products/:entryId/photos': { role: 'tester', url: firstProductPhotos },
+  // The demo's flagship roundup (the first seeded) has verdicts and approved charts.
+  '/roundups/:id/verdicts': { role: 'editor', url: '/roundups/1/verdicts' },
+  '/roundups/:id/charts': { role: 'editor', url: '/roundups/1/charts' },
+  '/roundups/:id/readiness': { role: 'writer', url: '/roundups/1/readiness' },
   '/my-bench': { role: 'tester', url: '/my-bench' },
   '/*': { role: 'writer', url: '/no-such-page' },
 };

@@ -62,6 +62,16 @@ try {
     created.push(unitUrl);
     runStep('tsx', ['server/cli/setup-database.ts', '--fresh'], { ...process.env, DATABASE_URL: unitUrl });
     runStep('vitest', ['run'], { ...process.env, DATABASE_URL: unitUrl, NODE_ENV: 'test' });
+    // Scheduling and publishing must not depend on the server's own zone: their files again under two others.
+    for (const zone of ['America/Los_Angeles', 'Asia/Kolkata']) {
+      console.log(`\n== vitest (time zones, jobs and publishing with TZ=${zone})`);
+      runStep('vitest', ['run', 'tests/shared/publishing', 'tests/server/jobs', 'tests/server/publishing'], {
+        ...process.env,
+        DATABASE_URL: unitUrl,
+        NODE_ENV: 'test',
+        TZ: zone,
+      });
+    }
   }
   if (wants('e2e')) {
     console.log('\n== playwright (the built client and server in Debian Chromium on a seeded throwaway database)');

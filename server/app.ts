@@ -16,6 +16,7 @@ import { LivePublishedRoundups } from './public-site/published-roundup-source';
 import { readerAssetsFrom } from './public-site/reader-assets';
 import { createSubscriberPages } from './mail/subscriber-pages';
 import { installHumanMessages } from '../shared/schemas/human-messages';
+import { createPreviewRouter, notPublishedFallback, servePublishedPages } from './publishing/public-routes';
 
 export interface CreateAppOptions {
   dataSource: DataSource;
@@ -43,6 +44,8 @@ export function createApp({
 
   const app = express();
   app.disable('x-powered-by');
+  // Published reader pages first, from memory with their own fixed headers: no middleware in their way.
+  app.use(servePublishedPages(services.publishedPages));
   app.set('trust proxy', parseTrustProxy(env.TRUST_PROXY));
   app.use(securityHeaders(secureCookie));
 
@@ -70,6 +73,10 @@ export function createApp({
       photoFile: (photoId, size) => services.photos.file(photoId, size),
     }),
   );
+  app.use(createPreviewRouter(services.publishing));
+
+  // After every reader-site route: public addresses with nothing published answer 404.
+  app.use(notPublishedFallback(services.publishing.publicPrefixes));
 
   // Readers' subscription pages: sign-up, confirmation, self-service and one-click unsubscribe (server-rendered).
   app.use(

@@ -32,6 +32,10 @@ import { createMailTransport } from './mail/transport';
 import { StaffMailService } from './services/staff-mail.service';
 import { SubscribersService } from './services/subscribers.service';
 import { signUpLimiter } from './middleware/sign-up-limit';
+import { PublishedPageCache } from './publishing/published-page-cache';
+import { loadPreviewSecret } from './publishing/preview-links';
+import { standInRenderer } from './publishing/stand-in-renderer';
+import { PublishingService } from './services/publishing.service';
 
 /**
  * The one place that builds every service, each once, handing services their collaborators. Routes (through
@@ -87,6 +91,13 @@ export function createServices(dataSource: DataSource, env: Env) {
     batchSize: env.MAIL_BATCH_SIZE,
     leaseMs: env.MAIL_LEASE_SECONDS * 1000,
     retryBaseMs: env.MAIL_RETRY_BASE_SECONDS * 1000,
+  // Published pages live in memory; publishing renders them (the stand-in renderer until the reader site's).
+  const publishedPages = new PublishedPageCache(dataSource);
+  let previewSecret: Promise<Buffer> | null = null;
+  const publishing = new PublishingService(dataSource, {
+    renderer: standInRenderer,
+    pages: publishedPages,
+    previewSecret: () => (previewSecret ??= loadPreviewSecret(dataSource, env.PREVIEW_LINK_SECRET)),
   });
   const verdicts = new VerdictsService(dataSource);
   const charts = new ChartsService(dataSource, files);
@@ -132,6 +143,8 @@ export function createServices(dataSource: DataSource, env: Env) {
     verdicts,
     charts,
     readiness,
+    publishedPages,
+    publishing,
   };
 }
 

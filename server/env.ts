@@ -76,6 +76,8 @@ const envSchema = z
       emptyAsUnset,
       z.string().min(24, 'MAIL_WEBHOOK_SECRET needs at least 24 characters.').optional(),
     ),
+    /** Key that signs preview links (at least 32 characters); a random key kept in the database when unset. */
+    PREVIEW_LINK_SECRET: z.string().min(32, 'PREVIEW_LINK_SECRET must be at least 32 characters.').optional(),
   })
   .superRefine((env, context) => {
     if (env.STORAGE_DRIVER !== 's3') return;

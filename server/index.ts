@@ -1,4 +1,5 @@
 import { existsSync } from 'node:fs';
+import { createServer } from 'node:http';
 import { join, resolve } from 'node:path';
 import { createApp } from './app';
 import { createServices } from './compose-services';
@@ -35,7 +36,15 @@ const mailWorker = new MailWorker(services.mailSender, [
 ]);
 if (env.JOB_RUNNER === 'on') mailWorker.start();
 
-const server = app.listen(env.PORT, env.HOST, () => {
+
+// Published reader pages are answered from memory before Express sees the request (the lean path); everything
+// else goes to the app. The pages are loaded before the first request and follow publications by any process.
+await services.publishedPages.ensureLoaded();
+services.publishedPages.watch();
+const server = createServer((req, res) => {
+  if (!services.publishedPages.serve(req, res)) app(req, res);
+});
+server.listen(env.PORT, env.HOST, () => {
   console.log(`Benchwire is running at http://${env.HOST}:${env.PORT}  (Ctrl-C stops it)`);
 });
 
@@ -51,6 +60,7 @@ async function shutdown() {
   server.closeIdleConnections();
   await jobRunner.stop().catch(() => {});
   await mailWorker.stop().catch(() => {});
+  services.publishedPages.stopWatching();
   await services.logFileAnalyser.close().catch(() => {});
   await dataSource.destroy().catch(() => {});
   process.exit(0);

@@ -41,6 +41,9 @@ import {
 import { EditorialVerdictEntity } from './editorial-verdict.entity';
 import { RoundupChartEntity } from './roundup-chart.entity';
 import { MatrixCellExclusionEntity } from './matrix-cell-exclusion.entity';
+import { RoundupScheduleEntity } from './roundup-schedule.entity';
+import { RoundupPublicationEntity } from './roundup-publication.entity';
+import { PublishedPageEntity } from './published-page.entity';
 
 export const entities = [
   UserEntity,
@@ -83,4 +86,7 @@ export const entities = [
   EditorialVerdictEntity,
   RoundupChartEntity,
   MatrixCellExclusionEntity,
+  RoundupScheduleEntity,
+  RoundupPublicationEntity,
+  PublishedPageEntity,
 ];

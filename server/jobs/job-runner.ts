@@ -10,6 +10,8 @@ export interface JobRunnerOptions {
   pollIntervalMs?: number;
   /** A job still marked running this long after it was claimed is taken to be abandoned (its process died). */
   leaseMs?: number;
+  /** Claim only the jobs with these unique keys (tests that share a database with other runners). */
+  onlyUniqueKeys?: string[];
   /** Where failures are reported; the server's console by default. */
   log?: Pick<Console, 'error' | 'warn'>;
 }
@@ -37,6 +39,7 @@ export class JobRunner {
   private readonly pollIntervalMs: number;
   private readonly leaseMs: number;
   private readonly log: Pick<Console, 'error' | 'warn'>;
+  private readonly onlyUniqueKeys: string[] | null;
   private timer: NodeJS.Timeout | null = null;
   private running: Promise<number> | null = null;
   private stopped = true;
@@ -51,6 +54,7 @@ export class JobRunner {
     this.pollIntervalMs = options.pollIntervalMs ?? 1_000;
     this.leaseMs = options.leaseMs ?? 5 * 60_000;
     this.log = options.log ?? console;
+    this.onlyUniqueKeys = options.onlyUniqueKeys ?? null;
   }
 
   /** Starts polling; the first look happens now, so jobs that fell due while no server ran go first. */
@@ -107,14 +111,16 @@ export class JobRunner {
     const abandonedBefore = new Date(now.getTime() - this.leaseMs);
     return this.dataSource.transaction(async (manager) => {
       const placeholders = kinds.map(() => '?').join(', ');
+      const keys = this.onlyUniqueKeys;
+      const keyFilter = keys ? `AND unique_key IN (${keys.map(() => '?').join(', ') || 'NULL'})` : '';
       const rows: ClaimedRow[] = await manager.query(
         `SELECT id, kind, unique_key, payload, run_at, attempts, max_attempts FROM jobs
-         WHERE kind IN (${placeholders})
+         WHERE kind IN (${placeholders}) ${keyFilter}
            AND ((state = 'pending' AND run_at <= ?) OR (state = 'running' AND locked_at <= ?))
          ORDER BY run_at, id
          LIMIT 1
          FOR UPDATE SKIP LOCKED`,
-        [...kinds, now, abandonedBefore],
+        [...kinds, ...(keys ?? []), now, abandonedBefore],
       );
       const row = rows[0];
       if (!row) return null;

@@ -23,6 +23,7 @@ import { CreatePasswordGuessCounters1765300001000 } from './1765300001000-create
 import { CreateBenchInstrumentsAndMaintenance1765400033000 } from './1765400033000-create-bench-instruments-and-maintenance';
 import { CreateJobs1765700001000 } from './1765700001000-create-jobs';
 import { CreateWriteUps1765600001000 } from './1765600001000-create-write-ups';
+import { CreatePublishing1765700002000 } from './1765700002000-create-publishing';
 import { ReaderSiteSettings1765710001000 } from './1765710001000-reader-site-settings';
 import { CreateRelayMessages1765800001000 } from './1765800001000-create-relay-messages';
 import { CreateSubscribersAndOutbox1765800002000 } from './1765800002000-create-subscribers-and-outbox';
@@ -53,6 +54,7 @@ export const migrations = [
   CreateBenchInstrumentsAndMaintenance1765400033000,
   CreateJobs1765700001000,
   CreateWriteUps1765600001000,
+  CreatePublishing1765700002000,
   ReaderSiteSettings1765710001000,
   CreateRelayMessages1765800001000,
   CreateSubscribersAndOutbox1765800002000,

@@ -23,6 +23,7 @@ import { registerSubscriberRoutes } from './subscribers.routes';
 import { registerVerdictRoutes } from './verdicts.routes';
 import { registerChartRoutes } from './charts.routes';
 import { registerReadinessRoutes } from './readiness.routes';
+import { registerPublishingRoutes } from './publishing.routes';
 
 /** Every feature's routes. A new feature adds one line here. */
 export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
@@ -49,4 +50,5 @@ export function registerFeatureRoutes(api: ApiRegistry, context: AppContext) {
   registerVerdictRoutes(api, context);
   registerChartRoutes(api, context);
   registerReadinessRoutes(api, context);
+  registerPublishingRoutes(api, context);
 }

@@ -145,6 +145,12 @@ const allowed: Record<string, Caller[]> = {
   'POST /api/roundups/:id/review-request': ['editor', 'writer'],
   'PUT /api/roundups/:id/cells/:cellId/exclusion': ['editor'],
   'DELETE /api/roundups/:id/cells/:cellId/exclusion': ['editor'],
+  // Publishing (issue 10): editors schedule, publish updates and share preview links.
+  'GET /api/roundups/:id/publishing': staff,
+  'PUT /api/roundups/:id/schedule': ['editor'],
+  'DELETE /api/roundups/:id/schedule': ['editor'],
+  'POST /api/roundups/:id/publication-updates': ['editor'],
+  'POST /api/roundups/:id/preview-links': ['editor'],
 };
 
 interface RouteLayer {

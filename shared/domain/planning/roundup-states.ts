@@ -37,7 +37,19 @@ export const implementedTransitions: ReadonlyArray<{ from: RoundupState; to: Rou
   { from: 'planning', to: 'on-the-bench' },
   { from: 'on-the-bench', to: 'writing' },
   { from: 'writing', to: 'in-review' },
+  // Publishing: scheduled with a date, time and zone; live when the job runner reaches that time; updated when an
+  // editor publishes an update or correction. These go through Publishing, never through a plain state change.
+  { from: 'in-review', to: 'scheduled' },
+  { from: 'scheduled', to: 'live' },
+  { from: 'live', to: 'updated' },
 ];
+
+/** Why a plain state change cannot make the publishing moves, and where they are made instead. */
+const publishingMoves: Partial<Record<RoundupState, string>> = {
+  scheduled: 'Schedule it under Publishing: choose the date, time and time zone of the embargo.',
+  live: 'It goes live by itself at its scheduled time.',
+  updated: 'Publish an update or a correction with a note under Publishing.',
+};
 
 export interface RoundupFacts {
   state: RoundupState;
@@ -61,6 +73,8 @@ export function roundupTransitionProblems(facts: RoundupFacts, to: RoundupState)
   if (!implementedTransitions.some((t) => t.from === facts.state && t.to === to)) {
     return [`Moving to ${roundupStateLabels[to]} is not available yet.`];
   }
+  const publishingMove = publishingMoves[to];
+  if (publishingMove) return [publishingMove];
   const problems: string[] = [];
   if (to === 'on-the-bench') {
     if (!facts.hasBenchProfile) problems.push('Choose a bench profile for the test plan.');

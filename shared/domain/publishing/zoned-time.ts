@@ -4,7 +4,7 @@
 export interface LocalDateTime {
   /** YYYY-MM-DD */
   date: string;
-  /** HH:MM, 24-hour */
+  /** HH:MM or HH:MM:SS, 24-hour */
   time: string;
   timeZone: string;
 }
@@ -77,14 +77,15 @@ export function zonedTimeToInstant({ date, time, timeZone }: LocalDateTime): Zon
   if (probe.getUTCFullYear() !== year || probe.getUTCMonth() !== month - 1 || probe.getUTCDate() !== day) {
     return { ok: false, reason: 'invalid-date', message: `${date} is not a date on the calendar.` };
   }
-  const timeMatch = /^([01]\d|2[0-3]):([0-5]\d)$/.exec(time);
+  const timeMatch = /^([01]\d|2[0-3]):([0-5]\d)(?::([0-5]\d))?$/.exec(time);
   if (!timeMatch) return { ok: false, reason: 'invalid-time', message: 'Enter the time as HH:MM (24-hour clock).' };
   if (!isKnownTimeZone(timeZone)) {
     return { ok: false, reason: 'invalid-zone', message: `“${timeZone}” is not a time zone name this server knows.` };
   }
   const hour = Number(timeMatch[1]);
   const minute = Number(timeMatch[2]);
-  const wallAsUtc = Date.UTC(year, month - 1, day, hour, minute);
+  const second = Number(timeMatch[3] ?? 0);
+  const wallAsUtc = Date.UTC(year, month - 1, day, hour, minute, second);
 
   // Every instant whose wall clock reads this date and time: try the offsets in force a day either side.
   const offsets = new Set([
@@ -106,13 +107,13 @@ export function zonedTimeToInstant({ date, time, timeZone }: LocalDateTime): Zon
   return { ok: true, instant: matches[0].instant, offsetMinutes: matches[0].offset, ambiguous: matches.length > 1 };
 }
 
-/** The local date and time (HH:MM) an instant shows in a zone. */
+/** The local date and time an instant shows in a zone: HH:MM, or HH:MM:SS when the seconds are not zero. */
 export function instantToZonedTime(instant: Date, timeZone: string): LocalDateTime {
   const wall = wallClockAt(timeZone, instant);
   const pad = (n: number) => String(n).padStart(2, '0');
   return {
     date: `${String(wall.year).padStart(4, '0')}-${pad(wall.month)}-${pad(wall.day)}`,
-    time: `${pad(wall.hour)}:${pad(wall.minute)}`,
+    time: `${pad(wall.hour)}:${pad(wall.minute)}${wall.second ? `:${pad(wall.second)}` : ''}`,
     timeZone,
   };
 }

@@ -1,0 +1,35 @@
+import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+
+export const publicationKinds = ['publication', 'update', 'correction'] as const;
+export type PublicationKind = (typeof publicationKinds)[number];
+
+/**
+ * One version of a roundup as readers saw it: the first publication, then each dated update or correction with its
+ * note. `model` is the frozen published data the public pages were rendered from.
+ */
+@Entity({ name: 'roundup_publications' })
+export class RoundupPublicationEntity {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+  roundupId: number;
+
+  @Column({ type: 'int', unsigned: true })
+  version: number;
+
+  @Column({ type: 'enum', enum: publicationKinds })
+  kind: PublicationKind;
+
+  @Column({ type: 'text', nullable: true })
+  note: string | null;
+
+  @Column({ type: 'datetime', precision: 3, name: 'published_at' })
+  publishedAt: Date;
+
+  @Column({ type: 'int', unsigned: true, name: 'published_by', nullable: true })
+  publishedBy: number | null;
+
+  @Column({ type: 'json' })
+  model: unknown;
+}

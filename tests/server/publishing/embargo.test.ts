@@ -1,0 +1,264 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import type { DataSource } from 'typeorm';
+import { createApp } from '../../../server/app';
+import { createServices, type Services } from '../../../server/compose-services';
+import { AuditEntryEntity } from '../../../server/entities/audit-entry.entity';
+import { JobEntity } from '../../../server/entities/job.entity';
+import { RoundupPublicationEntity } from '../../../server/entities/roundup-publication.entity';
+import { RoundupEntity } from '../../../server/entities/roundup.entity';
+import { createJobRegistry } from '../../../server/jobs/all';
+import { ManualClock } from '../../../server/jobs/clock';
+import { JobRunner } from '../../../server/jobs/job-runner';
+import { standInRenderer } from '../../../server/publishing/stand-in-renderer';
+import { publishJobKey } from '../../../server/services/publishing.service';
+import { signedIn, testDataSource, testEnv, TEST_HOST, type TestApp } from '../support/test-app';
+import { roundupInReview, scheduleAt } from './support/publishing-fixtures';
+
+const quiet = { error: () => {}, warn: () => {} };
+let dataSource: DataSource;
+let services: Services;
+let app: TestApp;
+
+/** A reader: no session, no Origin, just a browser asking for a public address. */
+const reader = () => ({ get: (path: string) => request(app).get(path).set('Host', TEST_HOST) });
+
+/**
+ * A runner over the app's own services, on a clock the test sets, confined to this roundup's publish job (other
+ * test files share the database and schedule their own).
+ */
+function runnerAt(clock: ManualClock, roundupId: number) {
+  return new JobRunner(dataSource, createJobRegistry(services), {
+    clock,
+    log: quiet,
+    onlyUniqueKeys: [publishJobKey(roundupId)],
+  });
+}
+
+/** Every address a published roundup appears at, and whether the response shows it. */
+async function publicSurfaces(roundupId: number, title: string) {
+  const model = await standInRenderer.freeze(dataSource.manager, roundupId, {
+    publishedAt: new Date(),
+    updatedAt: new Date(),
+    corrections: [],
+  });
+  const own = [model.path, ...model.products.map((p) => p.path)];
+  const shared = ['/read', '/read/feed.atom', '/sitemap.xml'];
+  // Addresses the reader site answers for a published roundup; none may exist before it is.
+  const others = [
+    `${model.path}/results.csv`,
+    `${model.path}/analysis.json`,
+    `/read/compare?product=${model.products[0].productId}`,
+    '/read/photos/1/640.webp',
+  ];
+  const shows = async (path: string) => {
+    const response = await reader().get(path);
+    return { status: response.status, mentions: response.text.includes(title) || response.text.includes(model.path) };
+  };
+  return { model, own, shared, others, shows };
+}
+
+beforeAll(async () => {
+  dataSource = await testDataSource();
+  services = createServices(dataSource, testEnv());
+  app = createApp({ dataSource, env: testEnv(), services });
+});
+
+describe('embargo publishing', () => {
+  it('nothing is public one second before the time; everything is at the time, published once', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    const { roundupId, title } = await roundupInReview(editor, dataSource);
+    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+    const scheduled = await scheduleAt(editor, roundupId, at);
+    expect(scheduled.state).toBe('scheduled');
+    expect(scheduled.schedule.publishAt).toBe(at.toISOString());
+
+    const surfaces = await publicSurfaces(roundupId, title);
+    const clock = new ManualClock(at.getTime() - 1_000);
+    await runnerAt(clock, roundupId).runDue();
+    expect((await dataSource.getRepository(RoundupEntity).findOneByOrFail({ id: roundupId })).state).toBe('scheduled');
+    for (const path of [...surfaces.own, ...surfaces.others]) {
+      const seen = await surfaces.shows(path);
+      expect(seen.status, path).toBe(404);
+    }
+    for (const path of surfaces.shared) expect((await surfaces.shows(path)).mentions, path).toBe(false);
+
+    clock.set(at);
+    expect(await runnerAt(clock, roundupId).runDue()).toBe(1);
+    const roundup = await dataSource.getRepository(RoundupEntity).findOneByOrFail({ id: roundupId });
+    expect(roundup.state).toBe('live');
+    for (const path of [...surfaces.own, ...surfaces.shared]) {
+      const seen = await surfaces.shows(path);
+      expect(seen.status, path).toBe(200);
+      if (path !== surfaces.own[1] && path !== surfaces.own[2]) expect(seen.mentions, path).toBe(true);
+    }
+    const publications = await dataSource.getRepository(RoundupPublicationEntity).findBy({ roundupId });
+    expect(publications.map((p) => [p.version, p.kind, p.publishedAt.toISOString()])).toEqual([
+      [1, 'publication', at.toISOString()],
+    ]);
+    const job = await dataSource.getRepository(JobEntity).findOneByOrFail({ uniqueKey: publishJobKey(roundupId) });
+    expect(job.state).toBe('done');
+
+    // A second pass, or a retry, changes nothing.
+    await runnerAt(clock, roundupId).runDue();
+    await services.publishing.publishDue(roundupId, clock.now());
+    expect(await dataSource.getRepository(RoundupPublicationEntity).countBy({ roundupId })).toBe(1);
+  });
+
+  it('two runners at the due time publish exactly once', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    const { roundupId } = await roundupInReview(editor, dataSource);
+    const at = new Date(Math.ceil((Date.now() + 7_200_000) / 1000) * 1000);
+    await scheduleAt(editor, roundupId, at, 'Asia/Kolkata');
+    const clock = new ManualClock(at);
+    await Promise.all([
+      runnerAt(clock, roundupId).runDue(),
+      runnerAt(clock, roundupId).runDue(),
+      services.publishing.publishDue(roundupId, at),
+    ]);
+    expect(await dataSource.getRepository(RoundupPublicationEntity).countBy({ roundupId })).toBe(1);
+    const published = await dataSource
+      .getRepository(AuditEntryEntity)
+      .countBy({ subjectType: 'roundup', subjectId: String(roundupId), action: 'roundup.published' });
+    expect(published).toBe(1);
+  });
+
+  it('serves the snapshot with ETag, 304, the accepted compression, caching and content-type', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    const { roundupId, title } = await roundupInReview(editor, dataSource);
+    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+    await scheduleAt(editor, roundupId, at);
+    await runnerAt(new ManualClock(at), roundupId).runDue();
+    const path = (await services.publishing.status(roundupId)).publicPath as string;
+
+    const plain = await reader().get(path).set('Accept-Encoding', 'identity');
+    expect(plain.status).toBe(200);
+    expect(plain.headers['content-type']).toBe('text/html; charset=utf-8');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(plain.headers.vary).toBe('Accept-Encoding');
+    expect(plain.headers['cache-control']).toMatch(/public/);
+    expect(plain.headers.etag).toMatch(/^"[A-Za-z0-9_-]+"$/);
+    expect(plain.text).toContain(title);
+
+    // The client decodes what it was sent: the stored compressed bodies decode to the same page.
+    const br = await reader().get(path).set('Accept-Encoding', 'gzip, deflate, br');
+    expect(br.headers['content-encoding']).toBe('br');
+    expect(br.text).toBe(plain.text);
+    const gz = await reader().get(path).set('Accept-Encoding', 'gzip;q=1.0, br;q=0');
+    expect(gz.headers['content-encoding']).toBe('gzip');
+    expect(gz.text).toBe(plain.text);
+    expect(gz.headers.etag).not.toBe(br.headers.etag);
+
+    const again = await reader().get(path).set('Accept-Encoding', 'br').set('If-None-Match', br.headers.etag);
+    expect(again.status).toBe(304);
+    expect(again.headers.etag).toBe(br.headers.etag);
+    const head = await request(app).head(path).set('Host', TEST_HOST).set('Accept-Encoding', 'identity');
+    expect(head.status).toBe(200);
+    expect(head.headers['content-length']).toBe(String(Buffer.byteLength(plain.text)));
+  });
+
+  it('later edits reach readers only with a published update, logged on the page with its note and date', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    const { roundupId, title } = await roundupInReview(editor, dataSource);
+    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+    await scheduleAt(editor, roundupId, at);
+    await runnerAt(new ManualClock(at), roundupId).runDue();
+    const path = (await services.publishing.status(roundupId)).publicPath as string;
+    const before = await reader().get(path);
+
+    const renamed = `${title} (corrected)`;
+    expect((await editor.patch(`/api/roundups/${roundupId}`).send({ title: renamed })).status).toBe(200);
+    expect((await reader().get(path)).text).not.toContain(renamed);
+
+    const refused = await editor
+      .post(`/api/roundups/${roundupId}/publication-updates`)
+      .send({ kind: 'correction', note: ' ' });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields.note).toBeTruthy();
+
+    const update = await editor
+      .post(`/api/roundups/${roundupId}/publication-updates`)
+      .send({ kind: 'correction', note: 'The second board’s price was for the wrong region.' });
+    expect(update.status, update.text).toBe(201);
+    expect(update.body.state).toBe('updated');
+    expect(update.body.publications.map((p: { version: number; kind: string }) => [p.version, p.kind])).toEqual([
+      [1, 'publication'],
+      [2, 'correction'],
+    ]);
+    // The page keeps its address (the first publication's) and shows the note.
+    const after = await reader().get(path);
+    expect(after.status).toBe(200);
+    expect(after.text).toContain(renamed);
+    expect(after.text).toContain('The second board’s price was for the wrong region.');
+    expect(after.headers.etag).not.toBe(before.headers.etag);
+  });
+
+  it('reschedules and unschedules; the job follows the schedule', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    const { roundupId } = await roundupInReview(editor, dataSource);
+    const first = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+    const later = new Date(first.getTime() + 86_400_000);
+    await scheduleAt(editor, roundupId, first);
+    await scheduleAt(editor, roundupId, later, 'America/Los_Angeles');
+    const job = await dataSource.getRepository(JobEntity).findOneByOrFail({ uniqueKey: publishJobKey(roundupId) });
+    expect(job.runAt.toISOString()).toBe(later.toISOString());
+
+    await runnerAt(new ManualClock(first), roundupId).runDue();
+    expect((await dataSource.getRepository(RoundupEntity).findOneByOrFail({ id: roundupId })).state).toBe('scheduled');
+
+    const off = await editor.delete(`/api/roundups/${roundupId}/schedule`);
+    expect(off.status, off.text).toBe(200);
+    expect(off.body.state).toBe('in-review');
+    expect(off.body.schedule).toBeNull();
+    await runnerAt(new ManualClock(later), roundupId).runDue();
+    expect((await dataSource.getRepository(RoundupEntity).findOneByOrFail({ id: roundupId })).state).toBe('in-review');
+    expect(
+      (await dataSource.getRepository(JobEntity).findOneByOrFail({ uniqueKey: publishJobKey(roundupId) })).state,
+    ).toBe('cancelled');
+  });
+
+  it('a schedule across a daylight-saving change lands on the right UTC instant', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    const { roundupId } = await roundupInReview(editor, dataSource);
+    // United States daylight time begins 14 March 2027 at 02:00 local (15 U.S.C. § 260a): 09:00 is UTC−8 the day
+    // before and UTC−7 the day after.
+    const before = await editor
+      .put(`/api/roundups/${roundupId}/schedule`)
+      .send({ date: '2027-03-13', time: '09:00', timeZone: 'America/Los_Angeles' });
+    expect(before.status, before.text).toBe(200);
+    expect(before.body.schedule).toMatchObject({ publishAt: '2027-03-13T17:00:00.000Z', utcOffset: 'UTC−08:00' });
+    const after = await editor
+      .put(`/api/roundups/${roundupId}/schedule`)
+      .send({ date: '2027-03-15', time: '09:00', timeZone: 'America/Los_Angeles' });
+    expect(after.body.schedule).toMatchObject({ publishAt: '2027-03-15T16:00:00.000Z', utcOffset: 'UTC−07:00' });
+    const gap = await editor
+      .put(`/api/roundups/${roundupId}/schedule`)
+      .send({ date: '2027-03-14', time: '02:30', timeZone: 'America/Los_Angeles' });
+    expect(gap.status).toBe(422);
+    expect(gap.body.error.fields.time).toMatch(/does not exist/);
+  });
+
+  it('refuses a schedule in the past, for a roundup not in review, and from a writer', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    const { roundupId } = await roundupInReview(editor, dataSource);
+    const past = await editor
+      .put(`/api/roundups/${roundupId}/schedule`)
+      .send({ date: '2026-01-05', time: '09:00', timeZone: 'UTC' });
+    expect(past.status).toBe(422);
+    expect(past.body.error.fields.time).toMatch(/passed/);
+
+    await dataSource.getRepository(RoundupEntity).update({ id: roundupId }, { state: 'writing' });
+    const notReady = await editor
+      .put(`/api/roundups/${roundupId}/schedule`)
+      .send({ date: '2030-01-05', time: '09:00', timeZone: 'UTC' });
+    expect(notReady.status).toBe(409);
+    const status = await editor.get(`/api/roundups/${roundupId}/publishing`);
+    expect(status.body.readiness.ready).toBe(false);
+
+    const { agent: writer } = await signedIn(app, 'writer');
+    const denied = await writer
+      .put(`/api/roundups/${roundupId}/schedule`)
+      .send({ date: '2030-01-05', time: '09:00', timeZone: 'UTC' });
+    expect(denied.status).toBe(403);
+  });
+});

@@ -34,7 +34,7 @@ import { SubscribersService } from './services/subscribers.service';
 import { signUpLimiter } from './middleware/sign-up-limit';
 import { PublishedPageCache } from './publishing/published-page-cache';
 import { loadPreviewSecret } from './publishing/preview-links';
-import { standInRenderer } from './publishing/stand-in-renderer';
+import { readerSiteRenderer } from './publishing/reader-site-renderer';
 import { PublishingService } from './services/publishing.service';
 
 /**
@@ -91,11 +91,12 @@ export function createServices(dataSource: DataSource, env: Env) {
     batchSize: env.MAIL_BATCH_SIZE,
     leaseMs: env.MAIL_LEASE_SECONDS * 1000,
     retryBaseMs: env.MAIL_RETRY_BASE_SECONDS * 1000,
-  // Published pages live in memory; publishing renders them (the stand-in renderer until the reader site's).
+  });
+  // Published pages live in memory; publishing freezes and renders them with the reader site's model and pages.
   const publishedPages = new PublishedPageCache(dataSource);
   let previewSecret: Promise<Buffer> | null = null;
   const publishing = new PublishingService(dataSource, {
-    renderer: standInRenderer,
+    renderer: readerSiteRenderer(dataSource, env),
     pages: publishedPages,
     previewSecret: () => (previewSecret ??= loadPreviewSecret(dataSource, env.PREVIEW_LINK_SECRET)),
   });

@@ -10,7 +10,7 @@ import { RoundupEntity } from '../../../server/entities/roundup.entity';
 import { createJobRegistry } from '../../../server/jobs/all';
 import { ManualClock } from '../../../server/jobs/clock';
 import { JobRunner } from '../../../server/jobs/job-runner';
-import { standInRenderer } from '../../../server/publishing/stand-in-renderer';
+import { buildPublishedRoundup } from '../../../server/public-site/published-roundup';
 import { publishJobKey } from '../../../server/services/publishing.service';
 import { signedIn, testDataSource, testEnv, TEST_HOST, type TestApp } from '../support/test-app';
 import { roundupInReview, scheduleAt } from './support/publishing-fixtures';
@@ -37,17 +37,12 @@ function runnerAt(clock: ManualClock, roundupId: number) {
 
 /** Every address a published roundup appears at, and whether the response shows it. */
 async function publicSurfaces(roundupId: number, title: string) {
-  const model = await standInRenderer.freeze(dataSource.manager, roundupId, {
-    publishedAt: new Date(),
-    updatedAt: new Date(),
-    corrections: [],
-  });
-  const own = [model.path, ...model.products.map((p) => p.path)];
+  const model = await buildPublishedRoundup(dataSource.manager, roundupId, { publishedAt: new Date() });
+  // Its results page and open data; the pages over all roundups; addresses that only exist for published boards.
+  const own = [model.path, model.openData.csvPath, model.openData.analysisJsonPath];
   const shared = ['/read', '/read/feed.atom', '/sitemap.xml'];
-  // Addresses the reader site answers for a published roundup; none may exist before it is.
   const others = [
-    `${model.path}/results.csv`,
-    `${model.path}/analysis.json`,
+    ...model.products.map((p) => p.path),
     `/read/compare?product=${model.products[0].productId}`,
     '/read/photos/1/640.webp',
   ];
@@ -87,11 +82,9 @@ describe('embargo publishing', () => {
     expect(await runnerAt(clock, roundupId).runDue()).toBe(1);
     const roundup = await dataSource.getRepository(RoundupEntity).findOneByOrFail({ id: roundupId });
     expect(roundup.state).toBe('live');
-    for (const path of [...surfaces.own, ...surfaces.shared]) {
-      const seen = await surfaces.shows(path);
-      expect(seen.status, path).toBe(200);
-      if (path !== surfaces.own[1] && path !== surfaces.own[2]) expect(seen.mentions, path).toBe(true);
-    }
+    for (const path of surfaces.own) expect((await surfaces.shows(path)).status, path).toBe(200);
+    expect((await surfaces.shows(surfaces.model.path)).mentions).toBe(true);
+    expect((await surfaces.shows('/read')).mentions).toBe(true);
     const publications = await dataSource.getRepository(RoundupPublicationEntity).findBy({ roundupId });
     expect(publications.map((p) => [p.version, p.kind, p.publishedAt.toISOString()])).toEqual([
       [1, 'publication', at.toISOString()],
@@ -135,7 +128,8 @@ describe('embargo publishing', () => {
     expect(plain.status).toBe(200);
     expect(plain.headers['content-type']).toBe('text/html; charset=utf-8');
     expect(plain.headers['content-encoding']).toBeUndefined();
-    expect(plain.headers.vary).toBe('Accept-Encoding');
+    // Each page exists in °C and °F (the reader's unit cookie picks one).
+    expect(plain.headers.vary).toBe('Accept-Encoding, Cookie');
     expect(plain.headers['cache-control']).toMatch(/public/);
     expect(plain.headers.etag).toMatch(/^"[A-Za-z0-9_-]+"$/);
     expect(plain.text).toContain(title);
@@ -185,12 +179,18 @@ describe('embargo publishing', () => {
       [1, 'publication'],
       [2, 'correction'],
     ]);
-    // The page keeps its address (the first publication's) and shows the note.
-    const after = await reader().get(path);
+    // The page shows the new title and the note; the old address leads to the new one.
+    const newPath = update.body.publicPath as string;
+    const after = await reader().get(newPath);
     expect(after.status).toBe(200);
     expect(after.text).toContain(renamed);
     expect(after.text).toContain('The second board’s price was for the wrong region.');
     expect(after.headers.etag).not.toBe(before.headers.etag);
+    if (newPath !== path) {
+      const old = await reader().get(path);
+      expect(old.status).toBe(301);
+      expect(old.headers.location).toBe(newPath);
+    }
   });
 
   it('reschedules and unschedules; the job follows the schedule', async () => {

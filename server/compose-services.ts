@@ -96,7 +96,7 @@ export function createServices(dataSource: DataSource, env: Env) {
   const publishedPages = new PublishedPageCache(dataSource);
   let previewSecret: Promise<Buffer> | null = null;
   const publishing = new PublishingService(dataSource, {
-    renderer: readerSiteRenderer(dataSource, env),
+    renderer: readerSiteRenderer(dataSource, { baseUrl: env.PUBLIC_SITE_URL ?? `http://${env.HOST}:${env.PORT}` }),
     pages: publishedPages,
     previewSecret: () => (previewSecret ??= loadPreviewSecret(dataSource, env.PREVIEW_LINK_SECRET)),
   });

@@ -1,7 +1,6 @@
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { DataSource } from 'typeorm';
-import type { Env } from '../env';
 import { buildPublishedRoundup, type PublishedRoundup } from '../public-site/published-roundup';
 import { loadReaderSiteSettings } from '../public-site/published-roundup-source';
 import { readerAssetsFrom } from '../public-site/reader-assets';
@@ -23,9 +22,12 @@ const unitVariants = [
  * `buildPublishedRoundup`'s, and the snapshot holds the home page and each roundup's results page in both units.
  * Addresses the reader router renders on request (open data, photos, pages with a query) follow the roundup's state.
  */
-export function readerSiteRenderer(dataSource: DataSource, env: Env): PublicSiteRenderer<PublishedRoundup> {
-  // Pages are rendered at publication, away from any request: the configured public address, or this server's.
-  const baseUrl = (env.PUBLIC_SITE_URL ?? `http://${env.HOST}:${env.PORT}`).replace(/\/+$/, '');
+export function readerSiteRenderer(
+  dataSource: DataSource,
+  options: { baseUrl: string },
+): PublicSiteRenderer<PublishedRoundup> {
+  // Pages are rendered at publication, away from any request: canonical links use the configured public address.
+  const baseUrl = options.baseUrl.replace(/\/+$/, '');
   let assets: ReaderSite['assets'] | null = null;
   const site = async (): Promise<ReaderSite> => {
     assets ??= readerAssetsFrom(

@@ -6,6 +6,7 @@ import { seedStaff } from './demo-staff';
 import { seedDemoRuns } from './demo-runs';
 import { seedDemoWriteUp } from './demo-write-up';
 import { seedDemoEditorial } from './demo-editorial';
+import { publishDemoRoundup } from './demo-publication';
 import type { FileStore } from '../storage/file-store';
 
 /** Seeds the invented demo outlet once: only into a database that has no users yet. Returns whether it ran. */
@@ -26,5 +27,7 @@ export async function seedDemoOnce(dataSource: DataSource, files: FileStore): Pr
   await seedDemoWriteUp(dataSource, files);
   // Verdicts and approved charts for the flagship roundup, whose results are complete.
   await seedDemoEditorial(dataSource, files);
+  // The demo's live roundup gets its publication (frozen data, rendered pages), as the job runner would have made it.
+  await publishDemoRoundup(dataSource);
   return true;
 }

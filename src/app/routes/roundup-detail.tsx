@@ -14,6 +14,7 @@ import { ProductsPanel } from '../../features/roundups/components/products-panel
 import { RoundupHeader } from '../../features/roundups/components/roundup-header';
 import { RoundupEditorialLinks } from '../../features/editorial/components/roundup-editorial-links';
 import { TestPlanPanel } from '../../features/roundups/components/test-plan-panel';
+import { PublishingPanel } from '../../features/roundups/components/publishing-panel';
 import { matrixQueryOptions } from '../../features/matrix/api/get-matrix';
 import { MatrixGrid } from '../../features/matrix/components/matrix-grid';
 import { ResultsMatrix } from '../../features/test-runs/components/results-matrix';
@@ -57,7 +58,7 @@ export function Component() {
   );
 }
 
-const tabIds = ['products', 'matrix', 'results', 'samples', 'plan'] as const;
+const tabIds = ['products', 'matrix', 'results', 'samples', 'plan', 'publishing'] as const;
 
 function RoundupPage() {
   const params = useParams();
@@ -162,6 +163,15 @@ function RoundupPage() {
             content: (
               <Suspense fallback={<LoadingState label="Loading the test plan…" />}>
                 <TestPlanPanel roundup={roundup} canEdit={isEditor} />
+              </Suspense>
+            ),
+          },
+          {
+            id: 'publishing',
+            label: 'Publishing',
+            content: (
+              <Suspense fallback={<LoadingState label="Loading publishing…" />}>
+                <PublishingPanel roundupId={roundup.id} defaultTimeZone={roundup.timeZone} canEdit={isEditor} />
               </Suspense>
             ),
           },

@@ -27,7 +27,6 @@ export function createPreviewRouter(publishing: PublishingService) {
     const outcome = await publishing.preview(req.params.token);
     res.setHeader('Cache-Control', 'no-store');
     res.setHeader('X-Robots-Tag', 'noindex, nofollow');
-    res.setHeader('Referrer-Policy', 'no-referrer');
     res.type('html');
     if (outcome.ok) {
       res.status(200).send(outcome.html);

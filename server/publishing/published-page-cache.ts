@@ -3,6 +3,7 @@ import type { IncomingMessage, ServerResponse } from 'node:http';
 import { brotliCompressSync, constants as zlibConstants, gzipSync } from 'node:zlib';
 import type { DataSource, EntityManager } from 'typeorm';
 import { PublishedPageEntity } from '../entities/published-page.entity';
+import { contentSecurityPolicy } from '../middleware/security-headers';
 import type { RenderedPage } from './public-site-renderer';
 
 /** A page as stored: the body and its gzip and brotli forms, compressed once at publication. */
@@ -28,14 +29,15 @@ interface CachedPage {
 /** Readers may keep a page a minute, then check it with the ETag (a 304 costs a few bytes). */
 export const publishedCacheControl = 'public, max-age=60, must-revalidate';
 
-// The app's own security headers (helmet's in server/app.ts), fixed here because this path runs before Express.
+// The app's own security headers (server/middleware/security-headers.ts), fixed here because this path runs before
+// Express. The pages are served over whatever the site runs on; HSTS stays with the app's responses.
 const securityHeaders = {
-  'Content-Security-Policy':
-    "default-src 'self'; base-uri 'self'; font-src 'self' data:; form-action 'self'; frame-ancestors 'self'; img-src 'self' data:; object-src 'none'; script-src 'self'; style-src 'self' 'unsafe-inline'",
+  'Content-Security-Policy': Object.entries(contentSecurityPolicy)
+    .map(([directive, sources]) => `${directive} ${sources.join(' ')}`)
+    .join(';'),
   'X-Content-Type-Options': 'nosniff',
-  'Referrer-Policy': 'no-referrer',
-  'Cross-Origin-Opener-Policy': 'same-origin',
-  'X-Frame-Options': 'SAMEORIGIN',
+  'X-Frame-Options': 'DENY',
+  'Referrer-Policy': 'same-origin',
 };
 
 /** Compresses a rendered page once: gzip at level 9 and brotli at quality 11, with a strong ETag of the body. */

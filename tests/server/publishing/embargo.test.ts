@@ -133,6 +133,11 @@ describe('embargo publishing', () => {
     expect(plain.headers['cache-control']).toMatch(/public/);
     expect(plain.headers.etag).toMatch(/^"[A-Za-z0-9_-]+"$/);
     expect(plain.text).toContain(title);
+    // The lean path sends the app's own security headers.
+    const api = await reader().get('/api/health');
+    for (const header of ['content-security-policy', 'x-frame-options', 'x-content-type-options', 'referrer-policy']) {
+      expect(plain.headers[header], header).toBe(api.headers[header]);
+    }
 
     // The client decodes what it was sent: the stored compressed bodies decode to the same page.
     const br = await reader().get(path).set('Accept-Encoding', 'gzip, deflate, br');

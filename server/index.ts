@@ -36,7 +36,6 @@ const mailWorker = new MailWorker(services.mailSender, [
 ]);
 if (env.JOB_RUNNER === 'on') mailWorker.start();
 
-
 // Published reader pages are answered from memory before Express sees the request (the lean path); everything
 // else goes to the app. The pages are loaded before the first request and follow publications by any process.
 await services.publishedPages.ensureLoaded();

@@ -40,15 +40,13 @@ async function publicSurfaces(roundupId: number, title: string) {
   const model = await buildPublishedRoundup(dataSource.manager, roundupId, { publishedAt: new Date() });
   // Its results page and open data; the pages over all roundups; addresses that only exist for published boards.
   const own = [model.path, model.openData.csvPath, model.openData.analysisJsonPath];
-  const shared = ['/read', '/read/feed.atom', '/sitemap.xml'];
-  const others = [
-    ...model.products.map((p) => p.path),
-    `/read/compare?product=${model.products[0].productId}`,
-    '/read/photos/1/640.webp',
-  ];
+  // The compare page answers any query; it must not show an unpublished board.
+  const shared = ['/read', '/read/feed.atom', '/sitemap.xml', `/read/compare?product=${model.products[0].productId}`];
+  const others = [...model.products.map((p) => p.path), '/read/photos/1/640.webp'];
   const shows = async (path: string) => {
     const response = await reader().get(path);
-    return { status: response.status, mentions: response.text.includes(title) || response.text.includes(model.path) };
+    const names = [title, model.path, ...model.products.map((p) => p.name)];
+    return { status: response.status, mentions: names.some((name) => response.text.includes(name)) };
   };
   return { model, own, shared, others, shows };
 }

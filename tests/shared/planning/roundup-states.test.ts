@@ -48,8 +48,9 @@ describe('roundup states', () => {
     expect(roundupTransitionProblems(ready, 'writing')[0]).toMatch(/only move forward to On the bench/);
     expect(roundupTransitionProblems(bench, 'planning')[0]).toMatch(/only move forward to Writing/);
     expect(roundupTransitionProblems({ ...ready, state: 'writing' }, 'in-review')).toEqual([]);
+    // Scheduling, going live and updates are made under Publishing, which says where.
     expect(roundupTransitionProblems({ ...ready, state: 'in-review' }, 'scheduled')).toEqual([
-      'Moving to Scheduled is not available yet.',
+      'Schedule it under Publishing: choose the date, time and time zone of the embargo.',
     ]);
   });
 });

@@ -36,6 +36,7 @@ import { PublishedPageCache } from './publishing/published-page-cache';
 import { loadPreviewSecret } from './publishing/preview-links';
 import { readerSiteRenderer } from './publishing/reader-site-renderer';
 import { PublishingService } from './services/publishing.service';
+import { enqueueGoLiveMailing } from './mail/outbox';
 
 /**
  * The one place that builds every service, each once, handing services their collaborators. Routes (through
@@ -99,6 +100,11 @@ export function createServices(dataSource: DataSource, env: Env) {
     renderer: readerSiteRenderer(dataSource, { baseUrl: env.PUBLIC_SITE_URL ?? `http://${env.HOST}:${env.PORT}` }),
     pages: publishedPages,
     previewSecret: () => (previewSecret ??= loadPreviewSecret(dataSource, env.PREVIEW_LINK_SECRET)),
+  });
+  // Going live queues the go-live mail in the publish transaction: the mail is queued if and only if the publish
+  // commits. Updates and corrections are mailed only when an editor chooses to.
+  publishing.onPublication(async (manager, event) => {
+    if (event.kind === 'publication') await enqueueGoLiveMailing(manager, event.roundupId);
   });
   const verdicts = new VerdictsService(dataSource);
   const charts = new ChartsService(dataSource, files);

@@ -5,6 +5,7 @@ import { createApp } from '../../../server/app';
 import { createServices, type Services } from '../../../server/compose-services';
 import { AuditEntryEntity } from '../../../server/entities/audit-entry.entity';
 import { JobEntity } from '../../../server/entities/job.entity';
+import { MailingEntity } from '../../../server/entities/mail.entities';
 import { RoundupPublicationEntity } from '../../../server/entities/roundup-publication.entity';
 import { RoundupEntity } from '../../../server/entities/roundup.entity';
 import { createJobRegistry } from '../../../server/jobs/all';
@@ -112,6 +113,8 @@ describe('embargo publishing', () => {
       .getRepository(AuditEntryEntity)
       .countBy({ subjectType: 'roundup', subjectId: String(roundupId), action: 'roundup.published' });
     expect(published).toBe(1);
+    // The go-live mail is queued in the publish transaction, once, however many runners raced.
+    expect(await dataSource.getRepository(MailingEntity).countBy({ roundupId, kind: 'go-live' })).toBe(1);
   });
 
   it('serves the snapshot with ETag, 304, the accepted compression, caching and content-type', async () => {

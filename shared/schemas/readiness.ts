@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { optionalMultiLineText, multiLineText } from './text';
+import { multiLineText } from './text';
 
 export const readinessBlockerKinds = ['state', 'section', 'chart', 'cell'] as const;
 
@@ -34,4 +34,5 @@ export const excludeCellRequestSchema = z.strictObject({
   reason: multiLineText(1000, 'Write why this cell is left out of the roundup.'),
 });
 
-export const reviewRequestSchema = z.strictObject({ note: optionalMultiLineText(1000) });
+/** Sending to review takes no fields: notes for the editor belong in the write-up's comment threads. */
+export const reviewRequestSchema = z.strictObject({});

@@ -9,7 +9,10 @@ import { startMailRelay } from './lib/mail-relay.mjs';
 import { ensureDebianPackages, SetupError } from './lib/mariadb.mjs';
 import { ensureDatabase, ensureDependencies, runStep } from './lib/setup.mjs';
 
-const only = process.argv.slice(2); // e.g. `npm test -- unit` or `npm test -- e2e`
+// e.g. `npm test -- unit`, `npm test -- e2e`, or `npm test -- e2e e2e/capture.spec.ts` for chosen specs only.
+const args = process.argv.slice(2);
+const specs = args.filter((arg) => arg.endsWith('.spec.ts'));
+const only = args.filter((arg) => !arg.endsWith('.spec.ts'));
 const wants = (step) => only.length === 0 || only.includes(step);
 
 ensureDependencies();
@@ -84,7 +87,7 @@ try {
     const port = await freePort();
     // The e2e server sends through the local relay, which keeps messages in the e2e database (the dev inbox).
     mailRelay = await startMailRelay({ ...process.env, DATABASE_URL: e2eUrl }, { built: true });
-    runStep('playwright', ['test'], {
+    runStep('playwright', ['test', ...specs], {
       ...process.env,
       ...mailRelay?.env,
       DATABASE_URL: e2eUrl,

@@ -119,3 +119,17 @@ test('on a phone the tester reaches the queue moves without scrolling sideways, 
   // No product is named with its maker twice.
   await expect(page.getByText(/\b([A-Z][a-z]+) \1\b/)).toHaveCount(0);
 });
+
+test('at 1366 px the rule beside the navigation runs to the bottom of a long page', async ({ page }) => {
+  await page.setViewportSize(laptop);
+  await signInAs(page, 'editor');
+  await openCatalog(page);
+  const column = page.getByRole('navigation', { name: 'Main' }).locator('..');
+  await expect(column).toHaveCSS('border-right-style', 'solid');
+  // Scrolled to the very end, the column carrying the rule ends where the page's main area ends.
+  await page.evaluate(() => window.scrollTo(0, document.documentElement.scrollHeight));
+  const main = await box(page.locator('main#main'));
+  const rule = await box(column);
+  expect(main.height).toBeGreaterThan(laptop.height);
+  expect(Math.abs(rule.y + rule.height - (main.y + main.height))).toBeLessThanOrEqual(1);
+});

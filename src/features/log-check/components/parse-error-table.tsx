@@ -42,12 +42,8 @@ export function ParseErrorTable({ errors, message, stage, hasPreview }: ParseErr
       {
         id: 'message',
         header: 'What is wrong',
-        filterValue: (error) => `${error.message} ${error.code}`,
-        cell: (error) => (
-          <span className="block min-w-64">
-            {error.message} <span className="font-mono text-xs text-muted">({error.code})</span>
-          </span>
-        ),
+        filterValue: (error) => error.message,
+        cell: (error) => <span className="block min-w-64">{error.message}</span>,
       },
     ],
     [],

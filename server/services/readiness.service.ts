@@ -24,6 +24,7 @@ const roundupLink = (id: number) => `/roundups/${id}`;
 const matrixLink = (id: number) => `/roundups/${id}?tab=matrix`;
 const chartsLink = (id: number, key: string) => `/roundups/${id}/charts#${key}`;
 const readinessLink = (id: number) => `/roundups/${id}/readiness`;
+const verdictLink = (id: number, entryId: number) => `/roundups/${id}/verdicts#verdict-${entryId}`;
 
 /** States that come before review: the roundup must be sent to review before it can be ready to schedule. */
 const beforeReview: readonly RoundupState[] = ['planning', 'on-the-bench', 'writing'];
@@ -31,8 +32,9 @@ const beforeReview: readonly RoundupState[] = ['planning', 'on-the-bench', 'writ
 const exclusionStates: readonly RoundupState[] = ['on-the-bench', 'writing', 'in-review'];
 
 /**
- * "Ready to schedule", computed: every write-up section approved, every chart approved and not stale, every matrix
- * cell accepted with a run of record or left out with a reason — and the roundup in review. Also the editor's cell
+ * "Ready to schedule", computed: every write-up section approved, every chart approved and not stale, every tested
+ * product with the editor's verdict label, every matrix cell accepted with a run of record or left out with a reason —
+ * and the roundup in review. Also the editor's cell
  * exclusions and the move from Writing to In review.
  */
 export class ReadinessService {
@@ -84,6 +86,20 @@ export class ReadinessService {
           kind: 'chart',
           label: `Chart “${state.data.title}” is stale and needs re-approval: ${state.changes.join(' ')}`,
           link: chartsLink(roundupId, state.key),
+        });
+      }
+    }
+
+    // Every tested product carries the editor's verdict label when it is published (our choice: the label is part of
+    // what the reader is promised). A product whose every cell is left out has no results to judge and needs none.
+    for (const { entry, name } of facts.tested) {
+      const ownCells = facts.cells.filter((c) => c.entryId === entry.id);
+      const allLeftOut = ownCells.length > 0 && ownCells.every((c) => facts.exclusions.has(c.id));
+      if (!facts.verdicts.has(entry.id) && !allLeftOut) {
+        blocking.push({
+          kind: 'verdict',
+          label: `${name} has no verdict label yet: choose one on the verdicts page.`,
+          link: verdictLink(roundupId, entry.id),
         });
       }
     }

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { multiLineText } from './text';
 
-export const readinessBlockerKinds = ['state', 'section', 'chart', 'cell'] as const;
+export const readinessBlockerKinds = ['state', 'section', 'chart', 'verdict', 'cell'] as const;
 
 /** One thing that keeps a roundup from being ready to schedule, with the screen where it is fixed. */
 export const readinessBlockerSchema = z.object({

@@ -1,5 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useParams, type LoaderFunctionArgs } from 'react-router';
+import { useEffect } from 'react';
+import { useLocation, useParams, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '../../components/ui/page-header';
 import { paths } from '../../lib/paths';
 import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
@@ -45,6 +46,11 @@ function VerdictsPage() {
   const roundup = useRoundup(roundupId);
   const verdicts = useVerdicts(roundupId);
   const save = useSetVerdict(roundupId);
+  // The readiness list links to a product's verdict (#verdict-<entry>).
+  const { hash } = useLocation();
+  useEffect(() => {
+    if (hash) document.getElementById(hash.slice(1))?.scrollIntoView();
+  }, [hash]);
   if (!user) return null;
   const editable = verdicts.editable && may(user.role, editorialDeciders);
   return (

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { signedIn, testApp } from '../support/test-app';
-import { approveAllCharts, roundupWithResults, signOffWriteUp } from './support/editorial-fixtures';
+import { approveAllCharts, roundupWithResults, setAllVerdicts, signOffWriteUp } from './support/editorial-fixtures';
 
 /** Width and height from a PNG's IHDR chunk (PNG specification, ISO/IEC 15948: bytes 16–23, big-endian). */
 function pngSize(png: Buffer) {
@@ -34,6 +34,10 @@ describe('chart approval and readiness to schedule', () => {
     expect(before.body.blocking.find((b: { kind: string }) => b.kind === 'section').link).toBe(
       `/roundups/${roundupId}/write-up`,
     );
+    // Neither board has its verdict label yet; each is named with a link to its verdict.
+    expect(before.body.blocking.filter((b: { kind: string }) => b.kind === 'verdict')).toEqual(
+      products.map((p) => expect.objectContaining({ link: `/roundups/${roundupId}/verdicts#verdict-${p.entryId}` })),
+    );
     // One configuration chart, two product charts and the price scatter, none approved yet.
     expect(kinds.filter((k: string) => k === 'chart')).toHaveLength(4);
     expect(before.body.blocking.find((b: { kind: string }) => b.kind === 'chart').link).toMatch(
@@ -58,6 +62,7 @@ describe('chart approval and readiness to schedule', () => {
     expect(wrongHash.status).toBe(409);
     expect(wrongHash.body.error.code).toBe('chart_changed');
 
+    await setAllVerdicts(editor.agent, roundupId);
     await approveAllCharts(editor.agent, roundupId);
     await signOffWriteUp(editor.agent, roundupId);
     const sent = await writer.agent.post(`/api/roundups/${roundupId}/review-request`).send({});
@@ -175,6 +180,42 @@ describe('chart approval and readiness to schedule', () => {
     const actions = history.body.entries.map((e: { action: string }) => e.action);
     expect(actions).toContain('matrix.cell_excluded');
     expect(actions).toContain('matrix.cell_included');
+  });
+
+  it('a tested product without a verdict label blocks readiness until the editor sets one; a product left out entirely needs none', async () => {
+    const { editor, tester } = await setUp();
+    const { roundupId, products } = await roundupWithResults(
+      editor.agent,
+      tester,
+      [[[{ peakC: 70 }]], [[{ peakC: 75 }]]],
+      { leaveOpen: true },
+    );
+    const verdictBlockers = async () =>
+      (await editor.agent.get(`/api/roundups/${roundupId}/readiness`)).body.blocking.filter(
+        (b: { kind: string }) => b.kind === 'verdict',
+      ) as { label: string; link: string }[];
+    const before = await verdictBlockers();
+    expect(before.map((b) => b.link)).toEqual(
+      products.map((p) => `/roundups/${roundupId}/verdicts#verdict-${p.entryId}`),
+    );
+    expect(before[0].label).toMatch(/has no verdict label yet: choose one on the verdicts page\.$/);
+
+    const set = await editor.agent.put(`/api/roundups/${roundupId}/verdicts/${products[0].entryId}`).send({
+      label: 'bench-pick',
+      bestFor: 'A quiet stock build',
+      price: { amountMinor: 16000, currency: 'EUR' },
+    });
+    expect(set.status, set.text).toBe(200);
+    expect((await verdictBlockers()).map((b) => b.link)).toEqual([
+      `/roundups/${roundupId}/verdicts#verdict-${products[1].entryId}`,
+    ]);
+
+    // The second board's only cell is left out: it has no results to judge, so no label is asked for.
+    const excluded = await editor.agent
+      .put(`/api/roundups/${roundupId}/cells/${products[1].cellIds[0]}/exclusion`)
+      .send({ reason: 'The sample’s power stage failed during the soak.' });
+    expect(excluded.status, excluded.text).toBe(200);
+    expect(await verdictBlockers()).toEqual([]);
   });
 
   it('only a roundup that is Writing goes to review, and a tester cannot send it', async () => {

@@ -11,6 +11,7 @@ const kindLabels: Record<string, string> = {
   state: 'Roundup',
   section: 'Write-up',
   chart: 'Charts',
+  verdict: 'Verdicts',
   cell: 'Matrix',
 };
 
@@ -93,8 +94,8 @@ export function ReadinessPanel({
     <div className="space-y-5">
       {readiness.ready ? (
         <Alert tone="success" title="Ready to schedule" announce>
-          Every write-up section is signed off, every chart is approved and current, and every matrix cell has an
-          accepted run of record or was left out with a reason.
+          Every write-up section is signed off, every chart is approved and current, every tested product has its
+          verdict label, and every matrix cell has an accepted run of record or was left out with a reason.
         </Alert>
       ) : (
         <section aria-labelledby="blocking-heading" className="rounded-[3px] border border-rule bg-surface">

@@ -101,7 +101,11 @@ export function VerdictCard({
 
   const headingId = `${formId}-heading`;
   return (
-    <section aria-labelledby={headingId} className="rounded-[3px] border border-rule bg-surface">
+    <section
+      id={`verdict-${product.entryId}`}
+      aria-labelledby={headingId}
+      className="scroll-mt-4 rounded-[3px] border border-rule bg-surface"
+    >
       <div className="flex flex-wrap items-baseline justify-between gap-2 border-b border-rule px-4 py-3">
         <h2 id={headingId} className="text-base font-semibold text-ink">
           {product.productName}

@@ -9,6 +9,7 @@ import {
   dayFromToday,
   matrixOf,
   moveToBench,
+  tag,
 } from '../../planning/support/planning-fixtures';
 
 export interface ManualFigures {
@@ -46,10 +47,18 @@ export async function roundupWithResults(
   editor: Client,
   tester: { agent: Client; user: { id: number } },
   figures: ManualFigures[][][],
-  options: { leaveOpen?: boolean } = {},
+  options: {
+    leaveOpen?: boolean;
+    /** Load configurations (and bench profile) to plan with, e.g. an earlier roundup's; default: new ones. */
+    plan?: { benchProfileId: number; loadConfigurationIds: number[] };
+    /** Products of earlier roundups to add as reference entries, before testing starts. */
+    referenceProductIds?: number[];
+  } = {},
 ) {
   const configurations = figures[0].length;
-  const setup = await createRoundup(editor, { configurations });
+  const setup = options.plan
+    ? await roundupOnPlan(editor, options.plan)
+    : await createRoundup(editor, { configurations });
   const products: TestedProduct[] = [];
   for (const [index] of figures.entries()) {
     const productId = await createProduct(editor, setup.platform);
@@ -61,6 +70,12 @@ export async function roundupWithResults(
     });
     const { entry } = await addEntry(editor, setup.roundupId, productId);
     products.push({ entryId: entry.id, productId, runIds: [], cellIds: [] });
+  }
+  for (const productId of options.referenceProductIds ?? []) {
+    const reference = await editor
+      .post(`/api/roundups/${setup.roundupId}/entries`)
+      .send({ productId, kind: 'reference' });
+    expect(reference.status, reference.text).toBe(201);
   }
   await moveToBench(editor, setup.roundupId);
   const assign = await editor
@@ -99,6 +114,22 @@ export async function roundupWithResults(
   return { ...setup, products };
 }
 
+/** A roundup on a given bench profile and load configurations (say, an earlier roundup's), in Planning. */
+async function roundupOnPlan(editor: Client, plan: { benchProfileId: number; loadConfigurationIds: number[] }) {
+  const platform = `Helix-1700 ${tag()}`;
+  const response = await editor.post('/api/roundups').send({
+    title: `Helix-1700 follow-up ${tag()}`,
+    platform,
+    priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE' },
+    targetPublishDate: dayFromToday(60),
+    timeZone: 'Europe/Berlin',
+    benchProfileId: plan.benchProfileId,
+    loadConfigurationIds: plan.loadConfigurationIds,
+  });
+  expect(response.status, response.text).toBe(201);
+  return { roundupId: response.body.id as number, platform, ...plan };
+}
+
 /** Approves every chart that has something to draw, as the editor saw it. */
 export async function approveAllCharts(editor: Client, roundupId: number) {
   const list = await editor.get(`/api/roundups/${roundupId}/charts`);
@@ -122,4 +153,23 @@ export async function signOffWriteUp(agent: Client, roundupId: number) {
   await ds
     .getRepository(WriteUpSectionEntity)
     .update({ roundupId }, { reviewState: 'signed-off', reviewStateChangedAt: new Date() });
+}
+
+/**
+ * Gives every tested product of the roundup a verdict label (with a reason, in case the label goes against the runs),
+ * so that readiness does not wait for verdicts. Set before approving charts: the price at publication feeds the scatter.
+ */
+export async function setAllVerdicts(editor: Client, roundupId: number) {
+  const list = await editor.get(`/api/roundups/${roundupId}/verdicts`);
+  expect(list.status, list.text).toBe(200);
+  for (const product of list.body.products as { entryId: number; verdict: unknown }[]) {
+    if (product.verdict) continue;
+    const set = await editor.put(`/api/roundups/${roundupId}/verdicts/${product.entryId}`).send({
+      label: 'fine-at-stock',
+      bestFor: 'Builds that stay at stock settings',
+      price: { amountMinor: 17000, currency: 'EUR' },
+      reason: 'Judged at stock only for this check.',
+    });
+    expect(set.status, set.text).toBe(200);
+  }
 }

@@ -78,6 +78,61 @@ describe('write-up sections through the API', () => {
     expect(retry.body.version).toBe(3);
   });
 
+  it('a writer renames a section: the title is stored and revisioned like the text, checked, escaped in the preview and named in the readiness list', async () => {
+    const app = await testApp();
+    const { editor, writer, roundupId } = await roundupInWriting(app, { products: 1 });
+    const product = (await overview(writer.agent, roundupId)).sections.find((s) => s.kind === 'product')!;
+    const oldTitle = product.title;
+    const title = 'Cool at stock <script>alert(1)</script> & quiet';
+
+    const renamed = await writer.agent
+      .put(`/api/write-up/sections/${product.id}`)
+      .send({ baseVersion: 1, title: `  ${title}  `, content: paragraph('Runs cool.') });
+    expect(renamed.status, renamed.text).toBe(200);
+    expect(renamed.body).toMatchObject({ version: 2, title });
+    expect((await section(editor.agent, product.id)).title).toBe(title);
+
+    // An empty title or one with control characters is refused with the field named; nothing changes.
+    for (const bad of ['   ', 'Line one\nline two', 'Bell\u0007']) {
+      const refused = await writer.agent
+        .put(`/api/write-up/sections/${product.id}`)
+        .send({ baseVersion: 2, title: bad, content: paragraph('Runs cool.') });
+      expect(refused.status, bad).toBe(400);
+      expect(refused.body.error.fields.title).toBeTruthy();
+    }
+    // A title change alone is a new version, kept in the history with the title it had; restoring brings it back.
+    const retitled = await writer.agent
+      .put(`/api/write-up/sections/${product.id}`)
+      .send({ baseVersion: 2, title: 'Second title', content: paragraph('Runs cool.') });
+    expect(retitled.body.version).toBe(3);
+    const revisions = (await writer.agent.get(`/api/write-up/sections/${product.id}/revisions`)).body.revisions as {
+      id: number;
+      kind: string;
+      title: string;
+    }[];
+    expect(revisions.map((r) => r.title)).toEqual(expect.arrayContaining([oldTitle, 'Second title']));
+    const prefill = revisions.find((r) => r.kind === 'prefill')!;
+    const restored = await writer.agent
+      .post(`/api/write-up/sections/${product.id}/revisions/${prefill.id}/restore`)
+      .send({ baseVersion: 3 });
+    expect(restored.status, restored.text).toBe(200);
+    expect(restored.body.title).toBe(oldTitle);
+    const again = await writer.agent
+      .put(`/api/write-up/sections/${product.id}`)
+      .send({ baseVersion: 4, title, content: paragraph('Runs cool.') });
+    expect(again.status, again.text).toBe(200);
+
+    // The preview shows it as text, never as markup; the write-up's blockers name the section by its new title.
+    const preview = await writer.agent.get(`/api/roundups/${roundupId}/write-up/preview`);
+    expect(preview.status).toBe(200);
+    expect(preview.text).toContain('Cool at stock &lt;script&gt;alert(1)&lt;/script&gt; &amp; quiet</h2>');
+    expect(preview.text).not.toContain('<script>alert(1)');
+    const readiness = await editor.agent.get(`/api/roundups/${roundupId}/readiness`);
+    expect(readiness.body.blocking.map((b: { label: string }) => b.label)).toContain(
+      `Write-up section “${title}” is Drafting, not signed off.`,
+    );
+  });
+
   it('when a revision is restored, then it becomes a new version and the history keeps every step', async () => {
     const app = await testApp();
     const { writer, roundupId } = await roundupInWriting(app, { products: 1 });

@@ -7,9 +7,12 @@ import { Button, buttonStyles } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { PageHeader } from '../../../components/ui/page-header';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { TextArea } from '../../../components/ui/text-area';
+import { TextField } from '../../../components/ui/text-field';
 import { isApiError } from '../../../lib/api-client';
 import { paths } from '../../../lib/paths';
+import { countOf } from '../../../lib/plural';
 import { invalidateAfter } from '../../../lib/stale-after';
 import { useSession } from '../../auth/api/get-session';
 import { may, writeUpWriters } from '../../../../shared/access/roles';
@@ -21,12 +24,20 @@ import {
 import type { WriteUpDocument } from '../../../../shared/schemas/write-up-document';
 import type { SectionSummary } from '../../../../shared/schemas/write-ups';
 import { sectionQueryOptions, useSection } from '../api/get-section';
+import { useCommentThreads } from '../api/comments';
 import { useReviewSection } from '../api/review-section';
 import { CommentsPanel } from './comments-panel';
 import { RevisionsPanel } from './revisions-panel';
 import { SaveStatusLine } from './save-status';
 import { SectionStateBadge } from './section-state-badge';
 import { useAutosave } from './use-autosave';
+
+/** What is wrong with a section title as typed, or undefined when it can be saved (shared/schemas/write-ups.ts). */
+function titleProblem(value: string): string | undefined {
+  if (value.trim() === '') return 'Give the section a title; the text keeps saving meanwhile.';
+  if (value.trim().length > 200) return 'Keep the title to 200 characters.';
+  return undefined;
+}
 
 // The editor (and the editor library) loads with this screen only.
 const SectionEditor = lazy(() => import('./section-editor'));
@@ -43,6 +54,11 @@ export function SectionPage({ roundupId, sectionId }: { roundupId: number; secti
   const [reviewError, setReviewError] = useState<string | null>(null);
   const [handBackOpen, setHandBackOpen] = useState(false);
   const [note, setNote] = useState('');
+  const [title, setTitle] = useState(section.title);
+  const titleRef = useRef(section.title);
+  const titleError = titleProblem(title);
+  const threads = useCommentThreads(sectionId);
+  const [signOffWarning, setSignOffWarning] = useState<number | null>(null);
 
   const onSaved = useCallback(
     (saved: SectionSummary) => {
@@ -55,6 +71,7 @@ export function SectionPage({ roundupId, sectionId }: { roundupId: number; secti
     sectionId,
     initialVersion: section.version,
     getContent: () => (editorRef.current?.getJSON() as WriteUpDocument | undefined) ?? content,
+    getTitle: () => (titleProblem(titleRef.current) ? undefined : titleRef.current.trim()),
     onSaved,
   });
 
@@ -62,6 +79,8 @@ export function SectionPage({ roundupId, sectionId }: { roundupId: number; secti
     const fresh = await queryClient.fetchQuery({ ...sectionQueryOptions(sectionId), staleTime: 0 });
     setSummary(fresh);
     setContent(fresh.content);
+    setTitle(fresh.title);
+    titleRef.current = fresh.title;
     autosave.reset(fresh.version);
     setEditorKey((key) => key + 1);
   };
@@ -74,10 +93,18 @@ export function SectionPage({ roundupId, sectionId }: { roundupId: number; secti
       const moved = await review.mutateAsync({ sectionId, move, note: moveNote });
       setSummary(moved);
       setHandBackOpen(false);
+      setSignOffWarning(null);
       setNote('');
     } catch (caught) {
       setReviewError(isApiError(caught) ? caught.message : 'The review step failed.');
     }
+  };
+
+  /** Signing off with open comment threads asks first: they still keep the roundup from being ready. */
+  const askToSignOff = () => {
+    const open = threads.data?.filter((thread) => thread.resolvedAt === null).length ?? summary.openThreadCount;
+    if (open > 0) setSignOffWarning(open);
+    else void runMove('sign-off');
   };
 
   if (!user) return null;
@@ -94,7 +121,7 @@ export function SectionPage({ roundupId, sectionId }: { roundupId: number; secti
       </p>
       <PageHeader
         eyebrow={section.kind === 'product' ? 'Write-up · product section' : 'Write-up'}
-        title={section.title}
+        title={summary.title}
         description={
           <span className="inline-flex flex-wrap items-center gap-2">
             <SectionStateBadge state={summary.reviewState} />
@@ -113,7 +140,7 @@ export function SectionPage({ roundupId, sectionId }: { roundupId: number; secti
                   key={move}
                   variant={move === 'sign-off' ? 'primary' : 'secondary'}
                   pending={review.isPending && review.variables?.move === move}
-                  onClick={() => void runMove(move)}
+                  onClick={() => (move === 'sign-off' ? askToSignOff() : void runMove(move))}
                 >
                   {sectionReviewMoveLabels[move]}
                 </Button>
@@ -142,6 +169,21 @@ export function SectionPage({ roundupId, sectionId }: { roundupId: number; secti
       )}
       <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="min-w-0">
+          {canWrite && (
+            <TextField
+              label="Section title"
+              description="Shown as the section’s heading on the page; saved with the text."
+              className="mb-3 max-w-[72ch]"
+              value={title}
+              maxLength={200}
+              error={titleError}
+              onChange={(event) => {
+                setTitle(event.target.value);
+                titleRef.current = event.target.value;
+                autosave.markChanged();
+              }}
+            />
+          )}
           <Suspense fallback={<LoadingState label="Opening the editor…" />}>
             <SectionEditor
               key={editorKey}
@@ -181,8 +223,10 @@ export function SectionPage({ roundupId, sectionId }: { roundupId: number; secti
                 onClick={() => {
                   const theirs = autosave.conflict!.current;
                   editorRef.current?.commands.setContent(theirs.content, { emitUpdate: false });
+                  setTitle(theirs.title);
+                  titleRef.current = theirs.title;
                   autosave.acceptTheirs(theirs);
-                  setSummary((current) => ({ ...current, version: theirs.version }));
+                  setSummary((current) => ({ ...current, version: theirs.version, title: theirs.title }));
                 }}
               >
                 Reload theirs
@@ -212,6 +256,24 @@ export function SectionPage({ roundupId, sectionId }: { roundupId: number; secti
           </div>
         )}
       </Dialog>
+
+      <ConfirmDialog
+        open={signOffWarning !== null}
+        title={`Sign off with ${countOf(signOffWarning ?? 0, 'open comment thread', 'open comment threads')}?`}
+        confirmLabel="Sign off anyway"
+        cancelLabel="Go back to the comments"
+        tone="primary"
+        pending={review.isPending}
+        error={reviewError ?? undefined}
+        onCancel={() => setSignOffWarning(null)}
+        onConfirm={() => void runMove('sign-off')}
+      >
+        <p>
+          This section still has {countOf(signOffWarning ?? 0, 'open comment thread', 'open comment threads')}. Signing
+          off does not resolve {signOffWarning === 1 ? 'it' : 'them'}: the roundup cannot be ready to schedule while a
+          thread is open.
+        </p>
+      </ConfirmDialog>
 
       <Dialog
         open={handBackOpen}

@@ -22,9 +22,11 @@ export function useAutosave(options: {
   sectionId: number;
   initialVersion: number;
   getContent: () => WriteUpDocument;
+  /** The section title to save with the text; undefined while the title field is not valid (the text still saves). */
+  getTitle: () => string | undefined;
   onSaved: (summary: SectionSummary) => void;
 }) {
-  const { sectionId, getContent, onSaved } = options;
+  const { sectionId, getContent, getTitle, onSaved } = options;
   const [status, setStatus] = useState<SaveStatus>('saved');
   const [error, setError] = useState<string | null>(null);
   const [conflict, setConflict] = useState<StaleVersionDetails | null>(null);
@@ -33,9 +35,9 @@ export function useAutosave(options: {
   const saving = useRef(false);
   const inConflict = useRef(false);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
-  const latest = useRef({ getContent, onSaved });
+  const latest = useRef({ getContent, getTitle, onSaved });
   useLayoutEffect(() => {
-    latest.current = { getContent, onSaved };
+    latest.current = { getContent, getTitle, onSaved };
   });
   const flushLater = useRef<() => void>(() => undefined);
 
@@ -49,6 +51,7 @@ export function useAutosave(options: {
     try {
       const summary = await saveSection(sectionId, {
         baseVersion: version.current,
+        title: latest.current.getTitle(),
         content: latest.current.getContent(),
       });
       version.current = summary.version;

@@ -182,7 +182,7 @@ function Toolbar({ editor }: { editor: Editor }) {
               onChange={(event) => setHref(event.target.value)}
               aria-invalid={linkError ? true : undefined}
               aria-describedby={linkError ? 'write-up-link-error' : undefined}
-              className="min-h-9 rounded-[3px] border border-edge bg-surface px-2"
+              className="min-h-9 rounded-[3px] border border-edge bg-surface px-2 text-ink placeholder:text-muted"
               placeholder="https://"
             />
             {linkError && (
@@ -356,6 +356,8 @@ export default function SectionEditor({
     content: initialContent,
     editable,
     immediatelyRender: true,
+    // The strict Content-Security-Policy refuses inline style tags: the editor's rules ship in write-up-editor.css.
+    injectCSS: false,
     editorProps: {
       attributes: {
         'aria-label': label,

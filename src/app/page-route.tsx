@@ -1,25 +1,57 @@
 import type { QueryClient } from '@tanstack/react-query';
-import type { ComponentType } from 'react';
-import type { LoaderFunctionArgs } from 'react-router';
+import { Suspense, type ComponentType } from 'react';
+import { useLoaderData, type LoaderFunctionArgs } from 'react-router';
 import { sessionQueryOptions, useSession } from '../features/auth/api/get-session';
+import { roundupQueryOptions } from '../features/roundups/api/get-roundup';
+import { addressId } from '../lib/address-id';
+import { paths } from '../lib/paths';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type { Role } from '../../shared/schemas/common';
 import { canOpen } from './navigation';
 import { RoleGate } from './role-gate';
+import { LoadingState } from '../components/ui/loading-state';
 
-/** Warms what a page reads, for a user who may open it. */
-export type WarmPage = (queryClient: QueryClient, args: LoaderFunctionArgs, user: CurrentUser) => Promise<unknown>;
+/** Warms what a page reads, for a user who may open it; `openedAt` is when the page was opened. */
+export type WarmPage = (
+  queryClient: QueryClient,
+  args: LoaderFunctionArgs,
+  user: CurrentUser,
+  openedAt: number,
+) => Promise<unknown>;
 
 /**
  * A page's loader: it warms the session and then, only for a role that may open `path`, what the page reads — other
- * roles get an explanation, not a request the server would refuse. Returns null (the page reads the query cache).
+ * roles get an explanation, not a request the server would refuse. The page reads the query cache, and the moment it
+ * was opened through useOpenedAt.
  */
 export function pageLoader(path: string, warm?: WarmPage) {
   return (queryClient: QueryClient) => async (args: LoaderFunctionArgs) => {
+    const openedAt = Date.now();
     const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (warm && user && canOpen(path, user.role)) await warm(queryClient, args, user);
-    return null;
+    if (warm && user && canOpen(path, user.role)) await warm(queryClient, args, user, openedAt);
+    return { openedAt };
   };
+}
+
+/** When the page was opened: "this week" and "today" on a page count from it, as its loader did. */
+export function useOpenedAt(): number {
+  return (useLoaderData() as { openedAt: number }).openedAt;
+}
+
+/**
+ * The loader of a page within one roundup (`roundups/:id/…`): for a role that may open Roundups it warms the roundup
+ * and what `warm` lists besides (an id that is not a number is "not found").
+ */
+export function roundupPageLoader(
+  warm?: (queryClient: QueryClient, roundupId: number, args: LoaderFunctionArgs, user: CurrentUser) => unknown[],
+) {
+  return pageLoader(paths.roundups, (queryClient, args, user) => {
+    const roundupId = addressId(args.params.id);
+    return Promise.all([
+      queryClient.ensureQueryData(roundupQueryOptions(roundupId)),
+      ...(warm?.(queryClient, roundupId, args, user) ?? []),
+    ]);
+  });
 }
 
 export interface PageAccess {
@@ -28,6 +60,8 @@ export interface PageAccess {
   pageName: string;
   /** A narrower rule than the place's (a New product page within the Catalog). */
   rule?: readonly Role[];
+  /** What the page says while a part it reads is still loading; without it, the frame's loading state shows. */
+  loading?: string;
 }
 
 /** A page for the roles that may open it; it receives the signed-in user, everyone else an explanation. */
@@ -36,7 +70,14 @@ export function gatedPage(access: PageAccess, Page: ComponentType<{ user: Curren
     const user = useSession();
     return (
       <RoleGate path={access.path} pageName={access.pageName} rule={access.rule}>
-        {user && <Page user={user} />}
+        {user &&
+          (access.loading ? (
+            <Suspense fallback={<LoadingState label={access.loading} />}>
+              <Page user={user} />
+            </Suspense>
+          ) : (
+            <Page user={user} />
+          ))}
       </RoleGate>
     );
   };

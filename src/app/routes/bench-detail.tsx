@@ -1,40 +1,23 @@
-import type { QueryClient } from '@tanstack/react-query';
-import { Link, useLoaderData, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useParams } from 'react-router';
 import { PageHeader } from '../../components/ui/page-header';
+import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { BenchCautions } from '../../features/bench-booking/components/bench-cautions';
 import { benchDetailQueryOptions, useBenchDetail } from '../../features/benches/api/bench-detail';
 import { BenchDetailView } from '../../features/benches/components/bench-detail-view';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
 import { benchWorkers, may, planEditors } from '../../../shared/access/roles';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+import { gatedPage, pageLoader, useOpenedAt } from '../page-route';
 
-export function loader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    const id = Number(params.benchId);
-    if (user && canOpen(paths.benches, user.role) && Number.isInteger(id) && id > 0) {
-      await queryClient.ensureQueryData(benchDetailQueryOptions(id));
-    }
-    return { today: new Date().toISOString().slice(0, 10) };
-  };
-}
+export const loader = pageLoader(paths.benches, (queryClient, { params }) =>
+  queryClient.ensureQueryData(benchDetailQueryOptions(addressId(params.benchId))),
+);
 
-export function Component() {
-  return (
-    <RoleGate path={paths.benches} pageName="Bench">
-      <BenchPage />
-    </RoleGate>
-  );
-}
+export const Component = gatedPage({ path: paths.benches, pageName: 'Bench' }, BenchPage);
 
-function BenchPage() {
-  const user = useSession();
-  const { benchId } = useParams();
-  const { today } = useLoaderData() as { today: string };
-  const detail = useBenchDetail(Number(benchId));
-  if (!user) return null;
+function BenchPage({ user }: { user: CurrentUser }) {
+  const detail = useBenchDetail(addressId(useParams().benchId));
+  const today = new Date(useOpenedAt()).toISOString().slice(0, 10);
   return (
     <>
       <PageHeader

@@ -1,7 +1,5 @@
-import type { QueryClient } from '@tanstack/react-query';
-import { useLoaderData, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { useSearchParams } from 'react-router';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { bookingsQueryOptions, useBookings } from '../../features/bench-booking/api/get-bookings';
 import { BenchCautions } from '../../features/bench-booking/components/bench-cautions';
 import { BookingCalendar } from '../../features/bench-booking/components/booking-calendar';
@@ -11,42 +9,27 @@ import { BenchesOverview } from '../../features/benches/components/benches-overv
 import { myBenchQueryOptions, useMyBench } from '../../features/my-bench/api/get-my-bench';
 import { benchProfilesQueryOptions, useBenchProfiles } from '../../features/roundups/api/get-bench-profiles';
 import { bookableStates } from '../../../shared/domain/planning/matrix-cell-states';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
 import type { Role } from '../../../shared/schemas/common';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+import { gatedPage, pageLoader, useOpenedAt } from '../page-route';
 import { bookers, may, planEditors } from '../../../shared/access/roles';
 
 const canManageBenches = (role: Role) => may(role, planEditors);
 const canBook = (role: Role) => may(role, bookers);
 
-export function loader(queryClient: QueryClient) {
-  return async ({ request }: LoaderFunctionArgs) => {
-    const openedAt = Date.now();
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (user && canOpen(paths.benches, user.role)) {
-      const { from, to } = weekFromParams(new URL(request.url).searchParams, openedAt);
-      await Promise.all([
-        queryClient.ensureQueryData(benchesQueryOptions()),
-        queryClient.ensureQueryData(bookingsQueryOptions({ from, to })),
-        canBook(user.role) ? queryClient.ensureQueryData(myBenchQueryOptions()) : null,
-        canManageBenches(user.role) ? queryClient.ensureQueryData(benchProfilesQueryOptions()) : null,
-      ]);
-    }
-    return { openedAt };
-  };
-}
+export const loader = pageLoader(paths.benches, (queryClient, { request }, user, openedAt) => {
+  const { from, to } = weekFromParams(new URL(request.url).searchParams, openedAt);
+  return Promise.all([
+    queryClient.ensureQueryData(benchesQueryOptions()),
+    queryClient.ensureQueryData(bookingsQueryOptions({ from, to })),
+    canBook(user.role) ? queryClient.ensureQueryData(myBenchQueryOptions()) : null,
+    canManageBenches(user.role) ? queryClient.ensureQueryData(benchProfilesQueryOptions()) : null,
+  ]);
+});
 
-export function Component() {
-  return (
-    <RoleGate path={paths.benches} pageName="Benches">
-      <BenchesPage />
-    </RoleGate>
-  );
-}
+export const Component = gatedPage({ path: paths.benches, pageName: 'Benches' }, BenchesPage);
 
-function BenchesPage() {
-  const user = useSession();
-  if (!user) return null;
+function BenchesPage({ user }: { user: CurrentUser }) {
   if (canBook(user.role)) return <TesterBenches userId={user.id} />;
   if (canManageBenches(user.role)) return <EditorBenches userId={user.id} />;
   return <Benches userId={user.id} canManage={false} profiles={[]} bookableCells={null} />;
@@ -74,7 +57,7 @@ function Benches({
   profiles: readonly { id: number; name: string }[];
   bookableCells: Parameters<typeof BookingCalendar>[0]['bookableCells'];
 }) {
-  const { openedAt } = useLoaderData() as { openedAt: number };
+  const openedAt = useOpenedAt();
   const [params] = useSearchParams();
   const { from, to } = weekFromParams(params, openedAt);
   const benches = useBenches();

@@ -1,28 +1,21 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { PageHeader } from '../../components/ui/page-header';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions } from '../../features/auth/api/get-session';
 import { devInboxQueryOptions } from '../../features/mail/api/get-dev-inbox';
 import { DevInbox } from '../../features/mail/components/dev-inbox';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
+import { gatedPage, pageLoader } from '../page-route';
 
-export function loader(queryClient: QueryClient) {
-  return async () => {
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (user && canOpen(paths.devInbox, user.role)) await queryClient.ensureQueryData(devInboxQueryOptions());
-    return null;
-  };
-}
+export const loader = pageLoader(paths.devInbox, (queryClient) => queryClient.ensureQueryData(devInboxQueryOptions()));
 
-export function Component() {
+export const Component = gatedPage({ path: paths.devInbox, pageName: 'Dev inbox' }, DevInboxPage);
+
+function DevInboxPage() {
   return (
-    <RoleGate path={paths.devInbox} pageName="Dev inbox">
+    <>
       <PageHeader
         title="Dev inbox"
         description="What the local mail relay received. Nothing here reaches a real mailbox."
       />
       <DevInbox />
-    </RoleGate>
+    </>
   );
 }

@@ -1,47 +1,22 @@
 import { useEffect } from 'react';
-import type { QueryClient } from '@tanstack/react-query';
-import { useLocation, useParams, type LoaderFunctionArgs } from 'react-router';
+import { useLocation, useParams } from 'react-router';
 import { PageHeader } from '../../components/ui/page-header';
+import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
-import { roundupQueryOptions, useRoundup } from '../../features/roundups/api/get-roundup';
+import { useRoundup } from '../../features/roundups/api/get-roundup';
 import { chartsQueryOptions, useApproveChart, useCharts, useChartSettings } from '../../features/editorial/api/charts';
 import { ChartCard } from '../../features/editorial/components/chart-card';
 import { EditorialNav } from '../../features/editorial/components/editorial-nav';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
 import { editorialDeciders, may } from '../../../shared/access/roles';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+import { gatedPage, roundupPageLoader } from '../page-route';
 
-function roundupIdFrom(value: string | undefined): number {
-  const id = Number(value);
-  if (!Number.isInteger(id) || id <= 0) throw new Response('Not found', { status: 404 });
-  return id;
-}
+export const loader = roundupPageLoader((queryClient, id) => [queryClient.ensureQueryData(chartsQueryOptions(id))]);
 
-export function loader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    const id = roundupIdFrom(params.id);
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (!user || !canOpen(paths.roundups, user.role)) return null;
-    await Promise.all([
-      queryClient.ensureQueryData(roundupQueryOptions(id)),
-      queryClient.ensureQueryData(chartsQueryOptions(id)),
-    ]);
-    return null;
-  };
-}
+export const Component = gatedPage({ path: paths.roundups, pageName: 'Charts' }, ChartsPage);
 
-export function Component() {
-  return (
-    <RoleGate path={paths.roundups} pageName="Charts">
-      <ChartsPage />
-    </RoleGate>
-  );
-}
-
-function ChartsPage() {
-  const roundupId = roundupIdFrom(useParams().id);
-  const user = useSession();
+function ChartsPage({ user }: { user: CurrentUser }) {
+  const roundupId = addressId(useParams().id);
   const roundup = useRoundup(roundupId);
   const charts = useCharts(roundupId);
   const approve = useApproveChart(roundupId);
@@ -50,7 +25,6 @@ function ChartsPage() {
   useEffect(() => {
     if (hash) document.getElementById(hash.slice(1))?.scrollIntoView();
   }, [hash]);
-  if (!user) return null;
   const canDecide = charts.editable && may(user.role, editorialDeciders);
   const open = charts.charts.filter((c) => c.status === 'not-approved' || c.status === 'stale').length;
   return (

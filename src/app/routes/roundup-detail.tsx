@@ -1,14 +1,13 @@
 import { Suspense } from 'react';
-import type { QueryClient } from '@tanstack/react-query';
-import { Link, useLocation, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useLocation, useParams, useSearchParams } from 'react-router';
 import { Alert } from '../../components/ui/alert';
 import { buttonStyles } from '../../components/ui/button';
 import { LoadingState } from '../../components/ui/loading-state';
+import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
+import { useRoundup } from '../../features/roundups/api/get-roundup';
 import { benchProfilesQueryOptions } from '../../features/roundups/api/get-bench-profiles';
 import { loadConfigurationsQueryOptions } from '../../features/roundups/api/get-load-configurations';
-import { roundupQueryOptions, useRoundup } from '../../features/roundups/api/get-roundup';
 import { DetailTabs } from '../../features/roundups/components/detail-tabs';
 import { ProductsPanel } from '../../features/roundups/components/products-panel';
 import { RoundupHeader } from '../../features/roundups/components/roundup-header';
@@ -20,54 +19,29 @@ import { MatrixGrid } from '../../features/matrix/components/matrix-grid';
 import { ResultsMatrix } from '../../features/test-runs/components/results-matrix';
 import { productName } from '../../lib/product-name';
 import { SamplesTable } from '../../features/samples/components/samples-table';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
 import { benchWorkers, may, planEditors } from '../../../shared/access/roles';
 import { writeUpReadableStates } from '../../../shared/domain/editorial/write-up-availability';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+import { gatedPage, roundupPageLoader } from '../page-route';
 
-function roundupIdFrom(value: string | undefined): number {
-  const id = Number(value);
-  if (!Number.isInteger(id) || id <= 0) throw new Response('Not found', { status: 404 });
-  return id;
-}
+export const loader = roundupPageLoader((queryClient, id, _args, user) => {
+  if (may(user.role, planEditors)) {
+    // Warm, not awaited: only the test-plan editor needs them.
+    void queryClient.prefetchQuery(benchProfilesQueryOptions());
+    void queryClient.prefetchQuery(loadConfigurationsQueryOptions());
+  }
+  return [queryClient.ensureQueryData(matrixQueryOptions(id))];
+});
 
-export function loader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    const id = roundupIdFrom(params.id);
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (!user || !canOpen(paths.roundups, user.role)) return null;
-    const wanted: Promise<unknown>[] = [
-      queryClient.ensureQueryData(roundupQueryOptions(id)),
-      queryClient.ensureQueryData(matrixQueryOptions(id)),
-    ];
-    if (may(user.role, planEditors)) {
-      // Warm, not awaited: only the test-plan editor needs them.
-      void queryClient.prefetchQuery(benchProfilesQueryOptions());
-      void queryClient.prefetchQuery(loadConfigurationsQueryOptions());
-    }
-    await Promise.all(wanted);
-    return null;
-  };
-}
-
-export function Component() {
-  return (
-    <RoleGate path={paths.roundups} pageName="Roundup">
-      <RoundupPage />
-    </RoleGate>
-  );
-}
+export const Component = gatedPage({ path: paths.roundups, pageName: 'Roundup' }, RoundupPage);
 
 const tabIds = ['products', 'matrix', 'results', 'samples', 'plan', 'publishing'] as const;
 
-function RoundupPage() {
-  const params = useParams();
-  const roundupId = roundupIdFrom(params.id);
-  const user = useSession();
+function RoundupPage({ user }: { user: CurrentUser }) {
+  const roundupId = addressId(useParams().id);
   const roundup = useRoundup(roundupId);
   const location = useLocation();
   const [search, setSearch] = useSearchParams();
-  if (!user) return null;
 
   const requested = search.get('tab');
   const tab = tabIds.find((id) => id === requested) ?? 'products';

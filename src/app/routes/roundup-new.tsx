@@ -1,34 +1,29 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate } from 'react-router';
-import { ForbiddenState } from '../../components/ui/forbidden-state';
 import { PageHeader } from '../../components/ui/page-header';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
 import { benchProfilesQueryOptions } from '../../features/roundups/api/get-bench-profiles';
 import { loadConfigurationsQueryOptions } from '../../features/roundups/api/get-load-configurations';
 import { CreateRoundupForm } from '../../features/roundups/components/create-roundup-form';
-import { roleLabels } from '../../../shared/schemas/common';
 import { may, planEditors } from '../../../shared/access/roles';
+import { gatedPage, pageLoader } from '../page-route';
 
-export function loader(queryClient: QueryClient) {
-  return async () => {
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (user && may(user.role, planEditors)) {
-      await Promise.all([
+export const loader = pageLoader(paths.roundups, (queryClient, _args, user) =>
+  may(user.role, planEditors)
+    ? Promise.all([
         queryClient.ensureQueryData(benchProfilesQueryOptions()),
         queryClient.ensureQueryData(loadConfigurationsQueryOptions()),
-      ]);
-    }
-    return null;
-  };
-}
+      ])
+    : Promise.resolve(),
+);
 
-export function Component() {
-  const user = useSession();
+// Planning a roundup is an editor's job; the server refuses everyone else too.
+export const Component = gatedPage(
+  { path: paths.roundups, pageName: 'New roundup', rule: planEditors },
+  NewRoundupPage,
+);
+
+function NewRoundupPage() {
   const navigate = useNavigate();
-  if (!user) return null;
-  // Planning a roundup is an editor's job; the server refuses everyone else too.
-  if (!may(user.role, planEditors)) return <ForbiddenState pageName="New roundup" roleLabel={roleLabels[user.role]} />;
   return (
     <>
       <PageHeader

@@ -1,13 +1,12 @@
 import { useState } from 'react';
-import type { QueryClient } from '@tanstack/react-query';
-import { useParams, type LoaderFunctionArgs } from 'react-router';
+import { useParams } from 'react-router';
 import { Alert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page-header';
 import { describeSubmitError } from '../../lib/form-errors';
+import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
-import { roundupQueryOptions, useRoundup } from '../../features/roundups/api/get-roundup';
+import { useRoundup } from '../../features/roundups/api/get-roundup';
 import {
   readinessQueryOptions,
   useCellExclusion,
@@ -16,47 +15,22 @@ import {
 } from '../../features/editorial/api/readiness';
 import { EditorialNav } from '../../features/editorial/components/editorial-nav';
 import { ReadinessPanel } from '../../features/editorial/components/readiness-panel';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
 import { editorialDeciders, may } from '../../../shared/access/roles';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+import { gatedPage, roundupPageLoader } from '../page-route';
 import { roundupStateLabels } from '../../../shared/domain/planning/roundup-states';
 
-function roundupIdFrom(value: string | undefined): number {
-  const id = Number(value);
-  if (!Number.isInteger(id) || id <= 0) throw new Response('Not found', { status: 404 });
-  return id;
-}
+export const loader = roundupPageLoader((queryClient, id) => [queryClient.ensureQueryData(readinessQueryOptions(id))]);
 
-export function loader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    const id = roundupIdFrom(params.id);
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (!user || !canOpen(paths.roundups, user.role)) return null;
-    await Promise.all([
-      queryClient.ensureQueryData(roundupQueryOptions(id)),
-      queryClient.ensureQueryData(readinessQueryOptions(id)),
-    ]);
-    return null;
-  };
-}
+export const Component = gatedPage({ path: paths.roundups, pageName: 'Ready to schedule?' }, ReadinessPage);
 
-export function Component() {
-  return (
-    <RoleGate path={paths.roundups} pageName="Ready to schedule?">
-      <ReadinessPage />
-    </RoleGate>
-  );
-}
-
-function ReadinessPage() {
-  const roundupId = roundupIdFrom(useParams().id);
-  const user = useSession();
+function ReadinessPage({ user }: { user: CurrentUser }) {
+  const roundupId = addressId(useParams().id);
   const roundup = useRoundup(roundupId);
   const readiness = useReadiness(roundupId);
   const review = useRequestReview(roundupId);
   const exclusion = useCellExclusion(roundupId);
   const [reviewError, setReviewError] = useState<string>();
-  if (!user) return null;
   return (
     <>
       <PageHeader

@@ -1,48 +1,23 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
-import { useLocation, useParams, type LoaderFunctionArgs } from 'react-router';
+import { useLocation, useParams } from 'react-router';
 import { PageHeader } from '../../components/ui/page-header';
+import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions, useSession } from '../../features/auth/api/get-session';
-import { roundupQueryOptions, useRoundup } from '../../features/roundups/api/get-roundup';
+import { useRoundup } from '../../features/roundups/api/get-roundup';
 import { useSetVerdict, useVerdicts, verdictsQueryOptions } from '../../features/editorial/api/verdicts';
 import { EditorialNav } from '../../features/editorial/components/editorial-nav';
 import { VerdictCard } from '../../features/editorial/components/verdict-card';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
 import { editorialDeciders, may } from '../../../shared/access/roles';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+import { gatedPage, roundupPageLoader } from '../page-route';
 import { EmptyState } from '../../components/ui/empty-state';
 
-function roundupIdFrom(value: string | undefined): number {
-  const id = Number(value);
-  if (!Number.isInteger(id) || id <= 0) throw new Response('Not found', { status: 404 });
-  return id;
-}
+export const loader = roundupPageLoader((queryClient, id) => [queryClient.ensureQueryData(verdictsQueryOptions(id))]);
 
-export function loader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    const id = roundupIdFrom(params.id);
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (!user || !canOpen(paths.roundups, user.role)) return null;
-    await Promise.all([
-      queryClient.ensureQueryData(roundupQueryOptions(id)),
-      queryClient.ensureQueryData(verdictsQueryOptions(id)),
-    ]);
-    return null;
-  };
-}
+export const Component = gatedPage({ path: paths.roundups, pageName: 'Verdicts' }, VerdictsPage);
 
-export function Component() {
-  return (
-    <RoleGate path={paths.roundups} pageName="Verdicts">
-      <VerdictsPage />
-    </RoleGate>
-  );
-}
-
-function VerdictsPage() {
-  const roundupId = roundupIdFrom(useParams().id);
-  const user = useSession();
+function VerdictsPage({ user }: { user: CurrentUser }) {
+  const roundupId = addressId(useParams().id);
   const roundup = useRoundup(roundupId);
   const verdicts = useVerdicts(roundupId);
   const save = useSetVerdict(roundupId);
@@ -51,7 +26,6 @@ function VerdictsPage() {
   useEffect(() => {
     if (hash) document.getElementById(hash.slice(1))?.scrollIntoView();
   }, [hash]);
-  if (!user) return null;
   const editable = verdicts.editable && may(user.role, editorialDeciders);
   return (
     <>

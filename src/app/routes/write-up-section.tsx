@@ -1,36 +1,20 @@
-import type { QueryClient } from '@tanstack/react-query';
-import { useParams, type LoaderFunctionArgs } from 'react-router';
+import { useParams } from 'react-router';
+import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions } from '../../features/auth/api/get-session';
 import { sectionQueryOptions } from '../../features/write-up/api/get-section';
 import { SectionPage } from '../../features/write-up/components/section-page';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
+import { gatedPage, pageLoader } from '../page-route';
 
-function idFrom(value: string | undefined): number {
-  const id = Number(value);
-  if (!Number.isInteger(id) || id <= 0) throw new Response('Not found', { status: 404 });
-  return id;
-}
+export const loader = pageLoader(paths.roundups, (queryClient, { params }) => {
+  addressId(params.id);
+  return queryClient.ensureQueryData(sectionQueryOptions(addressId(params.sectionId)));
+});
 
-export function loader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    idFrom(params.id);
-    const sectionId = idFrom(params.sectionId);
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (!user || !canOpen(paths.roundups, user.role)) return null;
-    await queryClient.ensureQueryData(sectionQueryOptions(sectionId));
-    return null;
-  };
-}
+export const Component = gatedPage({ path: paths.roundups, pageName: 'Write-up section' }, WriteUpSectionPage);
 
-export function Component() {
+function WriteUpSectionPage() {
   const params = useParams();
-  const sectionId = idFrom(params.sectionId);
-  return (
-    <RoleGate path={paths.roundups} pageName="Write-up section">
-      {/* A new section starts a new editor: nothing from the last one carries over. */}
-      <SectionPage key={sectionId} roundupId={idFrom(params.id)} sectionId={sectionId} />
-    </RoleGate>
-  );
+  const sectionId = addressId(params.sectionId);
+  // A new section starts a new editor: nothing from the last one carries over.
+  return <SectionPage key={sectionId} roundupId={addressId(params.id)} sectionId={sectionId} />;
 }

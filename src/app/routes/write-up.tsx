@@ -1,33 +1,16 @@
-import type { QueryClient } from '@tanstack/react-query';
-import { useParams, type LoaderFunctionArgs } from 'react-router';
+import { useParams } from 'react-router';
+import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
-import { sessionQueryOptions } from '../../features/auth/api/get-session';
 import { writeUpQueryOptions } from '../../features/write-up/api/get-write-up';
 import { WriteUpOverview } from '../../features/write-up/components/write-up-overview';
-import { canOpen } from '../navigation';
-import { RoleGate } from '../role-gate';
+import { gatedPage, pageLoader } from '../page-route';
 
-function idFrom(value: string | undefined): number {
-  const id = Number(value);
-  if (!Number.isInteger(id) || id <= 0) throw new Response('Not found', { status: 404 });
-  return id;
-}
+export const loader = pageLoader(paths.roundups, (queryClient, { params }) =>
+  queryClient.ensureQueryData(writeUpQueryOptions(addressId(params.id))),
+);
 
-export function loader(queryClient: QueryClient) {
-  return async ({ params }: LoaderFunctionArgs) => {
-    const id = idFrom(params.id);
-    const user = await queryClient.ensureQueryData(sessionQueryOptions());
-    if (!user || !canOpen(paths.roundups, user.role)) return null;
-    await queryClient.ensureQueryData(writeUpQueryOptions(id));
-    return null;
-  };
-}
+export const Component = gatedPage({ path: paths.roundups, pageName: 'Write-up' }, WriteUpPage);
 
-export function Component() {
-  const params = useParams();
-  return (
-    <RoleGate path={paths.roundups} pageName="Write-up">
-      <WriteUpOverview roundupId={idFrom(params.id)} />
-    </RoleGate>
-  );
+function WriteUpPage() {
+  return <WriteUpOverview roundupId={addressId(useParams().id)} />;
 }

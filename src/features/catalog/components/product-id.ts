@@ -1,6 +1,4 @@
+import { addressId } from '../../../lib/address-id';
+
 /** The product id from the address; anything that is not a positive whole number is "not found". */
-export function productIdFrom(value: string | undefined): number {
-  const id = Number(value);
-  if (!Number.isSafeInteger(id) || id <= 0) throw new Response('That product was not found.', { status: 404 });
-  return id;
-}
+export const productIdFrom = (value: string | undefined) => addressId(value, 'That product was not found.');

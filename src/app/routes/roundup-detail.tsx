@@ -17,7 +17,7 @@ import { PublishingPanel } from '../../features/roundups/components/publishing-p
 import { matrixQueryOptions } from '../../features/matrix/api/get-matrix';
 import { MatrixGrid } from '../../features/matrix/components/matrix-grid';
 import { ResultsMatrix } from '../../features/test-runs/components/results-matrix';
-import { productName } from '../../lib/product-name';
+import { productDisplayName } from '../../../shared/domain/planning/product-display-name';
 import { SamplesTable } from '../../features/samples/components/samples-table';
 import { benchWorkers, may, planEditors } from '../../../shared/access/roles';
 import { writeUpReadableStates } from '../../../shared/domain/editorial/write-up-availability';
@@ -100,7 +100,7 @@ function RoundupPage({ user }: { user: CurrentUser }) {
                 roundupId={roundup.id}
                 rows={roundup.entries
                   .filter((entry) => entry.kind === 'tested')
-                  .map((entry) => ({ entryId: entry.id, name: productName(entry.product) }))}
+                  .map((entry) => ({ entryId: entry.id, name: productDisplayName(entry.product) }))}
                 columns={roundup.loadConfigurations.map((configuration) => ({
                   id: configuration.id,
                   name: configuration.name,

@@ -1,7 +1,7 @@
 import { useParams } from 'react-router';
 import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
-import { productName } from '../../lib/product-name';
+import { productDisplayName } from '../../../shared/domain/planning/product-display-name';
 import { entryPhotosQueryOptions } from '../../features/photos/api/photos-api';
 import { EntryPhotosPage } from '../../features/photos/components/entry-photos-page';
 import { useRoundup } from '../../features/roundups/api/get-roundup';
@@ -29,7 +29,7 @@ function Photos({ user }: { user: CurrentUser }) {
     <EntryPhotosPage
       roundupId={roundupId}
       entryId={entryId}
-      productName={productName(entry.product)}
+      productName={productDisplayName(entry.product)}
       roundupTitle={roundup.title}
       roundupPath={paths.roundup(roundupId)}
       signInPath={paths.signIn(paths.roundupEntryPhotos(roundupId, entryId))}

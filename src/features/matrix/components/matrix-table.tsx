@@ -5,7 +5,7 @@ import { CellStateBadge } from '../../../components/ui/cell-state-badge';
 import { cx } from '../../../lib/class-names';
 import { formatCalendarDate } from '../../../lib/format-time';
 import { paths } from '../../../lib/paths';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 import { cellActionRules, type CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
 import type { MatrixCell, RoundupMatrix } from '../../../../shared/schemas/matrix';
 import type { Role } from '../../../../shared/schemas/common';
@@ -111,7 +111,7 @@ function MatrixRow({
   pendingCellId,
   onAction,
 }: MatrixRowProps) {
-  const name = productName(row.product);
+  const name = productDisplayName(row.product);
   const rowChosen = selection.isRowChosen(row.entryId);
   const rowAssignable = row.kind === 'tested' && row.cells.some(selection.isAssignable);
   const line = 'border-b border-rule group-last:border-b-0';

@@ -9,7 +9,7 @@ import type { Booking } from '../../../../shared/schemas/benches';
 import type { QueueItem } from '../../../../shared/schemas/matrix';
 import { formatCalendarDate, formatSlot } from '../../../lib/format-time';
 import { paths } from '../../../lib/paths';
-import { productName } from '../../../lib/product-name';
+import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
 import { CellStateBadge } from '../../../components/ui/cell-state-badge';
 import { useMediaQuery } from '../../../lib/use-media-query';
 
@@ -58,10 +58,10 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
         header: 'Product',
         rowHeader: true,
         className: 'min-w-40',
-        sortValue: (item) => productName(item.product),
+        sortValue: (item) => productDisplayName(item.product),
         cell: (item) => (
           <>
-            {productName(item.product)}
+            {productDisplayName(item.product)}
             {onMove && !wide && (
               <span className="mt-1.5 block font-normal">
                 <QueueActions item={item} onMove={onMove} pending={pendingCellId === item.cell.id} />
@@ -155,7 +155,7 @@ function QueueActions({
   onMove: (item: QueueItem, action: CellAction) => void;
   pending: boolean;
 }) {
-  const name = `${productName(item.product)} · ${item.loadConfiguration.name}`;
+  const name = `${productDisplayName(item.product)} · ${item.loadConfiguration.name}`;
   return (
     <span className="flex flex-wrap gap-1.5">
       <Link

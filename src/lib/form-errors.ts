@@ -3,12 +3,15 @@ import { isApiError } from './api-client';
 
 export type FieldErrors<Field extends string = string> = Partial<Record<Field, string>>;
 
-/** The first message per top-level field, as the server's `fields` object has them. */
-export function zodFieldErrors(error: z.ZodError): FieldErrors {
+/** The first message per field (keyed by its dotted path), as the server's `fields` object has them. */
+export function zodFieldErrors(
+  error: z.ZodError,
+  message: (issue: z.core.$ZodIssue) => string = (issue) => issue.message,
+): FieldErrors {
   const fields: FieldErrors = {};
   for (const issue of error.issues) {
     const key = issue.path.map(String).join('.') || '_';
-    fields[key] ??= issue.message;
+    fields[key] ??= message(issue);
   }
   return fields;
 }

@@ -12,6 +12,13 @@ export interface UseZodFormOptions<Schema extends z.ZodType, V extends Values> {
   labels: Record<keyof V & string, string>;
   /** Friendlier client-side messages for fields whose schema message reads technical (e.g. an enum). */
   messages?: Partial<Record<keyof V & string, string>>;
+  /**
+   * For a form whose typed text is not yet the request (numbers, nested fields keyed by a dotted path like
+   * "powerDesign.stagesPerPhase"): the request to validate, with problems the schema cannot word ("not a number").
+   */
+  toRequest?: (values: V) => { request: unknown; errors: Partial<Record<keyof V & string, string>> };
+  /** Says a schema problem in the form's words. */
+  issueMessage?: (issue: z.core.$ZodIssue) => string;
 }
 
 /**
@@ -23,6 +30,8 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
   initialValues,
   labels,
   messages,
+  toRequest,
+  issueMessage,
 }: UseZodFormOptions<Schema, V>) {
   type Field = keyof V & string;
   const formId = useId();
@@ -31,7 +40,7 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
   const [formError, setFormError] = useState<string | undefined>();
   const [attempt, setAttempt] = useState(0);
 
-  const fieldId = useCallback((name: Field) => `${formId}-${name}`, [formId]);
+  const fieldId = useCallback((name: Field) => `${formId}-${name.replaceAll('.', '-')}`, [formId]);
 
   const setValue = useCallback((name: Field, value: string) => {
     setValues((current) => ({ ...current, [name]: value }));
@@ -43,31 +52,39 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
     });
   }, []);
 
-  /** Props for a TextField / Select / PasswordField. */
+  /** Props for a TextField / Select / TextArea / PasswordField. */
   const field = (name: Field) => ({
     id: fieldId(name),
     name,
     label: labels[name],
     value: values[name],
     error: errors[name],
-    onChange: (event: ChangeEvent<HTMLInputElement | HTMLSelectElement>) => setValue(name, event.target.value),
+    onChange: (event: ChangeEvent<HTMLInputElement | HTMLSelectElement | HTMLTextAreaElement>) =>
+      setValue(name, event.target.value),
   });
 
   /** Parses the values; on failure shows the problems and returns null. */
   const validate = (): z.output<Schema> | null => {
-    const result = schema.safeParse(values);
-    if (result.success) {
+    const { request, errors: typed } = toRequest?.(values) ?? {
+      request: values,
+      errors: {} as Partial<Record<Field, string>>,
+    };
+    const result = schema.safeParse(request);
+    const found = result.success ? {} : zodFieldErrors(result.error, issueMessage);
+    const next: Partial<Record<Field, string>> = {};
+    for (const name of Object.keys(labels) as Field[]) {
+      const problem = typed[name] ?? (found[name] && (messages?.[name] ?? found[name]));
+      if (problem) next[name] = problem;
+    }
+    if (result.success && Object.keys(next).length === 0) {
       setErrors({});
       setFormError(undefined);
       return result.data;
     }
-    const found = zodFieldErrors(result.error);
-    const next: Partial<Record<Field, string>> = {};
-    for (const name of Object.keys(labels) as Field[]) {
-      if (found[name]) next[name] = messages?.[name] ?? found[name];
-    }
     setErrors(next);
-    setFormError(Object.keys(next).length === 0 ? Object.values(found)[0] : undefined);
+    setFormError(
+      Object.keys(next).length === 0 ? (Object.values(found)[0] ?? 'Some values are not valid.') : undefined,
+    );
     setAttempt((count) => count + 1);
     return null;
   };
@@ -89,6 +106,9 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
     setErrors({});
     setFormError(undefined);
   };
+
+  /** Whether anything differs from where the form started. */
+  const dirty = (Object.keys(labels) as Field[]).some((name) => values[name] !== initialValues[name]);
 
   const summaryItems: FormErrorItem[] = useMemo(
     () =>
@@ -136,6 +156,7 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
     fail,
     reset,
     summaryItems,
+    dirty,
     fieldId,
     problems,
     submitWith,

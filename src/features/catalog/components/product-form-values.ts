@@ -1,9 +1,5 @@
 import type { z } from 'zod';
-import {
-  createProductRequestSchema,
-  type CreateProductRequest,
-  type Product,
-} from '../../../../shared/schemas/catalog';
+import type { CreateProductRequest, Product } from '../../../../shared/schemas/catalog';
 
 /**
  * The product form keeps every field as the text the user typed, keyed by the same dotted path the API uses for
@@ -120,10 +116,10 @@ function setPath(target: Record<string, unknown>, path: string, value: unknown) 
 }
 
 export interface ProductRequestDraft {
-  /** The request as typed, ready for the shared schema. */
+  /** The request as typed, ready for the shared schema (the same the server validates with). */
   request: CreateProductRequest;
   /** Fields whose text is not a number at all (the schema would only say "expected number"). */
-  numberErrors: Partial<Record<ProductField, string>>;
+  errors: Partial<Record<ProductField, string>>;
 }
 
 export function productRequestFrom(values: ProductFormValues): ProductRequestDraft {
@@ -154,11 +150,11 @@ export function productRequestFrom(values: ProductFormValues): ProductRequestDra
       setPath(draft, field, raw.trim() === '' ? (field === 'formFactor' ? undefined : null) : raw);
     }
   }
-  return { request: draft as CreateProductRequest, numberErrors };
+  return { request: draft as CreateProductRequest, errors: numberErrors };
 }
 
 /** Zod's default wording reads technical ("Too big: expected number to be <=20"); say it in the form's words. */
-function friendlyMessage(issue: z.core.$ZodIssue): string {
+export function productIssueMessage(issue: z.core.$ZodIssue): string {
   if (!/^(Too big|Too small|Invalid)/.test(issue.message)) return issue.message;
   switch (issue.code) {
     case 'too_big':
@@ -170,26 +166,4 @@ function friendlyMessage(issue: z.core.$ZodIssue): string {
     default:
       return 'Enter a valid value.';
   }
-}
-
-export interface ProductValidation {
-  input: z.output<typeof createProductRequestSchema> | null;
-  request: CreateProductRequest;
-  errors: Partial<Record<ProductField, string>>;
-}
-
-/** Validates with the same schema the server uses; errors are keyed by field path. */
-export function validateProduct(values: ProductFormValues): ProductValidation {
-  const { request, numberErrors } = productRequestFrom(values);
-  const parsed = createProductRequestSchema.safeParse(request);
-  const errors: Partial<Record<ProductField, string>> = { ...numberErrors };
-  if (!parsed.success) {
-    for (const issue of parsed.error.issues) {
-      const path = issue.path.map(String).join('.') as ProductField;
-      if (path in productFieldLabels)
-        errors[path] ??= path === 'formFactor' ? 'Choose the form factor.' : friendlyMessage(issue);
-    }
-  }
-  if (Object.keys(errors).length > 0 || !parsed.success) return { input: null, request, errors };
-  return { input: parsed.data, request, errors };
 }

@@ -22,13 +22,20 @@ import {
   vcoreStageTypes,
   wifiGenerationLabels,
   wifiGenerations,
+  createProductRequestSchema,
   type ProductDetail,
   type ProductInput,
 } from '../../../../shared/schemas/catalog';
 import { formatAmps, formatLanSpeed } from './catalog-format';
-import { readNumber, type ProductFormValues } from './product-form-values';
+import {
+  productFieldLabels,
+  productIssueMessage,
+  productRequestFrom,
+  readNumber,
+  type ProductFormValues,
+} from './product-form-values';
 import { TextArea } from '../../../components/ui/text-area';
-import { useProductForm } from './use-product-form';
+import { useZodForm } from '../../../lib/use-zod-form';
 
 export interface ProductFormProps {
   initialValues: ProductFormValues;
@@ -53,7 +60,14 @@ function lanOptions(current: string): SelectOption[] {
 
 /** All fields of a catalog product: identity, the V-core power design and the board's features. */
 export function ProductForm({ initialValues, submitLabel, cancelTo, save, onSaved, errorTitle }: ProductFormProps) {
-  const form = useProductForm(initialValues);
+  const form = useZodForm({
+    schema: createProductRequestSchema,
+    initialValues,
+    labels: productFieldLabels,
+    messages: { formFactor: 'Choose the form factor.' },
+    toRequest: productRequestFrom,
+    issueMessage: productIssueMessage,
+  });
   const [pending, setPending] = useState(false);
   const saved = useRef(false);
   const { values } = form;

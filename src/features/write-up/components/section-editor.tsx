@@ -39,6 +39,8 @@ function LiveBlockView({ node, selected }: NodeViewProps) {
     <NodeViewWrapper
       className={cx('live-block-view', selected && 'is-selected')}
       data-live-block={block}
+      // A named group, so that screen readers announce which live block this is (a plain div's label is not read).
+      role="group"
       aria-label={`Live block: ${liveBlockLabels[block] ?? block}${preview ? ` of ${preview.productName}` : ''}`}
     >
       <p className="live-block-view-label" contentEditable={false}>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { In } from 'typeorm';
+import { In, MoreThan } from 'typeorm';
 import { BenchBookingEntity } from '../../../server/entities/bench-booking.entity';
 import { BenchEntity } from '../../../server/entities/bench.entity';
 import { MatrixCellEntity } from '../../../server/entities/matrix-cell.entity';
@@ -23,10 +23,14 @@ describe('demo seed: planning', () => {
     // Seeded inside a transaction that is rolled back, so the shared test database stays as it was.
     await ds
       .transaction(async (manager) => {
+        // Other test files add boards of their own to the shared database: only the seed's own are judged here.
+        const [{ lastId }] = await manager.query('SELECT COALESCE(MAX(id), 0) AS lastId FROM products');
         const staff = await seedStaff(manager);
         const { roundupId, earlierRoundupId } = await seedPlanning(manager, staff, now);
 
-        const products = await manager.getRepository(ProductEntity).findBy({ platform: 'Helix-1700' });
+        const products = await manager
+          .getRepository(ProductEntity)
+          .findBy({ platform: 'Helix-1700', id: MoreThan(Number(lastId)) });
         expect(products.length).toBeGreaterThanOrEqual(20);
         expect(new Set(products.map((p) => p.maker))).toEqual(
           new Set(['Korvath', 'Ostrel Works', 'Brightmoor', 'Quillon', 'Tarnwell', 'Vesk']),

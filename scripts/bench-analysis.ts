@@ -6,9 +6,11 @@
  * Then the server's responsiveness: the worst file Log check accepts is uploaded to an HTTP server in this process
  * (the one upload middleware and the Log check service), and a health route on the same server is asked every 20 ms
  * while the file is analysed — once with the analysis in the worker pool as the server runs it, once in the event
- * loop as the baseline. Target: every health answer within 100 ms while the pool analyses.
+ * loop as the baseline. Target (issue 12's wording): every health answer within 100 ms while the pool analyses. The
+ * longest, 99th and 95th percentile answers are printed, with the load average and the worker threads' priority.
  */
 import type { AddressInfo } from 'node:net';
+import { readdirSync, readFileSync } from 'node:fs';
 import { availableParallelism, loadavg } from 'node:os';
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
@@ -152,7 +154,24 @@ interface Responsiveness {
   answers: number;
   medianMs: number;
   p95Ms: number;
+  p99Ms: number;
   maxMs: number;
+  /** Niceness of this process's threads while the analysis ran (Linux), the lowest and the highest. */
+  niceness: { lowest: number; highest: number } | null;
+}
+
+/** The lowest and highest niceness among this process's threads (Linux /proc; null elsewhere). */
+function threadNiceness(): { lowest: number; highest: number } | null {
+  try {
+    const values = readdirSync('/proc/self/task').map((thread) => {
+      const stat = readFileSync(`/proc/self/task/${thread}/stat`, 'utf8');
+      // Field 19 of proc(5) is the nice value; the fields after the command name start at field 3.
+      return Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[16]);
+    });
+    return { lowest: Math.min(...values), highest: Math.max(...values) };
+  } catch {
+    return null;
+  }
 }
 
 function percentile(values: number[], share: number): number {
@@ -199,7 +218,9 @@ async function healthWhileAnalysing(file: Blob, analyser: LogFileAnalyser): Prom
       if (!response.ok) throw new Error(`The worst accepted file was refused: ${await response.text()}`);
     });
     const rounds: { started: number; ended: number }[] = [];
+    let niceness: Responsiveness['niceness'] = null;
     while (!done) {
+      if (rounds.length === 10) niceness = threadNiceness();
       // Each round: wait 20 ms, ask for /api/health. A held event loop delays the timer and the answer alike.
       const started = performance.now();
       await new Promise((resolve) => setTimeout(resolve, 20));
@@ -216,7 +237,9 @@ async function healthWhileAnalysing(file: Blob, analyser: LogFileAnalyser): Prom
       answers: latencies.length,
       medianMs: latencies.length ? median(latencies) : Number.NaN,
       p95Ms: latencies.length ? percentile(latencies, 0.95) : Number.NaN,
+      p99Ms: latencies.length ? percentile(latencies, 0.99) : Number.NaN,
       maxMs: latencies.length ? Math.max(...latencies) : Number.NaN,
+      niceness,
     };
   } finally {
     server.close();
@@ -238,19 +261,30 @@ const blocking = await healthWhileAnalysing(worstFile, analyseInProcess);
 const report = (label: string, figures: Responsiveness) =>
   line(
     label,
-    `${figures.p95Ms.toFixed(1).padStart(7)} ms for 95 % of answers; median ${figures.medianMs.toFixed(1)} ms, ` +
-      `longest ${figures.maxMs.toFixed(0)} ms (${figures.answers} answers over ${(figures.analysisMs / 1000).toFixed(1)} s)`,
+    `longest ${figures.maxMs.toFixed(1)} ms, 99 % within ${figures.p99Ms.toFixed(1)} ms, 95 % within ` +
+      `${figures.p95Ms.toFixed(1)} ms, median ${figures.medianMs.toFixed(1)} ms ` +
+      `(${figures.answers} answers over ${(figures.analysisMs / 1000).toFixed(1)} s)`,
   );
 report('analysis in the worker pool (as served)', pooled);
 report('baseline: analysis in the event loop', blocking);
+if (pooled.niceness) {
+  line(
+    'thread priority during the pooled analysis',
+    `nice ${pooled.niceness.lowest} (event loop) to ${pooled.niceness.highest} (analysis worker)`,
+  );
+}
 line(
   'load average',
-  `${loadavg()[0].toFixed(1).padStart(7)} on ${availableParallelism()} cores (the longest answer shows the system's scheduling delays)`,
+  `${loadavg()
+    .map((value) => value.toFixed(1))
+    .join(' / ')
+    .padStart(7)} (1 / 5 / 15 min) on ${availableParallelism()} cores (other work on the machine delays every thread)`,
 );
-// 95 % rather than every answer: on a shared machine the system itself delays a thread now and then, whatever it runs;
-// the baseline shows what a held event loop does instead (every answer waits for the whole analysis).
-const responsive = pooled.answers >= 20 && pooled.p95Ms < 100 && pooled.maxMs < 1000;
+// Issue 12: every answer within 100 ms. The longest answer also holds the system's own scheduling delays, so a
+// machine busy with other work can fail it whatever the server does; the baseline shows what a held event loop does
+// instead (every answer waits for the whole analysis).
+const responsive = pooled.answers >= 20 && pooled.maxMs < 100;
 console.log(
-  `  ${responsive ? 'PASS' : 'FAIL'}: /api/health answers within 100 ms (95 % of answers, none over a second) while the worst accepted file is analysed`,
+  `  ${responsive ? 'PASS' : 'FAIL'}: every /api/health answer within 100 ms while the worst accepted file is analysed`,
 );
 process.exitCode = meetsTargets && responsive ? 0 : 1;

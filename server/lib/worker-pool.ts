@@ -29,9 +29,10 @@ export function lazyWorkerPool(name: string, options: WorkerPoolOptions) {
       maxQueue: options.maxQueue,
       idleTimeout: options.idleTimeoutMs,
       resourceLimits: { maxOldGenerationSizeMb: options.maxHeapMb },
-      // Below the event loop's priority where the system allows it (piscina's optional @napi-rs/nice): on a machine
-      // short of cores, requests are answered first and the analysis takes the rest.
-      niceIncrement: 10,
+      // The lowest priority where the system allows it (piscina's optional @napi-rs/nice, per thread on Linux): on a
+      // machine short of cores, requests are answered first and the work takes the rest. Worker entries also lower
+      // their own thread with os.setPriority, which needs no optional package.
+      niceIncrement: 19,
     });
   };
   return {

@@ -1,4 +1,5 @@
 import { AppError } from '../errors';
+import { sharedCopyInSlices } from '../lib/event-loop-slices';
 import { lazyWorkerPool, type LazyWorkerPool } from '../lib/worker-pool';
 import type { AnalyseLogTask } from '../workers/analyse-log';
 import type { AnalysisPreviewResponse, AnalysisRequestInput } from '../../shared/schemas/analysis';
@@ -50,7 +51,8 @@ export function pooledAnalyser({
   const analyse: LogFileAnalyser = async (bytes, request, signal) => {
     const budget = AbortSignal.timeout(timeBudgetMs);
     try {
-      const task: AnalyseLogTask = { bytes, request };
+      // Shared memory, filled slice by slice: the message to the worker then copies nothing on this thread.
+      const task: AnalyseLogTask = { bytes: await sharedCopyInSlices(bytes), request };
       return await pool.run<AnalyseLogFileOutcome>(task, signal ? AbortSignal.any([budget, signal]) : budget);
     } catch (error) {
       if (budget.aborted) {

@@ -109,15 +109,19 @@ async function prepareCell(playwright: PlaywrightWorkerArgs['playwright'], baseU
 }
 
 /**
- * A 30-minute soak (generated, first-order rise to about 62 °C in a steady 21 °C room) on a configuration that asks
- * for 60 minutes: the engine flags the short soak, so the editor has a flag to accept with a reason.
+ * A 30-minute soak (generated, first-order rise to about 62 °C in a steady 21 °C room, a second probe to about 52 °C)
+ * on a configuration that asks for 60 minutes: the engine flags the short soak, so the editor has a flag to accept
+ * with a reason; the second probe gives the editor another mapping to analyse the stored file with.
  */
 function shortSoak(seed: number): string {
   return syntheticLoggerLog({
     durationS: 1800,
     sampleHz: 0.5,
     seed,
-    probes: [{ name: 'VRM 1', startC: 22, riseC: 40, tauS: 300, noiseC: 0.1 }],
+    probes: [
+      { name: 'VRM 1', startC: 22, riseC: 40, tauS: 300, noiseC: 0.1 },
+      { name: 'VRM 2', startC: 22, riseC: 30, tauS: 300, noiseC: 0.1 },
+    ],
     ambient: { name: 'Ambient', startC: 21, noiseC: 0.05 },
   });
 }
@@ -157,7 +161,7 @@ test('a tester records runs from logger files; the editor accepts a flagged run 
     );
     await expect(page.getByRole('checkbox', { name: 'VRM 1 [°C]' })).toBeChecked();
     await page.getByLabel('Room target').fill('21');
-    await page.getByRole('button', { name: 'Analyse' }).click();
+    await page.getByRole('button', { name: 'Analyse', exact: true }).click();
     await expect(page.getByRole('region', { name: 'Result' })).toBeVisible();
     // The log's chart is there before anything is submitted.
     await expect(page.getByRole('img', { name: /VRM probes and ambient over this log/ })).toBeVisible();
@@ -198,7 +202,12 @@ test('a tester records runs from logger files; the editor accepts a flagged run 
 
   await signInAs(page, 'editor');
   await page.goto(`/roundups/${setup.roundupId}?tab=matrix`);
-  await page.getByRole('link', { name: `Runs of ${setup.cellLabel}` }).click();
+  // The planning matrix's cell says its run's QA flags in words, not by colour alone.
+  const runsLink = page.getByRole('link', { name: `Runs of ${setup.cellLabel}` });
+  await expect(page.getByRole('cell').filter({ has: runsLink })).toContainText(
+    /QA flags?:.*Soak shorter than required/,
+  );
+  await runsLink.click();
   await expect(page.getByRole('heading', { level: 1, name: setup.cellLabel })).toBeVisible();
   const flags = page.getByRole('region', { name: 'QA flags' });
   await expect(flags.getByRole('listitem').first()).toBeVisible();
@@ -212,6 +221,23 @@ test('a tester records runs from logger files; the editor accepts a flagged run 
   await expect(page.getByText('Accepted', { exact: true }).first()).toBeVisible();
   await page.getByRole('button', { name: 'Mark as run of record' }).click();
   await expect(page.getByText('★ Run of record')).toBeVisible();
+
+  // The stored file analysed again with another mapping: the form starts from the mapping used, the analysis is shown
+  // before it is stored, and the earlier analysis stays beside the new one.
+  await page.getByRole('button', { name: 'Analyse again with another mapping' }).click();
+  await expect(page.getByText('Filled in with the mapping and options of the analysis that counts now')).toBeVisible();
+  await expect(page.getByRole('checkbox', { name: 'VRM 1 [°C]' })).toBeChecked();
+  await expect(page.getByRole('checkbox', { name: 'VRM 2 [°C]' })).toBeChecked();
+  await page.getByRole('checkbox', { name: 'VRM 1 [°C]' }).uncheck();
+  await page.getByRole('button', { name: 'Analyse', exact: true }).click();
+  await expect(page.getByRole('region', { name: 'Result' })).toBeVisible();
+  await page.getByRole('button', { name: 'Store as a new analysis' }).click();
+  await expect(page.getByText('A new analysis is stored beside the earlier ones')).toBeVisible();
+  const analyses = page.getByRole('table', { name: 'Analyses of this run, oldest first' });
+  await expect(analyses.getByRole('row')).toHaveCount(3);
+  await expect(analyses.getByRole('row').nth(1)).toContainText('VRM: VRM 1 [°C], VRM 2 [°C]');
+  await expect(analyses.getByRole('row').nth(2)).toContainText('VRM: VRM 2 [°C]');
+  await expect(analyses.getByRole('row').nth(2)).toContainText('Counts for the run');
 
   await page.goto(`/roundups/${setup.roundupId}?tab=results`);
   const results = page.getByRole('table', { name: 'Results' });

@@ -4,6 +4,8 @@ import type { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { personOrNull } from './people';
 import { availableCellActions, cellStates, type CellState } from '../../shared/domain/planning/matrix-cell-states';
 import { hasDateEnded } from '../../shared/domain/planning/loan-overdue';
+import { qaFlagLabels } from '../../shared/domain/analysis/qa-flag-labels';
+import type { QaFlagCode } from '../../shared/schemas/analysis';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type { MatrixCell, MatrixProgress } from '../../shared/schemas/matrix';
 import type { PersonRef } from '../../shared/schemas/planning-fields';
@@ -11,17 +13,45 @@ import type { PersonRef } from '../../shared/schemas/planning-fields';
 /** Cells that are done (or waiting for the editor) are never overdue. */
 const finishedStates = new Set<CellState>(['recorded', 'accepted']);
 
-/** Submitted test runs per cell, for the cells given (cells without runs are absent). */
-export async function runCountsByCell(manager: EntityManager, cellIds: number[]): Promise<Map<number, number>> {
-  const counts = new Map<number, number>();
-  if (cellIds.length === 0) return counts;
-  const rows: { matrix_cell_id: number; n: string }[] = await manager.query(
-    `SELECT matrix_cell_id, COUNT(*) AS n FROM test_runs
-     WHERE matrix_cell_id IN (${cellIds.map(() => '?').join(',')}) GROUP BY matrix_cell_id`,
+/** What a cell's test runs say on the planning matrix. */
+export interface CellRunFacts {
+  runCount: number;
+  /** QA flags of the run the results matrix shows (the run of record, else the newest run), in words. */
+  qaFlags: string[];
+}
+
+/**
+ * Submitted test runs per cell and the QA flags of the run shown for it, for the cells given (cells without runs are
+ * absent). The flags are those of that run's newest analysis, as on the results matrix.
+ */
+export async function runFactsByCell(manager: EntityManager, cellIds: number[]): Promise<Map<number, CellRunFacts>> {
+  const facts = new Map<number, CellRunFacts>();
+  if (cellIds.length === 0) return facts;
+  const cellList = cellIds.map(() => '?').join(',');
+  const rows: { matrix_cell_id: number; n: string; shown_run_id: number }[] = await manager.query(
+    `SELECT run.matrix_cell_id, COUNT(*) AS n, COALESCE(MAX(cell.run_of_record_id), MAX(run.id)) AS shown_run_id
+     FROM test_runs run JOIN matrix_cells cell ON cell.id = run.matrix_cell_id
+     WHERE run.matrix_cell_id IN (${cellList}) GROUP BY run.matrix_cell_id`,
     cellIds,
   );
-  for (const row of rows) counts.set(Number(row.matrix_cell_id), Number(row.n));
-  return counts;
+  const shownRunIds = rows.map((row) => Number(row.shown_run_id));
+  const flagRows: { test_run_id: number; flag_codes: string }[] = shownRunIds.length
+    ? await manager.query(
+        `SELECT test_run_id, flag_codes FROM run_analyses WHERE id IN (
+           SELECT MAX(id) FROM run_analyses WHERE test_run_id IN (${shownRunIds.map(() => '?').join(',')})
+           GROUP BY test_run_id)`,
+        shownRunIds,
+      )
+    : [];
+  const flagsByRun = new Map(flagRows.map((row) => [Number(row.test_run_id), row.flag_codes]));
+  for (const row of rows) {
+    const codes = (flagsByRun.get(Number(row.shown_run_id)) ?? '').split(',').filter(Boolean);
+    facts.set(Number(row.matrix_cell_id), {
+      runCount: Number(row.n),
+      qaFlags: codes.map((code) => qaFlagLabels[code as QaFlagCode] ?? code),
+    });
+  }
+  return facts;
 }
 
 export function toMatrixCellDto(
@@ -30,9 +60,9 @@ export function toMatrixCellDto(
   people: Map<number, PersonRef>,
   user: CurrentUser,
   now: Date,
-  runCounts: Map<number, number>,
+  runFacts: Map<number, CellRunFacts>,
 ): MatrixCell {
-  const runCount = runCounts.get(cell.id) ?? 0;
+  const { runCount, qaFlags } = runFacts.get(cell.id) ?? { runCount: 0, qaFlags: [] };
   // "Mark recorded" needs a submitted run: without one it is not offered (the server refuses it too).
   const actions = availableCellActions({ state: cell.state, testerId: cell.testerId }, user).filter(
     (action) => action !== 'record' || runCount > 0,
@@ -49,6 +79,7 @@ export function toMatrixCellDto(
     note: cell.note,
     stateChangedAt: cell.stateChangedAt.toISOString(),
     runCount,
+    qaFlags,
     actions,
   };
 }

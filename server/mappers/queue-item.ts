@@ -5,7 +5,7 @@ import { LoadConfigurationEntity } from '../entities/load-configuration.entity';
 import type { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
-import { runCountsByCell, toMatrixCellDto } from './matrix-cell';
+import { runFactsByCell, toMatrixCellDto } from './matrix-cell';
 import { loadPeople } from './people';
 import { productBriefs } from './product-fields';
 import type { CurrentUser } from '../../shared/schemas/auth';
@@ -41,7 +41,7 @@ export async function queueItems(
     manager,
     cells.map((c) => c.testerId),
   );
-  const runCounts = await runCountsByCell(
+  const runFacts = await runFactsByCell(
     manager,
     cells.map((c) => c.id),
   );
@@ -50,7 +50,7 @@ export async function queueItems(
     const entry = entryById.get(cell.entryId) as RoundupEntryEntity;
     const config = configById.get(cell.loadConfigurationId) as LoadConfigurationEntity;
     return {
-      cell: toMatrixCellDto(cell, roundup.timeZone, people, user, now, runCounts),
+      cell: toMatrixCellDto(cell, roundup.timeZone, people, user, now, runFacts),
       roundup: { id: roundup.id, title: roundup.title, state: roundup.state, timeZone: roundup.timeZone },
       product: products.get(entry.productId) as ProductBrief,
       loadConfiguration: { id: config.id, name: config.name },

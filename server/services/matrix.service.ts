@@ -9,7 +9,7 @@ import { UserEntity } from '../entities/user.entity';
 import { AppError, conflict, forbidden, invalid, notFound } from '../errors';
 import { loadPeople } from '../mappers/people';
 import { recordPlanChange } from '../lib/roundup-audit';
-import { emptyProgress, progressByRoundup, runCountsByCell, toMatrixCellDto } from '../mappers/matrix-cell';
+import { emptyProgress, progressByRoundup, runFactsByCell, toMatrixCellDto } from '../mappers/matrix-cell';
 import { productBriefs } from '../mappers/product-fields';
 import { assertPlanEditable, findRoundup, lockRoundup } from '../lib/roundup-access';
 import { cellBookingAt } from './benches.service';
@@ -60,7 +60,7 @@ export class MatrixService {
       cells.map((c) => c.testerId),
     );
     const cellAt = new Map(cells.map((c) => [`${c.entryId}:${c.loadConfigurationId}`, c]));
-    const runCounts = await runCountsByCell(
+    const runFacts = await runFactsByCell(
       manager,
       cells.map((c) => c.id),
     );
@@ -83,7 +83,7 @@ export class MatrixService {
             : links
                 .map((link) => cellAt.get(`${entry.id}:${link.loadConfigurationId}`))
                 .filter((cell): cell is MatrixCellEntity => cell !== undefined)
-                .map((cell) => toMatrixCellDto(cell, roundup.timeZone, people, user, now, runCounts)),
+                .map((cell) => toMatrixCellDto(cell, roundup.timeZone, people, user, now, runFacts)),
       })),
       progress: (await progressByRoundup(manager, [roundupId])).get(roundupId) ?? emptyProgress(),
     };
@@ -190,11 +190,11 @@ export class MatrixService {
         manager,
         updated.map((c) => c.testerId),
       );
-      const runCounts = await runCountsByCell(
+      const runFacts = await runFactsByCell(
         manager,
         updated.map((c) => c.id),
       );
-      return updated.map((cell) => toMatrixCellDto(cell, roundup.timeZone, people, actor, now, runCounts));
+      return updated.map((cell) => toMatrixCellDto(cell, roundup.timeZone, people, actor, now, runFacts));
     });
   }
 
@@ -274,7 +274,7 @@ export class MatrixService {
       }
       const updated = await repo.findOneByOrFail({ id: cellId });
       const people = await loadPeople(manager, [updated.testerId]);
-      return toMatrixCellDto(updated, roundup.timeZone, people, actor, now, await runCountsByCell(manager, [cellId]));
+      return toMatrixCellDto(updated, roundup.timeZone, people, actor, now, await runFactsByCell(manager, [cellId]));
     });
   }
 }

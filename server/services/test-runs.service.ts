@@ -676,13 +676,7 @@ export class TestRunsService {
         submittedAt: run.submittedAt.toISOString(),
         isRunOfRecord: cell.runOfRecordId === run.id,
         analysis: analysisSummary(current, people),
-        analyses: own.map((a) => ({
-          id: a.id,
-          engineVersion: a.engineVersion,
-          createdAt: a.createdAt.toISOString(),
-          verdict: (a.verdict as RunAnalysisSummary['verdict']) ?? null,
-          peakC: toNumber(a.peakC),
-        })),
+        analyses: own.map((a) => analysisSummary(a, people)),
         vrmLoad,
         actions,
       };

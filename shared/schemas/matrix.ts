@@ -30,6 +30,8 @@ export const matrixCellSchema = z.object({
   stateChangedAt: instantSchema,
   /** Submitted test runs on the cell; "Mark recorded" is offered only with at least one. */
   runCount: z.number().int(),
+  /** QA flags of the run the results matrix shows for the cell (run of record, else the newest), in words. */
+  qaFlags: z.array(z.string()),
   /** What the signed-in user may do with this cell now. */
   actions: z.array(cellActionSchema),
 });

@@ -115,11 +115,10 @@ export const testRunSchema = z.object({
   reviewedAt: instantSchema.nullable(),
   submittedAt: instantSchema,
   isRunOfRecord: z.boolean(),
-  /** The newest analysis; earlier ones stay listed in `analyses`. */
+  /** The newest analysis: the one that counts. Earlier ones stay, unchanged, in `analyses`. */
   analysis: runAnalysisSummarySchema,
-  analyses: z.array(
-    runAnalysisSummarySchema.pick({ id: true, engineVersion: true, createdAt: true, verdict: true, peakC: true }),
-  ),
+  /** Every analysis of the run, oldest first, each with the mapping, options and rubric it was given. */
+  analyses: z.array(runAnalysisSummarySchema),
   vrmLoad: vrmLoadSchema.nullable(),
   /** What the signed-in user may do with this run now. */
   actions: z.array(z.enum(['accept', 'send-back', 'mark-of-record', 'reanalyse'])),
@@ -170,6 +169,8 @@ export const reanalyseRunRequestSchema = z.strictObject({
   mapping: columnMappingSchema.optional(),
   options: analysisOptionsSchema.optional(),
 });
+
+export type ReanalyseRunRequest = z.input<typeof reanalyseRunRequestSchema>;
 
 export const roundupRubricRequestSchema = z.strictObject({ rubric: verdictRubricSchema.nullable() });
 

@@ -20,6 +20,7 @@ function cell(id: number, entryId: number, loadConfigurationId: number, override
     note: null,
     stateChangedAt: '2026-11-30T09:00:00.000Z',
     runCount: 0,
+    qaFlags: [],
     actions: [],
     ...overrides,
   } satisfies MatrixCell;

@@ -19,6 +19,7 @@ const cell: MatrixCell = {
   note: null,
   stateChangedAt: '2026-12-01T08:00:00.000Z',
   runCount: 0,
+  qaFlags: [],
   actions: ['start'],
 };
 const item: QueueItem = {

@@ -202,6 +202,34 @@ describe('test runs on matrix cells', () => {
     expect(own.body.analyses).toHaveLength(2); // the earlier analysis stays beside the new one
   });
 
+  it('a stored run analysed again with another mapping keeps the file and the earlier analysis; the planning matrix cell names the flags', async () => {
+    const { tester, editor, cellId, roundupId, startedAt } = await setUp();
+    const bytes = Buffer.from(soakLog(5));
+    const recorded = await uploadRun(tester.agent, cellId, bytes, { firmwareVersion: 'F1.2', startedAt, mapping });
+    expect(recorded.status, recorded.text).toBe(201);
+    const run = recorded.body.run;
+    const before = run.analysis;
+    // Another mapping: the ambient column left out, so the engine has no room reading (its own QA flag).
+    const again = await editor.agent
+      .post(`/api/runs/${run.id}/analyses`)
+      .send({ mapping: { time: 'Time [s]', vrm: ['VRM 1 [°C]'] } });
+    expect(again.status, again.text).toBe(201);
+    expect(again.body.analyses).toHaveLength(2);
+    expect(again.body.analyses[0]).toEqual(before); // the earlier analysis, unchanged
+    expect(again.body.analysis.id).toBe(again.body.analyses[1].id); // the newest counts
+    expect(again.body.analysis.parameters.mapping).toEqual({ time: 'Time [s]', vrm: ['VRM 1 [°C]'] });
+    expect(again.body.analysis.flags.map((flag: { code: string }) => flag.code)).toContain('ambient-missing');
+    expect(again.body.loggerFile.sha256).toBe(sha256(bytes));
+    // The planning matrix cell carries the flags of the run shown, in words, as the results matrix counts them.
+    const cell = (await matrixOf(editor.agent, roundupId)).rows
+      .flatMap((row) => row.cells)
+      .find((entry) => entry.id === cellId);
+    expect(cell?.qaFlags).toContain('No room reading');
+    const results = await editor.agent.get(`/api/roundups/${roundupId}/results`);
+    const resultCell = results.body.cells.find((entry: { cellId: number }) => entry.cellId === cellId);
+    expect(cell?.qaFlags).toHaveLength(resultCell.flagCount);
+  });
+
   it('a flagged run is accepted only with a written reason, kept with who and when; sending back needs a reason', async () => {
     const { tester, editor, cellId } = await setUp();
     const run = await recordManualRun(tester.agent, cellId); // manual entries carry the "manual" flag

@@ -1,12 +1,7 @@
 import { useEffect, useRef } from 'react';
 import { PageHeader } from '../../../components/ui/page-header';
-import { AnalysisResults } from './analysis-results';
-import { ColumnMappingForm } from './column-mapping-form';
+import { LogCheckSteps } from './log-check-steps';
 import { LogFilePanel } from './log-file-panel';
-import { LogPreviewPanel } from './log-preview';
-import { requestFromDraft } from './mapping-draft';
-import { ParseErrorTable } from './parse-error-table';
-import { TemperatureChart } from './temperature-chart';
 import { useLogCheck, type LogResult } from './use-log-check';
 
 export interface LogCheckPageProps {
@@ -33,8 +28,7 @@ function useShowResult(result: LogResult | null) {
  */
 export function LogCheckPage({ signInPath }: LogCheckPageProps) {
   const check = useLogCheck();
-  const { file, reading, draft, failure, result, sending } = check;
-  const resultHeading = useShowResult(result);
+  const resultHeading = useShowResult(check.result);
 
   return (
     <>
@@ -47,65 +41,7 @@ export function LogCheckPage({ signInPath }: LogCheckPageProps) {
       <div className="space-y-6">
         <LogFilePanel check={check} signInPath={signInPath} />
 
-        {failure?.stage === 'reading' && (
-          <ParseErrorTable
-            errors={failure.errors}
-            message={failure.message}
-            stage="reading"
-            hasPreview={failure.hasPreview}
-          />
-        )}
-
-        {file && reading && draft && (
-          <>
-            <LogPreviewPanel preview={reading.preview} fileName={file.name} />
-            <div>
-              <h2 className="mb-3 text-lg font-semibold text-ink">2 · Mapping and options</h2>
-              <ColumnMappingForm
-                preview={reading.preview}
-                draft={draft}
-                guess={reading.guess}
-                onChange={check.setDraft}
-                pending={sending?.stage === 'analysing'}
-                disabled={sending?.stage === 'reading'}
-                onAnalyse={check.analyse}
-              />
-            </div>
-          </>
-        )}
-
-        {failure?.stage === 'analysing' && (
-          <ParseErrorTable
-            errors={failure.errors}
-            message={failure.message}
-            stage="analysing"
-            hasPreview={failure.hasPreview}
-          />
-        )}
-
-        {file && result && (
-          <AnalysisResults
-            analysis={result.outcome.analysis}
-            fileName={file.name}
-            outdated={check.resultOutdated}
-            headingRef={resultHeading}
-            onConfirmDeadProbe={
-              reading && draft
-                ? (column) => {
-                    const next = { ...draft, confirmedDeadProbes: [...draft.confirmedDeadProbes, column] };
-                    check.setDraft(next);
-                    const built = requestFromDraft(next, reading.preview);
-                    if (built.request) check.analyse(built.request);
-                  }
-                : undefined
-            }
-            chart={
-              check.chartSeries ? (
-                <TemperatureChart series={check.chartSeries} analysis={result.outcome.analysis} />
-              ) : null
-            }
-          />
-        )}
+        <LogCheckSteps check={check} headingLevel={2} resultHeadingRef={resultHeading} />
       </div>
     </>
   );

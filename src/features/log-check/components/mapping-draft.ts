@@ -1,6 +1,8 @@
 import {
+  analysisOptionsSchema,
   analysisRequestSchema,
   type AnalysisRequestInput,
+  type ColumnMapping,
   type ColumnRole,
   type LogPreview,
   type PreviewColumn,
@@ -246,4 +248,40 @@ export function requestFromDraft(
   }
   if (Object.keys(errors).length > 0) return { request: null, errors };
   return { request, errors: null };
+}
+
+/**
+ * A mapping (and the options) used before — a bench profile's remembered mapping, a stored run's analysis — as a
+ * draft of this file, when every column it names is in the file; null when the file does not have them all.
+ * Options the form holds as typed numbers are taken from `options` where it gives them (the optional ones stay).
+ */
+export function draftFromStoredRequest(
+  draft: MappingDraft,
+  names: readonly string[],
+  mapping: ColumnMapping,
+  options?: unknown,
+): MappingDraft | null {
+  const used = [mapping.time, ...mapping.vrm, mapping.ambient, mapping.clock, mapping.power].filter(
+    (name): name is string => typeof name === 'string' && name.length > 0,
+  );
+  if (!used.every((name) => names.includes(name))) return null;
+  const next: MappingDraft = {
+    ...draft,
+    time: mapping.time ?? draft.time,
+    vrm: [...mapping.vrm],
+    ambient: mapping.ambient ?? '',
+    clock: mapping.clock ?? '',
+    power: mapping.power ?? '',
+    units: { ...(mapping.units ?? {}) },
+  };
+  const stored = options === undefined ? null : analysisOptionsSchema.safeParse(options);
+  if (stored?.success) {
+    for (const figure of figures) {
+      if (!figure.optional) next[figure.name as OptionFigureName] = figure.initial(stored.data);
+    }
+    next.toleranceClass = stored.data.toleranceClass;
+    next.useNormalizedPeak = stored.data.useNormalizedPeak;
+    next.testerMarkedUnstable = stored.data.testerMarkedUnstable;
+  }
+  return next;
 }

@@ -230,6 +230,18 @@ function MatrixCellView({
               {formatCalendarDate(cell.dueDate)}
             </p>
           )}
+          {cell.qaFlags.length > 0 && (
+            // In words with a mark, never colour alone: the flags of the run the results matrix shows for this cell.
+            <p className="text-[0.8125rem] text-ink">
+              <span aria-hidden="true" className="mr-1 font-mono font-semibold text-amber">
+                !
+              </span>
+              <span className="font-semibold">
+                {cell.qaFlags.length === 1 ? 'QA flag:' : `${cell.qaFlags.length} QA flags:`}
+              </span>{' '}
+              {cell.qaFlags.join('; ')}
+            </p>
+          )}
           {cell.note && cell.state === 'needs-retest' && (
             <p className="text-[0.8125rem] text-ink">
               <span className="font-semibold">Retest:</span> {cell.note}

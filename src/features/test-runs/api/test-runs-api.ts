@@ -14,6 +14,7 @@ import {
   type CellRuns,
   type LoggerRunRequest,
   type ManualRunRequest,
+  type ReanalyseRunRequest,
   type ReviewRunRequest,
   type RoundupResults,
 } from '../../../../shared/schemas/test-runs';
@@ -107,7 +108,8 @@ export function useMarkRunOfRecord() {
 export function useReanalyseRun() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (runId: number) => apiClient.post(`/api/runs/${runId}/analyses`, {}),
+    mutationFn: ({ runId, request = {} }: { runId: number; request?: ReanalyseRunRequest }) =>
+      apiClient.post(`/api/runs/${runId}/analyses`, request),
     onSuccess: () => invalidateAfter(queryClient, 'run'),
   });
 }

@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { useRef, useState, type FormEvent } from 'react';
 import type { FieldErrors } from '../../../lib/form-errors';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
@@ -9,13 +9,9 @@ import { UploadProgress } from '../../../components/ui/upload-progress';
 import { isApiError } from '../../../lib/api-client';
 import { isUploadCancelled, type UploadProgress as Progress } from '../../../lib/upload';
 import type { AnalysisRequestInput, ColumnMapping } from '../../../../shared/schemas/analysis';
-import { AnalysisResults } from '../../log-check/components/analysis-results';
-import { ColumnMappingForm } from '../../log-check/components/column-mapping-form';
+import { LogCheckSteps } from '../../log-check/components/log-check-steps';
 import { LogFilePanel } from '../../log-check/components/log-file-panel';
-import { LogPreviewPanel } from '../../log-check/components/log-preview';
-import type { MappingDraft } from '../../log-check/components/mapping-draft';
-import { ParseErrorTable } from '../../log-check/components/parse-error-table';
-import { TemperatureChart } from '../../log-check/components/temperature-chart';
+import { useAppliedMapping } from '../../log-check/components/use-applied-mapping';
 import { useLogCheck } from '../../log-check/components/use-log-check';
 import { useRecordLoggerRun } from '../api/test-runs-api';
 import { instantFromLocal, localNow, optionalText, zoneSentence } from './run-facts';
@@ -109,27 +105,6 @@ export function factsRequest(facts: RunFactsDraft) {
   };
 }
 
-/** The remembered mapping as a draft of this file, when every column it names is in the file. */
-function draftFromRemembered(
-  draft: MappingDraft,
-  names: readonly string[],
-  mapping: ColumnMapping,
-): MappingDraft | null {
-  const used = [mapping.time, ...mapping.vrm, mapping.ambient, mapping.clock, mapping.power].filter(
-    (name): name is string => typeof name === 'string' && name.length > 0,
-  );
-  if (!used.every((name) => names.includes(name))) return null;
-  return {
-    ...draft,
-    time: mapping.time ?? draft.time,
-    vrm: [...mapping.vrm],
-    ambient: mapping.ambient ?? '',
-    clock: mapping.clock ?? '',
-    power: mapping.power ?? '',
-    units: { ...(mapping.units ?? {}) },
-  };
-}
-
 export interface RecordLoggerRunProps {
   cellId: number;
   rememberedMapping: ColumnMapping | null;
@@ -143,9 +118,8 @@ export interface RecordLoggerRunProps {
  */
 export function RecordLoggerRun({ cellId, rememberedMapping, signInPath, onRecorded }: RecordLoggerRunProps) {
   const check = useLogCheck();
-  const { file, reading, draft, failure, result, sending, setDraft } = check;
-  const [remembered, setRemembered] = useState(false);
-  const appliedTo = useRef<unknown>(null);
+  const { file, result } = check;
+  const remembered = useAppliedMapping(check, rememberedMapping);
   const [facts, setFacts] = useState(emptyFacts);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [message, setMessage] = useState<string | null>(null);
@@ -153,20 +127,6 @@ export function RecordLoggerRun({ cellId, rememberedMapping, signInPath, onRecor
   const [progress, setProgress] = useState<Progress | null>(null);
   const controller = useRef<AbortController | null>(null);
   const record = useRecordLoggerRun();
-
-  useEffect(() => {
-    if (!reading || !draft || appliedTo.current === reading) return;
-    appliedTo.current = reading;
-    const applied = rememberedMapping
-      ? draftFromRemembered(
-          draft,
-          reading.preview.columns.map((column) => column.name),
-          rememberedMapping,
-        )
-      : null;
-    setRemembered(applied !== null);
-    if (applied) setDraft(applied);
-  }, [reading, draft, rememberedMapping, setDraft]);
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
@@ -206,59 +166,21 @@ export function RecordLoggerRun({ cellId, rememberedMapping, signInPath, onRecor
   return (
     <div className="space-y-6">
       <LogFilePanel check={check} signInPath={signInPath} kept />
-      {failure?.stage === 'reading' && (
-        <ParseErrorTable
-          errors={failure.errors}
-          message={failure.message}
-          stage="reading"
-          hasPreview={failure.hasPreview}
-        />
-      )}
-      {file && reading && draft && (
-        <>
-          <LogPreviewPanel preview={reading.preview} fileName={file.name} />
-          <div>
-            <h3 className="mb-3 text-lg font-semibold text-ink">2 · Mapping and options</h3>
-            {remembered && (
-              <p role="status" className="mb-3 text-sm text-ink">
-                <span aria-hidden="true" className="mr-1.5 font-mono text-teal">
-                  ↺
-                </span>
-                Mapping remembered from this bench profile’s last run. Check it, then press Analyse.
-              </p>
-            )}
-            <ColumnMappingForm
-              preview={reading.preview}
-              draft={draft}
-              guess={remembered ? null : reading.guess}
-              onChange={setDraft}
-              pending={sending?.stage === 'analysing'}
-              disabled={sending?.stage === 'reading'}
-              onAnalyse={check.analyse}
-            />
-          </div>
-        </>
-      )}
-      {failure?.stage === 'analysing' && (
-        <ParseErrorTable
-          errors={failure.errors}
-          message={failure.message}
-          stage="analysing"
-          hasPreview={failure.hasPreview}
-        />
-      )}
-      {file && result && (
-        <AnalysisResults
-          analysis={result.outcome.analysis}
-          fileName={file.name}
-          outdated={check.resultOutdated}
-          chart={
-            check.chartSeries ? (
-              <TemperatureChart series={check.chartSeries} analysis={result.outcome.analysis} />
-            ) : null
-          }
-        />
-      )}
+      <LogCheckSteps
+        check={check}
+        headingLevel={3}
+        showGuess={!remembered}
+        mappingNote={
+          remembered && (
+            <p role="status" className="mb-3 text-sm text-ink">
+              <span aria-hidden="true" className="mr-1.5 font-mono text-teal">
+                ↺
+              </span>
+              Mapping remembered from this bench profile’s last run. Check it, then press Analyse.
+            </p>
+          )
+        }
+      />
       {file && result && !check.resultOutdated && (
         <Panel
           title="3 · The run"

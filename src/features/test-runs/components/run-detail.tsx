@@ -11,6 +11,7 @@ import { formatBytes, formatC, formatDeltaC, formatDuration } from '../../log-ch
 import { QaFlagList } from '../../log-check/components/qa-flag-list';
 import { VerdictMark } from '../../log-check/components/verdict-mark';
 import { useMarkRunOfRecord, useReanalyseRun, useReviewRun } from '../api/test-runs-api';
+import { ReanalyseRun } from './reanalyse-run';
 
 function Figure({ label, value }: { label: string; value: string }) {
   return (
@@ -102,11 +103,86 @@ function ReviewForm({ run }: { run: TestRun }) {
   );
 }
 
+/** A short account of the mapping an analysis was given: its VRM probes and ambient column. */
+function mappingInWords(parameters: Record<string, unknown>): string {
+  const mapping = (parameters.mapping ?? null) as { vrm?: unknown; ambient?: unknown } | null;
+  const vrm = Array.isArray(mapping?.vrm) ? mapping.vrm.filter((name) => typeof name === 'string') : [];
+  if (vrm.length === 0) return 'Mapping as read';
+  const ambient = typeof mapping?.ambient === 'string' && mapping.ambient ? mapping.ambient : 'none';
+  return `VRM: ${vrm.join(', ')} · ambient: ${ambient}`;
+}
+
+/** Every analysis of the run side by side, oldest first; the newest counts. Nothing here changes an analysis. */
+function AnalysesTable({ run }: { run: TestRun }) {
+  const countingId = run.analysis.id;
+  return (
+    <section aria-labelledby={`analyses-${run.id}`}>
+      <h3 id={`analyses-${run.id}`} className="mb-2 font-semibold text-ink">
+        Analyses
+      </h3>
+      <p className="mb-2 text-sm text-muted">
+        Each analysis of the stored file is kept as it was made. The newest one counts for the run.
+      </p>
+      <div className="overflow-x-auto">
+        <table className="w-full text-left text-sm">
+          <caption className="sr-only">Analyses of this run, oldest first</caption>
+          <thead>
+            <tr className="border-b border-rule text-[0.8125rem] text-muted">
+              <th scope="col" className="py-1.5 pr-3 font-medium">
+                Made
+              </th>
+              <th scope="col" className="py-1.5 pr-3 font-medium">
+                Mapping
+              </th>
+              <th scope="col" className="py-1.5 pr-3 text-right font-medium">
+                Peak
+              </th>
+              <th scope="col" className="py-1.5 pr-3 text-right font-medium">
+                Delta
+              </th>
+              <th scope="col" className="py-1.5 pr-3 font-medium">
+                Verdict
+              </th>
+              <th scope="col" className="py-1.5 font-medium">
+                QA flags
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {run.analyses.map((entry) => (
+              <tr key={entry.id} className="border-b border-rule align-top">
+                <td className="py-1.5 pr-3">
+                  <span className="numeric">{formatInstant(entry.createdAt)}</span>
+                  <span className="block text-[0.8125rem] text-muted">
+                    {entry.createdBy.displayName} · engine {entry.engineVersion}
+                  </span>
+                  {entry.id === countingId && (
+                    <span className="block text-[0.8125rem] font-semibold text-ink">★ Counts for the run</span>
+                  )}
+                </td>
+                <td className="py-1.5 pr-3 break-words">{mappingInWords(entry.parameters)}</td>
+                <td className="numeric py-1.5 pr-3 text-right">{formatC(entry.peakC)}</td>
+                <td className="numeric py-1.5 pr-3 text-right">{formatDeltaC(entry.deltaOverAmbientC)}</td>
+                <td className="py-1.5 pr-3">{entry.verdictLabel ?? 'No verdict'}</td>
+                <td className="py-1.5">
+                  {entry.flags.length === 0 ? 'None' : entry.flags.map((flag) => flag.label).join('; ')}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </section>
+  );
+}
+
 /** One run: its figures, QA flags in words, VRM load with its assumption, the evidence file and its review. */
 export function RunDetail({ run }: { run: TestRun }) {
   const { analysis } = run;
   const markOfRecord = useMarkRunOfRecord();
   const reanalyse = useReanalyseRun();
+  const [reanalysing, setReanalysing] = useState(false);
+  const [storedAgain, setStoredAgain] = useState(false);
   return (
     <Panel
       title={`Run on firmware ${run.firmwareVersion}`}
@@ -169,18 +245,7 @@ export function RunDetail({ run }: { run: TestRun }) {
             {run.reviewedAt && `, ${formatInstant(run.reviewedAt)}`}
           </p>
         )}
-        {run.analyses.length > 1 && (
-          <section aria-label="Earlier analyses">
-            <h3 className="mb-2 font-semibold text-ink">Analyses</h3>
-            <ul className="space-y-1 text-sm">
-              {run.analyses.map((entry) => (
-                <li key={entry.id} className="numeric">
-                  {formatInstant(entry.createdAt)} · engine {entry.engineVersion} · peak {formatC(entry.peakC)}
-                </li>
-              ))}
-            </ul>
-          </section>
-        )}
+        {run.analyses.length > 1 && <AnalysesTable run={run} />}
         <ReviewForm key={run.id} run={run} />
         <div className="flex flex-wrap gap-2">
           {run.actions.includes('mark-of-record') && !run.isRunOfRecord && (
@@ -188,18 +253,32 @@ export function RunDetail({ run }: { run: TestRun }) {
               Mark as run of record
             </Button>
           )}
-          {run.actions.includes('reanalyse') && (
-            <Button variant="quiet" pending={reanalyse.isPending} onClick={() => reanalyse.mutate(run.id)}>
-              Run the engine again with the current rubric
-            </Button>
+          {run.actions.includes('reanalyse') && !reanalysing && (
+            <>
+              <Button variant="secondary" onClick={() => setReanalysing(true)}>
+                Analyse again with another mapping
+              </Button>
+              <Button variant="quiet" pending={reanalyse.isPending} onClick={() => reanalyse.mutate({ runId: run.id })}>
+                Run the engine again with the current rubric
+              </Button>
+            </>
           )}
         </div>
+        {reanalysing && (
+          <ReanalyseRun
+            run={run}
+            onClose={(stored) => {
+              setReanalysing(false);
+              setStoredAgain(stored);
+            }}
+          />
+        )}
         {(markOfRecord.isError || reanalyse.isError) && (
           <Alert tone="danger" announce>
             {describeSubmitError(markOfRecord.error ?? reanalyse.error).message}
           </Alert>
         )}
-        {reanalyse.isSuccess && (
+        {(reanalyse.isSuccess || storedAgain) && (
           <p role="status" className="text-sm">
             A new analysis is stored beside the earlier ones; the file and earlier analyses are unchanged.
           </p>

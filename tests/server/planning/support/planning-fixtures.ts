@@ -151,7 +151,7 @@ export async function matrixOf(agent: Client, roundupId: number) {
     rows: {
       entryId: number;
       kind: string;
-      cells: { id: number; state: string; tester: { id: number } | null; actions: string[] }[];
+      cells: { id: number; state: string; tester: { id: number } | null; actions: string[]; qaFlags?: string[] }[];
     }[];
     progress: { cellCount: number; acceptedCount: number; percentAccepted: number; unassignedCount: number };
   };

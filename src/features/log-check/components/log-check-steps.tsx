@@ -1,0 +1,100 @@
+import type { ReactNode, Ref } from 'react';
+import { AnalysisResults } from './analysis-results';
+import { ColumnMappingForm } from './column-mapping-form';
+import { LogPreviewPanel } from './log-preview';
+import { requestFromDraft } from './mapping-draft';
+import { ParseErrorTable } from './parse-error-table';
+import { TemperatureChart } from './temperature-chart';
+import type { LogCheck } from './use-log-check';
+
+export interface LogCheckStepsProps {
+  check: LogCheck;
+  /** The level of the "Mapping and options" heading in its page. */
+  headingLevel: 2 | 3;
+  /** Said above the mapping form, e.g. that it was filled in from a mapping used before. */
+  mappingNote?: ReactNode;
+  /** False when the draft did not come from the server's guess (no field is marked as guessed). */
+  showGuess?: boolean;
+  /** Focused when a new result arrives. */
+  resultHeadingRef?: Ref<HTMLHeadingElement>;
+}
+
+/**
+ * The steps after a logger file is chosen, the same wherever a file is analysed (Log check, recording a run,
+ * analysing a stored run again): how the file reads, the mapping and options, what could not be read, and the
+ * analysis with its chart. A dead probe confirmed from the result is analysed again at once.
+ */
+export function LogCheckSteps({
+  check,
+  headingLevel,
+  mappingNote,
+  showGuess = true,
+  resultHeadingRef,
+}: LogCheckStepsProps) {
+  const { file, reading, draft, failure, result, sending } = check;
+  const Heading = headingLevel === 2 ? 'h2' : 'h3';
+  return (
+    <>
+      {failure?.stage === 'reading' && (
+        <ParseErrorTable
+          errors={failure.errors}
+          message={failure.message}
+          stage="reading"
+          hasPreview={failure.hasPreview}
+        />
+      )}
+
+      {file && reading && draft && (
+        <>
+          <LogPreviewPanel preview={reading.preview} fileName={file.name} />
+          <div>
+            <Heading className="mb-3 text-lg font-semibold text-ink">2 · Mapping and options</Heading>
+            {mappingNote}
+            <ColumnMappingForm
+              preview={reading.preview}
+              draft={draft}
+              guess={showGuess ? reading.guess : null}
+              onChange={check.setDraft}
+              pending={sending?.stage === 'analysing'}
+              disabled={sending?.stage === 'reading'}
+              onAnalyse={check.analyse}
+            />
+          </div>
+        </>
+      )}
+
+      {failure?.stage === 'analysing' && (
+        <ParseErrorTable
+          errors={failure.errors}
+          message={failure.message}
+          stage="analysing"
+          hasPreview={failure.hasPreview}
+        />
+      )}
+
+      {file && result && (
+        <AnalysisResults
+          analysis={result.outcome.analysis}
+          fileName={file.name}
+          outdated={check.resultOutdated}
+          headingRef={resultHeadingRef}
+          onConfirmDeadProbe={
+            reading && draft
+              ? (column) => {
+                  const next = { ...draft, confirmedDeadProbes: [...draft.confirmedDeadProbes, column] };
+                  check.setDraft(next);
+                  const built = requestFromDraft(next, reading.preview);
+                  if (built.request) check.analyse(built.request);
+                }
+              : undefined
+          }
+          chart={
+            check.chartSeries ? (
+              <TemperatureChart series={check.chartSeries} analysis={result.outcome.analysis} />
+            ) : null
+          }
+        />
+      )}
+    </>
+  );
+}

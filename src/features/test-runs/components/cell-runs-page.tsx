@@ -16,7 +16,7 @@ import { VerdictMark } from '../../log-check/components/verdict-mark';
 import { useCellRuns } from '../api/test-runs-api';
 import { ManualRunForm } from './manual-run-form';
 import { RecordLoggerRun } from './record-run';
-import { ManualMark, ReviewStateBadge, RunDetail } from './run-detail';
+import { FlagCount, ManualMark, ReviewStateBadge, RunDetail } from './run-detail';
 
 export interface CellRunsPageProps {
   cellId: number;
@@ -90,11 +90,7 @@ function RunsTable({
                   label={run.analysis.verdictLabel ?? 'No verdict yet'}
                   status={run.analysis.verdictStatus ?? undefined}
                 />
-                {run.analysis.flags.length > 0 && (
-                  <span className="ml-2 text-amber">
-                    ! {run.analysis.flags.length} flag{run.analysis.flags.length > 1 ? 's' : ''}
-                  </span>
-                )}
+                <FlagCount count={run.analysis.flags.length} className="ml-2" />
               </td>
               <td className="px-2 py-2">
                 <ReviewStateBadge state={run.reviewState} />

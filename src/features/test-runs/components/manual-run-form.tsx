@@ -3,9 +3,9 @@ import type { FieldErrors } from '../../../lib/form-errors';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
-import { TextField } from '../../../components/ui/text-field';
 import { describeSubmitError } from '../../../lib/form-errors';
 import { useRecordManualRun } from '../api/test-runs-api';
+import { CelsiusField } from './celsius-field';
 import { emptyFacts, factsRequest, RunFactsFields } from './record-run';
 
 /** A run entered by hand when no log exists: peak and ambient. Marked "Manual" everywhere it is shown. */
@@ -54,21 +54,19 @@ export function ManualRunForm({ cellId, onRecorded }: { cellId: number; onRecord
         askBookingReason={askBookingReason}
       />
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField
+        <CelsiusField
           id="manual-peak"
           label="Peak VRM temperature (°C)"
-          inputMode="decimal"
           value={peak}
-          onChange={(event) => setPeak(event.target.value)}
+          onValueChange={setPeak}
           error={errors.manualPeakC}
           required
         />
-        <TextField
+        <CelsiusField
           id="manual-ambient"
           label="Ambient (°C)"
-          inputMode="decimal"
           value={ambient}
-          onChange={(event) => setAmbient(event.target.value)}
+          onValueChange={setAmbient}
           error={errors.manualAmbientC}
           required
         />

@@ -4,13 +4,14 @@ import type { FieldErrors } from '../../../lib/form-errors';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { LoadingState } from '../../../components/ui/loading-state';
-import { TextField } from '../../../components/ui/text-field';
 import { cx } from '../../../lib/class-names';
 import { describeSubmitError } from '../../../lib/form-errors';
 import { defaultVerdictRubric, type VerdictCode, type VerdictRubric } from '../../../../shared/schemas/analysis';
 import type { ResultCell } from '../../../../shared/schemas/test-runs';
 import { formatC, formatDeltaC } from '../../log-check/components/format-figures';
 import { useRoundupResults, useSetRubric } from '../api/test-runs-api';
+import { CelsiusField } from './celsius-field';
+import { FlagCount } from './run-detail';
 
 export interface ResultsMatrixProps {
   roundupId: number;
@@ -48,11 +49,7 @@ function ResultCellView({ cell, figure, href }: { cell: ResultCell; figure: 'pea
       <span className="numeric block font-semibold text-ink">{value}</span>
       <span className="block text-[0.8125rem] text-ink">{cell.verdictLabel ?? 'No verdict yet'}</span>
       <span className="flex flex-wrap gap-x-2 text-[0.8125rem]">
-        {cell.flagCount > 0 && (
-          <span className="text-amber">
-            ! {cell.flagCount} flag{cell.flagCount > 1 ? 's' : ''}
-          </span>
-        )}
+        <FlagCount count={cell.flagCount} />
         {cell.source === 'manual' && <span className="text-copper">✎ Manual</span>}
         {cell.throttled && <span className="text-red">✕ Throttled</span>}
         {!cell.isRunOfRecord && <span className="text-muted">Newest run</span>}
@@ -115,21 +112,19 @@ function RubricForm({
 
   return (
     <form noValidate onSubmit={submit} aria-label="Verdict rubric" className="flex flex-wrap items-end gap-3">
-      <TextField
+      <CelsiusField
         id="rubric-comfortable"
         label="Comfortable below (°C)"
-        inputMode="decimal"
         value={comfortable}
-        onChange={(event) => setComfortable(event.target.value)}
+        onValueChange={setComfortable}
         error={errors.comfortableBelowC}
         className="w-44"
       />
-      <TextField
+      <CelsiusField
         id="rubric-warm"
         label="Warm up to (°C)"
-        inputMode="decimal"
         value={warm}
-        onChange={(event) => setWarm(event.target.value)}
+        onValueChange={setWarm}
         error={errors.warmUpToC}
         className="w-44"
       />

@@ -2,8 +2,10 @@ import { useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import { Panel } from '../../../components/ui/panel';
 import { TextArea } from '../../../components/ui/text-area';
+import { cx } from '../../../lib/class-names';
 import { describeSubmitError } from '../../../lib/form-errors';
 import { formatInstant } from '../../../lib/format-time';
 import { runReviewStateLabels, type TestRun } from '../../../../shared/schemas/test-runs';
@@ -26,6 +28,16 @@ const reviewTone = { pending: 'muted', accepted: 'positive', 'sent-back': 'cauti
 
 export function ReviewStateBadge({ state }: { state: TestRun['reviewState'] }) {
   return <Badge tone={reviewTone[state]}>{runReviewStateLabels[state]}</Badge>;
+}
+
+/** How many QA flags a run has, with a mark and in words (nothing when it has none). */
+export function FlagCount({ count, className }: { count: number; className?: string }) {
+  if (count === 0) return null;
+  return (
+    <span className={cx('text-amber', className)}>
+      ! {count} flag{count > 1 ? 's' : ''}
+    </span>
+  );
 }
 
 export function ManualMark() {
@@ -112,9 +124,38 @@ function mappingInWords(parameters: Record<string, unknown>): string {
   return `VRM: ${vrm.join(', ')} · ambient: ${ambient}`;
 }
 
+type AnalysisRow = TestRun['analyses'][number];
+
 /** Every analysis of the run side by side, oldest first; the newest counts. Nothing here changes an analysis. */
 function AnalysesTable({ run }: { run: TestRun }) {
   const countingId = run.analysis.id;
+  const columns: DataTableColumn<AnalysisRow>[] = [
+    {
+      id: 'made',
+      header: 'Made',
+      rowHeader: true,
+      cell: (entry) => (
+        <>
+          <span className="numeric">{formatInstant(entry.createdAt)}</span>
+          <span className="block text-[0.8125rem] text-muted">
+            {entry.createdBy.displayName} · engine {entry.engineVersion}
+          </span>
+          {entry.id === countingId && (
+            <span className="block text-[0.8125rem] font-semibold text-ink">★ Counts for the run</span>
+          )}
+        </>
+      ),
+    },
+    { id: 'mapping', header: 'Mapping', cell: (entry) => mappingInWords(entry.parameters) },
+    { id: 'peak', header: 'Peak', numeric: true, cell: (entry) => formatC(entry.peakC) },
+    { id: 'delta', header: 'Delta', numeric: true, cell: (entry) => formatDeltaC(entry.deltaOverAmbientC) },
+    { id: 'verdict', header: 'Verdict', cell: (entry) => entry.verdictLabel ?? 'No verdict' },
+    {
+      id: 'flags',
+      header: 'QA flags',
+      cell: (entry) => (entry.flags.length === 0 ? 'None' : entry.flags.map((flag) => flag.label).join('; ')),
+    },
+  ];
   return (
     <section aria-labelledby={`analyses-${run.id}`}>
       <h3 id={`analyses-${run.id}`} className="mb-2 font-semibold text-ink">
@@ -123,55 +164,14 @@ function AnalysesTable({ run }: { run: TestRun }) {
       <p className="mb-2 text-sm text-muted">
         Each analysis of the stored file is kept as it was made. The newest one counts for the run.
       </p>
-      <div className="overflow-x-auto">
-        <table className="w-full text-left text-sm">
-          <caption className="sr-only">Analyses of this run, oldest first</caption>
-          <thead>
-            <tr className="border-b border-rule text-[0.8125rem] text-muted">
-              <th scope="col" className="py-1.5 pr-3 font-medium">
-                Made
-              </th>
-              <th scope="col" className="py-1.5 pr-3 font-medium">
-                Mapping
-              </th>
-              <th scope="col" className="py-1.5 pr-3 text-right font-medium">
-                Peak
-              </th>
-              <th scope="col" className="py-1.5 pr-3 text-right font-medium">
-                Delta
-              </th>
-              <th scope="col" className="py-1.5 pr-3 font-medium">
-                Verdict
-              </th>
-              <th scope="col" className="py-1.5 font-medium">
-                QA flags
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {run.analyses.map((entry) => (
-              <tr key={entry.id} className="border-b border-rule align-top">
-                <td className="py-1.5 pr-3">
-                  <span className="numeric">{formatInstant(entry.createdAt)}</span>
-                  <span className="block text-[0.8125rem] text-muted">
-                    {entry.createdBy.displayName} · engine {entry.engineVersion}
-                  </span>
-                  {entry.id === countingId && (
-                    <span className="block text-[0.8125rem] font-semibold text-ink">★ Counts for the run</span>
-                  )}
-                </td>
-                <td className="py-1.5 pr-3 break-words">{mappingInWords(entry.parameters)}</td>
-                <td className="numeric py-1.5 pr-3 text-right">{formatC(entry.peakC)}</td>
-                <td className="numeric py-1.5 pr-3 text-right">{formatDeltaC(entry.deltaOverAmbientC)}</td>
-                <td className="py-1.5 pr-3">{entry.verdictLabel ?? 'No verdict'}</td>
-                <td className="py-1.5">
-                  {entry.flags.length === 0 ? 'None' : entry.flags.map((flag) => flag.label).join('; ')}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <DataTable
+        caption="Analyses of this run, oldest first"
+        rows={run.analyses}
+        columns={columns}
+        rowKey={(entry) => entry.id}
+        filter={false}
+        noun={['analysis', 'analyses']}
+      />
     </section>
   );
 }

@@ -27,7 +27,7 @@ import { createFileStore } from './storage/create-file-store';
 import { DevInboxService } from './services/dev-inbox.service';
 import { LinkSecret } from './mail/link-secret';
 import { MailSender } from './mail/mail-sender';
-import { parseFrom } from './mail/compose';
+import { chartAltText, parseFrom } from './mail/compose';
 import { createMailTransport } from './mail/transport';
 import { StaffMailService } from './services/staff-mail.service';
 import { SubscribersService } from './services/subscribers.service';
@@ -88,7 +88,16 @@ export function createServices(dataSource: DataSource, env: Env) {
     from: env.MAIL_FROM,
     siteUrl,
     secret: linkSecret,
-    content: { siteUrl, outletName },
+    content: {
+      siteUrl,
+      outletName,
+      // The first approved chart that still shows today's data goes inline in the mail as its image.
+      chartPng: async (_manager, roundupId) => {
+        const image = (await charts.approvedChartImages(roundupId)).find((i) => !i.stale);
+        const png = image ? await files.get(image.storageKey) : null;
+        return image && png ? { png, alt: chartAltText(image.title) } : null;
+      },
+    },
     batchSize: env.MAIL_BATCH_SIZE,
     leaseMs: env.MAIL_LEASE_SECONDS * 1000,
     retryBaseMs: env.MAIL_RETRY_BASE_SECONDS * 1000,

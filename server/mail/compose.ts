@@ -74,6 +74,11 @@ const subjectPrefix: Record<GoLiveContent['kind'], string> = {
 
 export const chartContentId = 'main-chart@benchwire';
 
+/** The inline chart's alt text: what it shows, and where its figures are in words. */
+export function chartAltText(title: string): string {
+  return oneLine(`Chart: ${title}. Every figure is also in the results table on the roundup page.`, 300);
+}
+
 /** The go-live (or update, or correction) mail for one subscriber: HTML and plain text with the same content. */
 export function goLiveMessage(
   content: GoLiveContent,
@@ -87,6 +92,7 @@ export function goLiveMessage(
     ...(content.note ? [`${subjectPrefix[content.kind]}: ${content.note}`, ''] : []),
     ...(content.summary ? [content.summary, ''] : []),
     ...(picksText.length ? ['Top picks:', ...picksText, ''] : []),
+    ...(content.chart ? [content.chart.alt, ''] : []),
     `Read the results: ${content.url}`,
     '',
     '--',

@@ -50,12 +50,12 @@ export async function sendAll(sender: { drain(): Promise<unknown> }, timeoutMs =
 }
 
 /** Every message the relay kept for an address, parsed. */
-export async function messagesTo(address: string): Promise<ParsedMail[]> {
+export async function messagesTo(address: string, options: { keepCidLinks?: boolean } = {}): Promise<ParsedMail[]> {
   const ds = await testDataSource();
   const rows: { raw: Buffer }[] = await ds.query('SELECT raw FROM relay_messages WHERE recipient = ? ORDER BY id', [
     address,
   ]);
-  return Promise.all(rows.map((row) => simpleParser(row.raw)));
+  return Promise.all(rows.map((row) => simpleParser(row.raw, options)));
 }
 
 let roundupCounter = 0;

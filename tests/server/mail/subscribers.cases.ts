@@ -2,7 +2,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { SubscriberEntity, MailSuppressionEntity } from '../../../server/entities/mail.entities';
 import { enqueueGoLiveMailing } from '../../../server/mail/outbox';
+import { RoundupEntity } from '../../../server/entities/roundup.entity';
 import { client, signedIn, TEST_HOST, TEST_ORIGIN, uniqueEmail } from '../support/test-app';
+import { approveAllCharts, roundupWithResults } from '../editorial/support/editorial-fixtures';
 import {
   sendAll,
   closeMailTestContext,
@@ -336,5 +338,75 @@ describe('editors and the relay', () => {
     } finally {
       await closeMailTestContext(withSecret);
     }
+  });
+});
+
+describe('go-live mail content', () => {
+  it('carries the summary, the top picks with their labels and the approved chart inline, in HTML and in text', async () => {
+    const reader = uniqueEmail('content');
+    await subscribeAndConfirm(reader);
+    const editor = await signedIn(ctx.app, 'editor');
+    const tester = await signedIn(ctx.app, 'tester');
+    // Two boards under one load, each with a manual run of record (figures of our own, not measurements).
+    const { roundupId, products } = await roundupWithResults(editor.agent, tester, [
+      [[{ peakC: 71.0 }]],
+      [[{ peakC: 76.5 }]],
+    ]);
+    // The second board gets the stronger label, so it leads the picks whatever its position in the plan.
+    const labels = [
+      [products[0].entryId, 'recommended', 'A stock build on a budget'],
+      [products[1].entryId, 'bench-pick', 'Sustained all-core loads'],
+    ] as const;
+    for (const [entryId, label, bestFor] of labels) {
+      const set = await editor.agent
+        .put(`/api/roundups/${roundupId}/verdicts/${entryId}`)
+        .send({ label, bestFor, price: { amountMinor: 18999, currency: 'EUR' } });
+      expect(set.status, set.text).toBe(200);
+    }
+    await approveAllCharts(editor.agent, roundupId);
+    const images = await ctx.services.charts.approvedChartImages(roundupId);
+    expect(images.length).toBeGreaterThan(0);
+    const storedPng = await ctx.services.files.get(images[0].storageKey);
+
+    await ctx.dataSource.transaction((manager) => enqueueGoLiveMailing(manager, roundupId));
+    await sendAll(ctx.services.mailSender);
+    const roundup = await ctx.dataSource.getRepository(RoundupEntity).findOneByOrFail({ id: roundupId });
+    // keepCidLinks: the HTML as sent (mailparser otherwise rewrites cid: references to data: URLs).
+    const mails = (await messagesTo(reader, { keepCidLinks: true })).filter((m) => m.subject?.includes(roundup.title));
+    expect(mails).toHaveLength(1);
+    const [mail] = mails;
+
+    // The chart travels as an inline part (RFC 2392 Content-ID) and the HTML points at it with alt text.
+    const inline = mail.attachments.filter((a) => a.contentDisposition === 'inline' && a.contentType === 'image/png');
+    expect(inline).toHaveLength(1);
+    const cid = inline[0].cid!;
+    // PNG signature bytes 89 50 4E 47 0D 0A 1A 0A (PNG specification, ISO/IEC 15948, §5.2).
+    expect([...inline[0].content.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+    expect(inline[0].content.equals(storedPng!)).toBe(true);
+    const html = mail.html as string;
+    const image = new RegExp(`<img src="cid:${cid.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}" alt="([^"]+)"`).exec(html);
+    expect(image, 'an <img> of the inline part with alt text').not.toBeNull();
+    expect(image![1]).toContain(images[0].title);
+
+    // Summary, picks with labels (strongest first) and the link, in both parts.
+    const [first, second] = await ctx.dataSource.query(
+      'SELECT p.id, p.maker, p.model FROM roundup_entries e JOIN products p ON p.id = e.product_id WHERE e.id IN (?) ORDER BY FIELD(e.id, ?, ?)',
+      [[products[1].entryId, products[0].entryId], products[1].entryId, products[0].entryId],
+    );
+    const text = mail.text ?? '';
+    expect(text).toContain(`2 ${roundup.platform} boards tested for power-delivery temperatures under 1 load`);
+    expect(html).toContain(`2 ${roundup.platform} boards tested for power-delivery temperatures under 1 load`);
+    const pickLines = text.split('\n').filter((line) => line.startsWith('- '));
+    expect(pickLines).toHaveLength(2);
+    expect(pickLines[0]).toContain(first.model);
+    expect(pickLines[0]).toMatch(/— Bench pick$/);
+    expect(pickLines[1]).toContain(second.model);
+    expect(pickLines[1]).toMatch(/— Recommended$/);
+    expect(html).toMatch(/Bench pick<\/strong>[\s\S]*Recommended<\/strong>/);
+    expect(text).toContain(image![1]);
+    expect(text).toContain(`${site}/read/roundups/${roundupId}-`);
+    // The unsubscribe headers stay.
+    expect(rawHeader(mail, 'list-unsubscribe')).toMatch(/^<https:\/\/results\.soaksheet\.example\/unsubscribe\//);
+    expect(rawHeader(mail, 'list-unsubscribe-post')).toBe('List-Unsubscribe=One-Click');
   });
 });

@@ -30,4 +30,29 @@ export function registerDevInboxRoutes(api: ApiRegistry, { services }: AppContex
     response: devInboxMessageSchema,
     handler: ({ params }) => services.devInbox.message(params.id),
   });
+
+  api.add({
+    method: 'get',
+    path: '/api/dev-inbox/:id/html',
+    access: accountManagers,
+    tag: 'Mail',
+    summary:
+      'The HTML part of one message as a page of its own (inline images as data:), for the dev inbox frame: its inline styles apply, and nothing in it runs.',
+    params: devInboxParamsSchema,
+    produces: 'text/html',
+    handler: async ({ params, res }) => {
+      const message = await services.devInbox.message(params.id);
+      res.setHeader('Content-Type', 'text/html; charset=utf-8');
+      // A mail's HTML styles itself inline and carries its images as data:; scripts, forms and requests stay shut.
+      res.setHeader(
+        'Content-Security-Policy',
+        "default-src 'none'; img-src data:; style-src 'unsafe-inline'; base-uri 'none'; form-action 'none'; frame-ancestors 'self'; sandbox allow-popups allow-popups-to-escape-sandbox",
+      );
+      res.setHeader('X-Content-Type-Options', 'nosniff');
+      res.setHeader('Cache-Control', 'no-store');
+      res
+        .status(200)
+        .end(message.html ?? '<!doctype html><title>No HTML part</title><p>This message has no HTML part.</p>');
+    },
+  });
 }

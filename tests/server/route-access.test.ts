@@ -118,6 +118,7 @@ const allowed: Record<string, Caller[]> = {
   // Mail (issue 11): the local relay's dev inbox is for admins.
   'GET /api/dev-inbox': ['admin'],
   'GET /api/dev-inbox/:id': ['admin'],
+  'GET /api/dev-inbox/:id/html': ['admin'],
   // Readers sign up without an account (rate-limited; the same answer for every address); editors keep the subjects
   // and the roundups' mailings; the relay's webhook carries a shared secret instead of a session.
   'GET /api/mail-categories': everyone,

@@ -76,9 +76,20 @@ describe('the local mail relay', () => {
     expect(detail.body.text.trim()).toBe('The plain part');
     expect(detail.body.html).toContain(`src="data:image/png;base64,${onePixelPng.toString('base64')}"`);
     expect(detail.body.headers.find((h: { name: string }) => h.name === 'Subject').value).toBe('Chart inside');
+    // The frame's page: the same HTML under a policy of its own (inline styles and data: images, nothing that runs).
+    const page = await agent.get(`/api/dev-inbox/${list.body.messages[0].id}/html`);
+    expect(page.status).toBe(200);
+    expect(page.headers['content-type']).toMatch(/^text\/html/);
+    expect(page.text).toBe(detail.body.html);
+    const policy = page.headers['content-security-policy'];
+    expect(policy).toContain("default-src 'none'");
+    expect(policy).toContain("style-src 'unsafe-inline'");
+    expect(policy).toMatch(/(^|; )sandbox( |;|$)/);
+    expect(policy).not.toMatch(/script-src/);
 
     const { agent: editor } = await signedIn(app, 'editor');
     expect((await editor.get('/api/dev-inbox')).status).toBe(403);
+    expect((await editor.get(`/api/dev-inbox/${list.body.messages[0].id}/html`)).status).toBe(403);
   });
 
   it('has no dev inbox when mail goes through a real relay', async () => {

@@ -113,11 +113,12 @@ function MessageBody({ message }: { message: DevInboxMessage }) {
           ))}
       </div>
       {view === 'html' && message.html !== null && (
-        // No scripts, no forms, no same-origin access: the message's HTML cannot reach the app.
+        // The message's HTML comes as a page of its own with its own Content-Security-Policy (its inline styles
+        // apply, nothing runs); the sandbox keeps it from the app. Links open in a new tab.
         <iframe
           title={`HTML of “${message.subject}”`}
-          sandbox=""
-          srcDoc={message.html}
+          sandbox="allow-popups allow-popups-to-escape-sandbox"
+          src={`/api/dev-inbox/${message.id}/html`}
           className="h-[36rem] w-full rounded-[3px] border border-rule bg-white"
         />
       )}

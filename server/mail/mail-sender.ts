@@ -51,6 +51,20 @@ export interface BatchResult {
 
 const subscriberMailings = new Set(['go-live', 'update', 'correction']);
 
+interface PlannedRow {
+  row: OutboxEntity;
+  /** null: the row is not to be sent (suppressed, unconfirmed, opted out, or no address). */
+  address: string | null;
+  subscriber: SubscriberEntity | undefined;
+}
+
+interface PreparedBatch {
+  now: Date;
+  rows: OutboxEntity[];
+  plans: PlannedRow[];
+  mailings?: Map<number, MailingEntity>;
+}
+
 interface Outcome {
   row: OutboxEntity;
   state: Exclude<OutboxState, 'queued' | 'sending'>;
@@ -110,12 +124,43 @@ export class MailSender {
 
   /** One batch: claim, send, record. */
   async sendBatch(): Promise<BatchResult> {
-    const result: BatchResult = { claimed: 0, sent: 0, deferred: 0, failed: 0, suppressed: 0 };
-    if (!this.options.transport) return result;
+    return this.deliver(await this.prepare());
+  }
+
+  /**
+   * Sends batches until nothing is due (or `shouldStop` says so); returns the totals. The next batch is claimed and
+   * read while the current one is on the wire, so the transport does not wait for the database between batches.
+   */
+  async drain(
+    shouldStop: () => boolean = () => false,
+    onBatch?: (batch: BatchResult) => void | Promise<void>,
+  ): Promise<BatchResult> {
+    const total: BatchResult = { claimed: 0, sent: 0, deferred: 0, failed: 0, suppressed: 0 };
+    if (!this.options.transport) return total;
+    let next: Promise<PreparedBatch> | null = shouldStop() ? null : this.prepare();
+    while (next) {
+      const current = await next;
+      if (current.rows.length === 0) break;
+      next = shouldStop() ? null : this.prepare();
+      // A failure reading the next batch must not leave it unhandled while this one is sent.
+      next?.catch(() => {});
+      const batch = await this.deliver(current);
+      for (const key of Object.keys(total) as (keyof BatchResult)[]) total[key] += batch[key];
+      await onBatch?.(batch);
+      if (next && shouldStop()) {
+        // Claimed but not sent: hand the rows back at once instead of after their lease.
+        await this.release((await next).rows);
+        next = null;
+      }
+    }
+    return total;
+  }
+
+  /** Claims due rows and reads what sending them needs. */
+  private async prepare(): Promise<PreparedBatch> {
     const now = this.clock();
-    const rows = await this.claim(now);
-    result.claimed = rows.length;
-    if (rows.length === 0) return result;
+    const rows = this.options.transport ? await this.claim(now) : [];
+    if (rows.length === 0) return { now, rows: [], plans: [] };
 
     const manager = this.options.dataSource.manager;
     const subscriberIds = [...new Set(rows.map((r) => r.subscriberId).filter((id): id is number => id !== null))];
@@ -140,8 +185,8 @@ export class MailSender {
       rows.map((row) => this.addressOf(row, subscribers, users)).filter((a): a is string => a !== null),
     );
 
-    const outcomes = await Promise.all(
-      rows.map(async (row): Promise<Outcome> => {
+    const plans = await Promise.all(
+      rows.map(async (row): Promise<PlannedRow> => {
         const address = this.addressOf(row, subscribers, users);
         const subscriber = row.subscriberId !== null ? subscribers.get(row.subscriberId) : undefined;
         const user = row.userId !== null ? users.get(row.userId) : undefined;
@@ -155,7 +200,20 @@ export class MailSender {
               : row.userId !== null
                 ? Boolean(user?.active) && !optOuts.has(`${row.userId}:${row.kind}`)
                 : true);
-        if (!allowed || !address) return { row, state: 'suppressed' };
+        return { row, address: allowed ? address : null, subscriber };
+      }),
+    );
+    return { now, rows, plans, mailings };
+  }
+
+  /** Sends a prepared batch and records each row's outcome. */
+  private async deliver(batch: PreparedBatch): Promise<BatchResult> {
+    const result: BatchResult = { claimed: batch.rows.length, sent: 0, deferred: 0, failed: 0, suppressed: 0 };
+    if (batch.rows.length === 0) return result;
+    const mailings = batch.mailings ?? new Map<number, MailingEntity>();
+    const outcomes = await Promise.all(
+      batch.plans.map(async ({ row, address, subscriber }): Promise<Outcome> => {
+        if (!address) return { row, state: 'suppressed' };
         try {
           const message = await this.compose(row, address, subscriber, mailings);
           await (this.options.transport as Transporter).sendMail(message);
@@ -167,20 +225,20 @@ export class MailSender {
         }
       }),
     );
-    await this.record(outcomes, now);
+    await this.record(outcomes, batch.now);
     for (const outcome of outcomes) result[outcome.state] += 1;
     return result;
   }
 
-  /** Sends batches until nothing is due (or `shouldStop` says so); returns the totals. */
-  async drain(shouldStop: () => boolean = () => false): Promise<BatchResult> {
-    const total: BatchResult = { claimed: 0, sent: 0, deferred: 0, failed: 0, suppressed: 0 };
-    while (!shouldStop()) {
-      const batch = await this.sendBatch();
-      for (const key of Object.keys(total) as (keyof BatchResult)[]) total[key] += batch[key];
-      if (batch.claimed === 0) break;
-    }
-    return total;
+  /** Puts claimed rows back in the queue untouched (a stopping sender's batch it will not send). */
+  private async release(rows: OutboxEntity[]) {
+    if (rows.length === 0) return;
+    await this.options.dataSource.query(
+      `UPDATE mail_outbox SET state = IF(attempts > 1, 'deferred', 'queued'), lease_until = NULL,
+              attempts = attempts - 1
+        WHERE id IN (?) AND state = 'sending'`,
+      [rows.map((r) => r.id)],
+    );
   }
 
   private addressOf(

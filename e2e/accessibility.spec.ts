@@ -36,6 +36,9 @@ const pages: Record<string, { role: Role | null; url: string | ((page: Page) => 
   '/roundups/:id/write-up': { role: 'writer', url: async (page) => (await demoWriteUp(page)).overview },
   '/roundups/:id/write-up/:sectionId': { role: 'writer', url: async (page) => (await demoWriteUp(page)).section },
   '/my-bench': { role: 'tester', url: '/my-bench' },
+  // The dev inbox's list; a message open (its frame, its views) is swept in e2e/subscribers.spec.ts.
+  '/dev-inbox': { role: 'admin', url: '/dev-inbox' },
+  '/subscribers': { role: 'editor', url: '/subscribers' },
   '/*': { role: 'writer', url: '/no-such-page' },
 };
 
@@ -78,10 +81,7 @@ async function firstProductPhotos(page: Page): Promise<string> {
  * Pages not yet in the sweep, each with its reason. A page leaves this list when it joins `pages` above; a new page in
  * neither list fails the next test.
  */
-const notYetSwept: Record<string, string> = {
-  '/dev-inbox': 'the local relay inbox (admin, development only): not yet swept',
-  '/subscribers': 'subscriber subjects and mailings: not yet swept',
-};
+const notYetSwept: Record<string, string> = {};
 
 test('every page of the staff app is listed here', () => {
   const missing = clientRoutePatterns().filter((pattern) => !(pattern in pages) && !(pattern in notYetSwept));

@@ -1,12 +1,15 @@
+import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
-import { createConnection } from 'mysql2/promise';
+import { apiAs, readyRoundup } from './support/ready-roundup';
 import { signInAs } from './support/sign-in';
-import { uniqueSuffix } from './support/unique';
 
-// The acceptance test of embargo publishing (issue 10): an editor schedules a roundup a few seconds ahead in a
-// named time zone; before that time its public page answers 404; the job runner in the server makes it live; a
-// reader without an account opens it. The writing and review steps belong to the editorial work, so the roundup is
-// put In review directly in the database, where those steps would leave it.
+// The acceptance journey of embargo publishing (issue 10): an editor schedules a roundup that is genuinely ready
+// (tested, verdicts set, charts approved, write-up signed off — made through the API as staff make it) a few seconds
+// ahead in a named time zone; before that time it is on no public page; the job runner in the server makes it live;
+// a reader without an account opens it, switches to °F, compares its boards, asks a board's page for an estimate and
+// downloads the open data.
+
+const thin = '\u2009';
 
 /** The local date and HH:MM:SS of an instant in a zone, as the schedule form takes them. */
 function localIn(instant: Date, timeZone: string) {
@@ -27,39 +30,19 @@ function localIn(instant: Date, timeZone: string) {
   };
 }
 
-test('an editor schedules a roundup a few seconds ahead; it goes live; a reader opens it', async ({
+test('an editor schedules a ready roundup a few seconds ahead; it goes live; a reader reads, compares, estimates and downloads', async ({
   page,
   browser,
+  playwright,
+  baseURL,
 }) => {
-  test.setTimeout(120_000);
+  test.setTimeout(180_000);
+  const editorApi = await apiAs(playwright, baseURL!, 'editor');
+  const testerApi = await apiAs(playwright, baseURL!, 'tester');
+  const { roundupId, title, boards, configurations } = await readyRoundup(editorApi, testerApi);
+  await editorApi.dispose();
+  await testerApi.dispose();
   await signInAs(page, 'editor');
-
-  // A roundup of the demo outlet's own profile and configurations, then In review.
-  const profiles = (await (await page.request.get('/api/bench-profiles')).json()) as
-    { profiles?: { id: number }[] } | { id: number }[];
-  const profileList = Array.isArray(profiles) ? profiles : (profiles.profiles ?? []);
-  const configurations = (await (await page.request.get('/api/load-configurations')).json()) as
-    { configurations?: { id: number }[] } | { id: number }[];
-  const configurationList = Array.isArray(configurations) ? configurations : (configurations.configurations ?? []);
-  const title = `Helix-1700 embargo check ${uniqueSuffix()}`;
-  const created = await page.request.post('/api/roundups', {
-    data: {
-      title,
-      category: 'motherboard',
-      platform: 'Helix-1700',
-      priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE' },
-      targetPublishDate: null,
-      timeZone: 'Europe/Berlin',
-      benchProfileId: profileList[0]?.id ?? null,
-      loadConfigurationIds: configurationList.slice(0, 1).map((c) => c.id),
-    },
-    headers: { Origin: new URL(page.url()).origin },
-  });
-  expect(created.status(), await created.text()).toBe(201);
-  const roundupId = ((await created.json()) as { id: number }).id;
-  const db = await createConnection(process.env.DATABASE_URL as string);
-  await db.query("UPDATE roundups SET state = 'in-review' WHERE id = ?", [roundupId]);
-  await db.end();
 
   await page.goto(`/roundups/${roundupId}?tab=publishing`);
   const at = new Date(Math.ceil((Date.now() + 12_000) / 1000) * 1000);
@@ -78,9 +61,10 @@ test('an editor schedules a roundup a few seconds ahead; it goes live; a reader 
     state: string;
   };
   expect(publishing.state).toBe('scheduled');
-  const home = await readerPage.goto('/read');
+  await readerPage.goto('/read');
   expect(await readerPage.content()).not.toContain(title);
-  void home;
+  const feedBefore = await readerPage.request.get('/read/feed.atom');
+  expect(await feedBefore.text()).not.toContain(title);
 
   // The server's job runner publishes it within seconds of the time; the staff page follows.
   await expect(page.getByText('The roundup is live')).toBeVisible({ timeout: 45_000 });
@@ -93,5 +77,64 @@ test('an editor schedules a roundup a few seconds ahead; it goes live; a reader 
   const response = await readerPage.goto(publicPath as string);
   expect(response?.status()).toBe(200);
   await expect(readerPage.getByRole('heading', { level: 1 })).toContainText(title);
+  // The home page the reader saw before is kept a minute by the browser; a reload revalidates it with its ETag.
+  await readerPage.goto('/read');
+  await readerPage.reload();
+  await expect(readerPage.getByRole('link', { name: title })).toBeVisible();
+  await readerPage.getByRole('link', { name: title }).click();
+  await expect(readerPage.getByRole('heading', { level: 1, name: title })).toBeVisible();
+
+  // °C/°F: the chart's table switches in place (the reader script), the same reading converted
+  // (°F = °C × 9/5 + 32, ITS-90 definitions).
+  const stockTable = readerPage.getByRole('table', {
+    name: new RegExp(`${configurations[0].name}: hottest VRM reading, absolute`),
+  });
+  await expect(stockTable.getByRole('row')).toHaveCount(3); // header + two boards
+  const firstCell = stockTable.getByRole('row').nth(1).getByRole('cell').first();
+  const celsiusText = (await firstCell.innerText()).trim();
+  expect(celsiusText).toMatch(new RegExp(`^\\d+\\.\\d${thin}°C`));
+  await readerPage.getByRole('link', { name: 'Show temperatures in °F' }).click();
+  await expect(firstCell).toContainText(`${thin}°F`);
+  const shownF = Number((await firstCell.innerText()).trim().split(thin)[0]);
+  expect(Math.abs(shownF - ((Number(celsiusText.split(thin)[0]) * 9) / 5 + 32))).toBeLessThanOrEqual(0.1);
+
+  // Open data: the CSV of every run of record (two boards × two loads), units in the column names.
+  const csvDownload = readerPage.waitForEvent('download');
+  await readerPage.getByRole('link', { name: 'Results (CSV)' }).click();
+  const csv = await csvDownload;
+  expect(csv.suggestedFilename()).toMatch(/results\.csv$/);
+  const csvLines = readFileSync(await csv.path(), 'utf8')
+    .trim()
+    .split('\r\n');
+  expect(csvLines[0]).toContain('peak_c');
+  expect(csvLines).toHaveLength(1 + 2 * 2);
+  expect(csvLines.some((line) => line.includes(boards[0].name))).toBe(true);
+
+  // Compare the two boards under the stock load; the unit chosen stays.
+  await readerPage.getByRole('navigation', { name: 'Site' }).getByRole('link', { name: 'Compare boards' }).click();
+  await readerPage.getByLabel(boards[0].name).check();
+  await readerPage.getByLabel(boards[1].name).check();
+  const stock = await readerPage
+    .locator('#compare-configuration option', { hasText: configurations[0].name })
+    .getAttribute('value');
+  await readerPage.getByLabel('Load configuration').selectOption(stock ?? '');
+  await readerPage.getByRole('button', { name: 'Compare' }).click();
+  const compared = readerPage.getByRole('table', { name: /hottest VRM reading over the room/ });
+  await expect(compared.getByRole('row')).toHaveCount(3);
+  await expect(compared).toContainText('°F');
+
+  // "Will it cope?" on a board's page: a power within the tested range gives an estimate with its cautions.
+  await compared.getByRole('link', { name: boards[0].name }).click();
+  await expect(readerPage.getByRole('heading', { level: 1, name: boards[0].name })).toBeVisible();
+  await expect(readerPage.getByText('This is an estimate, not a guarantee')).toBeVisible();
+  await readerPage.getByLabel('CPU package power (W)').fill('5000');
+  await readerPage.getByLabel('Room temperature (°F)').fill('75');
+  await readerPage.getByRole('button', { name: 'Estimate' }).click();
+  await expect(readerPage.getByText('Enter a package power between 10 and 1000 W.')).toBeVisible();
+  await expect(readerPage.getByLabel('Room temperature (°F)')).toHaveValue('75');
+  await readerPage.getByLabel('CPU package power (W)').fill('230');
+  await readerPage.getByRole('button', { name: 'Estimate' }).click();
+  await expect(readerPage.getByRole('heading', { name: /Estimated hottest VRM reading/ })).toBeVisible();
+  await expect(readerPage.locator('.estimate-figure')).toContainText('°F');
   await reader.close();
 });

@@ -7,7 +7,7 @@
  * Both servers get one process (nginx: worker_processes 1; the app: one Node.js process); autocannon runs here.
  */
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, mkdirSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, mkdtempSync, mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { get } from 'node:http';
 import { createServer } from 'node:net';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
@@ -91,6 +91,8 @@ async function measure(label: string, url: string) {
 
 const children: ChildProcess[] = [];
 const workDir = mkdtempSync(join(tmpdir(), 'benchwire-bench-public-'));
+// nginx started as root serves with an unprivileged worker: the page files must be readable by it.
+chmodSync(workDir, 0o755);
 let databaseUrl: string | null = null;
 let stopDatabase: (() => Promise<void>) | null = null;
 

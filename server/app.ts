@@ -12,7 +12,8 @@ import { securityHeaders } from './middleware/security-headers';
 import { verifyOrigin } from './middleware/verify-origin';
 import { registerFeatureRoutes } from './routes/all';
 import { createReaderRouter } from './public-site/reader-routes';
-import { LivePublishedRoundups } from './public-site/published-roundup-source';
+import { SnapshotPublishedRoundups } from './public-site/published-roundup-source';
+import type { PublishedRoundup } from './public-site/published-roundup';
 import { readerAssetsFrom } from './public-site/reader-assets';
 import { createSubscriberPages } from './mail/subscriber-pages';
 import { installHumanMessages } from '../shared/schemas/human-messages';
@@ -67,7 +68,11 @@ export function createApp({
     createReaderRouter({
       dataSource,
       files: services.files,
-      source: new LivePublishedRoundups(dataSource, services.writeUps),
+      // Every reader page reads published roundups as frozen at their latest publication.
+      source: new SnapshotPublishedRoundups(
+        dataSource,
+        async () => (await services.publishing.publishedModels()) as PublishedRoundup[],
+      ),
       assets: readerAssetsFrom(clientDir),
       publicSiteUrl: env.PUBLIC_SITE_URL,
       photoFile: (photoId, size) => services.photos.file(photoId, size),

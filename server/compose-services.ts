@@ -106,7 +106,12 @@ export function createServices(dataSource: DataSource, env: Env) {
   const publishedPages = new PublishedPageCache(dataSource);
   let previewSecret: Promise<Buffer> | null = null;
   const publishing = new PublishingService(dataSource, {
-    renderer: readerSiteRenderer(dataSource, { baseUrl: env.PUBLIC_SITE_URL ?? `http://${env.HOST}:${env.PORT}` }),
+    renderer: readerSiteRenderer(dataSource, {
+      baseUrl: env.PUBLIC_SITE_URL ?? `http://${env.HOST}:${env.PORT}`,
+      // Frozen with the data: the signed-off write-up and the approved chart images.
+      writeUps,
+      chartImages: (roundupId) => charts.approvedChartImages(roundupId),
+    }),
     pages: publishedPages,
     previewSecret: () => (previewSecret ??= loadPreviewSecret(dataSource, env.PREVIEW_LINK_SECRET)),
   });
@@ -125,6 +130,13 @@ export function createServices(dataSource: DataSource, env: Env) {
       label,
       link: `/roundups/${roundupId}/write-up`,
     })),
+  );
+  // Scheduling and the publish job ask readiness: a roundup with blockers is neither scheduled nor published. The
+  // state itself is publishing's own check (In review or Scheduled), so readiness's state line is left out here.
+  publishing.addReadinessCheck(async (_manager, roundup) =>
+    (await readiness.readiness(roundup.id)).blocking
+      .filter((blocker) => blocker.kind !== 'state')
+      .map((blocker) => ({ message: blocker.label, link: blocker.link })),
   );
 
   return {

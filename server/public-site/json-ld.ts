@@ -1,4 +1,5 @@
-import type { PublishedRoundup } from './published-roundup';
+import { minorUnitDigits } from '../../shared/domain/planning/money';
+import type { PublishedProduct, PublishedRoundup } from './published-roundup';
 import { absoluteUrl, type ReaderSite } from './render-layout';
 
 /**
@@ -19,6 +20,23 @@ export function ratingForLabel(label: string | null): number | null {
 }
 
 /**
+ * schema.org Offer for the price at publication: `price` as a plain number with a full stop and the currency's
+ * minor-unit digits (no symbol or thousands separator), `priceCurrency` as the ISO 4217 code. Benchwire does not
+ * track stock, so `availability` is left out rather than guessed; none at all when no price was known.
+ */
+export function offerJsonLd(product: PublishedProduct, url: string) {
+  const price = product.priceAtPublication;
+  if (!price) return null;
+  const digits = minorUnitDigits(price.currency);
+  return {
+    '@type': 'Offer',
+    price: (price.amountMinor / 10 ** digits).toFixed(digits),
+    priceCurrency: price.currency,
+    url,
+  };
+}
+
+/**
  * schema.org for a results page: each tested board as a Product carrying our Review (author, date, URL), with a
  * reviewRating where the editor gave a label (schema.org Review and Product; REFERENCES.md "Web").
  */
@@ -31,12 +49,14 @@ export function roundupJsonLd(site: ReaderSite, model: PublishedRoundup) {
       .filter((p) => p.kind === 'tested')
       .map((product) => {
         const rating = ratingForLabel(product.label);
+        const offer = offerJsonLd(product, absoluteUrl(site, product.path));
         return {
           '@type': 'Product',
           '@id': `${absoluteUrl(site, product.path)}#product`,
           name: product.name,
           brand: { '@type': 'Brand', name: product.maker },
           url: absoluteUrl(site, product.path),
+          ...(offer ? { offers: offer } : {}),
           review: {
             '@type': 'Review',
             name: `${product.name} in ${model.headline}`,

@@ -10,6 +10,7 @@
  * | /read/roundups/:id-:slug/results.csv | open data: every run of record |
  * | /read/roundups/:id-:slug/analysis.json | open data: analysis parameters and rubric |
  * | /read/roundups/:id-:slug/raw/run-:runId.:ext | open data: a raw logger file, where the editor allows it |
+ * | /read/roundups/:id-:slug/charts/:key.png | a chart image as approved when the roundup was published |
  * | /read/products/:id-:slug | a board's published results across roundups, with the estimate form |
  * | /read/compare?product=…&configuration=… | compare published boards under one load configuration |
  * | /read/photos/:photoId/:width.:format | a published photo's web size |
@@ -46,6 +47,7 @@ export const publicPaths = {
   roundup: (id: number, title: string) => `${readerBase}/roundups/${id}-${slugify(title)}`,
   roundupCsv: (roundupPath: string) => `${roundupPath}/results.csv`,
   roundupAnalysisJson: (roundupPath: string) => `${roundupPath}/analysis.json`,
+  chartImage: (roundupPath: string, key: string) => `${roundupPath}/charts/${key}.png`,
   rawLog: (roundupPath: string, runId: number, extension: string) => `${roundupPath}/raw/run-${runId}${extension}`,
   product: (id: number, name: string) => `${readerBase}/products/${id}-${slugify(name)}`,
   compare: () => `${readerBase}/compare`,

@@ -101,3 +101,71 @@ export class LivePublishedRoundups implements PublishedRoundupSource {
     return this.build(roundup, openDataLicence);
   }
 }
+
+/** The open-data choices that apply now: raw logger files per roundup (the editor's switch) and the licence line. */
+export interface OpenDataSettings {
+  licence: string;
+  rawFilesAllowed: Map<number, boolean>;
+}
+
+export async function loadOpenDataSettings(dataSource: DataSource, roundupIds: number[]): Promise<OpenDataSettings> {
+  const { openDataLicence } = await loadReaderSiteSettings(dataSource);
+  const rows = roundupIds.length
+    ? await dataSource.getRepository(RoundupEntity).find({
+        where: { id: In(roundupIds) },
+        select: { id: true, openDataRawFiles: true },
+      })
+    : [];
+  return { licence: openDataLicence, rawFilesAllowed: new Map(rows.map((r) => [r.id, r.openDataRawFiles === true])) };
+}
+
+/**
+ * A published model with today's open-data choices: the licence line and whether raw logger files are offered are
+ * settings of the outlet and the editor, not published data, so they apply at once (the snapshot pages are rendered
+ * again when they change). A file left out here is not offered, listed or served.
+ */
+export function withOpenDataSettings(model: PublishedRoundup, settings: OpenDataSettings): PublishedRoundup {
+  const rawFilesAllowed = settings.rawFilesAllowed.get(model.roundupId) ?? false;
+  return {
+    ...model,
+    results: rawFilesAllowed ? model.results : model.results.map((r) => (r.rawFile ? { ...r, rawFile: null } : r)),
+    openData: { ...model.openData, rawFilesAllowed, licence: settings.licence.trim() || defaultOpenDataLicence },
+  };
+}
+
+/**
+ * Published roundups as frozen at their latest publication (`publishing.publishedModels()`), for every reader page the
+ * snapshot does not hold (product pages, compare, open data, photos, pages with a query): an edit after publication
+ * reaches them only when an update is published, and a roundup without a publication record is on none of them.
+ * Parsed models are kept until a publication is added (publications are only ever inserted).
+ */
+export class SnapshotPublishedRoundups implements PublishedRoundupSource {
+  private cached: { key: string; models: PublishedRoundup[] } | null = null;
+
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly publishedModels: () => Promise<PublishedRoundup[]>,
+  ) {}
+
+  private async models(): Promise<PublishedRoundup[]> {
+    const [row] = (await this.dataSource.query(
+      'SELECT COUNT(*) AS n, COALESCE(MAX(id), 0) AS last FROM roundup_publications',
+    )) as { n: number | string; last: number | string }[];
+    const key = `${row?.n}:${row?.last}`;
+    if (this.cached?.key !== key) this.cached = { key, models: await this.publishedModels() };
+    const models = this.cached.models;
+    const settings = await loadOpenDataSettings(
+      this.dataSource,
+      models.map((m) => m.roundupId),
+    );
+    return models.map((model) => withOpenDataSettings(model, settings));
+  }
+
+  list(): Promise<PublishedRoundup[]> {
+    return this.models();
+  }
+
+  async get(roundupId: number): Promise<PublishedRoundup | null> {
+    return (await this.models()).find((m) => m.roundupId === roundupId) ?? null;
+  }
+}

@@ -184,8 +184,18 @@ export interface PublishedRoundup {
   /** The picks summary, in the order the editor gave: products with a label. */
   picks: { entryId: number; label: string }[];
   corrections: PublishedCorrection[];
-  /** Chart images per configuration (the server-rendered PNG), once rendered; used for previews. */
-  chartImages: { configurationId: number; url: string; width: number; height: number }[];
+  /**
+   * Chart images per configuration (the PNG rendered when the chart was approved), as they stood at publication; used
+   * for social previews. `storageKey` names the bytes in the file store (never shown to readers).
+   */
+  chartImages: {
+    configurationId: number;
+    url: string;
+    width: number;
+    height: number;
+    key?: string;
+    storageKey?: string;
+  }[];
   openData: {
     csvPath: string;
     analysisJsonPath: string;
@@ -361,7 +371,10 @@ export async function buildPublishedRoundup(
     for (const configurationId of configIds) {
       const cell = cells.find((c) => c.entryId === sourceEntry.id && c.loadConfigurationId === configurationId);
       const run = cell?.runOfRecordId ? runs.find((r) => r.id === cell.runOfRecordId) : undefined;
-      if (!run || run.reviewState !== 'accepted') continue;
+      // A run of record stands once QA accepted it, or once the editor accepted its cell with it as the run of record
+      // (what readiness asks for); a run sent back never does.
+      if (!run || run.reviewState === 'sent-back') continue;
+      if (run.reviewState !== 'accepted' && cell?.state !== 'accepted') continue;
       const analysis = analysisByRun.get(run.id);
       if (!analysis) continue;
       const result = analysis.result as Partial<AnalysisResult>;

@@ -145,6 +145,18 @@ export function createReaderRouter(options: ReaderRoutesOptions) {
     res.end(body);
   });
 
+  router.get(`${readerBase}/roundups/:slug/charts/:image`, async (req, res) => {
+    const model = await roundupOf(req.params.slug);
+    // Only an image the publication froze is public; a roundup without a publication record has none.
+    const image = model?.chartImages.find((i) => i.key && `${i.key}.png` === req.params.image);
+    const body = image?.storageKey ? await options.files.get(image.storageKey) : null;
+    if (!body) return notFound(req, res);
+    res.setHeader('Content-Type', 'image/png');
+    res.setHeader('X-Content-Type-Options', 'nosniff');
+    res.setHeader('Cache-Control', 'public, max-age=86400');
+    res.end(body);
+  });
+
   router.get(`${readerBase}/photos/:photoId/:size`, async (req, res) => {
     const photoId = idFromSlug(req.params.photoId);
     const size = req.params.size;

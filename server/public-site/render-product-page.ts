@@ -2,7 +2,7 @@ import type { DisplayUnit } from '../../shared/domain/reader/temperature-display
 import { estimateVrmPeak, type EstimatePoint, type VrmEstimate } from '../../shared/domain/reader/vrm-estimate';
 import { html, type SafeHtml } from './html';
 import { longDate, price, temperature, watts } from './format';
-import { labelRatingScale, ratingForLabel } from './json-ld';
+import { labelRatingScale, offerJsonLd, ratingForLabel } from './json-ld';
 import type { PublishedProduct, PublishedResult, PublishedRoundup } from './published-roundup';
 import { absoluteUrl, renderPage, type ReaderSite } from './render-layout';
 import { productAnchor, renderPhoto } from './render-roundup-page';
@@ -180,6 +180,9 @@ function renderEstimate(
 
 function productJsonLd(site: ReaderSite, appearances: readonly ProductAppearance[], latest: PublishedProduct) {
   const outlet = { '@type': 'Organization', name: site.outletName, url: absoluteUrl(site, '/read') };
+  // The price at the latest publication that knew one.
+  const priced = [latest, ...appearances.map((a) => a.product)].find((p) => p.priceAtPublication);
+  const offer = priced ? offerJsonLd(priced, absoluteUrl(site, latest.path)) : null;
   return {
     '@context': 'https://schema.org',
     '@type': 'Product',
@@ -187,6 +190,7 @@ function productJsonLd(site: ReaderSite, appearances: readonly ProductAppearance
     name: latest.name,
     brand: { '@type': 'Brand', name: latest.maker },
     url: absoluteUrl(site, latest.path),
+    ...(offer ? { offers: offer } : {}),
     review: appearances
       .filter((a) => a.product.kind === 'tested')
       .map((a) => {

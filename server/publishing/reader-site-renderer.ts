@@ -2,9 +2,18 @@ import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { DataSource } from 'typeorm';
 import { buildPublishedRoundup, type PublishedRoundup } from '../public-site/published-roundup';
-import { loadReaderSiteSettings } from '../public-site/published-roundup-source';
+import { RoundupEntity } from '../entities/roundup.entity';
+import {
+  loadOpenDataSettings,
+  loadReaderSiteSettings,
+  signedOffWriteUp,
+  withOpenDataSettings,
+} from '../public-site/published-roundup-source';
 import { readerAssetsFrom } from '../public-site/reader-assets';
-import { readerBase } from '../public-site/public-paths';
+import { publicPaths, readerBase } from '../public-site/public-paths';
+import type { ApprovedChartImage } from '../services/charts.service';
+import type { WriteUpsService } from '../services/write-ups.service';
+import { parseChartKey } from '../../shared/domain/editorial/chart-data';
 import type { ReaderSite } from '../public-site/render-layout';
 import { renderHomePage } from '../public-site/render-home-page';
 import { renderRoundupPage } from '../public-site/render-roundup-page';
@@ -24,7 +33,13 @@ const unitVariants = [
  */
 export function readerSiteRenderer(
   dataSource: DataSource,
-  options: { baseUrl: string },
+  options: {
+    baseUrl: string;
+    /** The signed-off write-up text frozen with the data (none when omitted). */
+    writeUps?: Pick<WriteUpsService, 'renderedSections'>;
+    /** The approved chart images frozen with the data (none when omitted). */
+    chartImages?: (roundupId: number) => Promise<ApprovedChartImage[]>;
+  },
 ): PublicSiteRenderer<PublishedRoundup> {
   // Pages are rendered at publication, away from any request: canonical links use the configured public address.
   const baseUrl = options.baseUrl.replace(/\/+$/, '');
@@ -42,18 +57,50 @@ export function readerSiteRenderer(
   return {
     publicPrefixes: [readerBase, '/sitemap.xml', '/robots.txt'],
 
-    async freeze(manager, roundupId, options) {
+    async freeze(manager, roundupId, freezeOptions) {
       const settings = await loadReaderSiteSettings(dataSource);
-      return buildPublishedRoundup(manager, roundupId, {
-        publishedAt: options.publishedAt,
-        updatedAt: options.updatedAt,
-        corrections: options.corrections,
+      const written = await signedOffWriteUp(dataSource, options.writeUps, roundupId);
+      const images = options.chartImages ? await options.chartImages(roundupId) : [];
+      const roundup = await manager.getRepository(RoundupEntity).findOneByOrFail({ id: roundupId });
+      // Raw logger files are frozen with the data; whether they are offered is the editor's switch, applied when the
+      // pages are rendered and served (withOpenDataSettings).
+      const model = await buildPublishedRoundup(manager, roundupId, {
+        publishedAt: freezeOptions.publishedAt,
+        updatedAt: freezeOptions.updatedAt,
+        corrections: freezeOptions.corrections,
         licence: settings.openDataLicence,
+        rawFilesAllowed: true,
+        writeUps: written.byEntry,
+        writeUpSections: written.sections,
       });
+      const chartImages = images.flatMap((image) => {
+        const parsed = parseChartKey(image.key);
+        if (image.stale || parsed?.kind !== 'configuration') return [];
+        return [
+          {
+            configurationId: parsed.id,
+            url: publicPaths.chartImage(model.path, image.key),
+            width: image.width,
+            height: image.height,
+            key: image.key,
+            storageKey: image.storageKey,
+          },
+        ];
+      });
+      return {
+        ...model,
+        chartImages,
+        openData: { ...model.openData, rawFilesAllowed: roundup.openDataRawFiles === true },
+      };
     },
 
-    async renderPages(models) {
+    async renderPages(frozen) {
       const readerSite = await site();
+      const openData = await loadOpenDataSettings(
+        dataSource,
+        frozen.map((m) => m.roundupId),
+      );
+      const models = frozen.map((model) => withOpenDataSettings(model, openData));
       const pages: RenderedPage[] = [];
       for (const { unit, variant } of unitVariants) {
         for (const model of models) {

@@ -30,17 +30,41 @@ function isAmbiguous(schedule: RoundupScheduleEntity): boolean {
 export type PreviewOutcome =
   { ok: true; html: string } | { ok: false; reason: 'malformed' | 'bad-signature' | 'expired' | 'gone' };
 
+/** 422 `not_ready`: the message names every blocker; `details.problems` lists them with their links. */
+function notReady(what: string, problems: ReadinessProblem[]) {
+  return new AppError('not_ready', 422, `${what}: ${problems.map((p) => p.message).join(' ')}`, undefined, {
+    problems,
+  });
+}
+
 export const publishRoundupJobKind = 'publish-roundup';
 export const publishJobKey = (roundupId: number) => `${publishRoundupJobKind}:${roundupId}`;
 
-/** What stands in the way of scheduling a roundup; an empty list means it is ready. Several checks may apply. */
-export type ReadinessCheck = (manager: EntityManager, roundup: RoundupEntity) => Promise<string[]> | string[];
+/** One thing that stands in the way of scheduling a roundup, with the staff screen where it is fixed. */
+export interface ReadinessProblem {
+  message: string;
+  link: string | null;
+}
 
-/** Until the editorial checks (charts and write-up readiness) take part, a roundup is ready once it is In review. */
+/**
+ * What stands in the way of scheduling or publishing a roundup; an empty list means it is ready. Several checks may
+ * apply. Checks run outside the roundup's row lock (the editorial checks open their own transactions).
+ */
+export type ReadinessCheck = (
+  manager: EntityManager,
+  roundup: RoundupEntity,
+) => Promise<(ReadinessProblem | string)[]> | (ReadinessProblem | string)[];
+
+/** A roundup is scheduled from In review (and stays schedulable while Scheduled, to move its time). */
 export const inReviewReadiness: ReadinessCheck = (_manager, roundup) =>
   roundup.state === 'in-review' || roundup.state === 'scheduled'
     ? []
-    : [`Only a roundup In review can be scheduled; this one is ${roundupStateLabels[roundup.state]}.`];
+    : [
+        {
+          message: `Only a roundup In review can be scheduled; this one is ${roundupStateLabels[roundup.state]}.`,
+          link: `/roundups/${roundup.id}/readiness`,
+        },
+      ];
 
 /** Told of every publication inside its transaction (the go-live mail queues its outbox here). */
 export interface PublicationEvent {
@@ -121,7 +145,8 @@ export class PublishingService {
       manager,
       publications.map((p) => p.publishedBy),
     );
-    const problems = await this.readinessProblems(manager, roundup);
+    const live = roundup.state === 'live' || roundup.state === 'updated';
+    const problems = live ? [] : await this.readinessProblems(manager, roundup);
     const latest = publications.length ? await this.latestModel(manager, roundupId) : null;
     return {
       roundupId,
@@ -161,21 +186,23 @@ export class PublishingService {
       const message = `That time has passed: it is ${instantToZonedTime(now, input.timeZone).date} ${instantToZonedTime(now, input.timeZone).time} in ${input.timeZone} now.`;
       throw invalid(message, { time: message });
     }
-    return this.dataSource.transaction(async (manager) => {
-      const roundup = await lockRoundup(manager, roundupId);
-      if (roundup.state !== 'in-review' && roundup.state !== 'scheduled') {
+    // Readiness first, outside the row lock: a roundup with blockers is refused with every blocker listed.
+    const current = await findRoundup(this.dataSource.manager, roundupId);
+    const assertSchedulable = (state: RoundupEntity['state']) => {
+      if (state !== 'in-review' && state !== 'scheduled') {
         throw new AppError(
           'not_schedulable',
           409,
-          `The roundup is ${roundupStateLabels[roundup.state]}: only a roundup In review can be scheduled.`,
+          `The roundup is ${roundupStateLabels[state]}: only a roundup In review can be scheduled.`,
         );
       }
-      const problems = await this.readinessProblems(manager, roundup);
-      if (problems.length > 0) {
-        throw new AppError('not_ready', 422, `The roundup is not ready to schedule: ${problems.join(' ')}`, undefined, {
-          problems,
-        });
-      }
+    };
+    assertSchedulable(current.state);
+    const problems = await this.readinessProblems(this.dataSource.manager, current);
+    if (problems.length > 0) throw notReady('The roundup is not ready to schedule', problems);
+    await this.dataSource.transaction(async (manager) => {
+      const roundup = await lockRoundup(manager, roundupId);
+      assertSchedulable(roundup.state);
       const previous = await manager.getRepository(RoundupScheduleEntity).findOneBy({ roundupId });
       await manager.getRepository(RoundupScheduleEntity).save({
         roundupId,
@@ -216,13 +243,13 @@ export class PublishingService {
           ...(rescheduled ? {} : { from: roundup.state, to: 'scheduled' }),
         },
       });
-      return this.status(roundupId, manager);
     });
+    return this.status(roundupId);
   }
 
   /** Takes a scheduled roundup off the schedule: back to In review, its publish job cancelled. */
   async unschedule(actor: CurrentUser, roundupId: number): Promise<RoundupPublishing> {
-    return this.dataSource.transaction(async (manager) => {
+    await this.dataSource.transaction(async (manager) => {
       const roundup = await lockRoundup(manager, roundupId);
       if (roundup.state !== 'scheduled') {
         throw new AppError(
@@ -243,8 +270,8 @@ export class PublishingService {
         subjectId: roundupId,
         details: { from: 'scheduled', to: 'in-review', publishAt: schedule?.publishAt.toISOString() ?? null },
       });
-      return this.status(roundupId, manager);
     });
+    return this.status(roundupId);
   }
 
   /**
@@ -252,7 +279,12 @@ export class PublishingService {
    * writes version 1 of its publications, so a second runner (or a retry) finds it live and does nothing; a job
    * that arrives early asks to be run again at the scheduled time.
    */
-  async publishDue(roundupId: number, now: Date): Promise<'published' | 'nothing-to-do'> {
+  async publishDue(roundupId: number, now: Date): Promise<'published' | 'refused' | 'nothing-to-do'> {
+    // Whatever changed since scheduling, a roundup with blockers is not published: it goes back to In review, where
+    // the editor sees what blocks it, and the refusal is in the audit log.
+    const current = await this.dataSource.getRepository(RoundupEntity).findOneBy({ id: roundupId });
+    const problems =
+      current?.state === 'scheduled' ? await this.readinessProblems(this.dataSource.manager, current) : [];
     const outcome = await this.dataSource.transaction(async (manager) => {
       const roundup = await manager.getRepository(RoundupEntity).findOne({
         where: { id: roundupId },
@@ -266,6 +298,25 @@ export class PublishingService {
       }
       if (await manager.getRepository(RoundupPublicationEntity).existsBy({ roundupId, version: 1 })) {
         return 'nothing-to-do' as const;
+      }
+      if (problems.length > 0) {
+        await manager.getRepository(RoundupScheduleEntity).delete({ roundupId });
+        await manager
+          .getRepository(RoundupEntity)
+          .update({ id: roundupId }, { state: 'in-review', stateChangedAt: now });
+        await recordAudit(manager, {
+          actorId: null,
+          action: 'roundup.publish_refused',
+          subjectType: 'roundup',
+          subjectId: roundupId,
+          details: {
+            from: 'scheduled',
+            to: 'in-review',
+            publishAt: schedule.publishAt.toISOString(),
+            problems: problems.map((p) => p.message),
+          },
+        });
+        return 'refused' as const;
       }
       await this.writePublication(manager, roundup, {
         version: 1,
@@ -410,9 +461,13 @@ export class PublishingService {
     return (latest?.model as FrozenRoundup | undefined) ?? null;
   }
 
-  private async readinessProblems(manager: EntityManager, roundup: RoundupEntity): Promise<string[]> {
-    const problems: string[] = [];
-    for (const check of this.readinessChecks) problems.push(...(await check(manager, roundup)));
+  private async readinessProblems(manager: EntityManager, roundup: RoundupEntity): Promise<ReadinessProblem[]> {
+    const problems: ReadinessProblem[] = [];
+    for (const check of this.readinessChecks) {
+      for (const problem of await check(manager, roundup)) {
+        problems.push(typeof problem === 'string' ? { message: problem, link: null } : problem);
+      }
+    }
     return problems;
   }
 

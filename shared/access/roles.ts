@@ -29,6 +29,8 @@ export const writeUpApprovers: readonly Role[] = ['editor'];
 export const editorialDeciders: readonly Role[] = ['editor'];
 /** Send a roundup from Writing to In review. */
 export const reviewRequesters: readonly Role[] = ['editor', 'writer'];
+/** The open-data settings readers see: raw logger files offered or not, and the outlet's licence line. */
+export const openDataSettingsEditors: readonly Role[] = ['editor', 'admin'];
 
 /**
  * Runs are one tester's work: a tester reads the runs of cells assigned to them (and those they recorded, which the

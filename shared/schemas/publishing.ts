@@ -34,7 +34,11 @@ export const roundupPublishingSchema = z.object({
   roundupId: z.number().int(),
   state: roundupStateSchema,
   /** Whether it may be scheduled now, and what stands in the way when not. */
-  readiness: z.object({ ready: z.boolean(), problems: z.array(z.string()) }),
+  readiness: z.object({
+    ready: z.boolean(),
+    /** Each blocker in words, with the staff screen where it is fixed. */
+    problems: z.array(z.object({ message: z.string(), link: z.string().nullable() })),
+  }),
   schedule: z
     .object({
       publishAt: instantSchema,

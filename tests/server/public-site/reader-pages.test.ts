@@ -6,7 +6,8 @@ import { RoundupEntity } from '../../../server/entities/roundup.entity';
 import { formatCsv, safeCsvText } from '../../../server/lib/csv-export';
 import { testApp, testDataSource } from '../support/test-app';
 import { expectValidHtml } from './support/html-check';
-import { publishedFixture } from './support/published-fixture';
+import { publishedFixture, publishForReaders } from './support/published-fixture';
+import { dayFromToday } from '../planning/support/planning-fixtures';
 
 async function followToPage(app: Awaited<ReturnType<typeof testApp>>, path: string) {
   const first = await request(app).get(path);
@@ -24,7 +25,9 @@ describe('reader pages, feeds and open data', () => {
   it("when a reader opens a board's page, then every published result shows, and the estimate works without JavaScript", async () => {
     // Three loads with rises 40, 50, 62 °C over a 21 °C room (peaks 61, 71, 83): the worked example of the estimate
     // test; fixture load configurations all state 230 W, so they are set apart below.
-    const fixture = await publishedFixture([[{ peakC: 61.0 }, { peakC: 71.0 }, { peakC: 83.0 }]]);
+    const fixture = await publishedFixture([[{ peakC: 61.0 }, { peakC: 71.0 }, { peakC: 83.0 }]], {
+      state: 'in-review',
+    });
     const ds = await testDataSource();
     for (const [index, watts] of [200, 250, 300].entries()) {
       await ds.query('UPDATE load_configurations SET expected_package_power_w = ? WHERE id = ?', [
@@ -32,6 +35,7 @@ describe('reader pages, feeds and open data', () => {
         fixture.configurationIds[index],
       ]);
     }
+    await publishForReaders(fixture.roundupId);
     const app = await testApp();
     const page = await followToPage(app, `/read/products/${fixture.products[0].productId}`);
     expect(page.status).toBe(200);
@@ -138,7 +142,9 @@ describe('reader pages, feeds and open data', () => {
   });
 
   it('the results page carries canonical, Open Graph and schema.org Review of each Product with a rating where labelled', async () => {
-    const fixture = await publishedFixture([[{ peakC: 70.0 }], [{ peakC: 74.0 }]]);
+    const fixture = await publishedFixture([[{ peakC: 70.0 }], [{ peakC: 74.0 }]], {
+      prices: [[{ amountMinor: 17999, observedOn: dayFromToday(-5) }], []],
+    });
     const app = await testApp({ PUBLIC_SITE_URL: 'https://results.test' });
     const page = await followToPage(app, `/read/roundups/${fixture.roundupId}`);
     expect(page.text).toMatch(/<link rel="canonical" href="https:\/\/results.test\/read\/roundups\//);
@@ -157,6 +163,27 @@ describe('reader pages, feeds and open data', () => {
       // No label given yet: no invented rating.
       expect(review.reviewRating).toBeUndefined();
     }
+    // schema.org Offer (REFERENCES.md "Web": Product carries offers): price as digits with a full stop and no symbol,
+    // priceCurrency an ISO 4217 code; 17999 minor units of EUR = 179.99 (ISO 4217: EUR has two minor-unit digits).
+    // Availability is not tracked, so it is absent rather than guessed. The board without a known price has no offer.
+    const priced = graph['@graph'].find((p) => String(p.name).includes(fixture.products[0].model));
+    const unpriced = graph['@graph'].find((p) => String(p.name).includes(fixture.products[1].model));
+    const offer = priced?.offers as Record<string, unknown>;
+    expect(offer).toEqual({
+      '@type': 'Offer',
+      price: '179.99',
+      priceCurrency: 'EUR',
+      url: expect.stringMatching(/^https:\/\/results\.test\/read\/products\//),
+    });
+    expect(String(offer.price)).toMatch(/^\d+(\.\d+)?$/);
+    expect(Intl.supportedValuesOf('currency')).toContain(offer.priceCurrency);
+    expect(offer.availability).toBeUndefined();
+    expect(unpriced?.offers).toBeUndefined();
+
+    // The board's own page carries the same offer on its Product.
+    const boardPage = await followToPage(app, `/read/products/${fixture.products[0].productId}`);
+    const [boardLd] = jsonLdOf(boardPage.text) as Record<string, unknown>[];
+    expect(boardLd.offers).toEqual(offer);
   });
 
   it('open data: the CSV has units in its column names, one row per run of record, and no cell runs as a formula', async () => {

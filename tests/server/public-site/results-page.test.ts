@@ -1,11 +1,10 @@
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { RoundupEntity } from '../../../server/entities/roundup.entity';
 import { buildPublishedRoundup } from '../../../server/public-site/published-roundup';
 import { renderRoundupPage } from '../../../server/public-site/render-roundup-page';
 import { testApp, testDataSource } from '../support/test-app';
 import { expectValidHtml } from './support/html-check';
-import { publishedFixture } from './support/published-fixture';
+import { publishedFixture, publishForReaders } from './support/published-fixture';
 
 const site = {
   baseUrl: 'https://results.test',
@@ -165,7 +164,7 @@ describe('write-up on the results page', () => {
     expect((await fixture.editor.post(`/api/write-up/sections/${intro.id}/review-request`)).status).toBe(200);
     const signed = await fixture.editor.post(`/api/write-up/sections/${intro.id}/sign-off`);
     expect(signed.status, signed.text).toBe(200);
-    await (await testDataSource()).getRepository(RoundupEntity).update({ id: fixture.roundupId }, { state: 'live' });
+    await publishForReaders(fixture.roundupId);
 
     const app = await testApp();
     const first = await request(app).get(`/read/roundups/${fixture.roundupId}`);

@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
+import sharp from 'sharp';
 import type { DataSource } from 'typeorm';
 import { createApp } from '../../../server/app';
 import { createServices, type Services } from '../../../server/compose-services';
@@ -14,6 +15,8 @@ import { JobRunner } from '../../../server/jobs/job-runner';
 import { buildPublishedRoundup } from '../../../server/public-site/published-roundup';
 import { publishJobKey } from '../../../server/services/publishing.service';
 import { signedIn, testDataSource, testEnv, TEST_HOST, type TestApp } from '../support/test-app';
+import { WriteUpSectionEntity } from '../../../server/entities/write-up-section.entity';
+import { addEntry, createProduct, createRoundup } from '../planning/support/planning-fixtures';
 import { roundupInReview, scheduleAt } from './support/publishing-fixtures';
 
 const quiet = { error: () => {}, warn: () => {} };
@@ -58,10 +61,11 @@ beforeAll(async () => {
   app = createApp({ dataSource, env: testEnv(), services });
 });
 
-describe('embargo publishing', () => {
+// Each publication renders the pages of every published roundup in the shared test database: allow for it.
+describe('embargo publishing', { timeout: 120_000 }, () => {
   it('nothing is public one second before the time; everything is at the time, published once', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId, title } = await roundupInReview(editor, dataSource);
+    const { roundupId, title } = await roundupInReview(app, editor, dataSource);
     const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
     const scheduled = await scheduleAt(editor, roundupId, at);
     expect(scheduled.state).toBe('scheduled');
@@ -99,7 +103,7 @@ describe('embargo publishing', () => {
 
   it('two runners at the due time publish exactly once', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId } = await roundupInReview(editor, dataSource);
+    const { roundupId } = await roundupInReview(app, editor, dataSource);
     const at = new Date(Math.ceil((Date.now() + 7_200_000) / 1000) * 1000);
     await scheduleAt(editor, roundupId, at, 'Asia/Kolkata');
     const clock = new ManualClock(at);
@@ -119,7 +123,7 @@ describe('embargo publishing', () => {
 
   it('serves the snapshot with ETag, 304, the accepted compression, caching and content-type', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId, title } = await roundupInReview(editor, dataSource);
+    const { roundupId, title } = await roundupInReview(app, editor, dataSource);
     const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
     await scheduleAt(editor, roundupId, at);
     await runnerAt(new ManualClock(at), roundupId).runDue();
@@ -159,7 +163,7 @@ describe('embargo publishing', () => {
 
   it('later edits reach readers only with a published update, logged on the page with its note and date', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId, title } = await roundupInReview(editor, dataSource);
+    const { roundupId, title } = await roundupInReview(app, editor, dataSource);
     const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
     await scheduleAt(editor, roundupId, at);
     await runnerAt(new ManualClock(at), roundupId).runDue();
@@ -201,7 +205,7 @@ describe('embargo publishing', () => {
 
   it('reschedules and unschedules; the job follows the schedule', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId } = await roundupInReview(editor, dataSource);
+    const { roundupId } = await roundupInReview(app, editor, dataSource);
     const first = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
     const later = new Date(first.getTime() + 86_400_000);
     await scheduleAt(editor, roundupId, first);
@@ -225,7 +229,7 @@ describe('embargo publishing', () => {
 
   it('a schedule across a daylight-saving change lands on the right UTC instant', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId } = await roundupInReview(editor, dataSource);
+    const { roundupId } = await roundupInReview(app, editor, dataSource);
     // United States daylight time begins 14 March 2027 at 02:00 local (15 U.S.C. § 260a): 09:00 is UTC−8 the day
     // before and UTC−7 the day after.
     const before = await editor
@@ -246,7 +250,7 @@ describe('embargo publishing', () => {
 
   it('refuses a schedule in the past, for a roundup not in review, and from a writer', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId } = await roundupInReview(editor, dataSource);
+    const { roundupId } = await roundupInReview(app, editor, dataSource);
     const past = await editor
       .put(`/api/roundups/${roundupId}/schedule`)
       .send({ date: '2026-01-05', time: '09:00', timeZone: 'UTC' });
@@ -266,5 +270,164 @@ describe('embargo publishing', () => {
       .put(`/api/roundups/${roundupId}/schedule`)
       .send({ date: '2030-01-05', time: '09:00', timeZone: 'UTC' });
     expect(denied.status).toBe(403);
+  });
+
+  it('refuses to schedule a roundup with blockers, naming each with the screen where it is fixed', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    // In review with nothing tested yet: the state alone does not make it ready.
+    const setup = await createRoundup(editor, { configurations: 1 });
+    const productId = await createProduct(editor, setup.platform);
+    await addEntry(editor, setup.roundupId, productId);
+    await dataSource.getRepository(RoundupEntity).update({ id: setup.roundupId }, { state: 'in-review' });
+
+    const status = await editor.get(`/api/roundups/${setup.roundupId}/publishing`);
+    expect(status.body.readiness.ready).toBe(false);
+    const refused = await editor
+      .put(`/api/roundups/${setup.roundupId}/schedule`)
+      .send({ date: '2030-01-05', time: '09:00', timeZone: 'UTC' });
+    expect(refused.status).toBe(422);
+    expect(refused.body.error.code).toBe('not_ready');
+    const problems = refused.body.error.details.problems as { message: string; link: string | null }[];
+    expect(problems).toEqual(status.body.readiness.problems);
+    expect(problems.length).toBeGreaterThan(0);
+    for (const problem of problems) {
+      expect(refused.body.error.message).toContain(problem.message);
+      expect(problem.link).toMatch(new RegExp(`^/roundups/${setup.roundupId}`));
+    }
+    // The matrix cell that is not accepted is among them, linked to the matrix.
+    expect(problems.some((p) => /accept a run/.test(p.message) && p.link?.includes('tab=matrix'))).toBe(true);
+    expect((await dataSource.getRepository(RoundupEntity).findOneByOrFail({ id: setup.roundupId })).state).toBe(
+      'in-review',
+    );
+    expect(await dataSource.getRepository(JobEntity).countBy({ uniqueKey: publishJobKey(setup.roundupId) })).toBe(0);
+  });
+
+  it('the publish job refuses a roundup that gained a blocker after scheduling: back In review, nothing public', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    const { roundupId, title } = await roundupInReview(app, editor, dataSource);
+    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+    await scheduleAt(editor, roundupId, at);
+    // A signed-off section goes back to the writer after scheduling.
+    await dataSource
+      .getRepository(WriteUpSectionEntity)
+      .update({ roundupId, sectionKey: 'conclusion' }, { reviewState: 'drafting' });
+
+    await runnerAt(new ManualClock(at), roundupId).runDue();
+    expect((await dataSource.getRepository(RoundupEntity).findOneByOrFail({ id: roundupId })).state).toBe('in-review');
+    expect(await dataSource.getRepository(RoundupPublicationEntity).countBy({ roundupId })).toBe(0);
+    const refusal = await dataSource
+      .getRepository(AuditEntryEntity)
+      .findOneByOrFail({ subjectType: 'roundup', subjectId: String(roundupId), action: 'roundup.publish_refused' });
+    expect((refusal.details as { problems: string[] }).problems.length).toBeGreaterThan(0);
+    expect((await reader().get('/read')).text).not.toContain(title);
+    const status = await editor.get(`/api/roundups/${roundupId}/publishing`);
+    expect(status.body.schedule).toBeNull();
+    expect(status.body.readiness.problems.map((p: { link: string }) => p.link)).toContain(
+      `/roundups/${roundupId}/write-up`,
+    );
+  });
+
+  it('pages outside the snapshot read the publication: an edit shows only once an update is published', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    const { roundupId, products } = await roundupInReview(app, editor, dataSource);
+    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+    await scheduleAt(editor, roundupId, at);
+    await runnerAt(new ManualClock(at), roundupId).runDue();
+    const path = (await services.publishing.status(roundupId)).publicPath as string;
+    const board = (await services.publishing.publishedModels()).find((m) => m.roundupId === roundupId) as unknown as {
+      products: { productId: number; name: string; path: string }[];
+      configurations: { id: number }[];
+    };
+    const first = board.products.find((p) => p.productId === products[0].productId) as { name: string; path: string };
+    // Every page a query or a board builds on request: product page, estimate, compare, °F page, open data.
+    const pages = [
+      first.path,
+      `${first.path}?power=230&room=21`,
+      `/read/compare?product=${products[0].productId}&product=${products[1].productId}&configuration=${board.configurations[0].id}`,
+      `${path}?unit=F`,
+      `${path}/results.csv`,
+      `${path}/analysis.json`,
+    ];
+    for (const page of pages) {
+      const seen = await reader().get(page);
+      expect(seen.status, page).toBe(200);
+      // Every page and file names the board (the CSV one row per run of record, the JSON one entry per run).
+      expect(seen.text, page).toContain(first.name);
+    }
+
+    // The board is renamed in the catalog after publication: readers still see the published name everywhere.
+    const renamed = `Renamed ${products[0].productId}`;
+    const edit = await editor.patch(`/api/catalog/products/${products[0].productId}`).send({ model: renamed });
+    expect(edit.status, edit.text).toBe(200);
+    for (const page of [...pages, path, '/read']) {
+      const seen = await reader().get(page);
+      expect(seen.status, page).toBe(200);
+      expect(seen.text, page).not.toContain(renamed);
+    }
+
+    // An editor publishes it as an update: now every page shows it, and the results page logs the dated note.
+    const note = 'The first board’s name follows its maker’s final listing.';
+    const update = await editor.post(`/api/roundups/${roundupId}/publication-updates`).send({ kind: 'update', note });
+    expect(update.status, update.text).toBe(201);
+    const updatedAt = update.body.publications.at(-1).publishedAt as string;
+    for (const page of pages) {
+      // The renamed board's page has a new address; the old one leads there.
+      const seen = await reader().get(page).redirects(2);
+      expect(seen.status, page).toBe(200);
+      expect(seen.text, page).toContain(renamed);
+    }
+    const results = await reader().get(update.body.publicPath as string);
+    expect(results.text).toContain(renamed);
+    expect(results.text).toContain(note);
+    expect(results.text).toContain(`datetime="${updatedAt}"`);
+  });
+
+  it('photos and chart images are public by the publication record, not by the roundup state', async () => {
+    const { agent: editor } = await signedIn(app, 'editor');
+    const { roundupId, products } = await roundupInReview(app, editor, dataSource);
+    const image = await sharp({ create: { width: 1000, height: 640, channels: 3, background: '#2a6f97' } })
+      .png()
+      .toBuffer();
+    const uploaded = await editor
+      .post(`/api/roundups/${roundupId}/entries/${products[0].entryId}/photos`)
+      .attach('file', image, 'board.png')
+      .field('kind', 'overview')
+      .field('altText', 'The board from above');
+    expect(uploaded.status, uploaded.text).toBe(201);
+    const photoPath = `/read/photos/${uploaded.body.id}/480.webp`;
+    const model = await buildPublishedRoundup(dataSource.manager, roundupId, { publishedAt: new Date() });
+
+    // Marked Live in the database without a publication: still nothing public, photo and pages alike.
+    await dataSource.getRepository(RoundupEntity).update({ id: roundupId }, { state: 'live' });
+    for (const page of [photoPath, model.path, model.openData.csvPath, model.products[0].path]) {
+      expect((await reader().get(page)).status, page).toBe(404);
+    }
+    await dataSource.getRepository(RoundupEntity).update({ id: roundupId }, { state: 'in-review' });
+
+    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+    await scheduleAt(editor, roundupId, at);
+    await runnerAt(new ManualClock(at), roundupId).runDue();
+    const photo = await reader().get(photoPath);
+    expect(photo.status).toBe(200);
+    expect(photo.headers['content-type']).toBe('image/webp');
+
+    // The chart image approved before publication is frozen with it and is the page's Open Graph image.
+    const published = (await services.publishing.publishedModels()).find(
+      (m) => m.roundupId === roundupId,
+    ) as unknown as {
+      path: string;
+      chartImages: { url: string }[];
+    };
+    expect(published.chartImages.length).toBeGreaterThan(0);
+    const chart = await reader().get(published.chartImages[0].url);
+    expect(chart.status).toBe(200);
+    expect(chart.headers['content-type']).toBe('image/png');
+    // PNG signature (ISO/IEC 15948, 5.2): 89 50 4E 47 0D 0A 1A 0A.
+    expect((chart.body as Buffer).subarray(0, 8).toString('hex')).toBe('89504e470d0a1a0a');
+    const page = await reader().get(published.path);
+    expect(page.text).toContain(`<meta property="og:image" content="`);
+    expect(page.text).toContain(`${published.chartImages[0].url}" />`);
+    // An address that is not one of the frozen images is not found.
+    expect((await reader().get(`${published.path}/charts/configuration-999999.png`)).status).toBe(404);
   });
 });

@@ -45,7 +45,7 @@ describe('preview link tokens', () => {
 describe('preview links', () => {
   it('an editor shares a link that shows the unpublished page without an account', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId, title } = await roundupInReview(editor, dataSource);
+    const { roundupId, title } = await roundupInReview(app, editor, dataSource);
     const created = await editor.post(`/api/roundups/${roundupId}/preview-links`).send({ hours: 48 });
     expect(created.status, created.text).toBe(201);
     expect(created.body.url).toBe(`http://${TEST_HOST}${created.body.path}`);
@@ -65,7 +65,7 @@ describe('preview links', () => {
 
   it('an expired link says so and shows nothing', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId, title } = await roundupInReview(editor, dataSource);
+    const { roundupId, title } = await roundupInReview(app, editor, dataSource);
     const key = await loadPreviewSecret(dataSource, undefined);
     const token = createPreviewToken(key, { roundupId, expiresAt: Math.floor(Date.now() / 1000) - 1 });
     const page = await request(app).get(`/preview/${token}`).set('Host', TEST_HOST);
@@ -75,7 +75,7 @@ describe('preview links', () => {
 
   it('only editors create preview links; hours are bounded', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId } = await roundupInReview(editor, dataSource);
+    const { roundupId } = await roundupInReview(app, editor, dataSource);
     expect((await editor.post(`/api/roundups/${roundupId}/preview-links`).send({ hours: 0 })).status).toBe(400);
     expect((await editor.post(`/api/roundups/${roundupId}/preview-links`).send({ hours: 721 })).status).toBe(400);
     const { agent: tester } = await signedIn(app, 'tester');

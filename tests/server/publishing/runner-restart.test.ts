@@ -41,7 +41,7 @@ beforeAll(async () => {
 describe('a runner killed before the embargo', () => {
   it('publishes at restart, once', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
-    const { roundupId } = await roundupInReview(editor, dataSource);
+    const { roundupId } = await roundupInReview(app, editor, dataSource);
     const first = await startRunnerProcess();
     const at = new Date(Math.ceil((Date.now() + 2_000) / 1000) * 1000);
     await scheduleAt(editor, roundupId, at, 'UTC');

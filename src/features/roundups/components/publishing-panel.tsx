@@ -1,10 +1,12 @@
 import { useState, type FormEvent } from 'react';
+import { Link } from 'react-router';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
 import { Select } from '../../../components/ui/select';
 import { TextArea } from '../../../components/ui/text-area';
 import { TextField } from '../../../components/ui/text-field';
+import { ApiError } from '../../../lib/api-client';
 import { describeSubmitError } from '../../../lib/form-errors';
 import { roundupStateLabels } from '../../../../shared/domain/planning/roundup-states';
 import {
@@ -12,6 +14,7 @@ import {
   instantToZonedTime,
   zonedTimeToInstant,
 } from '../../../../shared/domain/publishing/zoned-time';
+import type { RoundupPublishing } from '../../../../shared/schemas/publishing';
 import {
   useCreatePreviewLink,
   usePublishing,
@@ -28,6 +31,34 @@ export interface PublishingPanelProps {
 }
 
 const browserZone = Intl.DateTimeFormat().resolvedOptions().timeZone;
+
+type Problem = RoundupPublishing['readiness']['problems'][number];
+
+/** The blockers a refusal names (422 `not_ready` carries them in its details), or none. */
+function refusedProblems(error: unknown): Problem[] {
+  if (!(error instanceof ApiError) || error.code !== 'not_ready') return [];
+  const details = error.details as { problems?: Problem[] } | null;
+  return Array.isArray(details?.problems) ? details.problems : [];
+}
+
+/** Each blocker in words, linked to the screen where it is fixed. */
+function ProblemList({ problems, label }: { problems: Problem[]; label: string }) {
+  return (
+    <ul className="mb-3 list-disc space-y-1 pl-5 text-sm" aria-label={label}>
+      {problems.map((problem, index) => (
+        <li key={`${index}-${problem.message}`}>
+          {problem.link ? (
+            <Link className="underline" to={problem.link}>
+              {problem.message}
+            </Link>
+          ) : (
+            problem.message
+          )}
+        </li>
+      ))}
+    </ul>
+  );
+}
 
 function inZone(instant: string, timeZone: string) {
   const local = instantToZonedTime(new Date(instant), timeZone);
@@ -47,6 +78,7 @@ export function PublishingPanel({ roundupId, defaultTimeZone, canEdit }: Publish
   const [timeZone, setTimeZone] = useState(initial.timeZone);
   const [fields, setFields] = useState<Partial<Record<string, string>>>({});
   const [message, setMessage] = useState<string | null>(null);
+  const [refused, setRefused] = useState<Problem[]>([]);
   const [notice, setNotice] = useState<string | null>(null);
   const [kind, setKind] = useState<'update' | 'correction'>('update');
   const [note, setNote] = useState('');
@@ -58,12 +90,14 @@ export function PublishingPanel({ roundupId, defaultTimeZone, canEdit }: Publish
     const described = describeSubmitError(error);
     setFields(described.fields);
     setMessage(described.message);
+    setRefused(refusedProblems(error));
   };
 
   const submitSchedule = (event: FormEvent) => {
     event.preventDefault();
     setFields({});
     setMessage(null);
+    setRefused([]);
     schedule.mutate(
       { id: roundupId, schedule: { date, time, timeZone } },
       { onSuccess: () => setNotice('Scheduled. It goes live by itself at that time.'), onError: fail },
@@ -99,7 +133,7 @@ export function PublishingPanel({ roundupId, defaultTimeZone, canEdit }: Publish
       )}
       {message && (
         <Alert tone="danger" title="That did not work" announce>
-          {message}
+          {refused.length > 0 ? <ProblemList problems={refused} label="What blocks scheduling" /> : message}
         </Alert>
       )}
 
@@ -132,13 +166,12 @@ export function PublishingPanel({ roundupId, defaultTimeZone, canEdit }: Publish
           </p>
         )}
         {!publishing.readiness.ready && !live && (
-          <ul className="mb-3 list-disc pl-5 text-sm text-muted">
-            {publishing.readiness.problems.map((problem) => (
-              <li key={problem}>{problem}</li>
-            ))}
-          </ul>
+          <>
+            <p className="mb-2 text-sm font-medium">Not ready to schedule. Each of these must be settled first:</p>
+            <ProblemList problems={publishing.readiness.problems} label="What blocks scheduling" />
+          </>
         )}
-        {canEdit && !live && publishing.readiness.ready && (
+        {canEdit && !live && (publishing.readiness.ready || publishing.schedule) && (
           <form onSubmit={submitSchedule} noValidate className="grid gap-3 sm:grid-cols-3">
             <TextField
               label="Date"

@@ -1,9 +1,15 @@
 import { expect } from 'vitest';
+import { createServices } from '../../../../server/compose-services';
+import { RoundupScheduleEntity } from '../../../../server/entities/roundup-schedule.entity';
 import { RoundupEntity } from '../../../../server/entities/roundup.entity';
+import { loadPreviewSecret } from '../../../../server/publishing/preview-links';
+import { PublishedPageCache } from '../../../../server/publishing/published-page-cache';
+import { readerSiteRenderer } from '../../../../server/publishing/reader-site-renderer';
+import { PublishingService } from '../../../../server/services/publishing.service';
 import { RunAnalysisEntity } from '../../../../server/entities/run-analysis.entity';
 import { SampleEntity } from '../../../../server/entities/sample.entity';
 import type { RoundupState } from '../../../../shared/domain/planning/roundup-states';
-import { signedIn, testApp, testDataSource, type Client } from '../../support/test-app';
+import { signedIn, testApp, testDataSource, testEnv, type Client } from '../../support/test-app';
 import {
   addEntry,
   addPrice,
@@ -126,7 +132,9 @@ export async function publishedFixture(
       .getRepository(SampleEntity)
       .update({ entryId: product.entryId }, { source: 'retail', firmwareOnArrival: '1.01' });
   }
-  await ds.getRepository(RoundupEntity).update({ id: setup.roundupId }, { state: options.state ?? 'live' });
+  const state = options.state ?? 'live';
+  if (state === 'live') await publishForReaders(setup.roundupId);
+  else await ds.getRepository(RoundupEntity).update({ id: setup.roundupId }, { state });
   const roundup = await ds.getRepository(RoundupEntity).findOneByOrFail({ id: setup.roundupId });
   return {
     roundupId: setup.roundupId,
@@ -138,4 +146,38 @@ export async function publishedFixture(
     editor: editor.agent,
     tester: tester.agent,
   };
+}
+
+/**
+ * Publishes the roundup as the job runner does at its embargo time (Scheduled → Live, frozen model, rendered pages), a
+ * minute ago. These tests are about what readers see of published data, so the editorial readiness check (charts
+ * approved, write-up signed off — tested in tests/server/publishing) is not asked here; the write-up's signed-off
+ * text and the approved chart images are frozen as in the app.
+ */
+export async function publishForReaders(roundupId: number) {
+  const ds = await testDataSource();
+  const services = createServices(ds, testEnv());
+  const publishing = new PublishingService(ds, {
+    renderer: readerSiteRenderer(ds, {
+      // The public address the reader-page tests name (PUBLIC_SITE_URL): canonical and Open Graph links use it.
+      baseUrl: 'https://results.test',
+      writeUps: services.writeUps,
+      chartImages: (id) => services.charts.approvedChartImages(id),
+    }),
+    pages: new PublishedPageCache(ds),
+    previewSecret: () => loadPreviewSecret(ds, undefined),
+  });
+  const publishAt = new Date(Math.floor(Date.now() / 1000) * 1000 - 60_000);
+  const roundup = await ds.getRepository(RoundupEntity).findOneByOrFail({ id: roundupId });
+  await ds.getRepository(RoundupEntity).update({ id: roundupId }, { state: 'scheduled', stateChangedAt: publishAt });
+  await ds.getRepository(RoundupScheduleEntity).save({
+    roundupId,
+    publishAt,
+    localDate: publishAt.toISOString().slice(0, 10),
+    localTime: publishAt.toISOString().slice(11, 19),
+    timeZone: 'UTC',
+    scheduledBy: roundup.createdBy,
+    updatedAt: publishAt,
+  });
+  expect(await publishing.publishDue(roundupId, new Date())).toBe('published');
 }

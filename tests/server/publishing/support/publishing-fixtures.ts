@@ -2,22 +2,39 @@ import type { DataSource } from 'typeorm';
 import { expect } from 'vitest';
 import { RoundupEntity } from '../../../../server/entities/roundup.entity';
 import { instantToZonedTime } from '../../../../shared/domain/publishing/zoned-time';
-import type { Client } from '../../support/test-app';
-import { addEntry, createProduct, createRoundup } from '../../planning/support/planning-fixtures';
+import { signedIn, type Client, type TestApp } from '../../support/test-app';
+import { approveAllCharts, roundupWithResults, signOffWriteUp } from '../../editorial/support/editorial-fixtures';
 
 /**
- * A roundup with two tested boards, put In review directly: the writing and review steps belong to the editorial
- * work, and publishing starts where they end.
+ * A roundup genuinely ready to schedule, reached through the app as staff reach it: two tested boards under one load,
+ * each cell accepted with a run of record, a verdict per board, every chart approved, sent to review, and every
+ * write-up section signed off. Readiness reports nothing left to do.
  */
-export async function roundupInReview(editor: Client, dataSource: DataSource) {
-  const setup = await createRoundup(editor, { configurations: 1 });
-  const productIds = [await createProduct(editor, setup.platform), await createProduct(editor, setup.platform)];
-  for (const productId of productIds) await addEntry(editor, setup.roundupId, productId);
-  await dataSource
-    .getRepository(RoundupEntity)
-    .update({ id: setup.roundupId }, { state: 'in-review', stateChangedAt: new Date() });
+export async function roundupInReview(app: TestApp, editor: Client, dataSource: DataSource) {
+  const tester = await signedIn(app, 'tester');
+  const setup = await roundupWithResults(editor, tester, [[[{ peakC: 68.4 }]], [[{ peakC: 73.9 }]]]);
+  const verdicts = await editor.get(`/api/roundups/${setup.roundupId}/verdicts`);
+  expect(verdicts.status, verdicts.text).toBe(200);
+  for (const product of verdicts.body.products as {
+    entryId: number;
+    catalogPrice: { amountMinor: number; currency: string } | null;
+  }[]) {
+    const set = await editor.put(`/api/roundups/${setup.roundupId}/verdicts/${product.entryId}`).send({
+      label: 'fine-at-stock',
+      bestFor: 'Stock builds that never raise the limits',
+      price: product.catalogPrice ?? { amountMinor: 16000, currency: 'EUR' },
+      reason: 'Both boards held their stock limits without throttling.',
+    });
+    expect(set.status, set.text).toBe(200);
+  }
+  await approveAllCharts(editor, setup.roundupId);
+  const review = await editor.post(`/api/roundups/${setup.roundupId}/review-request`).send({});
+  expect(review.status, review.text).toBe(200);
+  await signOffWriteUp(editor, setup.roundupId);
+  const readiness = await editor.get(`/api/roundups/${setup.roundupId}/readiness`);
+  expect(readiness.body.blocking, readiness.text).toEqual([]);
   const title = (await dataSource.getRepository(RoundupEntity).findOneByOrFail({ id: setup.roundupId })).title;
-  return { ...setup, productIds, title };
+  return { ...setup, productIds: setup.products.map((p) => p.productId), title };
 }
 
 /** The local date and time of an instant in a zone, as the schedule form sends them (seconds included). */

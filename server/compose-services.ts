@@ -36,6 +36,7 @@ import { PublishedPageCache } from './publishing/published-page-cache';
 import { loadPreviewSecret } from './publishing/preview-links';
 import { readerSiteRenderer } from './publishing/reader-site-renderer';
 import { PublishingService } from './services/publishing.service';
+import { OpenDataSettingsService } from './publishing/open-data-settings';
 import { enqueueGoLiveMailing } from './mail/outbox';
 
 /**
@@ -117,6 +118,7 @@ export function createServices(dataSource: DataSource, env: Env) {
   });
   // Going live queues the go-live mail in the publish transaction: the mail is queued if and only if the publish
   // commits. Updates and corrections are mailed only when an editor chooses to.
+  const openDataSettings = new OpenDataSettingsService(dataSource, publishing);
   publishing.onPublication(async (manager, event) => {
     if (event.kind === 'publication') await enqueueGoLiveMailing(manager, event.roundupId);
   });
@@ -173,6 +175,7 @@ export function createServices(dataSource: DataSource, env: Env) {
     readiness,
     publishedPages,
     publishing,
+    openDataSettings,
   };
 }
 

@@ -1,8 +1,10 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
-import { planEditors, planningReaders } from '../../shared/access/roles';
+import { openDataSettingsEditors, planEditors, planningReaders } from '../../shared/access/roles';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
+  openDataSettingsRequestSchema,
+  openDataSettingsSchema,
   previewLinkRequestSchema,
   previewLinkSchema,
   publishUpdateRequestSchema,
@@ -75,5 +77,30 @@ export function registerPublishingRoutes(api: ApiRegistry, { services }: AppCont
       const link = await publishing.createPreviewLink(user, params.id, body.hours);
       return { ...link, url: `${req.protocol}://${req.get('host') ?? 'localhost'}${link.path}` };
     },
+  });
+
+  api.add({
+    method: 'get',
+    path: '/api/roundups/:id/open-data',
+    access: openDataSettingsEditors,
+    tag: 'Publishing',
+    summary:
+      "Whether the roundup's raw logger files are downloadable by readers, and the outlet's open-data licence line.",
+    params: idParamSchema,
+    response: openDataSettingsSchema,
+    handler: ({ params }) => services.openDataSettings.get(params.id),
+  });
+
+  api.add({
+    method: 'put',
+    path: '/api/roundups/:id/open-data',
+    access: openDataSettingsEditors,
+    tag: 'Publishing',
+    summary:
+      "Offer the roundup's raw logger files to readers or not, and set the outlet's licence line; published pages follow at once.",
+    params: idParamSchema,
+    body: openDataSettingsRequestSchema,
+    response: openDataSettingsSchema,
+    handler: ({ user, params, body }) => services.openDataSettings.set(user, params.id, body),
   });
 }

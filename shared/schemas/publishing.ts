@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { instantSchema } from './common';
 import { timeZoneSchema } from './planning-fields';
 import { roundupStateSchema } from './roundup-state';
-import { multiLineText } from './text';
+import { multiLineText, singleLineText } from './text';
 import { calendarDate, dateRanges } from './dates';
 
 /** Schedule (or reschedule) a roundup: a local date and time in an IANA zone; the server works out the instant. */
@@ -64,3 +64,21 @@ export const roundupPublishingSchema = z.object({
   publicPath: z.string().nullable(),
 });
 export type RoundupPublishing = z.infer<typeof roundupPublishingSchema>;
+
+/** What readers get as open data: the raw logger files of this roundup (or not), and the outlet's licence line. */
+export const openDataSettingsSchema = z.object({
+  roundupId: z.number().int(),
+  /** Raw logger files of this roundup's runs of record are downloadable on its public page. */
+  rawFilesAllowed: z.boolean(),
+  /** The outlet's licence line, printed with the open data of every roundup. */
+  licence: z.string(),
+  /** How many runs of record have a logger file that would be offered. */
+  rawFileCount: z.number().int(),
+});
+export type OpenDataSettings = z.infer<typeof openDataSettingsSchema>;
+
+export const openDataSettingsRequestSchema = z.strictObject({
+  rawFilesAllowed: z.boolean(),
+  licence: singleLineText(300, 'Write the licence line readers see beside the open data.'),
+});
+export type OpenDataSettingsRequest = z.infer<typeof openDataSettingsRequestSchema>;

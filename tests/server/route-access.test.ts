@@ -152,6 +152,8 @@ const allowed: Record<string, Caller[]> = {
   'DELETE /api/roundups/:id/schedule': ['editor'],
   'POST /api/roundups/:id/publication-updates': ['editor'],
   'POST /api/roundups/:id/preview-links': ['editor'],
+  'GET /api/roundups/:id/open-data': ['editor', 'admin'],
+  'PUT /api/roundups/:id/open-data': ['editor', 'admin'],
 };
 
 interface RouteLayer {

@@ -14,12 +14,13 @@ import { RoundupHeader } from '../../features/roundups/components/roundup-header
 import { RoundupEditorialLinks } from '../../features/editorial/components/roundup-editorial-links';
 import { TestPlanPanel } from '../../features/roundups/components/test-plan-panel';
 import { PublishingPanel } from '../../features/roundups/components/publishing-panel';
+import { OpenDataPanel } from '../../features/roundups/components/open-data-panel';
 import { matrixQueryOptions } from '../../features/matrix/api/get-matrix';
 import { MatrixGrid } from '../../features/matrix/components/matrix-grid';
 import { ResultsMatrix } from '../../features/test-runs/components/results-matrix';
 import { productDisplayName } from '../../../shared/domain/planning/product-display-name';
 import { SamplesTable } from '../../features/samples/components/samples-table';
-import { benchWorkers, may, planEditors } from '../../../shared/access/roles';
+import { benchWorkers, may, openDataSettingsEditors, planEditors } from '../../../shared/access/roles';
 import { writeUpReadableStates } from '../../../shared/domain/editorial/write-up-availability';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { gatedPage, roundupPageLoader } from '../page-route';
@@ -146,6 +147,11 @@ function RoundupPage({ user }: { user: CurrentUser }) {
             content: (
               <Suspense fallback={<LoadingState label="Loading publishing…" />}>
                 <PublishingPanel roundupId={roundup.id} defaultTimeZone={roundup.timeZone} canEdit={isEditor} />
+                {may(user.role, openDataSettingsEditors) && (
+                  <div className="mt-5">
+                    <OpenDataPanel roundupId={roundup.id} />
+                  </div>
+                )}
               </Suspense>
             ),
           },

@@ -2,8 +2,10 @@ import { queryOptions, useMutation, useQueryClient, useSuspenseQuery } from '@ta
 import { apiClient, apiRequest } from '../../../lib/api-client';
 import { invalidateAfter } from '../../../lib/stale-after';
 import {
+  openDataSettingsSchema,
   previewLinkSchema,
   roundupPublishingSchema,
+  type OpenDataSettingsRequest,
   type RoundupPublishing,
   type ScheduleRoundupRequest,
 } from '../../../../shared/schemas/publishing';
@@ -53,5 +55,25 @@ export function useCreatePreviewLink() {
   return useMutation({
     mutationFn: ({ id, hours }: { id: number; hours: number }) =>
       apiClient.post(`/api/roundups/${id}/preview-links`, { hours }, { schema: previewLinkSchema }),
+  });
+}
+
+export function openDataQueryOptions(id: number) {
+  return queryOptions({
+    queryKey: [...roundupKeys.detail(id), 'open-data'] as const,
+    queryFn: ({ signal }) => apiClient.get(`/api/roundups/${id}/open-data`, { signal, schema: openDataSettingsSchema }),
+  });
+}
+
+export function useOpenDataSettings(id: number) {
+  return useSuspenseQuery(openDataQueryOptions(id)).data;
+}
+
+export function useSetOpenDataSettings() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, settings }: { id: number; settings: OpenDataSettingsRequest }) =>
+      apiRequest(`/api/roundups/${id}/open-data`, { method: 'PUT', body: settings, schema: openDataSettingsSchema }),
+    onSuccess: (saved) => queryClient.setQueryData(openDataQueryOptions(saved.roundupId).queryKey, saved),
   });
 }

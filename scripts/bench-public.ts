@@ -221,6 +221,8 @@ http {
       `\napp p99 ${appResult.p99} ms (target < 20 ms) — ${appResult.p99 < 20 ? 'met' : 'NOT met'}; no nginx baseline`,
     );
   }
+  const [one, five] = loadavg();
+  console.log(`[bench] load average at the end: ${one.toFixed(2)} (1 min), ${five.toFixed(2)} (5 min)`);
 } catch (error) {
   console.error(`[bench] ${(error as Error).message}`);
   process.exitCode = 1;

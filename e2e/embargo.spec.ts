@@ -134,5 +134,14 @@ test('an editor schedules a ready roundup a few seconds ahead; it goes live; a r
   await readerPage.getByRole('button', { name: 'Estimate' }).click();
   await expect(readerPage.getByRole('heading', { name: /Estimated hottest VRM reading/ })).toBeVisible();
   await expect(readerPage.locator('.estimate-figure')).toContainText('°F');
+
+  // The editor changes the open-data licence line on the Publishing tab; the published page follows without an update.
+  const licence = `Results by The Soak Sheet, reuse with credit (${roundupId}).`;
+  await page.getByLabel('Licence line').fill(licence);
+  await page.getByRole('button', { name: 'Save open data settings' }).click();
+  await expect(page.getByText('Saved. Published pages show it now.')).toBeVisible();
+  await readerPage.goto(publicPath as string);
+  await readerPage.reload();
+  await expect(readerPage.getByText(licence)).toBeVisible();
   await reader.close();
 });

@@ -116,9 +116,10 @@ export function createServices(dataSource: DataSource, env: Env) {
     pages: publishedPages,
     previewSecret: () => (previewSecret ??= loadPreviewSecret(dataSource, env.PREVIEW_LINK_SECRET)),
   });
+  // Open-data switches (raw logger files, licence line): settings the published pages follow at once.
+  const openDataSettings = new OpenDataSettingsService(dataSource, publishing);
   // Going live queues the go-live mail in the publish transaction: the mail is queued if and only if the publish
   // commits. Updates and corrections are mailed only when an editor chooses to.
-  const openDataSettings = new OpenDataSettingsService(dataSource, publishing);
   publishing.onPublication(async (manager, event) => {
     if (event.kind === 'publication') await enqueueGoLiveMailing(manager, event.roundupId);
   });

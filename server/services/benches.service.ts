@@ -8,7 +8,8 @@ import { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
 import { AppError, conflict, forbidden, invalid, notFound } from '../errors';
 import { recordAudit } from './audit.service';
-import { isDuplicateKey } from '../lib/database-errors';
+import { NamedRecords } from '../lib/named-records';
+import type { FieldChanges } from '../lib/field-changes';
 import { loadPeople, personOrNull } from '../mappers/people';
 import { benchProfileRoundupCounts, toBenchProfileDto } from '../mappers/bench-profile';
 import { queueItems } from '../mappers/queue-item';
@@ -41,9 +42,6 @@ type CreateBookingInput = z.output<typeof createBookingRequestSchema>;
 type CreateInstrumentInput = z.output<typeof createInstrumentRequestSchema>;
 type UpdateInstrumentInput = z.output<typeof updateInstrumentRequestSchema>;
 type CreateMaintenanceInput = z.output<typeof createMaintenanceRequestSchema>;
-
-const nameTaken = () =>
-  conflict('name_taken', 'Another bench already has this name.', { name: 'Another bench already has this name.' });
 
 const DAY_MS = 86_400_000;
 
@@ -112,7 +110,11 @@ export async function cellBookingAt(manager: EntityManager, cellId: number, at: 
 
 /** Benches and their booking calendars. */
 export class BenchesService {
-  constructor(private readonly dataSource: DataSource) {}
+  private readonly records: NamedRecords<BenchEntity>;
+
+  constructor(private readonly dataSource: DataSource) {
+    this.records = new NamedRecords(dataSource, BenchEntity, 'bench', 'bench');
+  }
 
   private async toBenchDtos(manager: EntityManager, benches: BenchEntity[]): Promise<Bench[]> {
     const profileIds = [...new Set(benches.map((b) => b.benchProfileId).filter((id): id is number => id != null))];
@@ -155,55 +157,31 @@ export class BenchesService {
     }
   }
 
-  async create(actor: CurrentUser, input: CreateBenchInput): Promise<Bench> {
-    try {
-      return await this.dataSource.transaction(async (manager) => {
-        await this.checkProfile(manager, input.benchProfileId);
-        const { identifiers } = await manager.getRepository(BenchEntity).insert({ ...input, active: true });
-        const id = Number(identifiers[0].id);
-        await recordAudit(manager, {
-          actorId: actor.id,
-          action: 'bench.created',
-          subjectType: 'bench',
-          subjectId: id,
-          details: { name: input.name },
-        });
-        return this.get(id, manager);
-      });
-    } catch (error) {
-      if (isDuplicateKey(error)) throw nameTaken();
-      throw error;
-    }
+  create(actor: CurrentUser, input: CreateBenchInput): Promise<Bench> {
+    return this.records.createAudited(
+      actor,
+      { ...input, active: true },
+      { name: input.name },
+      (id, manager) => this.get(id, manager),
+      (manager) => this.checkProfile(manager, input.benchProfileId),
+    );
   }
 
-  async update(actor: CurrentUser, id: number, input: UpdateBenchInput): Promise<Bench> {
-    try {
-      return await this.dataSource.transaction(async (manager) => {
-        const repo = manager.getRepository(BenchEntity);
-        const bench = await repo.findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
-        if (!bench) throw notFound('That bench');
+  update(actor: CurrentUser, id: number, input: UpdateBenchInput): Promise<Bench> {
+    return this.records.updateAudited(
+      actor,
+      id,
+      async (bench, manager) => {
         await this.checkProfile(manager, input.benchProfileId);
-        const changes: Record<string, { from: unknown; to: unknown }> = {};
+        const changes: FieldChanges = {};
         for (const key of ['name', 'location', 'benchProfileId', 'notes', 'active'] as const) {
           const before = key === 'active' ? Boolean(bench.active) : bench[key];
           if (input[key] !== undefined && input[key] !== before) changes[key] = { from: before, to: input[key] };
         }
-        if (Object.keys(changes).length > 0) {
-          await repo.update({ id }, Object.fromEntries(Object.entries(changes).map(([k, v]) => [k, v.to])));
-          await recordAudit(manager, {
-            actorId: actor.id,
-            action: 'bench.updated',
-            subjectType: 'bench',
-            subjectId: id,
-            details: changes,
-          });
-        }
-        return this.get(id, manager);
-      });
-    } catch (error) {
-      if (isDuplicateKey(error)) throw nameTaken();
-      throw error;
-    }
+        return { patch: Object.fromEntries(Object.entries(changes).map(([k, v]) => [k, v.to])), changes };
+      },
+      (benchId, manager) => this.get(benchId, manager),
+    );
   }
 
   /** Bookings overlapping [from, to), default from one day ago to two weeks ahead. `benchId` null = all benches. */

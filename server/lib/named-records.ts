@@ -1,0 +1,183 @@
+import type {
+  DataSource,
+  EntityManager,
+  EntityTarget,
+  FindOptionsOrder,
+  FindOptionsWhere,
+  ObjectLiteral,
+  QueryDeepPartialEntity,
+} from 'typeorm';
+import { conflict, notFound } from '../errors';
+import { recordAudit } from '../services/audit.service';
+import { archivedWhere, refusingDuplicates } from './database-errors';
+import type { FieldChanges } from './field-changes';
+import type { CurrentUser } from '../../shared/schemas/auth';
+
+/** What one edit of a record writes: the columns to set and, for the audit log, each field's value before and after. */
+export interface RecordEdit<E> {
+  patch: QueryDeepPartialEntity<E>;
+  changes: FieldChanges;
+  /** Runs in the same transaction after a change was written and audited (for example the history of roundups). */
+  afterChange?: (manager: EntityManager) => Promise<void>;
+}
+
+/**
+ * Staff records with a unique name (benches, bench profiles, load configurations): created and edited in one
+ * transaction with an audit entry `<subject>.created` / `<subject>.updated`; a name another record already has is
+ * refused with a 409 that names the field.
+ */
+export class NamedRecords<E extends ObjectLiteral & { id: number }> {
+  constructor(
+    protected readonly dataSource: DataSource,
+    protected readonly entity: EntityTarget<E>,
+    /** The audit subject type, e.g. `bench_profile`. */
+    private readonly subject: string,
+    /** The record in words, e.g. `bench profile`. */
+    private readonly label: string,
+  ) {}
+
+  nameTaken(): Error {
+    const message = `Another ${this.label} already has this name.`;
+    return conflict('name_taken', message, { name: message });
+  }
+
+  notFound(): Error {
+    return notFound(`That ${this.label}`);
+  }
+
+  /** Inserts `row` after `check` passes, audits it with `details`, and returns what `read` makes of the new id. */
+  createAudited<T>(
+    actor: CurrentUser,
+    row: QueryDeepPartialEntity<E>,
+    details: Record<string, unknown>,
+    read: (id: number, manager: EntityManager) => Promise<T>,
+    check?: (manager: EntityManager) => Promise<void>,
+  ): Promise<T> {
+    return refusingDuplicates(
+      () =>
+        this.dataSource.transaction(async (manager) => {
+          await check?.(manager);
+          const { identifiers } = await manager.getRepository(this.entity).insert(row);
+          const id = Number(identifiers[0].id);
+          await recordAudit(manager, {
+            actorId: actor.id,
+            action: `${this.subject}.created`,
+            subjectType: this.subject,
+            subjectId: id,
+            details,
+          });
+          return read(id, manager);
+        }),
+      () => this.nameTaken(),
+    );
+  }
+
+  /**
+   * Locks the record, lets `edit` work out what changes, and writes and audits it when anything does; returns what
+   * `read` makes of the record afterwards.
+   */
+  updateAudited<T>(
+    actor: CurrentUser,
+    id: number,
+    edit: (current: E, manager: EntityManager) => Promise<RecordEdit<E>> | RecordEdit<E>,
+    read: (id: number, manager: EntityManager) => Promise<T>,
+  ): Promise<T> {
+    return refusingDuplicates(
+      () =>
+        this.dataSource.transaction(async (manager) => {
+          const repo = manager.getRepository(this.entity);
+          const current = await repo.findOne({
+            where: { id } as FindOptionsWhere<E>,
+            lock: { mode: 'pessimistic_write' },
+          });
+          if (!current) throw this.notFound();
+          const { patch, changes, afterChange } = await edit(current, manager);
+          if (Object.keys(patch).length > 0) {
+            await repo.update({ id } as FindOptionsWhere<E>, patch);
+            await recordAudit(manager, {
+              actorId: actor.id,
+              action: `${this.subject}.updated`,
+              subjectType: this.subject,
+              subjectId: id,
+              details: changes,
+            });
+            await afterChange?.(manager);
+          }
+          return read(id, manager);
+        }),
+      () => this.nameTaken(),
+    );
+  }
+}
+
+/**
+ * Named records staff archive instead of deleting (bench profiles, load configurations), each shown with the number
+ * of roundups that use it. Their services extend this class.
+ */
+export abstract class ArchivableNamedRecords<
+  E extends ObjectLiteral & { id: number; name: string; archivedAt: Date | null },
+  Dto extends { archived: boolean },
+> extends NamedRecords<E> {
+  constructor(
+    dataSource: DataSource,
+    entity: EntityTarget<E>,
+    subject: string,
+    label: string,
+    private readonly toDto: (row: E, roundupCount: number) => Dto,
+    private readonly roundupCounts: (manager: EntityManager, ids: number[]) => Promise<Map<number, number>>,
+  ) {
+    super(dataSource, entity, subject, label);
+  }
+
+  /** Every record by name, hiding, including or showing only the archived ones. */
+  async list(query: { archived: 'exclude' | 'include' | 'only' }): Promise<Dto[]> {
+    const manager = this.dataSource.manager;
+    const rows = await manager.getRepository(this.entity).find({
+      where: archivedWhere(query.archived) as FindOptionsWhere<E>,
+      order: { name: 'ASC' } as FindOptionsOrder<E>,
+    });
+    const counts = await this.roundupCounts(
+      manager,
+      rows.map((row) => row.id),
+    );
+    return rows.map((row) => this.toDto(row, counts.get(row.id) ?? 0));
+  }
+
+  async get(id: number, manager: EntityManager = this.dataSource.manager): Promise<Dto> {
+    const row = await manager.getRepository(this.entity).findOneBy({ id } as FindOptionsWhere<E>);
+    if (!row) throw this.notFound();
+    return this.toDto(row, (await this.roundupCounts(manager, [id])).get(id) ?? 0);
+  }
+
+  /** Creates a record, audits it with its name, and returns it as staff see it. */
+  protected createNamed(actor: CurrentUser, row: QueryDeepPartialEntity<E>, name: string): Promise<Dto> {
+    return this.createAudited(actor, row, { name }, (id, manager) => this.get(id, manager));
+  }
+
+  /**
+   * Edits a record: `edit` gets it as staff see it and says which columns change; `archived` archives or restores
+   * it; `afterChange` runs in the same transaction when anything changed.
+   */
+  protected updateNamed(
+    actor: CurrentUser,
+    id: number,
+    archived: boolean | undefined,
+    edit: (before: Dto) => { patch: QueryDeepPartialEntity<E>; changes: FieldChanges },
+    afterChange: (manager: EntityManager, changes: FieldChanges) => Promise<void>,
+  ): Promise<Dto> {
+    return this.updateAudited(
+      actor,
+      id,
+      (current) => {
+        const before = this.toDto(current, 0);
+        const { patch, changes } = edit(before);
+        if (archived !== undefined && archived !== before.archived) {
+          (patch as { archivedAt?: Date | null }).archivedAt = archived ? new Date() : null;
+          changes.archived = { from: before.archived, to: archived };
+        }
+        return { patch, changes, afterChange: (manager: EntityManager) => afterChange(manager, changes) };
+      },
+      (recordId, manager) => this.get(recordId, manager),
+    );
+  }
+}

@@ -12,6 +12,7 @@ import { setUpDatabase } from '../../server/database-setup';
 import { archiveName, createBackup, restoreBackup, RestoreRefused } from '../../server/lib/backup-archive';
 import { demoAccounts } from '../../server/seed/demo-staff';
 import { TEST_HOST, TEST_ORIGIN, testEnv } from './support/test-app';
+import { testDatabaseUrl } from './support/seeded-outlet';
 
 /**
  * The demo outlet goes through `db:backup` and `db:restore` into a second, empty database and uploads folder:
@@ -19,14 +20,8 @@ import { TEST_HOST, TEST_ORIGIN, testEnv } from './support/test-app';
  * app answers the same reads byte for byte.
  */
 
-const baseUrl = testEnv().DATABASE_URL;
-function databaseUrl(suffix: string) {
-  const url = new URL(baseUrl);
-  url.pathname = `${url.pathname}_${suffix}`;
-  return url.toString();
-}
-const sourceUrl = databaseUrl('bk_src');
-const restoredUrl = databaseUrl('bk_dst');
+const sourceUrl = testDatabaseUrl('bk_src');
+const restoredUrl = testDatabaseUrl('bk_dst');
 
 let work: string;
 let sourceUploads: string;
@@ -180,7 +175,7 @@ describe('backup and restore', () => {
   });
 
   it('an uploads folder that holds files is refused before the database is touched', async () => {
-    const third = databaseUrl('bk_third');
+    const third = testDatabaseUrl('bk_third');
     const busy = join(work, 'uploads-busy');
     await mkdir(busy, { recursive: true });
     await writeFile(join(busy, 'keep-me.txt'), 'already here');
@@ -198,7 +193,7 @@ describe('backup and restore', () => {
     const notBackup = join(work, 'not-a-backup.tar.gz');
     await writeFile(notBackup, 'plain text, not an archive');
     await expect(
-      restoreBackup({ file: notBackup, databaseUrl: databaseUrl('bk_none'), uploadsDir: null }),
+      restoreBackup({ file: notBackup, databaseUrl: testDatabaseUrl('bk_none'), uploadsDir: null }),
     ).rejects.toThrow(/tar failed|not a Benchwire backup/);
   });
 });

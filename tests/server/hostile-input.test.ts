@@ -1,13 +1,8 @@
 import type { AddressInfo } from 'node:net';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import request from 'supertest';
-import type { DataSource } from 'typeorm';
-import { createApp } from '../../server/app';
-import { createDataSource, initializeDataSource } from '../../server/data-source';
-import { setUpDatabase } from '../../server/database-setup';
+import { describe, expect, it } from 'vitest';
 import { demoAccounts } from '../../server/seed/demo-staff';
 import { hostileStrings, nonUtf8Body } from '../support/hostile-strings';
-import { TEST_HOST, TEST_ORIGIN, testEnv } from './support/test-app';
+import { demoAgentsByRole, jsonBodyRoutes, seededOutlet, send } from './support/seeded-outlet';
 
 /**
  * The hostile-string corpus sent to every text field of every JSON body route the OpenAPI document lists, on a
@@ -68,27 +63,13 @@ function stringsIn(value: unknown, into: string[] = []): string[] {
   return into;
 }
 
-const url = (() => {
-  const base = new URL(testEnv().DATABASE_URL);
-  base.pathname = `${base.pathname}_hostile`;
-  return base.toString();
-})();
-let dataSource: DataSource;
-
-beforeAll(async () => {
-  await setUpDatabase(url, { fresh: true, seed: true, quiet: true });
-  dataSource = await initializeDataSource(createDataSource(url, { poolSize: 3 }));
-}, 120_000);
-
-afterAll(async () => {
-  await dataSource?.destroy();
-  await setUpDatabase(url, { drop: true });
-});
+const outlet = seededOutlet('hostile');
 
 let textColumns: { tableName: string; columnName: string }[] | null = null;
 
 /** Whether some text column of some table holds exactly this value (binary comparison). */
 async function storedExactly(value: string): Promise<boolean> {
+  const dataSource = outlet.dataSource();
   textColumns ??= await dataSource.query(
     `SELECT TABLE_NAME AS tableName, COLUMN_NAME AS columnName FROM information_schema.COLUMNS
      WHERE TABLE_SCHEMA = DATABASE() AND DATA_TYPE IN ('varchar', 'char', 'text', 'mediumtext', 'longtext', 'tinytext')`,
@@ -105,65 +86,41 @@ async function storedExactly(value: string): Promise<boolean> {
 
 describe('hostile text in every JSON body field', () => {
   it('never a 5xx; refusals name the field; accepted text comes back and is stored exactly as sent', async () => {
-    const app = createApp({
-      dataSource,
-      env: testEnv({ DATABASE_URL: url, SIGN_IN_LIMIT_PER_ACCOUNT: '100000', SIGN_IN_LIMIT_PER_IP: '100000' }),
-    });
-    const agents = new Map<string, ReturnType<typeof request.agent>>();
-    for (const account of demoAccounts) {
-      if (agents.has(account.role)) continue;
-      const agent = request.agent(app).set('Host', TEST_HOST).set('Origin', TEST_ORIGIN);
-      const signIn = await agent.post('/api/auth/sign-in').send({ email: account.email, password: account.password });
-      expect(signIn.status, signIn.text).toBe(200);
-      agents.set(account.role, agent);
-    }
-    const document = (await agents.get('editor')!.get('/api/openapi.json')).body as {
-      paths: Record<
-        string,
-        Record<
-          string,
-          { 'x-benchwire-roles': string[]; requestBody?: { content: Record<string, { schema: JsonSchema }> } }
-        >
-      >;
-    };
+    const app = outlet.app({ SIGN_IN_LIMIT_PER_ACCOUNT: '100000', SIGN_IN_LIMIT_PER_IP: '100000' });
+    const agents = await demoAgentsByRole(app);
 
     const problems: string[] = [];
     const accepted = new Map<string, string>();
     let sent = 0;
-    for (const [path, operations] of Object.entries(document.paths)) {
-      for (const [method, operation] of Object.entries(operations)) {
-        const schema = operation.requestBody?.content['application/json']?.schema;
-        // Signing out or in would end the sessions the sweep runs on; those bodies hold no stored text anyway.
-        if (!schema || path.startsWith('/api/auth/')) continue;
-        const role = ['editor', 'tester', 'admin', 'writer'].find((r) => operation['x-benchwire-roles'].includes(r));
-        const agent = agents.get(role ?? 'editor')!;
-        const address = path.replace(/\{(\w+)\}/g, '1');
-        for (const field of textFields(schema)) {
-          for (const hostile of hostileStrings) {
-            const call = (agent as unknown as Record<string, (u: string) => request.Test>)[method];
-            const response = await call.call(agent, address).send(bodyWith(field, hostile.value));
-            sent += 1;
-            const label = `${method.toUpperCase()} ${path} ${field.join('.')} ← ${hostile.name}`;
-            if (response.status >= 500) {
-              problems.push(`${label}: ${response.status} ${response.text.slice(0, 160)}`);
-            } else if (response.status === 400) {
-              const fields = response.body.error?.fields ?? {};
-              const messages = Object.values(fields);
-              if (messages.length === 0 || messages.some((m) => typeof m !== 'string' || m.length === 0)) {
-                problems.push(`${label}: 400 without field messages: ${response.text.slice(0, 160)}`);
-              }
-            } else if (response.status < 300) {
-              // Multi-line text keeps its lines with one line ending, LF (common practice, no source).
-              const kept = hostile.value.replace(/\r\n/g, '\n');
-              if (hostile.expect === 'refused') problems.push(`${label}: accepted text the rules refuse`);
-              else if (checksOnly(path)) continue;
-              else if (!stringsIn(response.body).includes(kept)) {
-                problems.push(`${label}: accepted, but the answer does not hold the text as sent`);
-              } else {
-                // Checked at once: the next string sent to the same field replaces this one.
-                accepted.set(kept, label);
-                if (!(await storedExactly(kept))) problems.push(`${label}: accepted, but not stored exactly as sent`);
-              }
+    for (const { path, method, roles, schema, address } of await jsonBodyRoutes<JsonSchema>(agents.get('editor')!)) {
+      // Signing out or in would end the sessions the sweep runs on; those bodies hold no stored text anyway.
+      if (path.startsWith('/api/auth/')) continue;
+      const role = ['editor', 'tester', 'admin', 'writer'].find((r) => roles.includes(r));
+      const agent = agents.get(role ?? 'editor')!;
+      for (const field of textFields(schema)) {
+        for (const hostile of hostileStrings) {
+          const response = await send(agent, method, address, bodyWith(field, hostile.value));
+          sent += 1;
+          const label = `${method.toUpperCase()} ${path} ${field.join('.')} ← ${hostile.name}`;
+          if (response.status >= 500) {
+            problems.push(`${label}: ${response.status} ${response.text.slice(0, 160)}`);
+          } else if (response.status === 400) {
+            const fields = response.body.error?.fields ?? {};
+            const messages = Object.values(fields);
+            if (messages.length === 0 || messages.some((m) => typeof m !== 'string' || m.length === 0)) {
+              problems.push(`${label}: 400 without field messages: ${response.text.slice(0, 160)}`);
+            }
+          } else if (response.status < 300) {
+            // Multi-line text keeps its lines with one line ending, LF (common practice, no source).
+            const kept = hostile.value.replace(/\r\n/g, '\n');
+            if (hostile.expect === 'refused') problems.push(`${label}: accepted text the rules refuse`);
+            else if (checksOnly(path)) continue;
+            else if (!stringsIn(response.body).includes(kept)) {
+              problems.push(`${label}: accepted, but the answer does not hold the text as sent`);
+            } else {
+              // Checked at once: the next string sent to the same field replaces this one.
+              accepted.set(kept, label);
+              if (!(await storedExactly(kept))) problems.push(`${label}: accepted, but not stored exactly as sent`);
             }
           }
         }
@@ -176,7 +133,7 @@ describe('hostile text in every JSON body field', () => {
   }, 600_000);
 
   it('a JSON body with bytes that are not UTF-8 is refused with 400 naming the field, never stored', async () => {
-    const app = createApp({ dataSource, env: testEnv({ DATABASE_URL: url }) });
+    const app = outlet.app();
     // Raw bytes on the wire: a test client would re-encode a string as UTF-8.
     const server = app.listen(0, '127.0.0.1');
     await new Promise((resolve) => server.once('listening', resolve));

@@ -17,8 +17,12 @@ function errorWithDetails(details: z.ZodType) {
   return z.object({ error: apiErrorSchema.shape.error.extend({ details }) });
 }
 
-/** OpenAPI 3.1 (whose schemas are JSON Schema 2020-12) from the same zod schemas the routes validate with. */
-export function buildOpenApiDocument(routes: RegisteredRoute[]) {
+/**
+ * OpenAPI 3.1 (whose schemas are JSON Schema 2020-12) from the same zod schemas the routes validate with.
+ * `sessionCookie` is the name the session store sets (`__Host-benchwire_session` on HTTPS, `benchwire_session`
+ * otherwise), so the document describes the deployment that serves it.
+ */
+export function buildOpenApiDocument(routes: RegisteredRoute[], sessionCookie: string) {
   const paths: Record<string, Record<string, unknown>> = {};
   const errorContent = { 'application/json': { schema: jsonSchema(apiErrorSchema, 'output') } };
   for (const route of routes) {
@@ -119,7 +123,7 @@ export function buildOpenApiDocument(routes: RegisteredRoute[]) {
         'JSON API of Benchwire. Sign in with POST /api/auth/sign-in to get the session cookie; every request that changes data must send an Origin header naming this host. Errors are { error: { code, message, fields?, details? } }.',
     },
     components: {
-      securitySchemes: { sessionCookie: { type: 'apiKey', in: 'cookie', name: 'benchwire_session' } },
+      securitySchemes: { sessionCookie: { type: 'apiKey', in: 'cookie', name: sessionCookie } },
     },
     paths,
   };

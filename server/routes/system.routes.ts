@@ -9,7 +9,7 @@ const healthSchema = z.object({
   time: z.string(),
 });
 
-export function registerSystemRoutes(api: ApiRegistry, { dataSource }: AppContext) {
+export function registerSystemRoutes(api: ApiRegistry, { dataSource, services }: AppContext) {
   api.add({
     method: 'get',
     path: '/api/health',
@@ -34,6 +34,6 @@ export function registerSystemRoutes(api: ApiRegistry, { dataSource }: AppContex
     access: 'public',
     tag: 'System',
     summary: 'This API described as OpenAPI 3.1, including which roles may call each operation.',
-    handler: () => (document ??= buildOpenApiDocument(api.routes)),
+    handler: () => (document ??= buildOpenApiDocument(api.routes, services.sessions.sessionCookieName)),
   });
 }

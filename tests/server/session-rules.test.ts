@@ -42,6 +42,19 @@ describe('the session cookie', () => {
       .set('Cookie', `__Host-benchwire_session=${token}`);
     expect(session.status).toBe(200);
   });
+
+  it('the API description names the cookie the session store sets: __Host- on HTTPS, plain otherwise', async () => {
+    const cookieIn = async (overrides: Record<string, string>) => {
+      const document = (
+        await request(await testApp(overrides))
+          .get('/api/openapi.json')
+          .set('Host', TEST_HOST)
+      ).body;
+      return document.components.securitySchemes.sessionCookie.name as string;
+    };
+    expect(await cookieIn({ NODE_ENV: 'production', COOKIE_SECURE: 'auto' })).toBe('__Host-benchwire_session');
+    expect(await cookieIn({ COOKIE_SECURE: 'false' })).toBe('benchwire_session');
+  });
 });
 
 describe('session limits in time', () => {

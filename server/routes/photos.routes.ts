@@ -12,6 +12,7 @@ import {
   updatePhotoRequestSchema,
 } from '../../shared/schemas/photos';
 import { photoUploadLimit } from '../../shared/upload-limits';
+import { storageWriteErrors } from '../storage/storage-errors';
 
 export function registerPhotoRoutes(api: ApiRegistry, { services }: AppContext) {
   const { photos } = services;
@@ -39,6 +40,7 @@ export function registerPhotoRoutes(api: ApiRegistry, { services }: AppContext) 
       fields: { file: 'file', kind: 'string', caption: 'string', altText: 'string' },
       limit: photoUploadLimit,
     },
+    errors: storageWriteErrors,
     body: photoUploadFieldsSchema,
     response: photoSchema,
     handler: ({ req, params, user, body }) => photos.upload(user, params.id, params.entryId, req.file, body),

@@ -18,6 +18,7 @@ import {
 } from '../../shared/schemas/test-runs';
 
 import { logFileUploadLimit } from '../../shared/upload-limits';
+import { storageWriteErrors } from '../storage/storage-errors';
 
 /** The form's text field: the run's details as JSON beside the logger file. */
 const loggerRunFormSchema = z.object({ request: loggerRunRequestSchema });
@@ -46,6 +47,7 @@ export function registerTestRunRoutes(api: ApiRegistry, { services }: AppContext
     params: cellRunsParamsSchema,
     multipart: { fields: { file: 'file', request: 'json' }, limit: logFileUploadLimit },
     body: loggerRunFormSchema,
+    errors: storageWriteErrors,
     response: createRunResponseSchema,
     handler: async ({ req, params, user, body }) => {
       const runId = await runs.createLoggerRun(user, params.cellId, req.file, body.request);

@@ -4,6 +4,7 @@ import { mkdir, readFile, rename, rm, stat, writeFile } from 'node:fs/promises';
 import { dirname, join, resolve, sep } from 'node:path';
 import type { Readable } from 'node:stream';
 import { assertValidKey, type FileStore } from './file-store';
+import { storageWriteError } from './storage-errors';
 
 function isMissing(error: unknown) {
   return (error as NodeJS.ErrnoException)?.code === 'ENOENT';
@@ -27,14 +28,15 @@ export class LocalDiskStore implements FileStore {
 
   async put(key: string, body: Buffer, _contentType: string) {
     const path = this.pathOf(key);
-    await mkdir(dirname(path), { recursive: true });
     const temporary = `${path}.${randomBytes(6).toString('hex')}.partial`;
     try {
+      await mkdir(dirname(path), { recursive: true });
       await writeFile(temporary, body, { flag: 'wx' });
       await rename(temporary, path);
     } catch (error) {
-      await rm(temporary, { force: true });
-      throw error;
+      // A full disk leaves a truncated temporary file: it goes, so nothing half-written stays behind.
+      await rm(temporary, { force: true }).catch(() => undefined);
+      throw storageWriteError(error, this.driver);
     }
   }
 

@@ -8,6 +8,7 @@ import {
   S3Client,
 } from '@aws-sdk/client-s3';
 import { Readable } from 'node:stream';
+import { storageWriteError } from './storage-errors';
 import { assertValidKey, type FileStore } from './file-store';
 
 export interface S3StoreOptions {
@@ -49,15 +50,20 @@ export class S3Store implements FileStore {
   }
 
   async put(key: string, body: Buffer, contentType: string) {
-    await this.client.send(
-      new PutObjectCommand({
-        Bucket: this.options.bucket,
-        Key: this.objectKey(key),
-        Body: body,
-        ContentType: contentType,
-        ContentLength: body.length,
-      }),
-    );
+    const objectKey = this.objectKey(key);
+    try {
+      await this.client.send(
+        new PutObjectCommand({
+          Bucket: this.options.bucket,
+          Key: objectKey,
+          Body: body,
+          ContentType: contentType,
+          ContentLength: body.length,
+        }),
+      );
+    } catch (error) {
+      throw storageWriteError(error, 's3');
+    }
   }
 
   async get(key: string) {

@@ -15,8 +15,19 @@ export function connectionOptions(databaseUrl: string) {
   };
 }
 
+/**
+ * How long a new connection may take to open. A stopped server refuses at once; a host that does not answer at all
+ * would otherwise hold the request for the driver's default. Requests then fail with database_unavailable (503).
+ */
+export const DATABASE_CONNECT_TIMEOUT_MS = 5_000;
+/** How long a query may wait for a pooled connection (all busy, or being opened) before it gives up the same way. */
+export const DATABASE_ACQUIRE_TIMEOUT_MS = 10_000;
+
 /** The one DataSource shape shared by the app, the CLI and the tests. */
-export function createDataSource(databaseUrl: string, options: { logging?: boolean; poolSize?: number } = {}) {
+export function createDataSource(
+  databaseUrl: string,
+  options: { logging?: boolean; poolSize?: number; connectTimeoutMs?: number } = {},
+) {
   return new DataSource({
     type: 'mariadb',
     ...connectionOptions(databaseUrl),
@@ -33,6 +44,7 @@ export function createDataSource(databaseUrl: string, options: { logging?: boole
     // Failed queries surface through the error handler; logging them here too would also log expected conflicts.
     logging: options.logging ? ['query', 'error'] : false,
     poolSize: options.poolSize ?? 10,
+    connectTimeout: options.connectTimeoutMs ?? DATABASE_CONNECT_TIMEOUT_MS,
   });
 }
 
@@ -40,15 +52,48 @@ export function createDataSource(databaseUrl: string, options: { logging?: boole
  * Connects and makes every pooled connection work in UTC (`time_zone = '+00:00'`), whatever the server's
  * default, so DEFAULT CURRENT_TIMESTAMP and NOW() agree with the instants the app writes.
  */
-export async function initializeDataSource(dataSource: DataSource): Promise<DataSource> {
+export async function initializeDataSource(
+  dataSource: DataSource,
+  options: { acquireTimeoutMs?: number } = {},
+): Promise<DataSource> {
   await dataSource.initialize();
-  const pool = (
-    dataSource.driver as unknown as { pool?: { on(event: 'connection', cb: (c: RawConnection) => void): void } }
-  ).pool;
+  const pool = (dataSource.driver as unknown as { pool?: RawPool }).pool;
   pool?.on('connection', (connection) => connection.query("SET time_zone = '+00:00'"));
+  if (pool) boundAcquire(pool, options.acquireTimeoutMs ?? DATABASE_ACQUIRE_TIMEOUT_MS);
   // The connection TypeORM opened while initialising predates the hook: it is the only idle one, so this reaches it.
   await dataSource.query("SET time_zone = '+00:00'");
   return dataSource;
 }
 
 type RawConnection = { query(sql: string): unknown };
+type PooledConnection = { release(): void };
+type RawPool = {
+  on(event: 'connection', cb: (c: RawConnection) => void): void;
+  getConnection(callback: (error: Error | null, connection?: PooledConnection) => void): void;
+};
+
+/**
+ * The mysql2 pool queues a request for a connection without a time limit. This gives each wait a limit: past it the
+ * caller gets an error coded POOL_ACQUIRE_TIMEOUT (answered as 503 database_unavailable), and a connection that turns
+ * up later goes straight back to the pool. So no request waits on the database for longer than the limit to start.
+ */
+function boundAcquire(pool: RawPool, timeoutMs: number) {
+  const getConnection = pool.getConnection.bind(pool);
+  pool.getConnection = (callback) => {
+    let answered = false;
+    const timer = setTimeout(() => {
+      answered = true;
+      const error = new Error(`No database connection became free within ${timeoutMs} ms.`);
+      callback(Object.assign(error, { code: 'POOL_ACQUIRE_TIMEOUT' }));
+    }, timeoutMs);
+    getConnection((error, connection) => {
+      if (answered) {
+        connection?.release();
+        return;
+      }
+      answered = true;
+      clearTimeout(timer);
+      callback(error, connection);
+    });
+  };
+}

@@ -1,0 +1,128 @@
+// Helpers of the drill and load scripts: free ports, the app as its own process, signed-in staff and a query
+// straight to MariaDB. Figures these scripts print come from the real server process on 127.0.0.1.
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { createConnection } from 'mysql2/promise';
+// @ts-expect-error plain ESM helper of the npm scripts, without types
+import { projectRoot } from './setup.mjs';
+
+export { projectRoot };
+
+export function freePort(): Promise<number> {
+  return new Promise((resolvePort, reject) => {
+    const server = createServer();
+    server.on('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const address = server.address();
+      server.close(() => resolvePort(typeof address === 'object' && address ? address.port : 0));
+    });
+  });
+}
+
+export const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+
+/** Runs `server/cli/setup-database.ts` with the flags on the database the URL names. */
+export function setUpDatabase(databaseUrl: string, flags: string[]) {
+  const result = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/setup-database.ts', ...flags], {
+    cwd: projectRoot,
+    env: { ...process.env, DATABASE_URL: databaseUrl },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  if (result.status !== 0) throw new Error(`setup-database ${flags.join(' ')} failed`);
+}
+
+export interface AppProcess {
+  child: ChildProcess;
+  baseUrl: string;
+  /** Resident memory of the server process in MiB, from /proc (Linux). */
+  rssMiB(): number;
+  stop(): Promise<void>;
+}
+
+/** Starts `server/index.ts` as its own Node.js process on a free port and waits until it answers. */
+export async function startApp(databaseUrl: string, env: Record<string, string> = {}): Promise<AppProcess> {
+  const port = await freePort();
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+    cwd: projectRoot,
+    env: {
+      ...process.env,
+      DATABASE_URL: databaseUrl,
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      NODE_ENV: 'production',
+      COOKIE_SECURE: 'false',
+      // Staff sign in many times from 127.0.0.1 in these runs.
+      SIGN_IN_LIMIT_PER_IP: '100000',
+      ...env,
+    },
+    stdio: ['ignore', 'ignore', 'pipe'],
+  });
+  let stderr = '';
+  child.stderr?.on('data', (chunk: Buffer) => {
+    stderr = (stderr + chunk.toString()).slice(-20_000);
+  });
+  const baseUrl = `http://127.0.0.1:${port}`;
+  const deadline = Date.now() + 120_000;
+  for (;;) {
+    if (child.exitCode !== null) throw new Error(`the app exited with ${child.exitCode}:\n${stderr}`);
+    const up = await fetch(`${baseUrl}/api/health`).then(
+      (r) => r.status === 200,
+      () => false,
+    );
+    if (up) break;
+    if (Date.now() > deadline) throw new Error('the app did not answer within two minutes');
+    await sleep(250);
+  }
+  return {
+    child,
+    baseUrl,
+    rssMiB() {
+      const status = readFileSync(`/proc/${child.pid}/status`, 'utf8');
+      return Number(/VmRSS:\s+(\d+)/.exec(status)?.[1] ?? 0) / 1024;
+    },
+    async stop() {
+      if (child.exitCode !== null) return;
+      const exited = new Promise((resolve) => child.once('exit', resolve));
+      child.kill('SIGTERM');
+      await Promise.race([exited, sleep(10_000)]);
+      if (child.exitCode === null) child.kill('SIGKILL');
+    },
+  };
+}
+
+/** Headers of a same-site request, as a Benchwire page sends them (the Origin check refuses others). */
+export function siteHeaders(baseUrl: string, cookie?: string): Record<string, string> {
+  return { origin: baseUrl, 'content-type': 'application/json', ...(cookie ? { cookie } : {}) };
+}
+
+/** Signs a demo account in and returns its session cookie (`name=value`). */
+export async function signIn(baseUrl: string, email: string, password: string): Promise<string> {
+  const response = await fetch(`${baseUrl}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: siteHeaders(baseUrl),
+    body: JSON.stringify({ email, password }),
+  });
+  if (response.status !== 200)
+    throw new Error(`sign-in of ${email} failed: ${response.status} ${await response.text()}`);
+  const cookie = response.headers.get('set-cookie') ?? '';
+  return cookie.split(';')[0];
+}
+
+/** One query straight to MariaDB (not through the app). */
+export async function queryDatabase<T>(databaseUrl: string, sql: string, values: unknown[] = []): Promise<T[]> {
+  const connection = await createConnection(databaseUrl);
+  try {
+    const [rows] = await connection.query(sql, values);
+    return rows as T[];
+  } finally {
+    await connection.end();
+  }
+}
+
+/** The p-th percentile (0–100) of the values, nearest rank. */
+export function percentile(values: number[], p: number): number {
+  if (values.length === 0) return 0;
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))];
+}

@@ -3,11 +3,12 @@
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { createServer } from 'node:net';
+import { resolve } from 'node:path';
 import { createConnection } from 'mysql2/promise';
-// @ts-expect-error plain ESM helper of the npm scripts, without types
-import { projectRoot } from './setup.mjs';
 
-export { projectRoot };
+// Not imported from ./setup.mjs: that loads ./mariadb.mjs, which reads BENCHWIRE_MARIADB_DIR and _PORT once, and
+// the drill sets them first.
+export const projectRoot = resolve(import.meta.dirname, '..', '..');
 
 export function freePort(): Promise<number> {
   return new Promise((resolvePort, reject) => {

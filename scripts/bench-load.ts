@@ -1,0 +1,318 @@
+/**
+ * Load benchmark of the whole product (issue 14): for 60 s (`-- --seconds N` for another length) 200 readers open
+ * published pages while editors and testers work through the API (lists, a roundup and its matrix, the dashboard,
+ * new catalog products, logger files checked), all against one app server process on 127.0.0.1 with the demo
+ * outlet seeded. In the same run nginx (Debian's nginx-light) serves the very same reader-page bytes to 200
+ * readers as the static-file baseline. Prints requests, p50 and p99 per kind and the server's memory before and
+ * after. Passes (exit 0) with zero errors (non-2xx, socket errors, timeouts) and memory growth within the bound.
+ *
+ * Staff are paced like people at work (each connection a request or two a second); each reader opens a page a
+ * second (`-- --reader-rate 0` sends as fast as the server answers), and the nginx baseline gets the same pace.
+ */
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { chmodSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { get } from 'node:http';
+import { availableParallelism, loadavg, tmpdir } from 'node:os';
+import { join } from 'node:path';
+import autocannon from 'autocannon';
+import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
+import {
+  freePort,
+  queryDatabase,
+  setUpDatabase,
+  signIn,
+  siteHeaders,
+  sleep,
+  startApp,
+  type AppProcess,
+} from './lib/app-process';
+
+const secondsArg = process.argv.indexOf('--seconds');
+const seconds = Number(secondsArg > 0 ? process.argv[secondsArg + 1] : (process.env.BENCH_SECONDS ?? 60));
+const READERS = 200;
+/** Each reader opens a page this many times a second (`-- --reader-rate N`; 0 = as fast as the server answers). */
+const rateArg = process.argv.indexOf('--reader-rate');
+const READER_RATE = Number(rateArg > 0 ? process.argv[rateArg + 1] : 1);
+const readerPace = READER_RATE > 0 ? { connectionRate: READER_RATE } : {};
+/** Resident memory of the server may grow by at most this much over the run (caches fill, the heap settles). */
+const MEMORY_GROWTH_BOUND_MIB = 150;
+
+/** The raw bytes of a response, as sent (no decoding). */
+function fetchRaw(url: string, acceptEncoding: string) {
+  return new Promise<{ status: number; headers: Record<string, unknown>; body: Buffer }>((done, fail) => {
+    get(url, { headers: { 'accept-encoding': acceptEncoding } }, (res) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => done({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
+    }).on('error', fail);
+  });
+}
+
+type Request = autocannon.Request & { headers?: Record<string, string> };
+type Result = autocannon.Result;
+
+function cannon(url: string, connections: number, requests: Request[], extra: Partial<autocannon.Options> = {}) {
+  return autocannon({ url, connections, duration: seconds, pipelining: 1, timeout: 10, requests, ...extra });
+}
+
+const errorsOf = (r: Result) => r.errors + r.non2xx + r.timeouts;
+
+function line(label: string, connections: number, r: Result) {
+  return (
+    `${label.padEnd(26)} ${String(connections).padStart(5)} ${String(r.requests.total).padStart(9)} ` +
+    `${r.requests.average.toFixed(0).padStart(7)} ${String(r.latency.p50).padStart(6)} ${String(r.latency.p99).padStart(6)} ` +
+    `${String(errorsOf(r)).padStart(7)}`
+  );
+}
+
+const children: ChildProcess[] = [];
+const workDir = mkdtempSync(join(tmpdir(), 'benchwire-bench-load-'));
+let app: AppProcess | null = null;
+let databaseUrl: string | null = null;
+let stopDatabase: (() => Promise<void>) | null = null;
+
+try {
+  console.log(
+    `[load] ${availableParallelism()} CPU(s), load average ${loadavg()[0].toFixed(2)}; ${seconds} s per run; ` +
+      `readers ${READER_RATE > 0 ? `${READER_RATE} page(s)/s each` : 'unpaced'}`,
+  );
+  // @ts-expect-error plain ESM helper of the npm scripts, without types
+  const { ensureDatabase } = await import('./lib/setup.mjs');
+  const database = (await ensureDatabase()) as { url: string; startedHere: boolean; stop: () => Promise<void> };
+  if (database.startedHere) stopDatabase = database.stop;
+  const url = new URL(database.url);
+  url.pathname = `/benchwire_bench_load_${process.pid}`;
+  databaseUrl = url.toString();
+  setUpDatabase(databaseUrl, ['--fresh', '--seed', '--quiet']);
+  app = await startApp(databaseUrl, { JOB_RUNNER: 'on', UPLOADS_DIR: join(workDir, 'uploads') });
+  const base = app.baseUrl;
+
+  // Reader pages: the published snapshots (served from memory) and the board pages they link to (rendered live).
+  const snapshots = await queryDatabase<{ path: string }>(
+    databaseUrl,
+    "SELECT path FROM published_pages WHERE variant = '' AND content_type LIKE 'text/html%' ORDER BY path LIMIT 20",
+  );
+  const linked: string[] = [];
+  for (const { path } of snapshots) {
+    const html = (await fetchRaw(`${base}${path}`, 'identity')).body.toString('utf8');
+    for (const match of html.matchAll(/href="(\/read\/(?:roundups|products)\/[a-z0-9-]+)"/g)) linked.push(match[1]);
+  }
+  const readerPaths = [...new Set([...snapshots.map((s) => s.path), ...linked])].slice(0, 30);
+  const pages = new Map<string, { identity: Buffer; gzip: Buffer }>();
+  for (const path of readerPaths) {
+    const identity = await fetchRaw(`${base}${path}`, 'identity');
+    const gzip = await fetchRaw(`${base}${path}`, 'gzip');
+    if (identity.status !== 200 || gzip.status !== 200) throw new Error(`${path} answered ${identity.status}`);
+    pages.set(path, { identity: identity.body, gzip: gzip.body });
+  }
+  console.log(`[load] ${pages.size} reader pages: ${[...pages.keys()].slice(0, 6).join(', ')}…`);
+
+  // Staff: the demo editor and tester, signed in once each.
+  const editor = await signIn(base, 'editor@soaksheet.example', 'demo-editor-pass');
+  const tester = await signIn(base, 'tester@soaksheet.example', 'demo-tester-pass');
+  const [roundup] = await queryDatabase<{ id: number }>(databaseUrl, 'SELECT id FROM roundups ORDER BY id LIMIT 1');
+  const get = (path: string, cookie: string): Request => ({ method: 'GET', path, headers: siteHeaders(base, cookie) });
+  const editorReads = [
+    get('/api/dashboard', editor),
+    get('/api/roundups', editor),
+    get(`/api/roundups/${roundup.id}`, editor),
+    get(`/api/roundups/${roundup.id}/matrix`, editor),
+    get('/api/catalog/products?limit=25', editor),
+  ];
+  const testerReads = [
+    get('/api/my-bench', tester),
+    get(`/api/roundups/${roundup.id}/matrix`, tester),
+    get('/api/benches', tester),
+    get('/api/catalog/products?limit=25', tester),
+  ];
+  for (const request of [...editorReads, ...testerReads]) {
+    const response = await fetch(`${base}${request.path}`, { headers: request.headers });
+    if (response.status !== 200) throw new Error(`${request.path} answered ${response.status}`);
+  }
+  let serial = 0;
+  const productWrite: Request = {
+    method: 'POST',
+    path: '/api/catalog/products',
+    headers: siteHeaders(base, editor),
+    setupRequest: (request) => ({ ...request, body: JSON.stringify(productBody(++serial)) }),
+  };
+  const boundary = 'benchwireloadboundary';
+  const log = syntheticLoggerLog({
+    durationS: 900,
+    sampleHz: 1,
+    seed: 3,
+    probes: [{ name: 'VRM 1', startC: 21, riseC: 45, tauS: 300, noiseC: 0.05 }],
+    ambient: { name: 'Ambient', startC: 21, noiseC: 0.05 },
+  });
+  const logCheck: Request = {
+    method: 'POST',
+    path: '/api/log-check/analyse',
+    headers: { ...siteHeaders(base, tester), 'content-type': `multipart/form-data; boundary=${boundary}` },
+    body: Buffer.from(
+      `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="soak.csv"\r\nContent-Type: text/csv\r\n\r\n` +
+        `${log}\r\n--${boundary}\r\nContent-Disposition: form-data; name="request"\r\n\r\n` +
+        `${JSON.stringify({ mapping: { time: 'Time [s]', vrm: ['VRM 1 [°C]'], ambient: 'Ambient [°C]' } })}\r\n--${boundary}--\r\n`,
+    ),
+  };
+  const checked = await fetch(`${base}${logCheck.path}`, {
+    method: 'POST',
+    headers: logCheck.headers,
+    body: new Uint8Array(logCheck.body as Buffer),
+  });
+  if (checked.status !== 200) throw new Error(`the log check answered ${checked.status}: ${await checked.text()}`);
+
+  const readerRequests: Request[] = [...pages.keys()].map((path) => ({
+    method: 'GET',
+    path,
+    headers: { 'accept-encoding': 'gzip' },
+  }));
+  // Warm-up, not counted.
+  await autocannon({ url: base, connections: 50, duration: 3, requests: readerRequests });
+  await sleep(2_000);
+  const rssBefore = app.rssMiB();
+
+  const staff = { editorReads: 10, testerReads: 10, writes: 4, checks: 4 };
+  const [readers, editorsReading, testersReading, editorsWriting, testersChecking] = await Promise.all([
+    cannon(base, READERS, readerRequests, readerPace),
+    cannon(base, staff.editorReads, editorReads, { connectionRate: 2 }),
+    cannon(base, staff.testerReads, testerReads, { connectionRate: 2 }),
+    cannon(base, staff.writes, [productWrite], { connectionRate: 1 }),
+    cannon(base, staff.checks, [logCheck], { connectionRate: 1 }),
+  ]);
+  await sleep(5_000);
+  const rssAfter = app.rssMiB();
+  const written = await queryDatabase<{ n: number }>(
+    databaseUrl,
+    "SELECT COUNT(*) AS n FROM products WHERE model LIKE 'HX4 Load %'",
+  );
+
+  // The baseline: nginx serves the same bytes (identity and gzip) of every reader page, in this run.
+  let baseline: Result | null = null;
+  if (spawnSync('sh', ['-c', 'command -v nginx'], { stdio: 'ignore' }).status === 0) {
+    const root = join(workDir, 'root');
+    mkdirSync(root, { recursive: true });
+    // nginx started by root reads files as its unprivileged worker user: the temp folder must be readable to it.
+    chmodSync(workDir, 0o755);
+    const locations: string[] = [];
+    [...pages.entries()].forEach(([path, bytes], n) => {
+      const file = join(root, `page-${n}.html`);
+      writeFileSync(file, bytes.identity);
+      writeFileSync(`${file}.gz`, bytes.gzip);
+      locations.push(`    location = ${path} { alias ${file}; }`);
+    });
+    mkdirSync(join(workDir, 'temp'), { recursive: true });
+    const port = await freePort();
+    const conf = join(workDir, 'nginx.conf');
+    const temp = join(workDir, 'temp');
+    writeFileSync(
+      conf,
+      `worker_processes 1;
+daemon off;
+pid ${join(workDir, 'nginx.pid')};
+error_log stderr warn;
+events { worker_connections 4096; }
+http {
+  access_log off;
+  sendfile on;
+  keepalive_requests 1000000;
+  client_body_temp_path ${temp}; proxy_temp_path ${temp}; fastcgi_temp_path ${temp}; uwsgi_temp_path ${temp}; scgi_temp_path ${temp};
+  server {
+    listen 127.0.0.1:${port};
+    default_type "text/html; charset=utf-8";
+    gzip_static on;
+${locations.join('\n')}
+  }
+}
+`,
+    );
+    const nginx = spawn('nginx', ['-p', workDir, '-c', conf, '-e', 'stderr'], {
+      stdio: ['ignore', 'ignore', 'inherit'],
+    });
+    children.push(nginx);
+    const nginxUrl = `http://127.0.0.1:${port}`;
+    for (let tries = 0; ; tries++) {
+      const up = await fetchRaw(`${nginxUrl}${readerPaths[0]}`, 'gzip').catch(() => null);
+      if (up?.status === 200) break;
+      if (tries > 80) throw new Error('nginx did not answer');
+      await sleep(250);
+    }
+    for (const [path, bytes] of pages) {
+      const same = await fetchRaw(`${nginxUrl}${path}`, 'gzip');
+      if (!same.body.equals(bytes.gzip)) throw new Error(`nginx does not serve the same bytes for ${path}`);
+    }
+    console.log('[load] nginx serves the same gzip bytes for every reader page (checked)');
+    baseline = await cannon(nginxUrl, READERS, readerRequests, readerPace);
+  } else {
+    console.log('[load] nginx is not installed (apt-get install nginx-light): no static baseline');
+  }
+
+  console.log(`\nkind                       conns  requests   req/s  p50 ms p99 ms  errors`);
+  console.log(line('reader pages (app)', READERS, readers));
+  console.log(line('API reads, editors', staff.editorReads, editorsReading));
+  console.log(line('API reads, testers', staff.testerReads, testersReading));
+  console.log(line('API writes, new products', staff.writes, editorsWriting));
+  console.log(line('log checks (upload)', staff.checks, testersChecking));
+  if (baseline) console.log(line('reader pages (nginx)', READERS, baseline));
+  const apiReads = [editorsReading, testersReading];
+  const apiP99 = Math.max(...apiReads.map((r) => r.latency.p99));
+  const totalErrors = [readers, editorsReading, testersReading, editorsWriting, testersChecking].reduce(
+    (sum, r) => sum + errorsOf(r),
+    0,
+  );
+  const growth = rssAfter - rssBefore;
+  console.log(
+    `\nreader pages p99 ${readers.latency.p99} ms${baseline ? ` (static baseline ${baseline.latency.p99} ms)` : ''}; ` +
+      `API reads p99 ${apiP99} ms; ${editorsWriting['2xx']} products created, ${written[0].n} in the database\n` +
+      `errors: ${totalErrors}\n` +
+      `server memory (RSS): ${rssBefore.toFixed(0)} MiB before, ${rssAfter.toFixed(0)} MiB after ` +
+      `(+${growth.toFixed(0)} MiB; bound ${MEMORY_GROWTH_BOUND_MIB} MiB) — ${growth <= MEMORY_GROWTH_BOUND_MIB ? 'within' : 'OVER'}`,
+  );
+  const passed =
+    totalErrors === 0 && growth <= MEMORY_GROWTH_BOUND_MIB && Number(written[0].n) === editorsWriting['2xx'];
+  console.log(`\n[load] ${passed ? 'PASSED' : 'FAILED'}`);
+  if (!passed) process.exitCode = 1;
+} catch (error) {
+  console.error(`[load] ${(error as Error).stack ?? error}`);
+  process.exitCode = 1;
+} finally {
+  for (const child of children) if (child.exitCode === null) child.kill('SIGTERM');
+  await app?.stop();
+  if (databaseUrl) setUpDatabase(databaseUrl, ['--drop']);
+  await stopDatabase?.();
+  rmSync(workDir, { recursive: true, force: true });
+}
+
+/** A product as the catalog form sends it (invented maker and parts). */
+function productBody(n: number) {
+  return {
+    maker: 'Korvath',
+    model: `HX4 Load ${process.pid}-${n}`,
+    platform: 'Helix-1700',
+    socket: 'HX4',
+    chipset: 'HX-B50',
+    formFactor: 'atx',
+    releaseDate: '2025-03-14',
+    powerDesign: {
+      controller: 'KV-PWM8',
+      controllerPhases: 8,
+      phaseMultiplication: 'doubled',
+      stagesPerPhase: 1,
+      vcoreStageType: 'integrated-power-stage',
+      vcoreStagePart: 'KVS-60',
+      vcoreStageCurrentA: 60,
+      socRailStages: 2,
+      otherRails: '1 stage auxiliary',
+      heatsinkNotes: 'Two finned blocks joined by a heat pipe',
+    },
+    features: {
+      rearUsb: { usb2: 4, usb5g: 2, usb10g: 2, usb20g: 1, usb40g: 0 },
+      frontUsbCHeader: 'usb-10g',
+      lanSpeedMbps: 2500,
+      wifi: 'wifi-6e',
+      m2Slots: 3,
+      sataPorts: 4,
+      audio: '7.1 HD audio',
+      ioShieldPrefitted: true,
+    },
+  };
+}

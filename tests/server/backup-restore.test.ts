@@ -17,7 +17,7 @@ import { testDatabaseUrl } from './support/seeded-outlet';
 /**
  * The demo outlet goes through `db:backup` and `db:restore` into a second, empty database and uploads folder:
  * every table has the same rows (count and CHECKSUM TABLE), every uploaded file the same bytes, and the restored
- * app answers the same reads byte for byte.
+ * app answers the same reads and serves the same public pages (results page, board pages, feed) byte for byte.
  */
 
 const sourceUrl = testDatabaseUrl('bk_src');
@@ -159,6 +159,46 @@ describe('backup and restore', () => {
       answers.push(texts);
     }
     expect(answers[1]).toEqual(answers[0]);
+  }, 60_000);
+
+  it('the restored app serves the same public pages, byte for byte: the published results page and the board pages', async () => {
+    const apps = [
+      createApp({ dataSource: dataSources[0], env: testEnv({ DATABASE_URL: sourceUrl, UPLOADS_DIR: sourceUploads }) }),
+      createApp({
+        dataSource: dataSources[1],
+        env: testEnv({ DATABASE_URL: restoredUrl, UPLOADS_DIR: restoredUploads }),
+      }),
+    ];
+    const [results] = (await dataSources[0].query(
+      "SELECT path FROM published_pages WHERE roundup_id IS NOT NULL AND variant = '' ORDER BY path LIMIT 1",
+    )) as { path: string }[];
+    expect(results, 'the demo publishes a roundup').toBeTruthy();
+    const get = (app: (typeof apps)[number], path: string) =>
+      request(app)
+        .get(path)
+        .set('Host', TEST_HOST)
+        .buffer(true)
+        .parse((res, done) => {
+          const chunks: Buffer[] = [];
+          res.on('data', (chunk: Buffer) => chunks.push(chunk));
+          res.on('end', () => done(null, Buffer.concat(chunks)));
+        });
+    // The board (product) pages the results page links to, rendered live from the restored rows.
+    const resultsPage = (await get(apps[0], results.path)).body as Buffer;
+    const boards = [...new Set(resultsPage.toString('utf8').match(/\/read\/products\/[a-z0-9-]+/g) ?? [])];
+    expect(boards.length, 'the results page links to its boards').toBeGreaterThan(0);
+    const paths = ['/read', results.path, ...boards, '/read/feed.atom'];
+    const pages: Buffer[][] = [];
+    for (const app of apps) {
+      const bodies: Buffer[] = [];
+      for (const path of paths) {
+        const response = await get(app, path);
+        expect(response.status, path).toBe(200);
+        bodies.push(response.body as Buffer);
+      }
+      pages.push(bodies);
+    }
+    paths.forEach((path, n) => expect(pages[1][n].equals(pages[0][n]), `${path} is the same after restore`).toBe(true));
   }, 60_000);
 
   it('a database that already holds tables is refused, and nothing in it changes', async () => {

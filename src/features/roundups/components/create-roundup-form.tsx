@@ -15,15 +15,12 @@ import {
   type CreateRoundupRequest,
   type RoundupDetail,
 } from '../../../../shared/schemas/roundups';
-import type { BenchProfile } from '../../../../shared/schemas/bench-profiles';
-import type { LoadConfiguration } from '../../../../shared/schemas/load-configurations';
 import { useBenchProfiles } from '../api/get-bench-profiles';
 import { useCatalogProducts } from '../api/get-catalog-products';
 import { useCreateRoundup } from '../api/create-roundup';
 import { useLoadConfigurations } from '../api/get-load-configurations';
-import { BenchProfileDialog } from './bench-profile-dialog';
 import { BenchProfilePicker } from './bench-profile-picker';
-import { LoadConfigurationDialog } from './load-configuration-dialog';
+import { uniqueById, usePlanDialogs } from './plan-dialogs';
 import { LoadConfigurationPlan } from './load-configuration-plan';
 
 // Field names follow the request's paths, so the server's field errors ("priceBand.minMinor") land beside
@@ -120,20 +117,14 @@ export function CreateRoundupForm({ onCreated, onCancel }: CreateRoundupFormProp
   const [configurationIds, setConfigurationIds] = useState<number[]>([]);
   const [configurationsError, setConfigurationsError] = useState<string | undefined>();
   // Made in this form: shown at once, before the refreshed lists arrive.
-  const [madeProfiles, setMadeProfiles] = useState<BenchProfile[]>([]);
-  const [madeConfigurations, setMadeConfigurations] = useState<LoadConfiguration[]>([]);
-  const [profileDialogOpen, setProfileDialogOpen] = useState(false);
-  const [configurationDialogOpen, setConfigurationDialogOpen] = useState(false);
-
-  const allProfiles = useMemo(
-    () => [...profiles, ...madeProfiles.filter((made) => !profiles.some((p) => p.id === made.id))],
-    [profiles, madeProfiles],
-  );
+  const plan = usePlanDialogs({
+    onProfile: (profile) => form.setValue('benchProfileId', String(profile.id)),
+    onConfiguration: (configuration) => setConfigurationIds((current) => [...current, configuration.id]),
+  });
+  const { madeProfiles, madeConfigurations } = plan;
+  const allProfiles = useMemo(() => uniqueById(profiles, madeProfiles), [profiles, madeProfiles]);
   const allConfigurations = useMemo(
-    () => [
-      ...savedConfigurations,
-      ...madeConfigurations.filter((made) => !savedConfigurations.some((c) => c.id === made.id)),
-    ],
+    () => uniqueById(savedConfigurations, madeConfigurations),
     [savedConfigurations, madeConfigurations],
   );
   const chosenProfile = allProfiles.find((p) => String(p.id) === form.values.benchProfileId);
@@ -252,7 +243,7 @@ export function CreateRoundupForm({ onCreated, onCancel }: CreateRoundupFormProp
               profiles={allProfiles}
               value={form.values.benchProfileId}
               onChange={(value) => form.setValue('benchProfileId', value)}
-              onCreateNew={() => setProfileDialogOpen(true)}
+              onCreateNew={plan.newProfile}
               error={form.errors.benchProfileId}
             />
             <LoadConfigurationPlan
@@ -262,7 +253,7 @@ export function CreateRoundupForm({ onCreated, onCancel }: CreateRoundupFormProp
                 setConfigurationIds(ids);
                 setConfigurationsError(undefined);
               }}
-              onCreateNew={() => setConfigurationDialogOpen(true)}
+              onCreateNew={plan.newConfiguration}
               requiredSoakMinutes={chosenProfile?.requiredSoakMinutes}
               error={configurationsError}
             />
@@ -277,24 +268,7 @@ export function CreateRoundupForm({ onCreated, onCancel }: CreateRoundupFormProp
         </div>
       </form>
 
-      <BenchProfileDialog
-        open={profileDialogOpen}
-        onClose={() => setProfileDialogOpen(false)}
-        onCreated={(profile) => {
-          setMadeProfiles((current) => [...current, profile]);
-          form.setValue('benchProfileId', String(profile.id));
-          setProfileDialogOpen(false);
-        }}
-      />
-      <LoadConfigurationDialog
-        open={configurationDialogOpen}
-        onClose={() => setConfigurationDialogOpen(false)}
-        onCreated={(configuration) => {
-          setMadeConfigurations((current) => [...current, configuration]);
-          setConfigurationIds((current) => [...current, configuration.id]);
-          setConfigurationDialogOpen(false);
-        }}
-      />
+      {plan.dialogs}
     </>
   );
 }

@@ -4,17 +4,14 @@ import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Panel } from '../../../components/ui/panel';
 import { describeSubmitError } from '../../../lib/form-errors';
-import type { BenchProfile } from '../../../../shared/schemas/bench-profiles';
-import type { LoadConfiguration } from '../../../../shared/schemas/load-configurations';
 import type { RoundupDetail } from '../../../../shared/schemas/roundups';
 import { useBenchProfiles } from '../api/get-bench-profiles';
 import { useLoadConfigurations } from '../api/get-load-configurations';
 import { useSetLoadConfigurations } from '../api/set-load-configurations';
 import { useUpdateRoundup } from '../api/update-roundup';
-import { BenchProfileDialog } from './bench-profile-dialog';
 import { BenchProfilePicker } from './bench-profile-picker';
 import { BenchProfileSummary } from './bench-profile-summary';
-import { LoadConfigurationDialog } from './load-configuration-dialog';
+import { uniqueById, usePlanDialogs } from './plan-dialogs';
 import { describeConfiguration, LoadConfigurationPlan } from './load-configuration-plan';
 
 export interface TestPlanPanelProps {
@@ -118,22 +115,22 @@ function TestPlanEditor({ roundup, onDone, onCancel }: TestPlanEditorProps) {
   const setConfigurations = useSetLoadConfigurations();
   const [profileId, setProfileId] = useState(roundup.benchProfileId ? String(roundup.benchProfileId) : '');
   const [ids, setIds] = useState<number[]>(roundup.loadConfigurations.map((c) => c.id));
-  const [madeProfiles, setMadeProfiles] = useState<BenchProfile[]>([]);
-  const [madeConfigurations, setMadeConfigurations] = useState<LoadConfiguration[]>([]);
-  const [profileDialogOpen, setProfileDialogOpen] = useState(false);
-  const [configurationDialogOpen, setConfigurationDialogOpen] = useState(false);
   const [error, setError] = useState<string | undefined>();
+  const plan = usePlanDialogs({
+    onProfile: (profile) => setProfileId(String(profile.id)),
+    onConfiguration: (configuration) => setIds((current) => [...current, configuration.id]),
+  });
+  const { madeProfiles, madeConfigurations } = plan;
 
   // The roundup's own (possibly archived) choices stay listed next to the saved ones.
-  const allProfiles = useMemo(() => {
-    const list = [...profiles, ...madeProfiles];
-    if (roundup.benchProfile) list.push(roundup.benchProfile);
-    return [...new Map(list.map((p) => [p.id, p])).values()];
-  }, [profiles, madeProfiles, roundup.benchProfile]);
-  const allConfigurations = useMemo(() => {
-    const list = [...savedConfigurations, ...madeConfigurations, ...roundup.loadConfigurations];
-    return [...new Map(list.map((c) => [c.id, c])).values()];
-  }, [savedConfigurations, madeConfigurations, roundup.loadConfigurations]);
+  const allProfiles = useMemo(
+    () => uniqueById(profiles, madeProfiles, roundup.benchProfile ? [roundup.benchProfile] : []),
+    [profiles, madeProfiles, roundup.benchProfile],
+  );
+  const allConfigurations = useMemo(
+    () => uniqueById(savedConfigurations, madeConfigurations, roundup.loadConfigurations),
+    [savedConfigurations, madeConfigurations, roundup.loadConfigurations],
+  );
   const chosenProfile = allProfiles.find((p) => String(p.id) === profileId);
   const pending = updateRoundup.isPending || setConfigurations.isPending;
 
@@ -166,13 +163,13 @@ function TestPlanEditor({ roundup, onDone, onCancel }: TestPlanEditorProps) {
           profiles={allProfiles}
           value={profileId}
           onChange={setProfileId}
-          onCreateNew={() => setProfileDialogOpen(true)}
+          onCreateNew={plan.newProfile}
         />
         <LoadConfigurationPlan
           configurations={allConfigurations}
           value={ids}
           onChange={setIds}
-          onCreateNew={() => setConfigurationDialogOpen(true)}
+          onCreateNew={plan.newConfiguration}
           requiredSoakMinutes={chosenProfile?.requiredSoakMinutes}
         />
         <p className="text-[0.8125rem] text-muted">
@@ -186,24 +183,7 @@ function TestPlanEditor({ roundup, onDone, onCancel }: TestPlanEditorProps) {
           <Button onClick={onCancel}>Cancel</Button>
         </div>
       </div>
-      <BenchProfileDialog
-        open={profileDialogOpen}
-        onClose={() => setProfileDialogOpen(false)}
-        onCreated={(profile) => {
-          setMadeProfiles((current) => [...current, profile]);
-          setProfileId(String(profile.id));
-          setProfileDialogOpen(false);
-        }}
-      />
-      <LoadConfigurationDialog
-        open={configurationDialogOpen}
-        onClose={() => setConfigurationDialogOpen(false)}
-        onCreated={(configuration) => {
-          setMadeConfigurations((current) => [...current, configuration]);
-          setIds((current) => [...current, configuration.id]);
-          setConfigurationDialogOpen(false);
-        }}
-      />
+      {plan.dialogs}
     </Panel>
   );
 }

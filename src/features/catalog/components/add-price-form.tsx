@@ -1,5 +1,4 @@
 import { useId, useState, type FormEvent } from 'react';
-import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { TextField } from '../../../components/ui/text-field';
 import { ApiError, isApiError } from '../../../lib/api-client';
@@ -11,6 +10,7 @@ import { useAddPrice } from '../api/prices';
 import { formatPrice } from '../../../lib/format-money';
 import { userTimeZone } from '../../../lib/format-time';
 import { todayIn } from '../../../../shared/schemas/dates';
+import { SubmitRow } from '../../../components/ui/submit-row';
 
 /**
  * The form works in major units ("189.99"), as a price tag shows it; the request carries integer minor units, parsed
@@ -142,16 +142,7 @@ export function AddPriceForm({ productId, knownRegions, knownCurrencies, onAdded
           <option key={currency} value={currency} />
         ))}
       </datalist>
-      <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" variant="primary" pending={addPrice.isPending}>
-          Add price
-        </Button>
-        {saved && (
-          <p role="status" className="text-sm text-teal">
-            {saved}
-          </p>
-        )}
-      </div>
+      <SubmitRow label="Add price" pending={addPrice.isPending} done={saved} />
     </form>
   );
 }

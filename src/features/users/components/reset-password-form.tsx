@@ -1,11 +1,11 @@
 import { useState, type FormEvent } from 'react';
-import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { PasswordField } from '../../../components/ui/password-field';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { PASSWORD_MIN } from '../../../../shared/schemas/auth';
 import { updateUserRequestSchema, type User } from '../../../../shared/schemas/users';
 import { useUpdateUser } from '../api/update-user';
+import { SubmitRow } from '../../../components/ui/submit-row';
 
 export interface ResetPasswordFormProps {
   user: User;
@@ -62,16 +62,7 @@ export function ResetPasswordForm({ user, isSelf, onSaved }: ResetPasswordFormPr
             : `At least ${PASSWORD_MIN} characters. Setting it signs ${user.displayName} out on every device at once.`
         }
       />
-      <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" pending={updateUser.isPending}>
-          Set new password
-        </Button>
-        {done && (
-          <p role="status" className="text-sm text-teal">
-            {done}
-          </p>
-        )}
-      </div>
+      <SubmitRow label="Set new password" pending={updateUser.isPending} done={done} variant="secondary" />
     </form>
   );
 }

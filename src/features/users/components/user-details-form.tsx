@@ -1,6 +1,5 @@
 import { useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
@@ -9,6 +8,7 @@ import { roleLabels } from '../../../../shared/schemas/common';
 import { updateUserRequestSchema, type UpdateUserRequest, type User } from '../../../../shared/schemas/users';
 import { useUpdateUser } from '../api/update-user';
 import { roleOptions } from './role-options';
+import { SubmitRow } from '../../../components/ui/submit-row';
 
 export interface UserDetailsFormProps {
   user: User;
@@ -78,16 +78,7 @@ export function UserDetailsForm({ user, isSelf, onSaved }: UserDetailsFormProps)
           Changing the role from {roleLabels[user.role]} signs {user.displayName} out on every device at once.
         </Alert>
       )}
-      <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" variant="primary" pending={updateUser.isPending}>
-          Save changes
-        </Button>
-        {saved && (
-          <p role="status" className="text-sm text-teal">
-            {saved}
-          </p>
-        )}
-      </div>
+      <SubmitRow label="Save changes" pending={updateUser.isPending} done={saved} />
     </form>
   );
 }

@@ -1,0 +1,35 @@
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { publicPaths, readerBase } from '../../server/public-site/public-paths';
+
+/** The server files that declare the pages a reader reaches without an account. */
+const publicRouteFiles = [
+  'server/public-site/reader-routes.ts',
+  'server/mail/subscriber-pages.ts',
+  'server/publishing/public-routes.ts',
+];
+
+/**
+ * Every GET address the public site answers, read from the `router.get(…)` lines of its route files, so tests that
+ * visit every public page cover a new one as soon as it is declared. `${readerBase}` and `publicPaths.x()` are
+ * resolved; parameters stay as written (`/read/roundups/:slug`).
+ */
+export function publicRoutePatterns(): string[] {
+  const patterns: string[] = [];
+  for (const file of publicRouteFiles) {
+    const source = readFileSync(resolve(import.meta.dirname, '..', '..', file), 'utf8');
+    for (const [, first] of source.matchAll(/router\.get\(\s*([^,]+),/g)) {
+      patterns.push(resolvePattern(first.trim(), file));
+    }
+  }
+  return [...new Set(patterns)];
+}
+
+function resolvePattern(expression: string, file: string): string {
+  const literal = /^['`](.*)['`]$/.exec(expression);
+  if (literal) return literal[1].replace(/\$\{readerBase\}/g, readerBase);
+  if (expression === 'readerBase') return readerBase;
+  const call = /^publicPaths\.(\w+)\(\)$/.exec(expression);
+  if (call && call[1] in publicPaths) return (publicPaths as unknown as Record<string, () => string>)[call[1]]();
+  throw new Error(`${file}: cannot read the address of router.get(${expression}, …); write it as a literal`);
+}

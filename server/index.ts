@@ -38,6 +38,13 @@ if (env.JOB_RUNNER === 'on') mailWorker.start();
 
 // Published reader pages are answered from memory before Express sees the request (the lean path); everything
 // else goes to the app. The pages are loaded before the first request and follow publications by any process.
+// Stored pages name the reader's stylesheet and script by their build hashes: after a new build they are rendered
+// again from their frozen models, so no published page points at a file that is gone (only changed pages are stored).
+if (env.NODE_ENV === 'production' && clientDir) {
+  await services.publishing.rerenderAll().catch((error: unknown) => {
+    console.error('[publishing] could not render the published pages again at start:', error);
+  });
+}
 await services.publishedPages.ensureLoaded();
 services.publishedPages.watch();
 const server = createServer((req, res) => {

@@ -2,110 +2,22 @@ import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
-import { expect, test, type APIRequestContext, type PlaywrightWorkerArgs } from '@playwright/test';
+import { expect, test, type PlaywrightWorkerArgs } from '@playwright/test';
 import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
-import { demoAccounts } from './support/demo-accounts';
+import { prepareAssignedCell } from './support/planned-cell';
 import { signInAs, signOut } from './support/sign-in';
-import { uniqueSuffix } from './support/unique';
-
-async function ok<T = { id: number }>(response: Awaited<ReturnType<APIRequestContext['post']>>): Promise<T> {
-  expect(response.ok(), await response.text()).toBe(true);
-  return (await response.json()) as T;
-}
-
-interface CaptureSetup {
-  roundupId: number;
-  entryId: number;
-  productLabel: string;
-  cellLabel: string;
-}
 
 /**
  * As the demo editor, through the API: a roundup on the bench with one product and one load configuration soaking
  * 60 minutes, its cell assigned to the demo tester, and no booking (so each run says why it is outside one).
  */
-async function prepareCell(playwright: PlaywrightWorkerArgs['playwright'], baseURL: string): Promise<CaptureSetup> {
-  const api = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { Origin: baseURL } });
-  try {
-    const suffix = uniqueSuffix();
-    const editor = demoAccounts.editor;
-    await ok<unknown>(
-      await api.post('/api/auth/sign-in', { data: { email: editor.email, password: editor.password } }),
-    );
-    const platform = `Helix-1700 ${suffix}`;
-    const day = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
-    const profile = await ok(
-      await api.post('/api/bench-profiles', {
-        data: {
-          name: `Capture bench ${suffix}`,
-          caseAndFans: 'Open test bench, one 120 mm fan at 800 rpm aimed at the board',
-          cooler: 'Tidewell 360 liquid cooler',
-          psu: 'Ostrel Works 1000 W',
-          memory: '2 × 16 GB at 6000 MT/s',
-          roomTempTargetC: 21,
-          roomTempToleranceC: 1,
-          probeType: 'Type K thermocouple, 0.1 mm bead',
-          probePlacement: 'Board rear under the V-core stages, taped',
-          requiredSoakMinutes: 60,
-        },
-      }),
-    );
-    const loadName = `Stock all-core ${suffix}`;
-    const load = await ok(
-      await api.post('/api/load-configurations', {
-        data: {
-          name: loadName,
-          cpuDescription: 'Helix HX-16 sample, 16 cores',
-          settingsMode: 'stock',
-          expectedPackagePowerW: 230,
-          coreVoltageV: 1.25,
-          soakMinutes: 60,
-        },
-      }),
-    );
-    const maker = `Quillon ${suffix}`;
-    const model = 'Q70 Capture';
-    const product = await ok(
-      await api.post('/api/catalog/products', {
-        data: { maker, model, platform, socket: 'HX4', chipset: 'HX-B50', formFactor: 'atx' },
-      }),
-    );
-    const roundup = await ok(
-      await api.post('/api/roundups', {
-        data: {
-          title: `Helix-1700 capture ${suffix}`,
-          platform,
-          priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE' },
-          targetPublishDate: day(60),
-          timeZone: 'Europe/Berlin',
-          benchProfileId: profile.id,
-          loadConfigurationIds: [load.id],
-        },
-      }),
-    );
-    const { entry } = await ok<{ entry: { id: number } }>(
-      await api.post(`/api/roundups/${roundup.id}/entries`, { data: { productId: product.id, kind: 'tested' } }),
-    );
-    expect((await api.post(`/api/roundups/${roundup.id}/state`, { data: { to: 'on-the-bench' } })).ok()).toBe(true);
-    const { testers } = (await (await api.get('/api/testers')).json()) as {
-      testers: { id: number; displayName: string }[];
-    };
-    const tester = testers.find((person) => person.displayName === demoAccounts.tester.displayName);
-    expect(tester).toBeTruthy();
-    await ok<unknown>(
-      await api.post(`/api/roundups/${roundup.id}/assignments`, {
-        data: { entryIds: [entry.id], testerId: tester?.id, dueDate: day(5) },
-      }),
-    );
-    return {
-      roundupId: roundup.id,
-      entryId: entry.id,
-      productLabel: `${maker} ${model}`,
-      cellLabel: `${maker} ${model} · ${loadName}`,
-    };
-  } finally {
-    await api.dispose();
-  }
+async function prepareCell(playwright: PlaywrightWorkerArgs['playwright'], baseURL: string) {
+  const cell = await prepareAssignedCell(playwright, baseURL, {
+    profileName: 'Capture bench',
+    title: 'Helix-1700 capture',
+    model: 'Q70 Capture',
+  });
+  return { ...cell, productLabel: `${cell.maker} ${cell.model}` };
 }
 
 /**

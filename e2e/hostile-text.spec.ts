@@ -1,5 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { hostileStrings } from '../tests/support/hostile-strings';
+import { productRequest } from '../tests/support/plan-requests';
 import { signInAs } from './support/sign-in';
 import { uniqueSuffix } from './support/unique';
 
@@ -22,37 +23,10 @@ test('markup in a product’s names is shown as text on the catalog pages and ne
   const model = `${payload('script tag')} ${payload('SVG payload')}`;
   const created = await page.request.post('/api/catalog/products', {
     headers: { Origin: new URL(page.url()).origin },
-    data: {
-      maker,
-      model,
-      platform: `Helix-1700 ${suffix}`,
-      socket: 'HX4',
+    data: productRequest(maker, model, `Helix-1700 ${suffix}`, {
       chipset: payload('javascript URL'),
-      formFactor: 'atx',
-      releaseDate: '2025-03-14',
-      powerDesign: {
-        controller: 'KV-PWM8',
-        controllerPhases: 8,
-        phaseMultiplication: 'doubled',
-        stagesPerPhase: 1,
-        vcoreStageType: 'integrated-power-stage',
-        vcoreStagePart: 'KVS-60',
-        vcoreStageCurrentA: 60,
-        socRailStages: 2,
-        otherRails: '1 stage auxiliary',
-        heatsinkNotes: payload('SVG payload'),
-      },
-      features: {
-        rearUsb: { usb2: 4, usb5g: 2, usb10g: 2, usb20g: 1, usb40g: 0 },
-        frontUsbCHeader: 'usb-10g',
-        lanSpeedMbps: 2500,
-        wifi: 'wifi-6e',
-        m2Slots: 3,
-        sataPorts: 4,
-        audio: '7.1 HD audio',
-        ioShieldPrefitted: true,
-      },
-    },
+      powerDesign: { ...productRequest(maker, model, '').powerDesign, heatsinkNotes: payload('SVG payload') },
+    }),
   });
   expect(created.status(), await created.text()).toBe(201);
   const { id } = (await created.json()) as { id: number };

@@ -4,6 +4,7 @@ import { BenchBookingEntity } from '../../../server/entities/bench-booking.entit
 import { signedIn, testApp, testDataSource, type Client } from '../support/test-app';
 import {
   addEntry,
+  createBenchProfile,
   createProduct,
   createRoundup,
   dayFromToday,
@@ -189,25 +190,6 @@ describe('bench booking', () => {
 });
 
 describe('the bench and the plan agree', () => {
-  /** A profile like the fixtures' own, but with the given set-up fields changed. */
-  async function profile(editor: Client, changes: Record<string, unknown> = {}) {
-    const response = await editor.post('/api/bench-profiles').send({
-      name: `Open bench ${tag()}`,
-      caseAndFans: 'Open test bench, one 120 mm fan at 800 rpm aimed at the board',
-      cooler: 'Quillon Arctide 360 liquid cooler',
-      psu: 'Ostrel Works 1000 W Platinum',
-      memory: '2 × 16 GB at 6000 MT/s, profile timings',
-      roomTempTargetC: 21,
-      roomTempToleranceC: 1,
-      probeType: 'Type K thermocouple, 0.1 mm bead',
-      probePlacement: 'Board rear under the V-core stages, taped',
-      requiredSoakMinutes: 60,
-      ...changes,
-    });
-    expect(response.status, response.text).toBe(201);
-    return response.body.id as number;
-  }
-
   async function benchBuiltTo(editor: Client, benchProfileId: number) {
     const response = await editor.post('/api/benches').send({ name: `Bench ${tag()}`, benchProfileId });
     expect(response.status, response.text).toBe(201);
@@ -218,7 +200,7 @@ describe('the bench and the plan agree', () => {
     const { editor, tester, cells } = await setUp();
     const warm = await benchBuiltTo(
       editor.agent,
-      await profile(editor.agent, { roomTempTargetC: 24, cooler: 'Tidewell 240 liquid cooler' }),
+      await createBenchProfile(editor.agent, { roomTempTargetC: 24, cooler: 'Tidewell 240 liquid cooler' }),
     );
     const warned = await book(tester.agent, warm, { ...slot(0), cellIds: [cells[0].id] });
     expect(warned.status).toBe(409);
@@ -244,7 +226,7 @@ describe('the bench and the plan agree', () => {
     const { editor, tester, cells, roundupId } = await setUp();
     const roundup = await editor.agent.get(`/api/roundups/${roundupId}`);
     const own = await benchBuiltTo(editor.agent, roundup.body.benchProfile.id);
-    const same = await benchBuiltTo(editor.agent, await profile(editor.agent));
+    const same = await benchBuiltTo(editor.agent, await createBenchProfile(editor.agent));
     const first = await book(tester.agent, own, { ...slot(0), cellIds: [cells[0].id] });
     expect(first.status, first.text).toBe(201);
     expect(first.body.overrideReason).toBeNull();

@@ -2,50 +2,23 @@ import { randomBytes } from 'node:crypto';
 import { expect } from 'vitest';
 import type { Client } from '../../support/test-app';
 import type { CreateProductRequest } from '../../../../shared/schemas/catalog';
+import {
+  benchProfileRequest,
+  dayFromToday,
+  loadConfigurationRequest,
+  productRequest,
+  roundupRequest,
+} from '../../../support/plan-requests';
 
 /** A short random tag, so each test's names (platform, maker, bench) are its own in the shared test database. */
 export function tag(): string {
   return randomBytes(4).toString('hex');
 }
 
-/** A calendar date `days` from today (UTC), YYYY-MM-DD. */
-export function dayFromToday(days: number): string {
-  return new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
-}
+export { dayFromToday };
 
 export function productBody(platform: string, overrides: Partial<CreateProductRequest> = {}): CreateProductRequest {
-  return {
-    maker: `Korvath ${tag()}`,
-    model: `HX4 Test ${tag()}`,
-    platform,
-    socket: 'HX4',
-    chipset: 'HX-B50',
-    formFactor: 'atx',
-    releaseDate: '2025-03-14',
-    powerDesign: {
-      controller: 'KV-PWM8',
-      controllerPhases: 8,
-      phaseMultiplication: 'doubled',
-      stagesPerPhase: 1,
-      vcoreStageType: 'integrated-power-stage',
-      vcoreStagePart: 'KVS-60',
-      vcoreStageCurrentA: 60,
-      socRailStages: 2,
-      otherRails: '1 stage auxiliary',
-      heatsinkNotes: 'Two finned blocks joined by a heat pipe',
-    },
-    features: {
-      rearUsb: { usb2: 4, usb5g: 2, usb10g: 2, usb20g: 1, usb40g: 0 },
-      frontUsbCHeader: 'usb-10g',
-      lanSpeedMbps: 2500,
-      wifi: 'wifi-6e',
-      m2Slots: 3,
-      sataPorts: 4,
-      audio: '7.1 HD audio',
-      ioShieldPrefitted: true,
-    },
-    ...overrides,
-  };
+  return productRequest(`Korvath ${tag()}`, `HX4 Test ${tag()}`, platform, overrides);
 }
 
 /** Creates a product through the API and returns its id. */
@@ -67,33 +40,17 @@ export async function addPrice(
   return response.body.id as number;
 }
 
-export async function createBenchProfile(editor: Client) {
-  const response = await editor.post('/api/bench-profiles').send({
-    name: `Open bench ${tag()}`,
-    caseAndFans: 'Open test bench, one 120 mm fan at 800 rpm aimed at the board',
-    cooler: 'Quillon Arctide 360 liquid cooler',
-    psu: 'Ostrel Works 1000 W Platinum',
-    memory: '2 × 16 GB at 6000 MT/s, profile timings',
-    roomTempTargetC: 21,
-    roomTempToleranceC: 1,
-    probeType: 'Type K thermocouple, 0.1 mm bead',
-    probePlacement: 'Board rear under the V-core stages, taped',
-    requiredSoakMinutes: 60,
-  });
+/** A bench profile of the test plan, with the given set-up fields changed. */
+export async function createBenchProfile(editor: Client, changes: Record<string, unknown> = {}) {
+  const response = await editor.post('/api/bench-profiles').send(benchProfileRequest(`Open bench ${tag()}`, changes));
   expect(response.status, response.text).toBe(201);
   return response.body.id as number;
 }
 
 export async function createLoadConfiguration(editor: Client, overrides: Record<string, unknown> = {}) {
-  const response = await editor.post('/api/load-configurations').send({
-    name: `Stock all-core ${tag()}`,
-    cpuDescription: 'Helix HX-16 sample, 16 cores',
-    settingsMode: 'stock',
-    expectedPackagePowerW: 230,
-    coreVoltageV: 1.25,
-    soakMinutes: 60,
-    ...overrides,
-  });
+  const response = await editor
+    .post('/api/load-configurations')
+    .send(loadConfigurationRequest(`Stock all-core ${tag()}`, overrides));
   expect(response.status, response.text).toBe(201);
   return response.body.id as number;
 }
@@ -115,15 +72,17 @@ export async function createRoundup(
   const loadConfigurationIds: number[] = [];
   for (let i = 0; i < (options.configurations ?? 2); i++)
     loadConfigurationIds.push(await createLoadConfiguration(editor));
-  const response = await editor.post('/api/roundups').send({
-    title: `Helix-1700 boards ${tag()}`,
-    platform,
-    priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE', ...options.band },
-    targetPublishDate: dayFromToday(60),
-    timeZone: options.timeZone ?? 'Europe/Berlin',
-    benchProfileId,
-    loadConfigurationIds,
-  });
+  const response = await editor.post('/api/roundups').send(
+    roundupRequest(
+      `Helix-1700 boards ${tag()}`,
+      platform,
+      { benchProfileId, loadConfigurationIds },
+      {
+        priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE', ...options.band },
+        timeZone: options.timeZone ?? 'Europe/Berlin',
+      },
+    ),
+  );
   expect(response.status, response.text).toBe(201);
   return { roundupId: response.body.id, platform, loadConfigurationIds, benchProfileId };
 }

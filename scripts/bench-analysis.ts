@@ -27,7 +27,7 @@ import {
 import { worstAcceptedLog } from '../shared/generators/worst-accepted-log';
 import { logFileUploadLimit } from '../shared/upload-limits';
 import { analyseLog } from '../shared/domain/analysis/analyse-log';
-import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
+import { benchSoakLog, benchSoakMapping, median } from './lib/soak-log';
 
 // A full collection between blocks (not inside any timing), so no block starts with the previous one's garbage.
 setFlagsFromString('--expose-gc');
@@ -39,38 +39,9 @@ const countedPerBlock = 7;
 const settlingRuns = 2;
 const rounds = blocks * countedPerBlock;
 
-const text = syntheticLoggerLog({
-  durationS: 3600,
-  sampleHz: 10,
-  seed: 7,
-  loadStartS: 60,
-  probes: [1, 2, 3, 4, 5].map((index) => ({
-    name: `VRM ${index}`,
-    startC: 32,
-    riseC: 40 + index * 3,
-    tauS: 360 + index * 40,
-    noiseC: 0.25,
-  })),
-  ambient: { name: 'Ambient', startC: 21, driftC: 0.4, noiseC: 0.05 },
-  clock: { name: 'CPU clock [MHz]', mhz: 4600, noiseMhz: 15 },
-  power: { name: 'Package power [W]', watts: 210, idleWatts: 35, noiseW: 2 },
-  preamble: ['Benchwire bench log', 'Sample interval: 0.1 s'],
-});
+const text = benchSoakLog();
 const rows = text.split('\n').length - 4;
-const request = {
-  mapping: {
-    vrm: ['VRM 1 [°C]', 'VRM 2 [°C]', 'VRM 3 [°C]', 'VRM 4 [°C]', 'VRM 5 [°C]'],
-    ambient: 'Ambient [°C]',
-    clock: 'CPU clock [MHz]',
-    power: 'Package power [W]',
-  },
-};
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const middle = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
-}
+const request = { mapping: benchSoakMapping };
 
 /** papaparse as the engine calls it: explicit delimiter, cells as strings. */
 function timePapaparse(): number {

@@ -26,7 +26,8 @@ import { hashPassword } from '../server/auth/passwords';
 import { createDataSource, initializeDataSource } from '../server/data-source';
 import { UserEntity } from '../server/entities/user.entity';
 import { loadEnv } from '../server/env';
-import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
+import { benchSoakLog, benchSoakMapping, median } from './lib/soak-log';
+import { planAssignedCell } from '../tests/support/plan-requests';
 
 setFlagsFromString('--expose-gc');
 const collectGarbage = runInNewContext('gc') as () => void;
@@ -60,41 +61,6 @@ const setupDatabase = (flag: '--fresh' | '--drop') => {
   );
   if (result.status !== 0) throw new Error(`setup-database ${flag} failed`);
 };
-
-/** The log of bench-analysis: five VRM probes, ambient, clock and package power at 10 Hz for an hour. */
-function soakLog(label: string): string {
-  return syntheticLoggerLog({
-    durationS: 3600,
-    sampleHz: 10,
-    seed: 7,
-    loadStartS: 60,
-    probes: [1, 2, 3, 4, 5].map((index) => ({
-      name: `VRM ${index}`,
-      startC: 32,
-      riseC: 40 + index * 3,
-      tauS: 360 + index * 40,
-      noiseC: 0.25,
-    })),
-    ambient: { name: 'Ambient', startC: 21, driftC: 0.4, noiseC: 0.05 },
-    clock: { name: 'CPU clock [MHz]', mhz: 4600, noiseMhz: 15 },
-    power: { name: 'Package power [W]', watts: 210, idleWatts: 35, noiseW: 2 },
-    // A different first line per upload, so no two stored files share a hash (the same file twice is refused).
-    preamble: [`Benchwire bench log ${label}`, 'Sample interval: 0.1 s'],
-  });
-}
-
-const mapping = {
-  vrm: ['VRM 1 [°C]', 'VRM 2 [°C]', 'VRM 3 [°C]', 'VRM 4 [°C]', 'VRM 5 [°C]'],
-  ambient: 'Ambient [°C]',
-  clock: 'CPU clock [MHz]',
-  power: 'Package power [W]',
-};
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const middle = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
-}
 
 const uploadsDir = await mkdtemp(join(tmpdir(), 'benchwire-bench-capture-'));
 setupDatabase('--fresh');
@@ -154,65 +120,19 @@ async function staff(role: 'editor' | 'tester') {
 try {
   const editor = await staff('editor');
   const tester = await staff('tester');
-  const day = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
-  const platform = `Helix-1700 bench ${process.pid}`;
-  const profile = await editor.send('POST', '/api/bench-profiles', {
-    name: `Bench capture profile ${process.pid}`,
-    caseAndFans: 'Open test bench, one 120 mm fan at 800 rpm aimed at the board',
-    cooler: 'Tidewell 360 liquid cooler',
-    psu: 'Ostrel Works 1000 W',
-    memory: '2 × 16 GB at 6000 MT/s',
-    roomTempTargetC: 21,
-    roomTempToleranceC: 1,
-    probeType: 'Type K thermocouple, 0.1 mm bead',
-    probePlacement: 'Board rear under the V-core stages, taped',
-    requiredSoakMinutes: 60,
-  });
-  const load = await editor.send('POST', '/api/load-configurations', {
-    name: `Stock all-core ${process.pid}`,
-    cpuDescription: 'Helix HX-16 sample, 16 cores',
-    settingsMode: 'stock',
-    expectedPackagePowerW: 210,
-    coreVoltageV: 1.25,
-    soakMinutes: 60,
-  });
-  const product = await editor.send('POST', '/api/catalog/products', {
-    maker: `Quillon ${process.pid}`,
-    model: 'Q70 Bench',
-    platform,
-    socket: 'HX4',
-    chipset: 'HX-B50',
-    formFactor: 'atx',
-  });
-  const roundup = await editor.send('POST', '/api/roundups', {
-    title: `Helix-1700 bench capture ${process.pid}`,
-    platform,
-    priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE' },
-    targetPublishDate: day(60),
-    timeZone: 'Europe/Berlin',
-    benchProfileId: profile.id,
-    loadConfigurationIds: [load.id],
-  });
-  const { entry } = (await editor.send('POST', `/api/roundups/${roundup.id}/entries`, {
-    productId: product.id,
-    kind: 'tested',
-  })) as unknown as { entry: { id: number } };
-  await editor.send('POST', `/api/roundups/${roundup.id}/state`, { to: 'on-the-bench' });
-  await editor.send('POST', `/api/roundups/${roundup.id}/assignments`, {
-    entryIds: [entry.id],
+  const { cellId } = await planAssignedCell(editor.send, {
+    suffix: `bench ${process.pid}`,
     testerId: tester.id,
-    dueDate: day(5),
+    profileName: 'Bench capture profile',
+    title: 'Helix-1700 bench capture',
+    model: 'Q70 Bench',
   });
-  const matrix = (await editor.send('GET', `/api/roundups/${roundup.id}/matrix`)) as unknown as {
-    rows: { cells: { id: number }[] }[];
-  };
-  const cellId = matrix.rows[0].cells[0].id;
 
   let uploads = 0;
   const analyseAlone = async () => {
     const form = new FormData();
-    form.append('request', JSON.stringify({ mapping }));
-    form.append('file', new Blob([soakLog(`analyse ${(uploads += 1)}`)]), 'soak.csv');
+    form.append('request', JSON.stringify({ mapping: benchSoakMapping }));
+    form.append('file', new Blob([benchSoakLog(`analyse ${(uploads += 1)}`)]), 'soak.csv');
     const started = performance.now();
     await tester.send('POST', '/api/log-check/analyse', form);
     return performance.now() - started;
@@ -225,10 +145,10 @@ try {
         firmwareVersion: '1.02',
         startedAt: new Date().toISOString(),
         outsideBookingReason: 'Benchmark run on the open bench.',
-        mapping,
+        mapping: benchSoakMapping,
       }),
     );
-    form.append('file', new Blob([soakLog(`store ${(uploads += 1)}`)]), 'soak.csv');
+    form.append('file', new Blob([benchSoakLog(`store ${(uploads += 1)}`)]), 'soak.csv');
     const started = performance.now();
     await tester.send('POST', `/api/cells/${cellId}/runs`, form);
     return performance.now() - started;
@@ -252,7 +172,7 @@ try {
   const storeMs = median(storeTimes);
   const ratio = storeMs / analyseMs;
   const line = (label: string, value: string) => console.log(`  ${label.padEnd(46)}${value}`);
-  const sample = soakLog('size');
+  const sample = benchSoakLog('size');
   console.log(
     `Benchwire capture benchmark: ${(sample.split('\n').length - 4).toLocaleString('en')} rows × 8 channels, ${(sample.length / 1e6).toFixed(2)} MB per upload, median of ${timedPerSide} runs each`,
   );

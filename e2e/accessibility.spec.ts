@@ -269,6 +269,7 @@ const notPages: Record<string, string> = {
   '/read/roundups/:slug/analysis.json': 'open data (JSON)',
   '/read/roundups/:slug/raw/:file': 'a raw logger file',
   '/read/photos/:photoId/:size': 'a photo',
+  '/read/roundups/:slug/charts/:image': 'a chart image frozen at publication (its data table is on the roundup page)',
   '/read/feed.atom': 'the Atom feed: every page it links to is swept with /read/roundups/:slug',
   '/sitemap.xml': 'for crawlers',
   '/robots.txt': 'for crawlers',

@@ -1,14 +1,13 @@
 import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
-import { createConnection } from 'mysql2/promise';
+import { apiAs, readyRoundup } from './support/ready-roundup';
 import { signInAs } from './support/sign-in';
 import { uniqueSuffix } from './support/unique';
 
 // The acceptance test of subscribers and mail (issue 11): a reader subscribes on the public site and confirms from
 // the mail the local relay kept (the admin's dev inbox); a roundup goes live at its embargo time; the go-live mail
 // arrives; the reader follows its link, then unsubscribes in one click, and the next mailing skips them. The
-// roundup is put In review directly in the database, where the editorial steps would leave it (as in
-// embargo.spec.ts).
+// roundup is made ready to schedule through the API, as the editorial steps leave it (as in embargo.spec.ts).
 
 interface InboxItem {
   id: number;
@@ -93,6 +92,8 @@ async function seriousViolations(page: Page) {
 
 test('a reader subscribes, confirms from the dev inbox, gets the go-live mail, unsubscribes in one click and is skipped next time', async ({
   browser,
+  playwright,
+  baseURL,
 }) => {
   test.setTimeout(240_000);
   const suffix = uniqueSuffix();
@@ -137,28 +138,12 @@ test('a reader subscribes, confirms from the dev inbox, gets the go-live mail, u
   const editorContext = await browser.newContext();
   const editor = await editorContext.newPage();
   await signInAs(editor, 'editor');
-  const title = `Helix-1700 mail check ${suffix}`;
-  const configurations = (await (await editor.request.get('/api/load-configurations')).json()) as
-    { configurations?: { id: number }[] } | { id: number }[];
-  const configurationList = Array.isArray(configurations) ? configurations : (configurations.configurations ?? []);
-  const created = await editor.request.post('/api/roundups', {
-    data: {
-      title,
-      category: 'motherboard',
-      platform: 'Helix-1700',
-      priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE' },
-      targetPublishDate: null,
-      timeZone: 'Europe/Berlin',
-      benchProfileId: null,
-      loadConfigurationIds: configurationList.slice(0, 1).map((c) => c.id),
-    },
-    headers: { Origin: new URL(editor.url()).origin },
-  });
-  expect(created.status(), await created.text()).toBe(201);
-  const roundupId = ((await created.json()) as { id: number }).id;
-  const db = await createConnection(process.env.DATABASE_URL as string);
-  await db.query("UPDATE roundups SET state = 'in-review' WHERE id = ?", [roundupId]);
-  await db.end();
+  // A roundup genuinely ready to schedule, made through the API as staff make it (as in embargo.spec.ts).
+  const editorApi = await apiAs(playwright, baseURL!, 'editor');
+  const testerApi = await apiAs(playwright, baseURL!, 'tester');
+  const { roundupId, title } = await readyRoundup(editorApi, testerApi);
+  await editorApi.dispose();
+  await testerApi.dispose();
 
   await editor.goto(`/roundups/${roundupId}?tab=publishing`);
   const at = new Date(Math.ceil((Date.now() + 12_000) / 1000) * 1000);

@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import { apiAs, readyRoundup } from './support/ready-roundup';
+import { localIn } from './support/local-time';
 import { signInAs } from './support/sign-in';
 
 // The acceptance journey of embargo publishing (issue 10): an editor schedules a roundup that is genuinely ready
@@ -10,25 +11,6 @@ import { signInAs } from './support/sign-in';
 // downloads the open data.
 
 const thin = '\u2009';
-
-/** The local date and HH:MM:SS of an instant in a zone, as the schedule form takes them. */
-function localIn(instant: Date, timeZone: string) {
-  const parts = new Intl.DateTimeFormat('en-CA', {
-    timeZone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: '2-digit',
-    day: '2-digit',
-    hour: '2-digit',
-    minute: '2-digit',
-    second: '2-digit',
-  }).formatToParts(instant);
-  const part = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
-  return {
-    date: `${part('year')}-${part('month')}-${part('day')}`,
-    time: `${part('hour')}:${part('minute')}:${part('second')}`,
-  };
-}
 
 test('an editor schedules a ready roundup a few seconds ahead; it goes live; a reader reads, compares, estimates and downloads', async ({
   page,

@@ -1,6 +1,7 @@
 import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
 import { apiAs, readyRoundup } from './support/ready-roundup';
+import { localIn } from './support/local-time';
 import { signInAs } from './support/sign-in';
 import { uniqueSuffix } from './support/unique';
 
@@ -55,25 +56,6 @@ function linkIn(text: string, pattern: RegExp): string {
   const found = text.split(/\s+/).find((word) => pattern.test(word));
   if (!found) throw new Error(`no link matching ${pattern} in:\n${text}`);
   return found;
-}
-
-/** The local date and HH:MM:SS of an instant in a zone, as the schedule form takes them. */
-function localIn(instant: Date, timeZone: string) {
-  const parts = new Intl.DateTimeFormat('en-CA', {
-    timeZone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: '2-digit',
-    day: '2-digit',
-    hour: '2-digit',
-    minute: '2-digit',
-    second: '2-digit',
-  }).formatToParts(instant);
-  const part = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
-  return {
-    date: `${part('year')}-${part('month')}-${part('day')}`,
-    time: `${part('hour')}:${part('minute')}:${part('second')}`,
-  };
 }
 
 /** Serious or critical axe findings against WCAG 2.1 A and AA on the page as it stands. */

@@ -26,6 +26,7 @@ import {
   startApp,
   type AppProcess,
 } from './lib/app-process';
+import { productRequest } from '../tests/support/plan-requests';
 
 const secondsArg = process.argv.indexOf('--seconds');
 const seconds = Number(secondsArg > 0 ? process.argv[secondsArg + 1] : (process.env.BENCH_SECONDS ?? 60));
@@ -145,7 +146,10 @@ try {
     method: 'POST',
     path: '/api/catalog/products',
     headers: siteHeaders(base, editor),
-    setupRequest: (request) => ({ ...request, body: JSON.stringify(productBody(++serial)) }),
+    setupRequest: (request) => ({
+      ...request,
+      body: JSON.stringify(productRequest('Korvath', `HX4 Load ${process.pid}-${++serial}`, 'Helix-1700')),
+    }),
   };
   const boundary = 'benchwireloadboundary';
   const log = syntheticLoggerLog({
@@ -292,39 +296,4 @@ ${locations.join('\n')}
   if (databaseUrl) setUpDatabase(databaseUrl, ['--drop']);
   await stopDatabase?.();
   rmSync(workDir, { recursive: true, force: true });
-}
-
-/** A product as the catalog form sends it (invented maker and parts). */
-function productBody(n: number) {
-  return {
-    maker: 'Korvath',
-    model: `HX4 Load ${process.pid}-${n}`,
-    platform: 'Helix-1700',
-    socket: 'HX4',
-    chipset: 'HX-B50',
-    formFactor: 'atx',
-    releaseDate: '2025-03-14',
-    powerDesign: {
-      controller: 'KV-PWM8',
-      controllerPhases: 8,
-      phaseMultiplication: 'doubled',
-      stagesPerPhase: 1,
-      vcoreStageType: 'integrated-power-stage',
-      vcoreStagePart: 'KVS-60',
-      vcoreStageCurrentA: 60,
-      socRailStages: 2,
-      otherRails: '1 stage auxiliary',
-      heatsinkNotes: 'Two finned blocks joined by a heat pipe',
-    },
-    features: {
-      rearUsb: { usb2: 4, usb5g: 2, usb10g: 2, usb20g: 1, usb40g: 0 },
-      frontUsbCHeader: 'usb-10g',
-      lanSpeedMbps: 2500,
-      wifi: 'wifi-6e',
-      m2Slots: 3,
-      sataPorts: 4,
-      audio: '7.1 HD audio',
-      ioShieldPrefitted: true,
-    },
-  };
 }

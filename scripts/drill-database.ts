@@ -24,6 +24,7 @@ import {
   startApp,
   type AppProcess,
 } from './lib/app-process';
+import { productRequest } from '../tests/support/plan-requests';
 
 const argSeconds = (name: string, fallback: number) => {
   const index = process.argv.indexOf(name);
@@ -80,7 +81,7 @@ try {
       fetch(`${base}/api/catalog/products`, {
         method: 'POST',
         headers: siteHeaders(base, editor),
-        body: JSON.stringify(productBody(platform, ++serial)),
+        body: JSON.stringify(productRequest('Korvath', `HX4 Drill ${process.pid}-${++serial}`, platform)),
         signal: AbortSignal.timeout(REQUEST_BOUND_MS + 5_000),
       }),
     'reader page': () =>
@@ -194,39 +195,4 @@ try {
   await app?.stop();
   await database?.stop();
   rmSync(workDir, { recursive: true, force: true });
-}
-
-/** A product as the catalog form sends it (invented maker and parts). */
-function productBody(platform: string, n: number) {
-  return {
-    maker: 'Korvath',
-    model: `HX4 Drill ${process.pid}-${n}`,
-    platform,
-    socket: 'HX4',
-    chipset: 'HX-B50',
-    formFactor: 'atx',
-    releaseDate: '2025-03-14',
-    powerDesign: {
-      controller: 'KV-PWM8',
-      controllerPhases: 8,
-      phaseMultiplication: 'doubled',
-      stagesPerPhase: 1,
-      vcoreStageType: 'integrated-power-stage',
-      vcoreStagePart: 'KVS-60',
-      vcoreStageCurrentA: 60,
-      socRailStages: 2,
-      otherRails: '1 stage auxiliary',
-      heatsinkNotes: 'Two finned blocks joined by a heat pipe',
-    },
-    features: {
-      rearUsb: { usb2: 4, usb5g: 2, usb10g: 2, usb20g: 1, usb40g: 0 },
-      frontUsbCHeader: 'usb-10g',
-      lanSpeedMbps: 2500,
-      wifi: 'wifi-6e',
-      m2Slots: 3,
-      sataPorts: 4,
-      audio: '7.1 HD audio',
-      ioShieldPrefitted: true,
-    },
-  };
 }

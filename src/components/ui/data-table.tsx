@@ -31,6 +31,10 @@ export interface DataTableColumn<Row> {
   fixed?: boolean;
   /** Hidden below this breakpoint (keeps phones readable); never hide the row header. */
   hideBelow?: 'sm' | 'md' | 'lg';
+  /** The header as written, in the mono face: names read from a file, which capitals would misquote. */
+  verbatimHeader?: boolean;
+  /** The content fills the cell to its edges and carries its own padding (a link or a coloured block). */
+  flush?: boolean;
   className?: string;
 }
 
@@ -204,7 +208,8 @@ export function DataTable<Row>({
                     scope="col"
                     aria-sort={column.sortValue ? (sorted ?? 'none') : undefined}
                     className={cx(
-                      'sticky top-0 z-10 border-b border-edge/70 bg-wash px-3 py-1.5 text-xs font-semibold tracking-wide whitespace-nowrap text-muted uppercase',
+                      'sticky top-0 z-10 border-b border-edge/70 bg-wash px-3 py-1.5 text-xs font-semibold whitespace-nowrap text-muted',
+                      column.verbatimHeader ? 'font-mono' : 'tracking-wide uppercase',
                       column.numeric ? 'text-right' : 'text-left',
                       column.hideBelow && hidden[column.hideBelow],
                       column.rowHeader && stickyStart,
@@ -217,7 +222,8 @@ export function DataTable<Row>({
                         type="button"
                         onClick={() => toggleSort(column.id)}
                         className={cx(
-                          'inline-flex items-center gap-1 rounded-[2px] uppercase hover:text-ink',
+                          'inline-flex items-center gap-1 rounded-[2px] hover:text-ink',
+                          !column.verbatimHeader && 'uppercase',
                           sorted && 'text-ink',
                           column.numeric && 'flex-row-reverse',
                         )}
@@ -243,7 +249,8 @@ export function DataTable<Row>({
                       key={column.id}
                       scope={column.rowHeader ? 'row' : undefined}
                       className={cx(
-                        'border-b border-rule px-3 py-1.5 align-middle group-last:border-b-0',
+                        'border-b border-rule group-last:border-b-0',
+                        column.flush ? 'p-0 align-top' : 'px-3 py-1.5 align-middle',
                         column.rowHeader && 'text-left font-medium',
                         column.rowHeader && stickyStart,
                         column.pinEnd && stickyEnd,

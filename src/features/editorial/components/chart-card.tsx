@@ -3,10 +3,16 @@ import { Alert } from '../../../components/ui/alert';
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import { Select } from '../../../components/ui/select';
 import { DateTime } from '../../../components/ui/date-time';
 import { describeSubmitError } from '../../../lib/form-errors';
-import { chartMetricNames, chartMetrics, type ChartMetric } from '../../../../shared/domain/editorial/chart-data';
+import {
+  chartMetricNames,
+  chartMetrics,
+  type ChartMetric,
+  type ChartValue,
+} from '../../../../shared/domain/editorial/chart-data';
 import { chartStatusLabels, type RoundupChart, type ChartSettingsInput } from '../../../../shared/schemas/charts';
 import { ChartCanvas } from './chart-canvas';
 
@@ -17,54 +23,54 @@ const statusTones: Record<RoundupChart['status'], BadgeTone> = {
   empty: 'muted',
 };
 
+type ChartRow = ChartValue & { priceMinor?: number; priceText?: string };
+
 function ChartTable({ chart }: { chart: RoundupChart['data'] }) {
-  const rows = chart.kind === 'price-scatter' ? chart.points : chart.bars;
+  const rows: ChartRow[] = chart.kind === 'price-scatter' ? chart.points : chart.bars;
+  const columns: DataTableColumn<ChartRow>[] = [
+    {
+      id: 'label',
+      header: chart.kind === 'product' ? 'Load configuration' : 'Product',
+      rowHeader: true,
+      sortValue: (row) => row.label,
+      cell: (row) => (
+        <>
+          {row.label}
+          {row.role === 'reference' && <span className="text-muted"> (reference: {row.referenceRoundupTitle})</span>}
+        </>
+      ),
+    },
+    ...(chart.kind === 'price-scatter'
+      ? [
+          {
+            id: 'price',
+            header: 'Price',
+            numeric: true,
+            sortValue: (row: ChartRow) => row.priceMinor ?? null,
+            cell: (row: ChartRow) => row.priceText,
+          },
+        ]
+      : []),
+    {
+      id: 'value',
+      header: chart.axisLabel,
+      numeric: true,
+      sortValue: (row) => row.value,
+      cell: (row) => row.valueText,
+    },
+    {
+      id: 'tolerance',
+      header: 'Tolerance',
+      numeric: true,
+      cell: (row) => (row.whiskerC === null ? '—' : `±${row.whiskerC.toFixed(1)}\u2009°C`),
+    },
+    { id: 'marks', header: 'Marks', cell: (row) => row.marks.join(', ') || '—' },
+  ];
   return (
     <details className="mt-3 text-sm">
       <summary className="cursor-pointer text-copper">Data table</summary>
-      <div className="mt-2 overflow-x-auto">
-        <table className="w-full text-left">
-          <caption className="sr-only">{chart.title}</caption>
-          <thead className="text-muted">
-            <tr>
-              <th scope="col" className="py-1 pr-3 font-medium">
-                {chart.kind === 'product' ? 'Load configuration' : 'Product'}
-              </th>
-              {chart.kind === 'price-scatter' && (
-                <th scope="col" className="py-1 pr-3 text-right font-medium">
-                  Price
-                </th>
-              )}
-              <th scope="col" className="py-1 pr-3 text-right font-medium">
-                {chart.axisLabel}
-              </th>
-              <th scope="col" className="py-1 pr-3 text-right font-medium">
-                Tolerance
-              </th>
-              <th scope="col" className="py-1 font-medium">
-                Marks
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map((row) => (
-              <tr key={row.key} className="border-t border-rule">
-                <th scope="row" className="py-1 pr-3 font-normal text-ink">
-                  {row.label}
-                  {row.role === 'reference' && (
-                    <span className="text-muted"> (reference: {row.referenceRoundupTitle})</span>
-                  )}
-                </th>
-                {'priceText' in row && <td className="numeric py-1 pr-3 text-right">{String(row.priceText)}</td>}
-                <td className="numeric py-1 pr-3 text-right">{row.valueText}</td>
-                <td className="numeric py-1 pr-3 text-right">
-                  {row.whiskerC === null ? '—' : `±${row.whiskerC.toFixed(1)}\u2009°C`}
-                </td>
-                <td className="py-1">{row.marks.join(', ') || '—'}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+      <div className="mt-2">
+        <DataTable caption={chart.title} rows={rows} columns={columns} rowKey={(row) => row.key} filter={false} />
       </div>
     </details>
   );

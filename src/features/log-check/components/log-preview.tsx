@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import { Panel } from '../../../components/ui/panel';
 import { cx } from '../../../lib/class-names';
 import type { LogPreview } from '../../../../shared/schemas/analysis';
@@ -29,6 +30,54 @@ function Fact({ term, children }: { term: string; children: ReactNode }) {
       <dd className="text-sm text-ink">{children}</dd>
     </div>
   );
+}
+
+type FileColumn = LogPreview['columns'][number];
+/** A data line of the file as written, numbered from 1. */
+interface FileRow {
+  line: number;
+  values: LogPreview['rows'][number];
+}
+
+function fileColumns(preview: LogPreview): DataTableColumn<FileColumn>[] {
+  return [
+    { id: 'index', header: '#', numeric: true, className: 'text-muted', cell: (column) => column.index + 1 },
+    {
+      id: 'name',
+      header: 'Column',
+      rowHeader: true,
+      className: 'font-mono text-[0.8125rem]',
+      cell: (column) => column.name || <span className="text-muted">(no name)</span>,
+    },
+    {
+      id: 'role',
+      header: 'Guessed role',
+      cell: (column) => (
+        <span className={cx(guessedRoleOf(preview, column) === 'other' && 'text-muted')}>
+          {roleLabels[guessedRoleOf(preview, column)]}
+        </span>
+      ),
+    },
+    {
+      id: 'unit',
+      header: 'Unit in header',
+      className: 'numeric',
+      cell: (column) => (column.guessedUnit ? unitLabel(column.guessedUnit) : <span className="text-muted">none</span>),
+    },
+  ];
+}
+
+function firstRowColumns(preview: LogPreview): DataTableColumn<FileRow>[] {
+  return [
+    { id: 'line', header: '#', numeric: true, className: 'text-muted', cell: (row) => row.line },
+    ...preview.columns.map((column): DataTableColumn<FileRow> => ({
+      id: String(column.index),
+      header: column.name,
+      verbatimHeader: true,
+      numeric: true,
+      cell: (row) => row.values[column.index] ?? '',
+    })),
+  ];
 }
 
 export interface LogPreviewPanelProps {
@@ -78,43 +127,13 @@ export function LogPreviewPanel({ preview, fileName }: LogPreviewPanelProps) {
           )}
         </dl>
 
-        <div className="overflow-x-auto rounded-[3px] border border-rule">
-          <table className="w-full border-collapse text-sm">
-            <caption className="sr-only">Columns in the file with the role and unit Benchwire guessed</caption>
-            <thead>
-              <tr className="border-b border-edge/70 bg-wash text-xs tracking-wide text-muted uppercase">
-                <th scope="col" className="px-3 py-1.5 text-right font-semibold">
-                  #
-                </th>
-                <th scope="col" className="px-3 py-1.5 text-left font-semibold">
-                  Column
-                </th>
-                <th scope="col" className="px-3 py-1.5 text-left font-semibold">
-                  Guessed role
-                </th>
-                <th scope="col" className="px-3 py-1.5 text-left font-semibold">
-                  Unit in header
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {preview.columns.map((column) => (
-                <tr key={column.index} className="border-b border-rule last:border-b-0">
-                  <td className="numeric px-3 py-1.5 text-right text-muted">{column.index + 1}</td>
-                  <th scope="row" className="px-3 py-1.5 text-left font-mono text-[0.8125rem] font-normal">
-                    {column.name || <span className="text-muted">(no name)</span>}
-                  </th>
-                  <td className={cx('px-3 py-1.5', guessedRoleOf(preview, column) === 'other' && 'text-muted')}>
-                    {roleLabels[guessedRoleOf(preview, column)]}
-                  </td>
-                  <td className="numeric px-3 py-1.5">
-                    {column.guessedUnit ? unitLabel(column.guessedUnit) : <span className="text-muted">none</span>}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable
+          caption="Columns in the file with the role and unit Benchwire guessed"
+          rows={preview.columns}
+          columns={fileColumns(preview)}
+          rowKey={(column) => column.index}
+          filter={false}
+        />
       </div>
 
       {preview.preambleLines.length > 0 && (
@@ -134,43 +153,13 @@ export function LogPreviewPanel({ preview, fileName }: LogPreviewPanelProps) {
           ({shownRows} of {formatCount(preview.dataRowCount)})
         </span>
       </h3>
-      <div
-        role="region"
-        aria-label="First rows of the file"
-        tabIndex={0}
-        className="max-h-80 overflow-auto rounded-[3px] border border-rule"
-      >
-        <table className="w-full border-collapse text-sm">
-          <thead className="sticky top-0">
-            <tr className="border-b border-edge/70 bg-wash">
-              <th scope="col" className="px-3 py-1.5 text-right text-xs font-semibold text-muted">
-                #
-              </th>
-              {preview.columns.map((column) => (
-                <th
-                  key={column.index}
-                  scope="col"
-                  className="px-3 py-1.5 text-right font-mono text-xs font-semibold whitespace-nowrap text-ink"
-                >
-                  {column.name}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {preview.rows.map((row, index) => (
-              <tr key={index} className="border-b border-rule last:border-b-0">
-                <td className="numeric px-3 py-1 text-right text-muted">{index + 1}</td>
-                {preview.columns.map((column) => (
-                  <td key={column.index} className="numeric px-3 py-1 text-right whitespace-nowrap">
-                    {row[column.index] ?? ''}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <DataTable
+        caption="First rows of the file"
+        rows={preview.rows.map((values, index) => ({ line: index + 1, values }))}
+        columns={firstRowColumns(preview)}
+        rowKey={(row) => row.line}
+        filter={false}
+      />
     </Panel>
   );
 }

@@ -1,4 +1,5 @@
 import { useId } from 'react';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import type { AnalysisResult } from '../../../../shared/schemas/analysis';
 import { formatC, formatDuration, thinSpace } from './format-figures';
 import type { ChartLine, ChartSeries } from './read-chart-series';
@@ -286,43 +287,36 @@ function ChartTable({ lines, endS, ambient }: { lines: ChartLine[]; endS: number
   const stepS = Math.max(60, Math.ceil(endS / 30 / 60) * 60);
   const rows: number[] = [];
   for (let from = 0; from < endS; from += stepS) rows.push(from);
+  const columns: DataTableColumn<number>[] = [
+    {
+      id: 'minutes',
+      header: 'Minutes',
+      rowHeader: true,
+      className: 'numeric',
+      cell: (from) => `${from / 60}–${minutesOf(Math.min(from + stepS, endS))}`,
+    },
+    ...lines.map((line): DataTableColumn<number> => ({
+      id: line.column,
+      header: `${line.column}${line === ambient ? ' (ambient)' : ''}`,
+      verbatimHeader: true,
+      numeric: true,
+      cell: (from) => {
+        const highest = highestIn(line, from, from + stepS);
+        return highest === null ? '—' : formatC(highest);
+      },
+    })),
+  ];
   return (
     <details className="mt-2 text-[0.8125rem]">
       <summary className="cursor-pointer text-copper">The chart as a table</summary>
-      <div className="mt-2 max-h-80 overflow-auto">
-        <table className="w-full border-collapse">
-          <caption className="sr-only">Highest reading per probe, every {stepS / 60} minutes of the log</caption>
-          <thead>
-            <tr>
-              <th scope="col" className="border-b border-rule px-2 py-1 text-left">
-                Minutes
-              </th>
-              {lines.map((line) => (
-                <th key={line.column} scope="col" className="border-b border-rule px-2 py-1 text-right font-mono">
-                  {line.column}
-                  {line === ambient ? ' (ambient)' : ''}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map((from) => (
-              <tr key={from}>
-                <th scope="row" className="numeric px-2 py-0.5 text-left font-normal">
-                  {from / 60}–{minutesOf(Math.min(from + stepS, endS))}
-                </th>
-                {lines.map((line) => {
-                  const highest = highestIn(line, from, from + stepS);
-                  return (
-                    <td key={line.column} className="numeric px-2 py-0.5 text-right">
-                      {highest === null ? '—' : formatC(highest)}
-                    </td>
-                  );
-                })}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+      <div className="mt-2">
+        <DataTable
+          caption={`Highest reading per probe, every ${stepS / 60} minutes of the log`}
+          rows={rows}
+          columns={columns}
+          rowKey={(from) => from}
+          filter={false}
+        />
       </div>
     </details>
   );

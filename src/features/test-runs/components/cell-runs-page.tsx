@@ -4,6 +4,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { CellStateBadge } from '../../../components/ui/cell-state-badge';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Panel } from '../../../components/ui/panel';
 import { describeSubmitError } from '../../../lib/form-errors';
@@ -42,64 +43,66 @@ function RunsTable({
   selectedId: number | null;
   onSelect: (id: number) => void;
 }) {
+  const columns: DataTableColumn<TestRun>[] = [
+    {
+      id: 'firmware',
+      header: 'Firmware',
+      rowHeader: true,
+      sortValue: (run) => run.firmwareVersion,
+      cell: (run) => (
+        <>
+          <Button size="sm" variant="quiet" aria-pressed={run.id === selectedId} onClick={() => onSelect(run.id)}>
+            {run.firmwareVersion}
+          </Button>
+          {run.isRunOfRecord && (
+            <span className="ml-1 text-teal" title="Run of record">
+              <span aria-hidden="true">★</span>
+              <span className="sr-only">Run of record</span>
+            </span>
+          )}
+        </>
+      ),
+    },
+    {
+      id: 'started',
+      header: 'Started',
+      numeric: true,
+      sortValue: (run) => run.startedAt,
+      cell: (run) => formatInstant(run.startedAt),
+    },
+    { id: 'source', header: 'Source', cell: (run) => (run.source === 'manual' ? <ManualMark /> : 'Logger') },
+    {
+      id: 'peak',
+      header: 'Peak',
+      numeric: true,
+      sortValue: (run) => run.analysis.peakC,
+      cell: (run) => formatC(run.analysis.peakC),
+    },
+    {
+      id: 'verdict',
+      header: 'Verdict',
+      cell: (run) => (
+        <>
+          <VerdictMark
+            code={run.analysis.verdict}
+            label={run.analysis.verdictLabel ?? 'No verdict yet'}
+            status={run.analysis.verdictStatus ?? undefined}
+          />
+          <FlagCount count={run.analysis.flags.length} className="ml-2" />
+        </>
+      ),
+    },
+    { id: 'review', header: 'Review', cell: (run) => <ReviewStateBadge state={run.reviewState} /> },
+  ];
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full min-w-[36rem] text-left text-sm">
-        <thead>
-          <tr className="border-b border-rule text-muted">
-            <th scope="col" className="px-2 py-2 font-medium">
-              Firmware
-            </th>
-            <th scope="col" className="px-2 py-2 font-medium">
-              Started
-            </th>
-            <th scope="col" className="px-2 py-2 font-medium">
-              Source
-            </th>
-            <th scope="col" className="px-2 py-2 font-medium">
-              Peak
-            </th>
-            <th scope="col" className="px-2 py-2 font-medium">
-              Verdict
-            </th>
-            <th scope="col" className="px-2 py-2 font-medium">
-              Review
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {runs.map((run) => (
-            <tr key={run.id} className={run.id === selectedId ? 'bg-wash' : undefined}>
-              <td className="px-2 py-2">
-                <Button size="sm" variant="quiet" aria-pressed={run.id === selectedId} onClick={() => onSelect(run.id)}>
-                  {run.firmwareVersion}
-                </Button>
-                {run.isRunOfRecord && (
-                  <span className="ml-1 text-teal" title="Run of record">
-                    <span aria-hidden="true">★</span>
-                    <span className="sr-only">Run of record</span>
-                  </span>
-                )}
-              </td>
-              <td className="numeric px-2 py-2">{formatInstant(run.startedAt)}</td>
-              <td className="px-2 py-2">{run.source === 'manual' ? <ManualMark /> : 'Logger'}</td>
-              <td className="numeric px-2 py-2">{formatC(run.analysis.peakC)}</td>
-              <td className="px-2 py-2">
-                <VerdictMark
-                  code={run.analysis.verdict}
-                  label={run.analysis.verdictLabel ?? 'No verdict yet'}
-                  status={run.analysis.verdictStatus ?? undefined}
-                />
-                <FlagCount count={run.analysis.flags.length} className="ml-2" />
-              </td>
-              <td className="px-2 py-2">
-                <ReviewStateBadge state={run.reviewState} />
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable
+      caption="Runs of this cell, newest first"
+      rows={runs}
+      columns={columns}
+      rowKey={(run) => run.id}
+      filter={false}
+      rowClassName={(run) => (run.id === selectedId ? 'bg-wash' : undefined)}
+    />
   );
 }
 

@@ -3,6 +3,7 @@ import { Link } from 'react-router';
 import type { FieldErrors } from '../../../lib/form-errors';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
+import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { cx } from '../../../lib/class-names';
 import { describeSubmitError } from '../../../lib/form-errors';
@@ -13,9 +14,11 @@ import { useRoundupResults, useSetRubric } from '../api/test-runs-api';
 import { CelsiusField } from './celsius-field';
 import { FlagCount } from './run-detail';
 
+type ResultsRow = { entryId: number; name: string };
+
 export interface ResultsMatrixProps {
   roundupId: number;
-  rows: { entryId: number; name: string }[];
+  rows: ResultsRow[];
   columns: { id: number; name: string }[];
   cellPath: (cellId: number) => string;
   canEditRubric: boolean;
@@ -169,43 +172,28 @@ export function ResultsMatrix({ roundupId, rows, columns, cellPath, canEditRubri
           {rubricIsDefault ? ' (defaults)' : ''}.
         </span>
       </fieldset>
-      <div className="overflow-x-auto">
-        <table className="w-full text-sm" aria-label="Results">
-          <thead>
-            <tr className="border-b border-rule">
-              <th scope="col" className="px-3 py-2 text-left font-medium text-muted">
-                Product
-              </th>
-              {columns.map((column) => (
-                <th key={column.id} scope="col" className="px-3 py-2 text-left font-medium text-muted">
-                  {column.name}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map((row) => (
-              <tr key={row.entryId} className="border-b border-rule">
-                <th scope="row" className="px-3 py-2 text-left font-medium">
-                  {row.name}
-                </th>
-                {columns.map((column) => {
-                  const cell = byPlace.get(`${row.entryId}:${column.id}`);
-                  return (
-                    <td key={column.id} className="p-0 align-top">
-                      {cell ? (
-                        <ResultCellView cell={cell} figure={figure} href={cellPath(cell.cellId)} />
-                      ) : (
-                        <span className="block px-3 py-2 text-muted">Not planned</span>
-                      )}
-                    </td>
-                  );
-                })}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <DataTable
+        caption="Results"
+        rows={rows}
+        columns={[
+          { id: 'product', header: 'Product', rowHeader: true, sortValue: (row) => row.name, cell: (row) => row.name },
+          ...columns.map((column): DataTableColumn<ResultsRow> => ({
+            id: String(column.id),
+            header: column.name,
+            flush: true,
+            cell: (row) => {
+              const cell = byPlace.get(`${row.entryId}:${column.id}`);
+              return cell ? (
+                <ResultCellView cell={cell} figure={figure} href={cellPath(cell.cellId)} />
+              ) : (
+                <span className="block px-3 py-2 text-muted">Not planned</span>
+              );
+            },
+          })),
+        ]}
+        rowKey={(row) => row.entryId}
+        filter={false}
+      />
       {canEditRubric && (
         <RubricForm key={JSON.stringify(rubric)} roundupId={roundupId} rubric={rubric} isDefault={rubricIsDefault} />
       )}

@@ -369,7 +369,12 @@ export default function SectionEditor({
       },
     },
     onCreate: ({ editor: created }) => onReady(created),
-    onUpdate: () => onChange(),
+    // Only what the person does counts as a change. The editor's own tidying (an empty paragraph it appends after a
+    // list or a block at the end, on whatever happens first, focus included) must not save: a save hands a
+    // signed-off section back to drafting, and merely opening or reading it is not a change.
+    onUpdate: ({ transaction }) => {
+      if (transaction.docChanged) onChange();
+    },
   });
   if (!editor) return null;
   return (

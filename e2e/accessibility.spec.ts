@@ -5,6 +5,7 @@ import { clientRoutePatterns } from '../tests/support/client-routes';
 import { demoAccounts } from './support/demo-accounts';
 import { linkIn, openDevInbox } from './support/dev-inbox';
 import { publicRoutePatterns } from './support/public-pages';
+import { invitedWelcomeLink } from './support/invitations';
 import { signInAs } from './support/sign-in';
 import { uniqueEmail } from './support/unique';
 
@@ -15,6 +16,11 @@ import { uniqueEmail } from './support/unique';
  */
 const pages: Record<string, { role: Role | null; url: string | ((page: Page) => Promise<string>) }> = {
   '/sign-in': { role: null, url: '/sign-in' },
+  // A fresh invitation's welcome page, opened from the link in its mail.
+  '/welcome/:token': {
+    role: null,
+    url: async (page) => (await invitedWelcomeLink(new URL(page.url()).origin, 'writer')).path,
+  },
   '/': { role: 'editor', url: '/' },
   '/users': { role: 'admin', url: '/users' },
   '/account': { role: 'writer', url: '/account' },

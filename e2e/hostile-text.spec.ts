@@ -1,6 +1,7 @@
 import { expect, test } from '@playwright/test';
 import { hostileStrings } from '../tests/support/hostile-strings';
 import { productRequest } from '../tests/support/plan-requests';
+import { invitedWelcomeLink } from './support/invitations';
 import { signInAs } from './support/sign-in';
 import { uniqueSuffix } from './support/unique';
 
@@ -44,4 +45,23 @@ test('markup in a product’s names is shown as text on the catalog pages and ne
   expect(await page.locator('img[src="x"], svg[onload], script:not([src])').count()).toBe(0);
   // A javascript: text never becomes a link.
   expect(await page.locator('a[href^="javascript:"]').count()).toBe(0);
+});
+
+test('markup in an invited person’s name is shown as text on the welcome page and never runs', async ({
+  page,
+  baseURL,
+}) => {
+  const dialogs: string[] = [];
+  page.on('dialog', async (dialog) => {
+    dialogs.push(dialog.message());
+    await dialog.dismiss();
+  });
+  const name = `${payload('script tag')} ${payload('event attribute')}`.slice(0, 120);
+  const { path } = await invitedWelcomeLink(baseURL as string, 'tester', name);
+  await page.goto(path);
+  await expect(page.getByRole('heading', { level: 1 })).toContainText('<script>');
+  await page.waitForLoadState('networkidle');
+  expect(await page.evaluate(() => (window as unknown as { __hostile?: unknown }).__hostile)).toBeUndefined();
+  expect(dialogs).toEqual([]);
+  expect(await page.locator('img[src="x"], svg[onload], script:not([src])').count()).toBe(0);
 });

@@ -19,6 +19,7 @@ import { SamplesService } from './services/samples.service';
 import { TestRunsService } from './services/test-runs.service';
 import { PhotosService } from './services/photos.service';
 import { UsersService } from './services/users.service';
+import { InvitationsService } from './services/invitations.service';
 import { WriteUpsService } from './services/write-ups.service';
 import { VerdictsService } from './services/verdicts.service';
 import { ChartsService } from './services/charts.service';
@@ -52,7 +53,6 @@ export function createServices(dataSource: DataSource, env: Env) {
   const passwordGuesses = new PasswordGuesses(dataSource, passwordGuessPolicy(env));
 
   const auth = new AuthService(dataSource, sessions);
-  const users = new UsersService(dataSource);
   const catalog = new CatalogService(dataSource);
   const catalogImport = new CatalogImportService(dataSource);
   const benchProfiles = new BenchProfilesService(dataSource);
@@ -83,6 +83,8 @@ export function createServices(dataSource: DataSource, env: Env) {
     sending: Boolean(env.SMTP_URL),
   });
   const staffMail = new StaffMailService(dataSource, siteUrl);
+  const invitations = new InvitationsService(dataSource, { siteUrl, outletName });
+  const users = new UsersService(dataSource, invitations);
   const mailSender = new MailSender({
     dataSource,
     transport: createMailTransport(env.SMTP_URL),
@@ -148,6 +150,7 @@ export function createServices(dataSource: DataSource, env: Env) {
     files,
     auth,
     users,
+    invitations,
     catalog,
     catalogImport,
     benchProfiles,

@@ -56,7 +56,8 @@ export function waitInWords(seconds: number): string {
   return plural(Math.ceil(seconds / 3600), 'hour');
 }
 
-export type PasswordCheck = 'sign-in' | 'current-password';
+/** `invitation`: an invitation link's token, counted like a password (per token and per client address). */
+export type PasswordCheck = 'sign-in' | 'current-password' | 'invitation';
 
 export interface PasswordAttemptSubject {
   check: PasswordCheck;
@@ -139,14 +140,18 @@ export class PasswordGuesses {
         return new TooManyPasswordGuesses(
           check === 'sign-in'
             ? `Too many wrong passwords for this account. Try again in ${words}.`
-            : `Too many wrong current passwords. Try again in ${words}.`,
+            : check === 'invitation'
+              ? `Too many tries of this invitation link. Try again in ${words}.`
+              : `Too many wrong current passwords. Try again in ${words}.`,
           accountLock,
         );
       }
       const addressWait = address ? this.addressCeiling(address, now) : null;
       if (addressWait) {
         return new TooManyPasswordGuesses(
-          `Too many wrong passwords from your network. Try again in ${waitInWords(addressWait)}.`,
+          check === 'invitation'
+            ? `Too many invitation links tried from your network. Try again in ${waitInWords(addressWait)}.`
+            : `Too many wrong passwords from your network. Try again in ${waitInWords(addressWait)}.`,
           addressWait,
         );
       }

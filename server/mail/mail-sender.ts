@@ -312,17 +312,19 @@ export class MailSender {
       };
     }
     const payload = row.payload ?? { subject: 'Benchwire', text: '' };
-    return { ...base, ...plainMessage(payload.subject, payload.text) };
+    const message = plainMessage(payload.subject, payload.text);
+    // A mail that brings its own HTML part (an invitation) built it with every value escaped.
+    return { ...base, ...message, ...(payload.html ? { html: payload.html } : {}) };
   }
 
   private async record(outcomes: Outcome[], now: Date) {
     const ds = this.options.dataSource;
     const sent = outcomes.filter((o) => o.state === 'sent').map((o) => o.row.id);
     if (sent.length) {
-      // A confirmation link is a secret: its text leaves the outbox once the mail is out.
+      // A confirmation or invitation link is a secret: its text leaves the outbox once the mail is out.
       await ds.query(
         `UPDATE mail_outbox SET state = 'sent', sent_at = ?, lease_until = NULL, last_error = NULL,
-                payload = CASE WHEN kind = 'confirm' THEN NULL ELSE payload END
+                payload = CASE WHEN kind IN ('confirm', 'staff-invite') THEN NULL ELSE payload END
           WHERE id IN (?) AND state = 'sending'`,
         [now, sent],
       );

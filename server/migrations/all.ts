@@ -27,6 +27,7 @@ import { CreatePublishing1765700002000 } from './1765700002000-create-publishing
 import { ReaderSiteSettings1765710001000 } from './1765710001000-reader-site-settings';
 import { CreateRelayMessages1765800001000 } from './1765800001000-create-relay-messages';
 import { CreateSubscribersAndOutbox1765800002000 } from './1765800002000-create-subscribers-and-outbox';
+import { AddStaffInvitations1765900001000 } from './1765900001000-add-staff-invitations';
 import { CreateVerdictsChartsExclusions1765610001000 } from './1765610001000-create-verdicts-charts-exclusions';
 
 export const migrations = [
@@ -59,4 +60,5 @@ export const migrations = [
   CreateRelayMessages1765800001000,
   CreateSubscribersAndOutbox1765800002000,
   CreateVerdictsChartsExclusions1765610001000,
+  AddStaffInvitations1765900001000,
 ];

@@ -32,6 +32,18 @@ export class AuthService {
     const ok = await verifyPassword(user?.passwordHash ?? null, input.password);
     await attempt.settle(Boolean(user && ok && user.active));
     if (!user || !ok || !user.active) throw wrongCredentials();
+    return this.openSession(user, client, presentedSessionId);
+  }
+
+  /**
+   * A new session for a user whose identity was just proven (a right password, an accepted invitation). The
+   * session the browser presented, if any, ends first, so the id always changes.
+   */
+  async openSession(
+    user: UserEntity,
+    client: { userAgent: string | null; ipAddress: string | null },
+    presentedSessionId: string | null,
+  ) {
     if (presentedSessionId) await this.sessions.invalidateSession(presentedSessionId);
     const session = await this.sessions.createSession(user.id, { ...client, createdAt: new Date() });
     await this.dataSource.transaction(async (manager) => {

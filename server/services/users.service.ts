@@ -5,10 +5,11 @@ import { hashPassword } from '../auth/passwords';
 import { AppError, conflict, notFound } from '../errors';
 import { recordAudit } from './audit.service';
 import { isDuplicateKey } from '../lib/database-errors';
+import type { InvitationsService } from './invitations.service';
 import type { CreateUserRequest, UpdateUserRequest, User } from '../../shared/schemas/users';
 import type { CurrentUser } from '../../shared/schemas/auth';
 
-export function toUserDto(user: UserEntity): User {
+export function toUserDto(user: UserEntity, now = new Date()): User {
   return {
     id: user.id,
     email: user.email,
@@ -18,6 +19,15 @@ export function toUserDto(user: UserEntity): User {
     createdAt: user.createdAt.toISOString(),
     updatedAt: user.updatedAt.toISOString(),
     lastSignInAt: user.lastSignInAt ? user.lastSignInAt.toISOString() : null,
+    passwordSet: user.passwordHash !== null,
+    invitation:
+      user.passwordHash === null && user.inviteTokenHash && user.inviteExpiresAt && user.inviteSentAt
+        ? {
+            sentAt: user.inviteSentAt.toISOString(),
+            expiresAt: user.inviteExpiresAt.toISOString(),
+            expired: user.inviteExpiresAt.getTime() <= now.getTime(),
+          }
+        : null,
   };
 }
 
@@ -27,15 +37,25 @@ const emailTaken = () =>
   });
 
 export class UsersService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly invitations: InvitationsService,
+  ) {}
 
   async list(): Promise<User[]> {
     const users = await this.dataSource.getRepository(UserEntity).find({ order: { displayName: 'ASC' } });
-    return users.map(toUserDto);
+    return users.map((user) => toUserDto(user));
   }
 
+  async get(id: number): Promise<User> {
+    const user = await this.dataSource.getRepository(UserEntity).findOneBy({ id });
+    if (!user) throw notFound('That user');
+    return toUserDto(user);
+  }
+
+  /** With a password the account can sign in at once; without one its owner is invited by mail to set their own. */
   async create(actor: CurrentUser, input: CreateUserRequest): Promise<User> {
-    const passwordHash = await hashPassword(input.password);
+    const passwordHash = input.password ? await hashPassword(input.password) : null;
     try {
       return await this.dataSource.transaction(async (manager) => {
         const repo = manager.getRepository(UserEntity);
@@ -46,13 +66,21 @@ export class UsersService {
           passwordHash,
           active: true,
         });
-        const user = await repo.findOneByOrFail({ id: identifiers[0].id });
+        let user = await repo.findOneByOrFail({ id: identifiers[0].id });
+        if (!passwordHash) {
+          await this.invitations.issue(manager, user, actor);
+          user = await repo.findOneByOrFail({ id: user.id });
+        }
         await recordAudit(manager, {
           actorId: actor.id,
           action: 'user.created',
           subjectType: 'user',
           subjectId: user.id,
-          details: { email: user.email, role: user.role },
+          details: {
+            email: user.email,
+            role: user.role,
+            ...(user.inviteExpiresAt ? { invitedUntil: user.inviteExpiresAt.toISOString() } : {}),
+          },
         });
         return toUserDto(user);
       });
@@ -82,6 +110,12 @@ export class UsersService {
         if (passwordHash) {
           user.passwordHash = passwordHash;
           changes.password = 'reset by admin';
+        }
+        // A deactivated account, or one whose password the admin has set, has no invitation to accept any more.
+        if (user.inviteTokenHash && user.inviteAcceptedAt === null && (!user.active || passwordHash)) {
+          user.inviteTokenHash = null;
+          user.inviteExpiresAt = null;
+          changes.invitation = 'withdrawn';
         }
         await repo.save(user);
         // Deactivation, a role change and a password reset all end the user's sessions at once.

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { instantSchema, roleSchema } from './common';
-import { emailSchema, newPasswordSchema } from './auth';
-import { singleLineText } from './text';
+import { emailSchema, newPasswordSchema, PASSWORD_MAX } from './auth';
+import { passwordText, singleLineText } from './text';
+import { whenValid } from './checks';
 
 export const displayNameSchema = singleLineText(120, 'Enter a name.');
 
@@ -14,15 +15,32 @@ export const userSchema = z.object({
   createdAt: instantSchema,
   updatedAt: instantSchema,
   lastSignInAt: instantSchema.nullable(),
+  /** false for an invited account whose owner has not set a password yet (it cannot sign in). */
+  passwordSet: z.boolean(),
+  /** The open invitation of an account without a password; null once accepted, withdrawn or never sent. */
+  invitation: z
+    .object({
+      sentAt: instantSchema,
+      expiresAt: instantSchema,
+      expired: z.boolean(),
+    })
+    .nullable(),
 });
 export type User = z.infer<typeof userSchema>;
 export const userListSchema = z.object({ users: z.array(userSchema) });
 
+/** How long an invitation link works. */
+export const INVITATION_HOURS = 72;
+
+/**
+ * A new staff account. Without `password` the person is invited by mail and sets their own; with it the account
+ * can sign in at once with that first password.
+ */
 export const createUserRequestSchema = z.strictObject({
   email: emailSchema,
   displayName: displayNameSchema,
   role: roleSchema,
-  password: newPasswordSchema,
+  password: newPasswordSchema.optional(),
 });
 export type CreateUserRequest = z.infer<typeof createUserRequestSchema>;
 
@@ -37,3 +55,30 @@ export const updateUserRequestSchema = z
   })
   .partial();
 export type UpdateUserRequest = z.infer<typeof updateUserRequestSchema>;
+
+/** What the welcome page shows about an open invitation. */
+export const invitationSchema = z.object({
+  displayName: z.string(),
+  email: z.string(),
+  role: roleSchema,
+  expiresAt: instantSchema,
+});
+export type Invitation = z.infer<typeof invitationSchema>;
+
+/** The invitation link's token (URL-safe base64 of 32 random bytes), as a path parameter. */
+export const invitationTokenParamsSchema = z.object({
+  token: z.string().regex(/^[A-Za-z0-9_-]{16,128}$/, 'This is not an invitation link.'),
+});
+
+/** The invited person's password, typed twice. Nothing else may be set here. */
+export const acceptInvitationRequestSchema = z
+  .strictObject({
+    newPassword: newPasswordSchema,
+    confirmPassword: passwordText(0, PASSWORD_MAX),
+  })
+  .refine((v) => v.newPassword === v.confirmPassword, {
+    path: ['confirmPassword'],
+    message: 'The two passwords do not match.',
+    when: whenValid('newPassword', 'confirmPassword'),
+  });
+export type AcceptInvitationRequest = z.infer<typeof acceptInvitationRequestSchema>;

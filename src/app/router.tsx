@@ -36,6 +36,7 @@ export function createAppRouter(queryClient: QueryClient) {
       ErrorBoundary: RootErrorBoundary,
       children: [
         { path: 'sign-in', ...load(signIn) },
+        { path: 'welcome/:token', lazy: lazy(() => import('./routes/welcome')) },
         {
           id: 'app',
           ...load(appLayout),

@@ -26,6 +26,9 @@ const allowed: Record<string, Caller[]> = {
   'GET /api/users': ['admin'],
   'POST /api/users': ['admin'],
   'PATCH /api/users/:id': ['admin'],
+  'POST /api/users/:id/invitation': ['admin'],
+  'GET /api/invitations/:token': everyone,
+  'POST /api/invitations/:token/accept': everyone,
   'POST /api/log-check/analyse': ['tester', 'editor'],
   // Roundup planning (issue 4): admins read everything and change nothing.
   'GET /api/catalog/products': staff,

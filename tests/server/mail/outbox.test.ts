@@ -3,3 +3,4 @@
 import './subscribers.cases';
 import './reminders.cases';
 import './mail-fault-drill.cases';
+import './invitations.cases';

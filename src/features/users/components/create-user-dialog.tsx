@@ -1,10 +1,11 @@
+import { useState } from 'react';
 import { PasswordField } from '../../../components/ui/password-field';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { roleGuides } from '../../../lib/role-guide';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { PASSWORD_MIN } from '../../../../shared/schemas/auth';
-import { createUserRequestSchema, type User } from '../../../../shared/schemas/users';
+import { createUserRequestSchema, INVITATION_HOURS, type User } from '../../../../shared/schemas/users';
 import type { Role } from '../../../../shared/schemas/common';
 import { useCreateUser } from '../api/create-user';
 import { roleOptions } from './role-options';
@@ -16,15 +17,31 @@ export interface CreateUserDialogProps {
   onCreated: (user: User) => void;
 }
 
+type Start = 'invite' | 'password';
+const startOptions: [Start, string, string][] = [
+  [
+    'invite',
+    'Send an invitation',
+    `They get a mail with a link to choose their own password; it works once, for ${INVITATION_HOURS} hours.`,
+  ],
+  ['password', 'Set a first password', 'You hand the password over in person; they can change it under Account.'],
+];
+
 const emptyForm = { displayName: '', email: '', role: '', password: '' };
 
 export function CreateUserDialog({ open, onClose, onCreated }: CreateUserDialogProps) {
   const createUser = useCreateUser();
+  const [start, setStart] = useState<Start>('invite');
   const form = useZodForm({
     schema: createUserRequestSchema,
     initialValues: emptyForm,
     labels: { displayName: 'Name', email: 'E-mail', role: 'Role', password: 'First password' },
     messages: { role: 'Choose a role.' },
+    // An invitation sends no password: the person chooses their own.
+    toRequest: ({ password, ...rest }) => ({
+      request: start === 'password' ? { ...rest, password } : rest,
+      errors: {},
+    }),
   });
   const chosenRole = form.values.role as Role | '';
 
@@ -33,11 +50,11 @@ export function CreateUserDialog({ open, onClose, onCreated }: CreateUserDialogP
       open={open}
       onClose={onClose}
       title="New user"
-      description="The account can sign in as soon as it is created."
-      submitLabel="Create account"
+      description="Invite a colleague by mail, or give them a first password yourself."
+      submitLabel={start === 'invite' ? 'Send invitation' : 'Create account'}
       pending={createUser.isPending}
       onSubmit={() => form.submitWith(createUser, onCreated)}
-      problems={form.problems('The account was not created')}
+      problems={form.problems(start === 'invite' ? 'The invitation was not sent' : 'The account was not created')}
     >
       <TextField {...form.field('displayName')} autoComplete="off" description="As colleagues know them." />
       <TextField {...form.field('email')} type="email" autoComplete="off" inputMode="email" />
@@ -47,11 +64,34 @@ export function CreateUserDialog({ open, onClose, onCreated }: CreateUserDialogP
         placeholder="Choose a role…"
         description={chosenRole ? roleGuides[chosenRole].summary : 'The role decides what they can open.'}
       />
-      <PasswordField
-        {...form.field('password')}
-        autoComplete="new-password"
-        description={`At least ${PASSWORD_MIN} characters. Hand it over in person; they can change it under Account.`}
-      />
+      <fieldset>
+        <legend className="mb-1.5 text-sm font-semibold text-ink">How they get in</legend>
+        <div className="space-y-2 text-sm">
+          {startOptions.map(([value, label, hint]) => (
+            <label key={value} className="flex items-start gap-2.5">
+              <input
+                type="radio"
+                name="account-start"
+                value={value}
+                checked={start === value}
+                onChange={() => setStart(value)}
+                className="mt-0.5 size-4 shrink-0 accent-copper"
+              />
+              <span>
+                <span className="font-medium text-ink">{label}</span>
+                <span className="block text-[0.8125rem] text-muted">{hint}</span>
+              </span>
+            </label>
+          ))}
+        </div>
+      </fieldset>
+      {start === 'password' && (
+        <PasswordField
+          {...form.field('password')}
+          autoComplete="new-password"
+          description={`At least ${PASSWORD_MIN} characters. Hand it over in person; they can change it under Account.`}
+        />
+      )}
     </FormDialog>
   );
 }

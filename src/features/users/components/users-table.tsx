@@ -12,21 +12,63 @@ export interface UsersTableProps {
   users: readonly User[];
   currentUserId: number;
   onEdit: (user: User) => void;
+  /** Sends an invited person a new link (the earlier one stops working). */
+  onSendAgain: (user: User) => void;
+  /** Withdraws an invitation: the account is deactivated and its link stops working. */
+  onWithdraw: (user: User) => void;
+  /** The account whose invitation is being sent just now. */
+  sendingId?: number | null;
 }
 
-type StatusFilter = 'all' | 'active' | 'inactive';
+/** The account's state in words, for sorting and filtering. */
+export function statusWords(user: User): string {
+  if (!user.active) return user.passwordSet ? 'Deactivated' : 'Invitation withdrawn';
+  if (user.passwordSet) return 'Active';
+  if (!user.invitation) return 'Invited — no open link';
+  return user.invitation.expired ? 'Invited — link expired' : 'Invited — not yet accepted';
+}
+
+function UserStatus({ user }: { user: User }) {
+  const words = statusWords(user);
+  if (user.active && user.passwordSet) return <Badge tone="positive">Active</Badge>;
+  if (!user.active) return <Badge tone="muted">{words}</Badge>;
+  return (
+    <span className="inline-flex flex-col items-start gap-0.5">
+      <Badge tone="caution">{words}</Badge>
+      {user.invitation && (
+        <span className="text-xs whitespace-nowrap text-muted">
+          {user.invitation.expired ? 'expired ' : 'expires '}
+          <DateTime value={user.invitation.expiresAt} />
+        </span>
+      )}
+    </span>
+  );
+}
+
+type StatusFilter = 'all' | 'active' | 'invited' | 'inactive';
 const statusOptions = [
   { value: 'all', label: 'All accounts' },
   { value: 'active', label: 'Active only' },
+  { value: 'invited', label: 'Invited, not yet accepted' },
   { value: 'inactive', label: 'Deactivated only' },
 ];
+const statusFilters: Record<StatusFilter, (user: User) => boolean> = {
+  all: () => true,
+  active: (user) => user.active,
+  invited: (user) => user.active && !user.passwordSet,
+  inactive: (user) => !user.active,
+};
 
-export function UsersTable({ users, currentUserId, onEdit }: UsersTableProps) {
+export function UsersTable({
+  users,
+  currentUserId,
+  onEdit,
+  onSendAgain,
+  onWithdraw,
+  sendingId = null,
+}: UsersTableProps) {
   const [status, setStatus] = useState<StatusFilter>('all');
-  const rows = useMemo(
-    () => users.filter((user) => status === 'all' || user.active === (status === 'active')),
-    [users, status],
-  );
+  const rows = useMemo(() => users.filter(statusFilters[status]), [users, status]);
 
   const columns = useMemo<DataTableColumn<User>[]>(
     () => [
@@ -57,8 +99,8 @@ export function UsersTable({ users, currentUserId, onEdit }: UsersTableProps) {
       {
         id: 'status',
         header: 'Status',
-        sortValue: (user) => (user.active ? 'Active' : 'Deactivated'),
-        cell: (user) => (user.active ? <Badge tone="positive">Active</Badge> : <Badge tone="muted">Deactivated</Badge>),
+        sortValue: statusWords,
+        cell: (user) => <UserStatus user={user} />,
       },
       {
         id: 'lastSignIn',
@@ -72,13 +114,36 @@ export function UsersTable({ users, currentUserId, onEdit }: UsersTableProps) {
         header: 'Actions',
         numeric: false,
         cell: (user) => (
-          <Button size="sm" variant="secondary" onClick={() => onEdit(user)} aria-label={`Edit ${user.displayName}`}>
-            Edit
-          </Button>
+          <span className="flex flex-wrap gap-1.5">
+            <Button size="sm" variant="secondary" onClick={() => onEdit(user)} aria-label={`Edit ${user.displayName}`}>
+              Edit
+            </Button>
+            {user.active && !user.passwordSet && (
+              <>
+                <Button
+                  size="sm"
+                  variant="secondary"
+                  pending={sendingId === user.id}
+                  onClick={() => onSendAgain(user)}
+                  aria-label={`Send the invitation to ${user.displayName} again`}
+                >
+                  Send again
+                </Button>
+                <Button
+                  size="sm"
+                  variant="secondary"
+                  onClick={() => onWithdraw(user)}
+                  aria-label={`Withdraw the invitation to ${user.displayName}`}
+                >
+                  Withdraw
+                </Button>
+              </>
+            )}
+          </span>
         ),
       },
     ],
-    [currentUserId, onEdit],
+    [currentUserId, onEdit, onSendAgain, onWithdraw, sendingId],
   );
 
   return (

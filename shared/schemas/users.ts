@@ -65,10 +65,11 @@ export const invitationSchema = z.object({
 });
 export type Invitation = z.infer<typeof invitationSchema>;
 
-/** The invitation link's token (URL-safe base64 of 32 random bytes), as a path parameter. */
-export const invitationTokenParamsSchema = z.object({
-  token: z.string().regex(/^[A-Za-z0-9_-]{16,128}$/, 'This is not an invitation link.'),
-});
+/**
+ * The invitation link's token (URL-safe base64 of 32 random bytes), as a path parameter. Any text of a plausible
+ * length is looked up: one that matches no invitation is answered like an unknown link.
+ */
+export const invitationTokenParamsSchema = z.object({ token: z.string().min(1).max(200) });
 
 /** The invited person's password, typed twice. Nothing else may be set here. */
 export const acceptInvitationRequestSchema = z

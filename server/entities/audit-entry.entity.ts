@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { OptionalIntColumn, VarcharColumn } from './columns';
 
 /** Who did what to which record, and when. Written in the same transaction as the change. */
 @Entity({ name: 'audit_entries' })
@@ -7,16 +8,16 @@ export class AuditEntryEntity {
   @PrimaryGeneratedColumn({ type: 'bigint', unsigned: true })
   id: string;
 
-  @Column({ type: 'int', unsigned: true, name: 'actor_id', nullable: true })
+  @OptionalIntColumn('actor_id')
   actorId: number | null;
 
-  @Column({ type: 'varchar', length: 64 })
+  @VarcharColumn(64)
   action: string;
 
-  @Column({ type: 'varchar', length: 64, name: 'subject_type' })
+  @VarcharColumn(64, { name: 'subject_type' })
   subjectType: string;
 
-  @Column({ type: 'varchar', length: 64, name: 'subject_id', nullable: true })
+  @VarcharColumn(64, { name: 'subject_id', nullable: true })
   subjectId: string | null;
 
   @Column({ type: 'json', nullable: true })

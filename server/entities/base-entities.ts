@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { CreateDateColumn, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { OptionalIntColumn, OptionalInstantColumn } from './columns';
 
 // The columns most tables share, declared once; an entity extends the one that fits. Column names and types match
 // the migrations (INT UNSIGNED AUTO_INCREMENT keys, DATETIME(3) UTC times).
@@ -20,9 +21,9 @@ export abstract class EditedEntity extends RecordedEntity {
 
 /** A reusable record staff create and later archive instead of deleting (products, bench profiles, loads). */
 export abstract class ArchivableEntity extends EditedEntity {
-  @Column({ type: 'datetime', precision: 3, name: 'archived_at', nullable: true })
+  @OptionalInstantColumn('archived_at')
   archivedAt: Date | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'created_by', nullable: true })
+  @OptionalIntColumn('created_by')
   createdBy: number | null;
 }

@@ -1,18 +1,19 @@
-import { Column, Entity } from 'typeorm';
+import { Entity } from 'typeorm';
+import { IntColumn, OptionalIntColumn, DayColumn, VarcharColumn } from './columns';
 import { RecordedEntity } from './base-entities';
 
 /** One line of a bench's maintenance log: what was done, on which day, recorded by whom. */
 @Entity({ name: 'bench_maintenance_entries' })
 export class BenchMaintenanceEntryEntity extends RecordedEntity {
-  @Column({ type: 'int', unsigned: true, name: 'bench_id' })
+  @IntColumn('bench_id')
   benchId: number;
 
-  @Column({ type: 'date', name: 'done_on', utc: true })
+  @DayColumn('done_on')
   doneOn: string;
 
-  @Column({ type: 'varchar', length: 500 })
+  @VarcharColumn(500)
   description: string;
 
-  @Column({ type: 'int', unsigned: true, nullable: true, name: 'recorded_by' })
+  @OptionalIntColumn('recorded_by')
   recordedBy: number | null;
 }

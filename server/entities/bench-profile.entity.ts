@@ -1,37 +1,38 @@
 import type { ColumnMapping } from '../../shared/schemas/analysis';
 import { Column, Entity } from 'typeorm';
+import { VarcharColumn, DecimalColumn } from './columns';
 import { ArchivableEntity } from './base-entities';
 
 /** A reusable description of the test system and the conditions a roundup is measured under. */
 @Entity({ name: 'bench_profiles' })
 export class BenchProfileEntity extends ArchivableEntity {
-  @Column({ type: 'varchar', length: 120, unique: true })
+  @VarcharColumn(120, { unique: true })
   name: string;
 
-  @Column({ type: 'varchar', length: 300, name: 'case_and_fans' })
+  @VarcharColumn(300, { name: 'case_and_fans' })
   caseAndFans: string;
 
-  @Column({ type: 'varchar', length: 200 })
+  @VarcharColumn(200)
   cooler: string;
 
-  @Column({ type: 'varchar', length: 200 })
+  @VarcharColumn(200)
   psu: string;
 
-  @Column({ type: 'varchar', length: 300 })
+  @VarcharColumn(300)
   memory: string;
 
   /** °C, DECIMAL(4,1). */
-  @Column({ type: 'decimal', precision: 4, scale: 1, name: 'room_temp_target_c' })
+  @DecimalColumn(4, 1, 'room_temp_target_c')
   roomTempTargetC: string;
 
   /** ± °C, DECIMAL(3,1). */
-  @Column({ type: 'decimal', precision: 3, scale: 1, name: 'room_temp_tolerance_c' })
+  @DecimalColumn(3, 1, 'room_temp_tolerance_c')
   roomTempToleranceC: string;
 
-  @Column({ type: 'varchar', length: 120, name: 'probe_type' })
+  @VarcharColumn(120, { name: 'probe_type' })
   probeType: string;
 
-  @Column({ type: 'varchar', length: 300, name: 'probe_placement' })
+  @VarcharColumn(300, { name: 'probe_placement' })
   probePlacement: string;
 
   @Column({ type: 'smallint', unsigned: true, name: 'required_soak_minutes' })

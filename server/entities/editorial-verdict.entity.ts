@@ -1,4 +1,5 @@
 import { Column, Entity, Index } from 'typeorm';
+import { IntColumn, VarcharColumn } from './columns';
 import { EditedEntity } from './base-entities';
 import { editorialLabels, type EditorialLabel } from '../../shared/domain/editorial/editorial-labels';
 
@@ -6,21 +7,21 @@ import { editorialLabels, type EditorialLabel } from '../../shared/domain/editor
 @Entity({ name: 'editorial_verdicts' })
 export class EditorialVerdictEntity extends EditedEntity {
   @Index('ix_editorial_verdicts_roundup')
-  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+  @IntColumn('roundup_id')
   roundupId: number;
 
   @Index('uq_editorial_verdicts_entry', { unique: true })
-  @Column({ type: 'int', unsigned: true, name: 'roundup_entry_id' })
+  @IntColumn('roundup_entry_id')
   entryId: number;
 
   @Column({ type: 'enum', enum: editorialLabels })
   label: EditorialLabel;
 
-  @Column({ type: 'varchar', length: 160, name: 'best_for' })
+  @VarcharColumn(160, { name: 'best_for' })
   bestFor: string;
 
   /** Integer minor units of `priceCurrency`. */
-  @Column({ type: 'int', unsigned: true, name: 'price_minor' })
+  @IntColumn('price_minor')
   priceMinor: number;
 
   @Column({ type: 'char', length: 3, name: 'price_currency' })
@@ -34,6 +35,6 @@ export class EditorialVerdictEntity extends EditedEntity {
   @Column({ type: 'json', nullable: true })
   contradictions: string[] | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'updated_by' })
+  @IntColumn('updated_by')
   updatedBy: number;
 }

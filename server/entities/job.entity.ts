@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { IntColumn, InstantColumn, OptionalInstantColumn, DefaultNowColumn, VarcharColumn } from './columns';
 
 export const jobStates = ['pending', 'running', 'done', 'failed', 'cancelled'] as const;
 export type JobState = (typeof jobStates)[number];
@@ -9,17 +10,17 @@ export class JobEntity {
   @PrimaryGeneratedColumn({ type: 'bigint', unsigned: true })
   id: string;
 
-  @Column({ type: 'varchar', length: 64 })
+  @VarcharColumn(64)
   kind: string;
 
   /** Work with the same key is enqueued once; null for work that may repeat. */
-  @Column({ type: 'varchar', length: 191, name: 'unique_key', nullable: true })
+  @VarcharColumn(191, { name: 'unique_key', nullable: true })
   uniqueKey: string | null;
 
   @Column({ type: 'json' })
   payload: unknown;
 
-  @Column({ type: 'datetime', precision: 3, name: 'run_at' })
+  @InstantColumn('run_at')
   runAt: Date;
 
   @Column({ type: 'enum', enum: jobStates, default: 'pending' })
@@ -28,24 +29,24 @@ export class JobEntity {
   @Column({ type: 'int', unsigned: true, default: 0 })
   attempts: number;
 
-  @Column({ type: 'int', unsigned: true, name: 'max_attempts', default: 10 })
+  @IntColumn('max_attempts', { default: 10 })
   maxAttempts: number;
 
   @Column({ type: 'text', name: 'last_error', nullable: true })
   lastError: string | null;
 
-  @Column({ type: 'varchar', length: 100, name: 'locked_by', nullable: true })
+  @VarcharColumn(100, { name: 'locked_by', nullable: true })
   lockedBy: string | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'locked_at', nullable: true })
+  @OptionalInstantColumn('locked_at')
   lockedAt: Date | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'finished_at', nullable: true })
+  @OptionalInstantColumn('finished_at')
   finishedAt: Date | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'created_at', default: () => 'CURRENT_TIMESTAMP(3)' })
+  @DefaultNowColumn('created_at')
   createdAt: Date;
 
-  @Column({ type: 'datetime', precision: 3, name: 'updated_at', default: () => 'CURRENT_TIMESTAMP(3)' })
+  @DefaultNowColumn('updated_at')
   updatedAt: Date;
 }

@@ -1,5 +1,13 @@
 // The subscriber and outbox tables (migration 1765800002000). One file: they are read and written together.
 import { Column, Entity, PrimaryColumn, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  IntColumn,
+  OptionalIntColumn,
+  InstantColumn,
+  OptionalInstantColumn,
+  DefaultNowColumn,
+  VarcharColumn,
+} from './columns';
 
 export const subscriberStatuses = ['pending', 'confirmed', 'unsubscribed'] as const;
 export type SubscriberStatus = (typeof subscriberStatuses)[number];
@@ -16,10 +24,10 @@ export class AppSecretEntity {
   @PrimaryColumn({ type: 'varchar', length: 64 })
   name: string;
 
-  @Column({ type: 'varchar', length: 128 })
+  @VarcharColumn(128)
   value: string;
 
-  @Column({ type: 'datetime', precision: 3, name: 'created_at' })
+  @InstantColumn('created_at')
   createdAt: Date;
 }
 
@@ -29,24 +37,24 @@ export class MailCategoryEntity {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
 
-  @Column({ type: 'varchar', length: 80 })
+  @VarcharColumn(80)
   name: string;
 
-  @Column({ type: 'varchar', length: 300, nullable: true })
+  @VarcharColumn(300, { nullable: true })
   description: string | null;
 
   /** A roundup's category (product class); null matches any. */
-  @Column({ type: 'varchar', length: 32, name: 'match_product_class', nullable: true })
+  @VarcharColumn(32, { name: 'match_product_class', nullable: true })
   matchProductClass: string | null;
 
   /** A roundup's platform; null matches any. */
-  @Column({ type: 'varchar', length: 80, name: 'match_platform', nullable: true })
+  @VarcharColumn(80, { name: 'match_platform', nullable: true })
   matchPlatform: string | null;
 
   @Column({ type: 'smallint', unsigned: true, default: 0 })
   position: number;
 
-  @Column({ type: 'datetime', precision: 3, name: 'created_at', default: () => 'CURRENT_TIMESTAMP(3)' })
+  @DefaultNowColumn('created_at')
   createdAt: Date;
 }
 
@@ -55,7 +63,7 @@ export class SubscriberEntity {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
 
-  @Column({ type: 'varchar', length: 254 })
+  @VarcharColumn(254)
   email: string;
 
   @Column({ type: 'enum', enum: subscriberStatuses, default: 'pending' })
@@ -65,23 +73,23 @@ export class SubscriberEntity {
   @Column({ type: 'char', length: 64, name: 'confirm_token_hash', nullable: true })
   confirmTokenHash: string | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'confirm_expires_at', nullable: true })
+  @OptionalInstantColumn('confirm_expires_at')
   confirmExpiresAt: Date | null;
 
   /** Part of every signed self-service link; raising it ends all earlier links. */
-  @Column({ type: 'int', unsigned: true, name: 'link_version', default: 1 })
+  @IntColumn('link_version', { default: 1 })
   linkVersion: number;
 
-  @Column({ type: 'datetime', precision: 3, name: 'created_at', default: () => 'CURRENT_TIMESTAMP(3)' })
+  @DefaultNowColumn('created_at')
   createdAt: Date;
 
-  @Column({ type: 'datetime', precision: 3, name: 'confirmed_at', nullable: true })
+  @OptionalInstantColumn('confirmed_at')
   confirmedAt: Date | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'unsubscribed_at', nullable: true })
+  @OptionalInstantColumn('unsubscribed_at')
   unsubscribedAt: Date | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'updated_at', default: () => 'CURRENT_TIMESTAMP(3)' })
+  @DefaultNowColumn('updated_at')
   updatedAt: Date;
 }
 
@@ -103,7 +111,7 @@ export class MailSuppressionEntity {
   @Column({ type: 'enum', enum: suppressionReasons })
   reason: SuppressionReason;
 
-  @Column({ type: 'datetime', precision: 3, name: 'created_at', default: () => 'CURRENT_TIMESTAMP(3)' })
+  @DefaultNowColumn('created_at')
   createdAt: Date;
 }
 
@@ -113,19 +121,19 @@ export class MailingEntity {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
 
-  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+  @IntColumn('roundup_id')
   roundupId: number;
 
   @Column({ type: 'enum', enum: mailingKinds })
   kind: MailingKind;
 
-  @Column({ type: 'varchar', length: 2000, nullable: true })
+  @VarcharColumn(2000, { nullable: true })
   note: string | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'created_by', nullable: true })
+  @OptionalIntColumn('created_by')
   createdBy: number | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'created_at', default: () => 'CURRENT_TIMESTAMP(3)' })
+  @DefaultNowColumn('created_at')
   createdAt: Date;
 }
 
@@ -144,23 +152,23 @@ export class OutboxEntity {
   @PrimaryGeneratedColumn({ type: 'bigint', unsigned: true })
   id: string;
 
-  @Column({ type: 'varchar', length: 191, name: 'idempotency_key' })
+  @VarcharColumn(191, { name: 'idempotency_key' })
   idempotencyKey: string;
 
-  @Column({ type: 'varchar', length: 32 })
+  @VarcharColumn(32)
   kind: string;
 
-  @Column({ type: 'int', unsigned: true, name: 'mailing_id', nullable: true })
+  @OptionalIntColumn('mailing_id')
   mailingId: number | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'subscriber_id', nullable: true })
+  @OptionalIntColumn('subscriber_id')
   subscriberId: number | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'user_id', nullable: true })
+  @OptionalIntColumn('user_id')
   userId: number | null;
 
   /** Fixed for staff and test mail; subscribers' addresses are read at send time (an erased one is gone). */
-  @Column({ type: 'varchar', length: 254, nullable: true })
+  @VarcharColumn(254, { nullable: true })
   recipient: string | null;
 
   @Column({ type: 'enum', enum: outboxStates, default: 'queued' })
@@ -169,22 +177,22 @@ export class OutboxEntity {
   @Column({ type: 'smallint', unsigned: true, default: 0 })
   attempts: number;
 
-  @Column({ type: 'datetime', precision: 3, name: 'next_attempt_at' })
+  @InstantColumn('next_attempt_at')
   nextAttemptAt: Date;
 
-  @Column({ type: 'datetime', precision: 3, name: 'lease_until', nullable: true })
+  @OptionalInstantColumn('lease_until')
   leaseUntil: Date | null;
 
   @Column({ type: 'json', nullable: true })
   payload: OutboxPayload | null;
 
-  @Column({ type: 'varchar', length: 500, name: 'last_error', nullable: true })
+  @VarcharColumn(500, { name: 'last_error', nullable: true })
   lastError: string | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'created_at', default: () => 'CURRENT_TIMESTAMP(3)' })
+  @DefaultNowColumn('created_at')
   createdAt: Date;
 
-  @Column({ type: 'datetime', precision: 3, name: 'sent_at', nullable: true })
+  @OptionalInstantColumn('sent_at')
   sentAt: Date | null;
 }
 

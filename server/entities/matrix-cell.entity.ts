@@ -1,4 +1,12 @@
 import { Column, Entity, Index } from 'typeorm';
+import {
+  IntColumn,
+  OptionalIntColumn,
+  InstantColumn,
+  OptionalInstantColumn,
+  OptionalDayColumn,
+  VarcharColumn,
+} from './columns';
 import { EditedEntity } from './base-entities';
 import type { CellState } from '../../shared/domain/planning/matrix-cell-states';
 import { cellStates } from '../../shared/domain/planning/matrix-cell-states';
@@ -12,34 +20,34 @@ import { cellStates } from '../../shared/domain/planning/matrix-cell-states';
 @Index('ix_matrix_cells_tester_queue', ['testerId', 'state', 'dueDate'])
 @Index('ix_matrix_cells_roundup_state', ['roundupId', 'state'])
 export class MatrixCellEntity extends EditedEntity {
-  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+  @IntColumn('roundup_id')
   roundupId: number;
 
-  @Column({ type: 'int', unsigned: true, name: 'roundup_entry_id' })
+  @IntColumn('roundup_entry_id')
   entryId: number;
 
-  @Column({ type: 'int', unsigned: true, name: 'load_configuration_id' })
+  @IntColumn('load_configuration_id')
   loadConfigurationId: number;
 
   @Column({ type: 'enum', enum: cellStates, default: 'not-started' })
   state: CellState;
 
-  @Column({ type: 'int', unsigned: true, name: 'tester_id', nullable: true })
+  @OptionalIntColumn('tester_id')
   testerId: number | null;
 
-  @Column({ type: 'date', name: 'due_date', nullable: true, utc: true })
+  @OptionalDayColumn('due_date')
   dueDate: string | null;
 
-  @Column({ type: 'varchar', length: 500, nullable: true })
+  @VarcharColumn(500, { nullable: true })
   note: string | null;
 
   /** The run the editor chose to stand for this cell in results and charts. */
-  @Column({ type: 'int', unsigned: true, name: 'run_of_record_id', nullable: true })
+  @OptionalIntColumn('run_of_record_id')
   runOfRecordId: number | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'assigned_at', nullable: true })
+  @OptionalInstantColumn('assigned_at')
   assignedAt: Date | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'state_changed_at' })
+  @InstantColumn('state_changed_at')
   stateChangedAt: Date;
 }

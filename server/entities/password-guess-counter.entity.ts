@@ -1,4 +1,5 @@
 import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { InstantColumn, OptionalInstantColumn } from './columns';
 
 /**
  * Wrong passwords counted per account (e-mail) or per client address. The key is a SHA-256 of the kind and
@@ -15,13 +16,13 @@ export class PasswordGuessCounterEntity {
   @Column({ type: 'int', unsigned: true })
   failures: number;
 
-  @Column({ type: 'datetime', precision: 3, name: 'window_started_at' })
+  @InstantColumn('window_started_at')
   windowStartedAt: Date;
 
-  @Column({ type: 'datetime', precision: 3, name: 'locked_until', nullable: true })
+  @OptionalInstantColumn('locked_until')
   lockedUntil: Date | null;
 
   @Index('ix_password_guess_counters_updated')
-  @Column({ type: 'datetime', precision: 3, name: 'updated_at' })
+  @InstantColumn('updated_at')
   updatedAt: Date;
 }

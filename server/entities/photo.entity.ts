@@ -1,4 +1,5 @@
 import { Column, Entity, Index } from 'typeorm';
+import { IntColumn, VarcharColumn } from './columns';
 import { EditedEntity } from './base-entities';
 
 export const photoKinds = ['overview', 'power-delivery', 'heatsinks', 'thermal-image', 'other'] as const;
@@ -16,19 +17,19 @@ export interface PhotoDerivativeRecord {
 @Index('ix_photos_entry', ['entryId', 'position'])
 export class PhotoEntity extends EditedEntity {
   @Index('ix_photos_roundup')
-  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+  @IntColumn('roundup_id')
   roundupId: number;
 
-  @Column({ type: 'int', unsigned: true, name: 'roundup_entry_id' })
+  @IntColumn('roundup_entry_id')
   entryId: number;
 
   @Column({ type: 'enum', enum: photoKinds })
   kind: (typeof photoKinds)[number];
 
-  @Column({ type: 'varchar', length: 300, default: '' })
+  @VarcharColumn(300, { default: '' })
   caption: string;
 
-  @Column({ type: 'varchar', length: 300, name: 'alt_text' })
+  @VarcharColumn(300, { name: 'alt_text' })
   altText: string;
 
   @Column({ type: 'int', unsigned: true })
@@ -46,6 +47,6 @@ export class PhotoEntity extends EditedEntity {
   @Column({ type: 'json' })
   derivatives: PhotoDerivativeRecord[];
 
-  @Column({ type: 'int', unsigned: true, name: 'uploaded_by' })
+  @IntColumn('uploaded_by')
   uploadedBy: number;
 }

@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { OptionalIntColumn, InstantColumn, VarcharColumn } from './columns';
 
 /** A public URL's rendered body with its pre-compressed forms; the reader site serves these from memory. */
 @Entity({ name: 'published_pages' })
@@ -10,13 +11,13 @@ export class PublishedPageEntity {
   @PrimaryColumn({ type: 'varchar', length: 32 })
   variant: string;
 
-  @Column({ type: 'int', unsigned: true, name: 'roundup_id', nullable: true })
+  @OptionalIntColumn('roundup_id')
   roundupId: number | null;
 
-  @Column({ type: 'varchar', length: 100, name: 'content_type' })
+  @VarcharColumn(100, { name: 'content_type' })
   contentType: string;
 
-  @Column({ type: 'varchar', length: 64 })
+  @VarcharColumn(64)
   etag: string;
 
   @Column({ type: 'mediumblob' })
@@ -28,6 +29,6 @@ export class PublishedPageEntity {
   @Column({ type: 'mediumblob', name: 'body_brotli' })
   bodyBrotli: Buffer;
 
-  @Column({ type: 'datetime', precision: 3, name: 'updated_at' })
+  @InstantColumn('updated_at')
   updatedAt: Date;
 }

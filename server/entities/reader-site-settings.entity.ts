@@ -1,4 +1,5 @@
-import { Column, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { VarcharColumn } from './columns';
 
 /** The outlet's reader-site settings: one row (id 1), absent until an editor saves them. */
 @Entity({ name: 'reader_site_settings' })
@@ -6,11 +7,11 @@ export class ReaderSiteSettingsEntity {
   @PrimaryColumn({ type: 'tinyint', unsigned: true })
   id: number;
 
-  @Column({ type: 'varchar', length: 120, name: 'outlet_name' })
+  @VarcharColumn(120, { name: 'outlet_name' })
   outletName: string;
 
   /** Printed with every roundup's open data. */
-  @Column({ type: 'varchar', length: 300, name: 'open_data_licence' })
+  @VarcharColumn(300, { name: 'open_data_licence' })
   openDataLicence: string;
 
   @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })

@@ -1,4 +1,5 @@
 import { Column, Entity, Index } from 'typeorm';
+import { IntColumn, OptionalIntColumn, OptionalInstantColumn, VarcharColumn } from './columns';
 import { EditedEntity } from './base-entities';
 import type { ChartSettings } from '../../shared/domain/editorial/chart-data';
 
@@ -9,10 +10,10 @@ import type { ChartSettings } from '../../shared/domain/editorial/chart-data';
 @Entity({ name: 'roundup_charts' })
 @Index('uq_roundup_charts_key', ['roundupId', 'chartKey'], { unique: true })
 export class RoundupChartEntity extends EditedEntity {
-  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+  @IntColumn('roundup_id')
   roundupId: number;
 
-  @Column({ type: 'varchar', length: 40, name: 'chart_key' })
+  @VarcharColumn(40, { name: 'chart_key' })
   chartKey: string;
 
   @Column({ type: 'json' })
@@ -24,12 +25,12 @@ export class RoundupChartEntity extends EditedEntity {
   @Column({ type: 'char', length: 64, name: 'approved_hash', nullable: true })
   approvedHash: string | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'approved_by', nullable: true })
+  @OptionalIntColumn('approved_by')
   approvedBy: number | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'approved_at', nullable: true })
+  @OptionalInstantColumn('approved_at')
   approvedAt: Date | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'image_file_id', nullable: true })
+  @OptionalIntColumn('image_file_id')
   imageFileId: number | null;
 }

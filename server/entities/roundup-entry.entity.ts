@@ -1,4 +1,5 @@
 import { Column, Entity, Index } from 'typeorm';
+import { IntColumn, OptionalIntColumn } from './columns';
 import { RecordedEntity } from './base-entities';
 
 export type EntryKind = 'tested' | 'reference';
@@ -7,21 +8,21 @@ export type EntryKind = 'tested' | 'reference';
 @Entity({ name: 'roundup_entries' })
 @Index('uq_roundup_entries_product', ['roundupId', 'productId'], { unique: true })
 export class RoundupEntryEntity extends RecordedEntity {
-  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+  @IntColumn('roundup_id')
   roundupId: number;
 
-  @Column({ type: 'int', unsigned: true, name: 'product_id' })
+  @IntColumn('product_id')
   productId: number;
 
   @Column({ type: 'enum', enum: ['tested', 'reference'] })
   kind: EntryKind;
 
-  @Column({ type: 'int', unsigned: true, name: 'reference_roundup_id', nullable: true })
+  @OptionalIntColumn('reference_roundup_id')
   referenceRoundupId: number | null;
 
   @Column({ type: 'smallint', unsigned: true })
   position: number;
 
-  @Column({ type: 'int', unsigned: true, name: 'added_by', nullable: true })
+  @OptionalIntColumn('added_by')
   addedBy: number | null;
 }

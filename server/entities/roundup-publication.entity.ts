@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { IntColumn, OptionalIntColumn, InstantColumn } from './columns';
 
 export const publicationKinds = ['publication', 'update', 'correction'] as const;
 export type PublicationKind = (typeof publicationKinds)[number];
@@ -12,7 +13,7 @@ export class RoundupPublicationEntity {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
 
-  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+  @IntColumn('roundup_id')
   roundupId: number;
 
   @Column({ type: 'int', unsigned: true })
@@ -24,10 +25,10 @@ export class RoundupPublicationEntity {
   @Column({ type: 'text', nullable: true })
   note: string | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'published_at' })
+  @InstantColumn('published_at')
   publishedAt: Date;
 
-  @Column({ type: 'int', unsigned: true, name: 'published_by', nullable: true })
+  @OptionalIntColumn('published_by')
   publishedBy: number | null;
 
   @Column({ type: 'json' })

@@ -1,5 +1,6 @@
 import type { VerdictRubric } from '../../shared/schemas/analysis';
 import { Column, Entity } from 'typeorm';
+import { IntColumn, OptionalIntColumn, InstantColumn, OptionalDayColumn, VarcharColumn } from './columns';
 import { EditedEntity } from './base-entities';
 import type { RoundupState } from '../../shared/domain/planning/roundup-states';
 import { roundupStates } from '../../shared/domain/planning/roundup-states';
@@ -7,35 +8,35 @@ import { roundupStates } from '../../shared/domain/planning/roundup-states';
 /** A roundup: its plan (band, dates, bench profile) and its state, which later issues extend. */
 @Entity({ name: 'roundups' })
 export class RoundupEntity extends EditedEntity {
-  @Column({ type: 'varchar', length: 200 })
+  @VarcharColumn(200)
   title: string;
 
-  @Column({ type: 'varchar', length: 32 })
+  @VarcharColumn(32)
   category: string;
 
-  @Column({ type: 'varchar', length: 80 })
+  @VarcharColumn(80)
   platform: string;
 
   @Column({ type: 'enum', enum: roundupStates, default: 'planning' })
   state: RoundupState;
 
-  @Column({ type: 'int', unsigned: true, name: 'price_min_minor' })
+  @IntColumn('price_min_minor')
   priceMinMinor: number;
 
-  @Column({ type: 'int', unsigned: true, name: 'price_max_minor' })
+  @IntColumn('price_max_minor')
   priceMaxMinor: number;
 
   @Column({ type: 'char', length: 3 })
   currency: string;
 
-  @Column({ type: 'varchar', length: 8 })
+  @VarcharColumn(8)
   region: string;
 
-  @Column({ type: 'date', name: 'target_publish_date', nullable: true, utc: true })
+  @OptionalDayColumn('target_publish_date')
   targetPublishDate: string | null;
 
   /** IANA zone of the outlet for this roundup: due and return-by dates end at its midnight. */
-  @Column({ type: 'varchar', length: 64, name: 'time_zone' })
+  @VarcharColumn(64, { name: 'time_zone' })
   timeZone: string;
 
   /** The verdict rubric an editor set for this roundup; null means the engine's defaults. */
@@ -46,12 +47,12 @@ export class RoundupEntity extends EditedEntity {
   @Column({ type: 'boolean', name: 'open_data_raw_files', default: false })
   openDataRawFiles: boolean;
 
-  @Column({ type: 'int', unsigned: true, name: 'bench_profile_id', nullable: true })
+  @OptionalIntColumn('bench_profile_id')
   benchProfileId: number | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'created_by', nullable: true })
+  @OptionalIntColumn('created_by')
   createdBy: number | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'state_changed_at' })
+  @InstantColumn('state_changed_at')
   stateChangedAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, Entity, Index } from 'typeorm';
+import { IntColumn, VarcharColumn, DecimalColumn } from './columns';
 import { RecordedEntity } from './base-entities';
 
 /**
@@ -8,10 +9,10 @@ import { RecordedEntity } from './base-entities';
 @Entity({ name: 'run_analyses' })
 @Index('ix_run_analyses_run', ['testRunId', 'id'])
 export class RunAnalysisEntity extends RecordedEntity {
-  @Column({ type: 'int', unsigned: true, name: 'test_run_id' })
+  @IntColumn('test_run_id')
   testRunId: number;
 
-  @Column({ type: 'varchar', length: 40, name: 'engine_version' })
+  @VarcharColumn(40, { name: 'engine_version' })
   engineVersion: string;
 
   /** The mapping, options and rubric the engine was given. */
@@ -22,28 +23,28 @@ export class RunAnalysisEntity extends RecordedEntity {
   @Column({ type: 'json' })
   result: Record<string, unknown>;
 
-  @Column({ type: 'varchar', length: 30, nullable: true })
+  @VarcharColumn(30, { nullable: true })
   verdict: string | null;
 
-  @Column({ type: 'decimal', precision: 6, scale: 2, name: 'peak_c', nullable: true })
+  @DecimalColumn(6, 2, 'peak_c', { nullable: true })
   peakC: string | null;
 
-  @Column({ type: 'decimal', precision: 5, scale: 2, name: 'ambient_c', nullable: true })
+  @DecimalColumn(5, 2, 'ambient_c', { nullable: true })
   ambientC: string | null;
 
-  @Column({ type: 'decimal', precision: 6, scale: 2, name: 'delta_over_ambient_c', nullable: true })
+  @DecimalColumn(6, 2, 'delta_over_ambient_c', { nullable: true })
   deltaOverAmbientC: string | null;
 
-  @Column({ type: 'decimal', precision: 6, scale: 2, name: 'normalised_peak_c', nullable: true })
+  @DecimalColumn(6, 2, 'normalised_peak_c', { nullable: true })
   normalisedPeakC: string | null;
 
-  @Column({ type: 'decimal', precision: 9, scale: 1, name: 'throttled_s', nullable: true })
+  @DecimalColumn(9, 1, 'throttled_s', { nullable: true })
   throttledS: string | null;
 
   /** QA flag codes, comma-separated, for filtering; the flags themselves are in `result`. */
-  @Column({ type: 'varchar', length: 500, name: 'flag_codes', default: '' })
+  @VarcharColumn(500, { name: 'flag_codes', default: '' })
   flagCodes: string;
 
-  @Column({ type: 'int', unsigned: true, name: 'created_by' })
+  @IntColumn('created_by')
   createdBy: number;
 }

@@ -1,4 +1,5 @@
 import { Column, Entity, Index } from 'typeorm';
+import { IntColumn, OptionalIntColumn, OptionalDayColumn, VarcharColumn } from './columns';
 import { EditedEntity } from './base-entities';
 import type { SampleSource, SampleStatus } from '../../shared/schemas/samples';
 import { sampleSources, sampleStatuses } from '../../shared/schemas/samples';
@@ -7,41 +8,41 @@ import { sampleSources, sampleStatuses } from '../../shared/schemas/samples';
 @Entity({ name: 'samples' })
 @Index('ix_samples_loans', ['source', 'status', 'returnBy'])
 export class SampleEntity extends EditedEntity {
-  @Column({ type: 'int', unsigned: true, name: 'roundup_entry_id', unique: true })
+  @IntColumn('roundup_entry_id', { unique: true })
   entryId: number;
 
   @Column({ type: 'enum', enum: sampleSources, nullable: true })
   source: SampleSource | null;
 
-  @Column({ type: 'varchar', length: 120, name: 'order_reference', nullable: true })
+  @VarcharColumn(120, { name: 'order_reference', nullable: true })
   orderReference: string | null;
 
   /** Integer minor units of `costCurrency`. */
-  @Column({ type: 'int', unsigned: true, name: 'cost_minor', nullable: true })
+  @OptionalIntColumn('cost_minor')
   costMinor: number | null;
 
   @Column({ type: 'char', length: 3, name: 'cost_currency', nullable: true })
   costCurrency: string | null;
 
-  @Column({ type: 'varchar', length: 200, name: 'vendor_contact', nullable: true })
+  @VarcharColumn(200, { name: 'vendor_contact', nullable: true })
   vendorContact: string | null;
 
-  @Column({ type: 'date', name: 'return_by', nullable: true, utc: true })
+  @OptionalDayColumn('return_by')
   returnBy: string | null;
 
-  @Column({ type: 'date', name: 'received_on', nullable: true, utc: true })
+  @OptionalDayColumn('received_on')
   receivedOn: string | null;
 
-  @Column({ type: 'date', name: 'returned_on', nullable: true, utc: true })
+  @OptionalDayColumn('returned_on')
   returnedOn: string | null;
 
-  @Column({ type: 'varchar', length: 80, name: 'serial_number', nullable: true })
+  @VarcharColumn(80, { name: 'serial_number', nullable: true })
   serialNumber: string | null;
 
-  @Column({ type: 'varchar', length: 1000, name: 'condition_notes', nullable: true })
+  @VarcharColumn(1000, { name: 'condition_notes', nullable: true })
   conditionNotes: string | null;
 
-  @Column({ type: 'varchar', length: 80, name: 'firmware_on_arrival', nullable: true })
+  @VarcharColumn(80, { name: 'firmware_on_arrival', nullable: true })
   firmwareOnArrival: string | null;
 
   @Column({ type: 'enum', enum: sampleStatuses, default: 'ordered' })

@@ -1,4 +1,5 @@
-import { Column, CreateDateColumn, Entity, Index, ManyToOne, JoinColumn, PrimaryColumn } from 'typeorm';
+import { CreateDateColumn, Entity, Index, ManyToOne, JoinColumn, PrimaryColumn } from 'typeorm';
+import { IntColumn, InstantColumn, VarcharColumn } from './columns';
 import { UserEntity } from './user.entity';
 
 @Entity({ name: 'sessions' })
@@ -7,7 +8,7 @@ export class SessionEntity {
   id: string;
 
   @Index()
-  @Column({ type: 'int', unsigned: true, name: 'user_id' })
+  @IntColumn('user_id')
   userId: number;
 
   @ManyToOne(() => UserEntity, { onDelete: 'CASCADE' })
@@ -15,15 +16,15 @@ export class SessionEntity {
   user?: UserEntity;
 
   @Index()
-  @Column({ type: 'datetime', precision: 3, name: 'expires_at' })
+  @InstantColumn('expires_at')
   expiresAt: Date;
 
   @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
   createdAt: Date;
 
-  @Column({ type: 'varchar', length: 255, name: 'user_agent', nullable: true })
+  @VarcharColumn(255, { name: 'user_agent', nullable: true })
   userAgent: string | null;
 
-  @Column({ type: 'varchar', length: 64, name: 'ip_address', nullable: true })
+  @VarcharColumn(64, { name: 'ip_address', nullable: true })
   ipAddress: string | null;
 }

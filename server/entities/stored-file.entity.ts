@@ -1,11 +1,12 @@
 import { Column, Entity, Index } from 'typeorm';
+import { IntColumn, VarcharColumn } from './columns';
 import { RecordedEntity } from './base-entities';
 
 /** An uploaded file kept byte for byte in the file store, with its SHA-256. Never edited. */
 @Entity({ name: 'stored_files' })
 export class StoredFileEntity extends RecordedEntity {
   @Index('uq_stored_files_key', { unique: true })
-  @Column({ type: 'varchar', length: 512, name: 'storage_key' })
+  @VarcharColumn(512, { name: 'storage_key' })
   storageKey: string;
 
   @Index('ix_stored_files_sha256')
@@ -16,12 +17,12 @@ export class StoredFileEntity extends RecordedEntity {
   @Column({ type: 'bigint', unsigned: true, name: 'byte_size' })
   byteSize: string;
 
-  @Column({ type: 'varchar', length: 100, name: 'content_type' })
+  @VarcharColumn(100, { name: 'content_type' })
   contentType: string;
 
-  @Column({ type: 'varchar', length: 255, name: 'original_name' })
+  @VarcharColumn(255, { name: 'original_name' })
   originalName: string;
 
-  @Column({ type: 'int', unsigned: true, name: 'uploaded_by' })
+  @IntColumn('uploaded_by')
   uploadedBy: number;
 }

@@ -1,4 +1,12 @@
 import { Column, Entity, Index } from 'typeorm';
+import {
+  IntColumn,
+  OptionalIntColumn,
+  InstantColumn,
+  OptionalInstantColumn,
+  VarcharColumn,
+  DecimalColumn,
+} from './columns';
 import { EditedEntity } from './base-entities';
 
 export const runSources = ['logger', 'manual'] as const;
@@ -8,27 +16,27 @@ export const runReviewStates = ['pending', 'accepted', 'sent-back'] as const;
 @Entity({ name: 'test_runs' })
 @Index('ix_test_runs_cell', ['matrixCellId', 'submittedAt'])
 export class TestRunEntity extends EditedEntity {
-  @Column({ type: 'int', unsigned: true, name: 'matrix_cell_id' })
+  @IntColumn('matrix_cell_id')
   matrixCellId: number;
 
   @Index('ix_test_runs_roundup')
-  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+  @IntColumn('roundup_id')
   roundupId: number;
 
   @Index('ix_test_runs_tester')
-  @Column({ type: 'int', unsigned: true, name: 'tester_id' })
+  @IntColumn('tester_id')
   testerId: number;
 
-  @Column({ type: 'int', unsigned: true, name: 'bench_id', nullable: true })
+  @OptionalIntColumn('bench_id')
   benchId: number | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'bench_booking_id', nullable: true })
+  @OptionalIntColumn('bench_booking_id')
   benchBookingId: number | null;
 
-  @Column({ type: 'varchar', length: 100, name: 'firmware_version' })
+  @VarcharColumn(100, { name: 'firmware_version' })
   firmwareVersion: string;
 
-  @Column({ type: 'datetime', precision: 3, name: 'started_at' })
+  @InstantColumn('started_at')
   startedAt: Date;
 
   @Column({ type: 'text', nullable: true })
@@ -37,18 +45,18 @@ export class TestRunEntity extends EditedEntity {
   @Column({ type: 'enum', enum: runSources })
   source: (typeof runSources)[number];
 
-  @Column({ type: 'int', unsigned: true, name: 'logger_file_id', nullable: true })
+  @OptionalIntColumn('logger_file_id')
   loggerFileId: number | null;
 
   /** DECIMAL(5,1), arrives as a string. */
-  @Column({ type: 'decimal', precision: 5, scale: 1, name: 'manual_peak_c', nullable: true })
+  @DecimalColumn(5, 1, 'manual_peak_c', { nullable: true })
   manualPeakC: string | null;
 
   /** DECIMAL(4,1), arrives as a string. */
-  @Column({ type: 'decimal', precision: 4, scale: 1, name: 'manual_ambient_c', nullable: true })
+  @DecimalColumn(4, 1, 'manual_ambient_c', { nullable: true })
   manualAmbientC: string | null;
 
-  @Column({ type: 'varchar', length: 500, name: 'outside_booking_reason', nullable: true })
+  @VarcharColumn(500, { name: 'outside_booking_reason', nullable: true })
   outsideBookingReason: string | null;
 
   @Column({ type: 'enum', enum: runReviewStates, name: 'review_state', default: 'pending' })
@@ -57,12 +65,12 @@ export class TestRunEntity extends EditedEntity {
   @Column({ type: 'text', name: 'review_reason', nullable: true })
   reviewReason: string | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'reviewed_by', nullable: true })
+  @OptionalIntColumn('reviewed_by')
   reviewedBy: number | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'reviewed_at', nullable: true })
+  @OptionalInstantColumn('reviewed_at')
   reviewedAt: Date | null;
 
-  @Column({ type: 'datetime', precision: 3, name: 'submitted_at' })
+  @InstantColumn('submitted_at')
   submittedAt: Date;
 }

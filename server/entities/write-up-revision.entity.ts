@@ -1,4 +1,6 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { EditedEntity } from './base-entities';
+import { IntColumn, OptionalIntColumn, VarcharColumn } from './columns';
 import type { WriteUpDocument } from '../../shared/schemas/write-up-document';
 
 export const revisionKinds = ['prefill', 'save', 'restore', 'refused-copy'] as const;
@@ -10,11 +12,8 @@ export type RevisionKind = (typeof revisionKinds)[number];
  */
 @Entity({ name: 'write_up_revisions' })
 @Index('ix_write_up_revisions_section', ['sectionId', 'id'])
-export class WriteUpRevisionEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
-  @Column({ type: 'int', unsigned: true, name: 'section_id' })
+export class WriteUpRevisionEntity extends EditedEntity {
+  @IntColumn('section_id')
   sectionId: number;
 
   @Column({ type: 'enum', enum: revisionKinds })
@@ -24,24 +23,18 @@ export class WriteUpRevisionEntity {
   @Column({ type: 'int', unsigned: true, nullable: true })
   version: number | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'based_on_version', nullable: true })
+  @OptionalIntColumn('based_on_version')
   basedOnVersion: number | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'restored_from_id', nullable: true })
+  @OptionalIntColumn('restored_from_id')
   restoredFromId: number | null;
 
-  @Column({ type: 'varchar', length: 200 })
+  @VarcharColumn(200)
   title: string;
 
   @Column({ type: 'json' })
   content: WriteUpDocument;
 
-  @Column({ type: 'int', unsigned: true, name: 'author_id', nullable: true })
+  @OptionalIntColumn('author_id')
   authorId: number | null;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

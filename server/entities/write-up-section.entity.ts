@@ -1,4 +1,6 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, Index } from 'typeorm';
+import { EditedEntity } from './base-entities';
+import { IntColumn, OptionalIntColumn, InstantColumn, VarcharColumn } from './columns';
 import {
   sectionKinds,
   sectionReviewStates,
@@ -14,27 +16,24 @@ import type { WriteUpDocument } from '../../shared/schemas/write-up-document';
 @Entity({ name: 'write_up_sections' })
 @Index('uq_write_up_sections_key', ['roundupId', 'sectionKey'], { unique: true })
 @Index('ix_write_up_sections_roundup', ['roundupId', 'position'])
-export class WriteUpSectionEntity {
-  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
-  id: number;
-
-  @Column({ type: 'int', unsigned: true, name: 'roundup_id' })
+export class WriteUpSectionEntity extends EditedEntity {
+  @IntColumn('roundup_id')
   roundupId: number;
 
   @Column({ type: 'enum', enum: sectionKinds })
   kind: SectionKind;
 
-  @Column({ type: 'int', unsigned: true, name: 'roundup_entry_id', nullable: true })
+  @OptionalIntColumn('roundup_entry_id')
   entryId: number | null;
 
   /** `introduction`, `methodology`, `conclusion` or `entry-<id>`: one section per key and roundup. */
-  @Column({ type: 'varchar', length: 40, name: 'section_key' })
+  @VarcharColumn(40, { name: 'section_key' })
   sectionKey: string;
 
   @Column({ type: 'smallint', unsigned: true })
   position: number;
 
-  @Column({ type: 'varchar', length: 200 })
+  @VarcharColumn(200)
   title: string;
 
   @Column({ type: 'json' })
@@ -46,18 +45,12 @@ export class WriteUpSectionEntity {
   @Column({ type: 'enum', enum: sectionReviewStates, name: 'review_state', default: 'drafting' })
   reviewState: SectionReviewState;
 
-  @Column({ type: 'datetime', precision: 3, name: 'review_state_changed_at' })
+  @InstantColumn('review_state_changed_at')
   reviewStateChangedAt: Date;
 
-  @Column({ type: 'int', unsigned: true, name: 'review_state_changed_by', nullable: true })
+  @OptionalIntColumn('review_state_changed_by')
   reviewStateChangedBy: number | null;
 
-  @Column({ type: 'int', unsigned: true, name: 'updated_by', nullable: true })
+  @OptionalIntColumn('updated_by')
   updatedBy: number | null;
-
-  @CreateDateColumn({ type: 'datetime', precision: 3, name: 'created_at' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ type: 'datetime', precision: 3, name: 'updated_at' })
-  updatedAt: Date;
 }

@@ -10,7 +10,7 @@ import type {
 import { conflict, notFound } from '../errors';
 import { recordAudit } from '../services/audit.service';
 import { archivedWhere, refusingDuplicates } from './database-errors';
-import type { FieldChanges } from './field-changes';
+import { fieldChanges, type FieldChanges } from './field-changes';
 import type { CurrentUser } from '../../shared/schemas/auth';
 
 /** What one edit of a record writes: the columns to set and, for the audit log, each field's value before and after. */
@@ -110,6 +110,21 @@ export class NamedRecords<E extends ObjectLiteral & { id: number }> {
   }
 }
 
+/** What sets one kind of archivable record apart: its table, its words, how staff see it and which fields they edit. */
+export interface ArchivableKind<E, Dto> {
+  entity: EntityTarget<E>;
+  /** The audit subject type, e.g. `bench_profile`. */
+  subject: string;
+  /** The record in words, e.g. `bench profile`. */
+  label: string;
+  toDto: (row: E, roundupCount: number) => Dto;
+  roundupCounts: (manager: EntityManager, ids: number[]) => Promise<Map<number, number>>;
+  /** The fields staff edit, in the order the audit log lists their changes. */
+  fields: readonly (keyof Dto & string)[];
+  /** The fields kept as DECIMAL, with their scale: written as text with that many decimals. */
+  decimalScales: Partial<Record<keyof Dto & string, number>>;
+}
+
 /**
  * Named records staff archive instead of deleting (bench profiles, load configurations), each shown with the number
  * of roundups that use it. Their services extend this class.
@@ -118,15 +133,11 @@ export abstract class ArchivableNamedRecords<
   E extends ObjectLiteral & { id: number; name: string; archivedAt: Date | null },
   Dto extends { archived: boolean },
 > extends NamedRecords<E> {
-  constructor(
-    dataSource: DataSource,
-    entity: EntityTarget<E>,
-    subject: string,
-    label: string,
-    private readonly toDto: (row: E, roundupCount: number) => Dto,
-    private readonly roundupCounts: (manager: EntityManager, ids: number[]) => Promise<Map<number, number>>,
-  ) {
-    super(dataSource, entity, subject, label);
+  private readonly kind: ArchivableKind<E, Dto>;
+
+  constructor(dataSource: DataSource, kind: ArchivableKind<E, Dto>) {
+    super(dataSource, kind.entity, kind.subject, kind.label);
+    this.kind = kind;
   }
 
   /** Every record by name, hiding, including or showing only the archived ones. */
@@ -136,44 +147,68 @@ export abstract class ArchivableNamedRecords<
       where: archivedWhere(query.archived) as FindOptionsWhere<E>,
       order: { name: 'ASC' } as FindOptionsOrder<E>,
     });
-    const counts = await this.roundupCounts(
+    const counts = await this.kind.roundupCounts(
       manager,
       rows.map((row) => row.id),
     );
-    return rows.map((row) => this.toDto(row, counts.get(row.id) ?? 0));
+    return rows.map((row) => this.kind.toDto(row, counts.get(row.id) ?? 0));
   }
 
   async get(id: number, manager: EntityManager = this.dataSource.manager): Promise<Dto> {
     const row = await manager.getRepository(this.entity).findOneBy({ id } as FindOptionsWhere<E>);
     if (!row) throw this.notFound();
-    return this.toDto(row, (await this.roundupCounts(manager, [id])).get(id) ?? 0);
+    return this.kind.toDto(row, (await this.kind.roundupCounts(manager, [id])).get(id) ?? 0);
   }
 
-  /** Creates a record, audits it with its name, and returns it as staff see it. */
-  protected createNamed(actor: CurrentUser, row: QueryDeepPartialEntity<E>, name: string): Promise<Dto> {
-    return this.createAudited(actor, row, { name }, (id, manager) => this.get(id, manager));
+  /** The columns for the edited fields `values` sets, decimals as text with their stored scale. */
+  private columns(values: Partial<Record<string, unknown>>): QueryDeepPartialEntity<E> {
+    const columns: Record<string, unknown> = {};
+    for (const field of this.kind.fields) {
+      const value = values[field];
+      if (value === undefined) continue;
+      const scale = this.kind.decimalScales[field];
+      columns[field] = scale !== undefined && typeof value === 'number' ? value.toFixed(scale) : value;
+    }
+    return columns as QueryDeepPartialEntity<E>;
+  }
+
+  /** Creates a record from the fields of the form (`fixed` overrides some), audits it with its name, returns it. */
+  protected createFromInput(
+    actor: CurrentUser,
+    input: { name: string },
+    fixed: QueryDeepPartialEntity<E> = {},
+  ): Promise<Dto> {
+    const row = { ...this.columns(input), ...fixed, createdBy: actor.id } as QueryDeepPartialEntity<E>;
+    return this.createAudited(actor, row, { name: input.name }, (id, manager) => this.get(id, manager));
   }
 
   /**
-   * Edits a record: `edit` gets it as staff see it and says which columns change; `archived` archives or restores
-   * it; `afterChange` runs in the same transaction when anything changed.
+   * Edits a record with the fields `input` sets; `settle` may check or adjust the record as it would be afterwards
+   * (the merged values). `archived` archives or restores it; `afterChange` runs in the same transaction when anything
+   * changed.
    */
-  protected updateNamed(
+  protected updateFromInput(
     actor: CurrentUser,
     id: number,
-    archived: boolean | undefined,
-    edit: (before: Dto) => { patch: QueryDeepPartialEntity<E>; changes: FieldChanges },
+    input: { archived?: boolean },
     afterChange: (manager: EntityManager, changes: FieldChanges) => Promise<void>,
+    settle: (merged: Dto) => void = () => {},
   ): Promise<Dto> {
     return this.updateAudited(
       actor,
       id,
       (current) => {
-        const before = this.toDto(current, 0);
-        const { patch, changes } = edit(before);
-        if (archived !== undefined && archived !== before.archived) {
-          (patch as { archivedAt?: Date | null }).archivedAt = archived ? new Date() : null;
-          changes.archived = { from: before.archived, to: archived };
+        const before = this.kind.toDto(current, 0);
+        const set = Object.fromEntries(Object.entries(input).filter(([, value]) => value !== undefined));
+        const merged = { ...before, ...set } as Dto;
+        settle(merged);
+        const changes = fieldChanges(before, merged, this.kind.fields);
+        const patch = this.columns(
+          Object.fromEntries(Object.keys(changes).map((key) => [key, merged[key as keyof Dto]])),
+        );
+        if (input.archived !== undefined && input.archived !== before.archived) {
+          (patch as { archivedAt?: Date | null }).archivedAt = input.archived ? new Date() : null;
+          changes.archived = { from: before.archived, to: input.archived };
         }
         return { patch, changes, afterChange: (manager: EntityManager) => afterChange(manager, changes) };
       },

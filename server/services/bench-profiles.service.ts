@@ -1,18 +1,14 @@
 import type { DataSource } from 'typeorm';
-import type { z } from 'zod';
 import { BenchProfileEntity } from '../entities/bench-profile.entity';
 import { ArchivableNamedRecords } from '../lib/named-records';
 import { benchProfileRoundupCounts, toBenchProfileDto } from '../mappers/bench-profile';
 import { recordSharedPlanChange } from '../lib/roundup-audit';
 import type {
   BenchProfile,
-  createBenchProfileRequestSchema,
-  updateBenchProfileRequestSchema,
+  ParsedCreateBenchProfileRequest,
+  ParsedUpdateBenchProfileRequest,
 } from '../../shared/schemas/bench-profiles';
 import type { CurrentUser } from '../../shared/schemas/auth';
-
-type CreateInput = z.output<typeof createBenchProfileRequestSchema>;
-type UpdateInput = z.output<typeof updateBenchProfileRequestSchema>;
 
 export class BenchProfilesService extends ArchivableNamedRecords<BenchProfileEntity, BenchProfile> {
   constructor(dataSource: DataSource) {
@@ -39,7 +35,7 @@ export class BenchProfilesService extends ArchivableNamedRecords<BenchProfileEnt
     });
   }
 
-  create(actor: CurrentUser, input: CreateInput): Promise<BenchProfile> {
+  create(actor: CurrentUser, input: ParsedCreateBenchProfileRequest): Promise<BenchProfile> {
     return this.createFromInput(actor, input);
   }
 
@@ -47,7 +43,7 @@ export class BenchProfilesService extends ArchivableNamedRecords<BenchProfileEnt
    * Edits a profile. The profile is part of the plan of every roundup that uses it, so each such roundup still
    * in planning or on the bench gets a history entry too.
    */
-  update(actor: CurrentUser, id: number, input: UpdateInput): Promise<BenchProfile> {
+  update(actor: CurrentUser, id: number, input: ParsedUpdateBenchProfileRequest): Promise<BenchProfile> {
     return this.updateFromInput(actor, id, input, (manager, changes) =>
       recordSharedPlanChange(manager, actor, { benchProfileId: id }, 'roundup.bench_profile_edited', {
         benchProfileId: id,

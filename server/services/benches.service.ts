@@ -1,5 +1,4 @@
 import { In, LessThan, MoreThan, type DataSource, type EntityManager } from 'typeorm';
-import type { z } from 'zod';
 import { BenchBookingCellEntity } from '../entities/bench-booking-cell.entity';
 import { BenchBookingEntity } from '../entities/bench-booking.entity';
 import { BenchProfileEntity } from '../entities/bench-profile.entity';
@@ -18,30 +17,23 @@ import { BenchMaintenanceEntryEntity } from '../entities/bench-maintenance-entry
 import { calibrationOverdue, nextCalibrationDue } from '../../shared/domain/planning/calibration';
 import type {
   BenchDetail,
-  createInstrumentRequestSchema,
-  createMaintenanceRequestSchema,
   Instrument,
   MaintenanceEntry,
-  updateInstrumentRequestSchema,
+  ParsedCreateInstrumentRequest,
+  ParsedCreateMaintenanceRequest,
+  ParsedUpdateInstrumentRequest,
 } from '../../shared/schemas/bench-detail';
 import { bookableStates, cellStateLabels } from '../../shared/domain/planning/matrix-cell-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type {
   Bench,
   Booking,
-  createBenchRequestSchema,
-  createBookingRequestSchema,
-  updateBenchRequestSchema,
+  ParsedCreateBenchRequest,
+  ParsedCreateBookingRequest,
+  ParsedUpdateBenchRequest,
 } from '../../shared/schemas/benches';
 import type { PersonRef } from '../../shared/schemas/planning-fields';
 import { productDisplayName } from '../../shared/domain/planning/product-display-name';
-
-type CreateBenchInput = z.output<typeof createBenchRequestSchema>;
-type UpdateBenchInput = z.output<typeof updateBenchRequestSchema>;
-type CreateBookingInput = z.output<typeof createBookingRequestSchema>;
-type CreateInstrumentInput = z.output<typeof createInstrumentRequestSchema>;
-type UpdateInstrumentInput = z.output<typeof updateInstrumentRequestSchema>;
-type CreateMaintenanceInput = z.output<typeof createMaintenanceRequestSchema>;
 
 const DAY_MS = 86_400_000;
 
@@ -157,7 +149,7 @@ export class BenchesService {
     }
   }
 
-  create(actor: CurrentUser, input: CreateBenchInput): Promise<Bench> {
+  create(actor: CurrentUser, input: ParsedCreateBenchRequest): Promise<Bench> {
     return this.records.createAudited(
       actor,
       { ...input, active: true },
@@ -167,7 +159,7 @@ export class BenchesService {
     );
   }
 
-  update(actor: CurrentUser, id: number, input: UpdateBenchInput): Promise<Bench> {
+  update(actor: CurrentUser, id: number, input: ParsedUpdateBenchRequest): Promise<Bench> {
     return this.records.updateAudited(
       actor,
       id,
@@ -256,7 +248,7 @@ export class BenchesService {
    * bench waits until the first commits and then sees its booking in the overlap check (READ COMMITTED, so
    * the check reads the latest committed rows rather than an older snapshot).
    */
-  async book(actor: CurrentUser, benchId: number, input: CreateBookingInput): Promise<Booking> {
+  async book(actor: CurrentUser, benchId: number, input: ParsedCreateBookingRequest): Promise<Booking> {
     const startsAt = new Date(input.startsAt);
     const endsAt = new Date(input.endsAt);
     if (endsAt.getTime() <= Date.now()) {
@@ -454,7 +446,7 @@ export class BenchesService {
     };
   }
 
-  async addInstrument(actor: CurrentUser, benchId: number, input: CreateInstrumentInput): Promise<Instrument> {
+  async addInstrument(actor: CurrentUser, benchId: number, input: ParsedCreateInstrumentRequest): Promise<Instrument> {
     return this.dataSource.transaction(async (manager) => {
       await this.lockBench(manager, benchId);
       const { identifiers } = await manager.getRepository(BenchInstrumentEntity).insert({ ...input, benchId });
@@ -476,7 +468,7 @@ export class BenchesService {
     actor: CurrentUser,
     benchId: number,
     instrumentId: number,
-    input: UpdateInstrumentInput,
+    input: ParsedUpdateInstrumentRequest,
   ): Promise<Instrument> {
     return this.dataSource.transaction(async (manager) => {
       await this.lockBench(manager, benchId);
@@ -498,7 +490,11 @@ export class BenchesService {
     });
   }
 
-  async addMaintenance(actor: CurrentUser, benchId: number, input: CreateMaintenanceInput): Promise<MaintenanceEntry> {
+  async addMaintenance(
+    actor: CurrentUser,
+    benchId: number,
+    input: ParsedCreateMaintenanceRequest,
+  ): Promise<MaintenanceEntry> {
     if (input.doneOn > new Date().toISOString().slice(0, 10)) {
       throw invalid('Log maintenance once it is done.', { doneOn: 'The day cannot be in the future.' });
     }

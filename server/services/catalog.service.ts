@@ -19,21 +19,17 @@ import {
 import { isDuplicateKey } from '../lib/database-errors';
 import {
   createProductRequestSchema,
-  type createPriceRequestSchema,
   type Price,
   type Product,
   type ProductDetail,
   type ProductInput,
   type ProductList,
-  type productListQuerySchema,
   type UpdateProductRequest,
+  type ParsedProductListQuery,
+  type ParsedCreatePriceRequest,
 } from '../../shared/schemas/catalog';
 import type { CurrentUser } from '../../shared/schemas/auth';
-import type { z } from 'zod';
 import { productDisplayName } from '../../shared/domain/planning/product-display-name';
-
-type ListQuery = z.output<typeof productListQuerySchema>;
-type PriceInput = z.output<typeof createPriceRequestSchema>;
 
 export const makerModelTaken = () =>
   conflict('product_exists', 'The catalog already has a product with this maker and model.', {
@@ -50,7 +46,7 @@ export class CatalogService {
    * Filters in SQL, then sorts and pages in memory: a review outlet's catalog is hundreds to a few thousand
    * boards, and sorting by the latest regional price needs the price rule applied first.
    */
-  async list(query: ListQuery): Promise<ProductList> {
+  async list(query: ParsedProductListQuery): Promise<ProductList> {
     const manager = this.dataSource.manager;
     const qb = manager.getRepository(ProductEntity).createQueryBuilder('p');
     if (query.archived === 'exclude') qb.andWhere('p.archivedAt IS NULL');
@@ -248,7 +244,7 @@ export class CatalogService {
   }
 
   /** Adds a price to the history. Earlier prices stay; the latest-price rule decides which one counts. */
-  async addPrice(actor: CurrentUser, productId: number, input: PriceInput): Promise<Price> {
+  async addPrice(actor: CurrentUser, productId: number, input: ParsedCreatePriceRequest): Promise<Price> {
     return this.dataSource.transaction(async (manager) => {
       const product = await manager.getRepository(ProductEntity).findOneBy({ id: productId });
       if (!product) throw notFound('That product');
@@ -305,7 +301,7 @@ export class CatalogService {
   }
 }
 
-function productComparator(query: ListQuery): (a: Product, b: Product) => number {
+function productComparator(query: ParsedProductListQuery): (a: Product, b: Product) => number {
   const direction = query.direction === 'desc' ? -1 : 1;
   const value = (product: Product): string | number | null => {
     switch (query.sort) {

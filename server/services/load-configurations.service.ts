@@ -1,5 +1,4 @@
 import { In, type DataSource, type EntityManager } from 'typeorm';
-import type { z } from 'zod';
 import { LoadConfigurationEntity } from '../entities/load-configuration.entity';
 import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configuration.entity';
 import { invalid } from '../errors';
@@ -8,14 +7,11 @@ import type { FieldChanges } from '../lib/field-changes';
 import { loadConfigurationRoundupCounts, toLoadConfigurationDto } from '../mappers/load-configuration';
 import { recordSharedPlanChange } from '../lib/roundup-audit';
 import type {
-  createLoadConfigurationRequestSchema,
   LoadConfiguration,
-  updateLoadConfigurationRequestSchema,
+  ParsedCreateLoadConfigurationRequest,
+  ParsedUpdateLoadConfigurationRequest,
 } from '../../shared/schemas/load-configurations';
 import type { CurrentUser } from '../../shared/schemas/auth';
-
-type CreateInput = z.output<typeof createLoadConfigurationRequestSchema>;
-type UpdateInput = z.output<typeof updateLoadConfigurationRequestSchema>;
 
 export class LoadConfigurationsService extends ArchivableNamedRecords<LoadConfigurationEntity, LoadConfiguration> {
   constructor(dataSource: DataSource) {
@@ -39,14 +35,14 @@ export class LoadConfigurationsService extends ArchivableNamedRecords<LoadConfig
     });
   }
 
-  create(actor: CurrentUser, input: CreateInput): Promise<LoadConfiguration> {
+  create(actor: CurrentUser, input: ParsedCreateLoadConfigurationRequest): Promise<LoadConfiguration> {
     return this.createFromInput(actor, input, {
       fixedClockMhz: input.settingsMode === 'fixed' ? input.fixedClockMhz : null,
     });
   }
 
   /** Edits a configuration; roundups in planning or on the bench that use it get a history entry too. */
-  update(actor: CurrentUser, id: number, input: UpdateInput): Promise<LoadConfiguration> {
+  update(actor: CurrentUser, id: number, input: ParsedUpdateLoadConfigurationRequest): Promise<LoadConfiguration> {
     return this.updateFromInput(
       actor,
       id,

@@ -1,5 +1,4 @@
 import { In, type DataSource } from 'typeorm';
-import type { z } from 'zod';
 import { BenchBookingCellEntity } from '../entities/bench-booking-cell.entity';
 import { LoadConfigurationEntity } from '../entities/load-configuration.entity';
 import { MatrixCellEntity } from '../entities/matrix-cell.entity';
@@ -23,11 +22,9 @@ import {
 } from '../../shared/domain/planning/matrix-cell-states';
 import { roundupStateLabels } from '../../shared/domain/planning/roundup-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
-import type { assignCellsRequestSchema, MatrixCell, RoundupMatrix } from '../../shared/schemas/matrix';
+import type { MatrixCell, ParsedAssignCellsRequest, RoundupMatrix } from '../../shared/schemas/matrix';
 import type { ProductBrief } from '../../shared/schemas/catalog';
 import type { PersonRef } from '../../shared/schemas/planning-fields';
-
-type AssignInput = z.output<typeof assignCellsRequestSchema>;
 
 /** The test matrix: products × load configurations, assignments and cell moves. */
 export class MatrixService {
@@ -102,7 +99,7 @@ export class MatrixService {
    * Assigns cells and whole rows to one tester with a due date. Named cells must be assignable (not started,
    * assigned or needs retest) or nothing changes; whole rows take only their assignable cells.
    */
-  async assign(actor: CurrentUser, roundupId: number, input: AssignInput): Promise<MatrixCell[]> {
+  async assign(actor: CurrentUser, roundupId: number, input: ParsedAssignCellsRequest): Promise<MatrixCell[]> {
     return this.dataSource.transaction(async (manager) => {
       const roundup = await lockRoundup(manager, roundupId);
       assertPlanEditable(roundup);

@@ -1,6 +1,5 @@
 import { createHash } from 'node:crypto';
 import type { DataSource } from 'typeorm';
-import type { z } from 'zod';
 import { PhotoEntity, type PhotoDerivativeRecord } from '../entities/photo.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { AppError, invalid, notFound } from '../errors';
@@ -10,15 +9,11 @@ import type { FileStore } from '../storage/file-store';
 import { recordAudit } from './audit.service';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type {
+  ParsedPhotoUploadFields,
+  ParsedReorderPhotosRequest,
+  ParsedUpdatePhotoRequest,
   Photo,
-  photoUploadFieldsSchema,
-  reorderPhotosRequestSchema,
-  updatePhotoRequestSchema,
 } from '../../shared/schemas/photos';
-
-type UploadFields = z.output<typeof photoUploadFieldsSchema>;
-type UpdateFields = z.output<typeof updatePhotoRequestSchema>;
-type ReorderInput = z.output<typeof reorderPhotosRequestSchema>;
 
 const contentTypes = { webp: 'image/webp', jpeg: 'image/jpeg' } as const;
 
@@ -45,7 +40,7 @@ export class PhotosService {
     roundupId: number,
     entryId: number,
     file: { buffer: Uint8Array } | undefined,
-    fields: UploadFields,
+    fields: ParsedPhotoUploadFields,
   ): Promise<Photo> {
     if (!file || file.buffer.length === 0) {
       throw new AppError('validation_failed', 400, 'Attach a photo (JPEG, PNG or WebP).', { file: 'Choose a photo.' });
@@ -108,7 +103,7 @@ export class PhotosService {
     }
   }
 
-  async update(actor: CurrentUser, photoId: number, fields: UpdateFields): Promise<Photo> {
+  async update(actor: CurrentUser, photoId: number, fields: ParsedUpdatePhotoRequest): Promise<Photo> {
     const saved = await this.dataSource.transaction(async (manager) => {
       const repo = manager.getRepository(PhotoEntity);
       const photo = await repo.findOne({ where: { id: photoId }, lock: { mode: 'pessimistic_write' } });
@@ -129,7 +124,12 @@ export class PhotosService {
     return (await this.toDtos([saved]))[0];
   }
 
-  async reorder(actor: CurrentUser, roundupId: number, entryId: number, input: ReorderInput): Promise<Photo[]> {
+  async reorder(
+    actor: CurrentUser,
+    roundupId: number,
+    entryId: number,
+    input: ParsedReorderPhotosRequest,
+  ): Promise<Photo[]> {
     await this.entryOf(roundupId, entryId);
     const rows = await this.dataSource.transaction(async (manager) => {
       const repo = manager.getRepository(PhotoEntity);

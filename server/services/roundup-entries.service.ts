@@ -16,15 +16,14 @@ import { assertPlanEditable, assertRoundupExists, findRoundup, lockRoundup } fro
 import { cellStateLabels, statesWithWork } from '../../shared/domain/planning/matrix-cell-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type {
-  addRoundupEntryRequestSchema,
+  ParsedAddRoundupEntryRequest,
+  referenceCandidatesSchema,
   RoundupEntry,
   RoundupSuggestions,
-  referenceCandidatesSchema,
 } from '../../shared/schemas/roundups';
 import type { RoundupState } from '../../shared/domain/planning/roundup-states';
 import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 
-type AddInput = z.output<typeof addRoundupEntryRequestSchema>;
 type ReferenceCandidates = z.infer<typeof referenceCandidatesSchema>['candidates'];
 
 interface TestedIn {
@@ -170,7 +169,7 @@ export class RoundupEntriesService {
   async add(
     actor: CurrentUser,
     roundupId: number,
-    input: AddInput,
+    input: ParsedAddRoundupEntryRequest,
   ): Promise<{ entry: RoundupEntry; warnings: string[] }> {
     try {
       return await this.dataSource.transaction(async (manager) => {

@@ -25,18 +25,15 @@ import {
 } from '../../shared/domain/planning/roundup-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type {
-  createRoundupRequestSchema,
+  ParsedCreateRoundupRequest,
+  ParsedRoundupListQuery,
+  ParsedUpdateRoundupRequest,
   RoundupDetail,
   roundupHistorySchema,
-  roundupListQuerySchema,
   RoundupSummary,
-  updateRoundupRequestSchema,
 } from '../../shared/schemas/roundups';
 import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 
-type CreateInput = z.output<typeof createRoundupRequestSchema>;
-type UpdateInput = z.output<typeof updateRoundupRequestSchema>;
-type ListQuery = z.output<typeof roundupListQuerySchema>;
 type History = z.infer<typeof roundupHistorySchema>;
 
 /** Checks that the profile exists and may be chosen (archived profiles stay only where already chosen). */
@@ -74,7 +71,7 @@ async function checkLoadConfigurations(manager: EntityManager, ids: number[], cu
 export class RoundupsService {
   constructor(private readonly dataSource: DataSource) {}
 
-  async list(query: ListQuery): Promise<RoundupSummary[]> {
+  async list(query: ParsedRoundupListQuery): Promise<RoundupSummary[]> {
     const manager = this.dataSource.manager;
     const roundups = await manager
       .getRepository(RoundupEntity)
@@ -139,7 +136,7 @@ export class RoundupsService {
     };
   }
 
-  async create(actor: CurrentUser, input: CreateInput): Promise<RoundupDetail> {
+  async create(actor: CurrentUser, input: ParsedCreateRoundupRequest): Promise<RoundupDetail> {
     return this.dataSource.transaction(async (manager) => {
       await checkBenchProfile(manager, input.benchProfileId, null);
       await checkLoadConfigurations(manager, input.loadConfigurationIds, []);
@@ -185,7 +182,7 @@ export class RoundupsService {
    * Edits the header. The title and target date may change in any state; the band, platform, category, time
    * zone and bench profile are the plan and change only while the plan is editable.
    */
-  async update(actor: CurrentUser, id: number, input: UpdateInput): Promise<RoundupDetail> {
+  async update(actor: CurrentUser, id: number, input: ParsedUpdateRoundupRequest): Promise<RoundupDetail> {
     return this.dataSource.transaction(async (manager) => {
       const roundup = await lockRoundup(manager, id);
       const current = {

@@ -1,5 +1,4 @@
 import type { DataSource } from 'typeorm';
-import type { z } from 'zod';
 import { ProductEntity } from '../entities/product.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { SampleEntity } from '../entities/sample.entity';
@@ -9,10 +8,8 @@ import { recordPlanChange } from '../lib/roundup-audit';
 import { findRoundup } from '../lib/roundup-access';
 import { samplesOfRoundups, toSampleDto } from '../mappers/sample';
 import type { CurrentUser } from '../../shared/schemas/auth';
-import { sampleDateOrderProblems, type Sample, type updateSampleRequestSchema } from '../../shared/schemas/samples';
+import { sampleDateOrderProblems, type Sample, type ParsedUpdateSampleRequest } from '../../shared/schemas/samples';
 import { productDisplayName } from '../../shared/domain/planning/product-display-name';
-
-type UpdateInput = z.output<typeof updateSampleRequestSchema>;
 
 const editableFields = [
   'source',
@@ -72,7 +69,12 @@ export class SamplesService {
     };
   }
 
-  async update(actor: CurrentUser, roundupId: number, sampleId: number, input: UpdateInput): Promise<Sample> {
+  async update(
+    actor: CurrentUser,
+    roundupId: number,
+    sampleId: number,
+    input: ParsedUpdateSampleRequest,
+  ): Promise<Sample> {
     return this.dataSource.transaction(async (manager) => {
       const roundup = await findRoundup(manager, roundupId);
       const repo = manager.getRepository(SampleEntity);

@@ -41,22 +41,16 @@ import {
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type {
   CellRuns,
-  loggerRunRequestSchema,
-  manualRunRequestSchema,
-  reanalyseRunRequestSchema,
-  reviewRunRequestSchema,
+  ParsedLoggerRunRequest,
+  ParsedManualRunRequest,
+  ParsedReanalyseRunRequest,
+  ParsedReviewRunRequest,
   RoundupResults,
   RunAnalysisSummary,
   TestRun,
   VrmLoadFigures,
 } from '../../shared/schemas/test-runs';
-import type { z } from 'zod';
 import { productDisplayName } from '../../shared/domain/planning/product-display-name';
-
-type LoggerRunInput = z.output<typeof loggerRunRequestSchema>;
-type ManualRunInput = z.output<typeof manualRunRequestSchema>;
-type ReviewInput = z.output<typeof reviewRunRequestSchema>;
-type ReanalyseInput = z.output<typeof reanalyseRunRequestSchema>;
 
 /** Cell states in which a run may be added: the work is assigned, under way, recorded (a retest) or sent back. */
 const runnableStates = new Set(['assigned', 'running', 'recorded', 'needs-retest']);
@@ -181,7 +175,12 @@ export class TestRunsService {
 
   // ---- recording ----
 
-  async createLoggerRun(actor: CurrentUser, cellId: number, file: LogFileUpload | undefined, input: LoggerRunInput) {
+  async createLoggerRun(
+    actor: CurrentUser,
+    cellId: number,
+    file: LogFileUpload | undefined,
+    input: ParsedLoggerRunRequest,
+  ) {
     const upload = checkLogFileUpload(file);
     // The upload's own memory, not a copy: a 24 MB copy would hold the event loop for tens of milliseconds.
     const bytes = Buffer.from(upload.buffer.buffer, upload.buffer.byteOffset, upload.buffer.byteLength);
@@ -246,7 +245,7 @@ export class TestRunsService {
     }
   }
 
-  async createManualRun(actor: CurrentUser, cellId: number, input: ManualRunInput) {
+  async createManualRun(actor: CurrentUser, cellId: number, input: ParsedManualRunRequest) {
     return this.dataSource.transaction(async (manager) => {
       const context = await this.lockCellForRun(manager, actor, cellId);
       const booking = await this.bookingFor(manager, context.cell, input);
@@ -270,7 +269,7 @@ export class TestRunsService {
   }
 
   /** A new analysis of a stored file with another mapping or options; earlier analyses stay as they were. */
-  async reanalyse(actor: CurrentUser, runId: number, input: ReanalyseInput) {
+  async reanalyse(actor: CurrentUser, runId: number, input: ParsedReanalyseRunRequest) {
     return this.dataSource.transaction(async (manager) => {
       const run = await manager
         .getRepository(TestRunEntity)
@@ -284,7 +283,7 @@ export class TestRunsService {
     });
   }
 
-  async review(actor: CurrentUser, runId: number, input: ReviewInput) {
+  async review(actor: CurrentUser, runId: number, input: ParsedReviewRunRequest) {
     return this.dataSource.transaction(async (manager) => {
       const run = await manager
         .getRepository(TestRunEntity)
@@ -527,7 +526,7 @@ export class TestRunsService {
     manager: EntityManager,
     actor: CurrentUser,
     cell: MatrixCellEntity,
-    input: LoggerRunInput | ManualRunInput,
+    input: ParsedLoggerRunRequest | ParsedManualRunRequest,
     booking: { bookingId: number | null; benchId: number | null },
     data: Partial<TestRunEntity>,
   ) {

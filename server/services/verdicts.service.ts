@@ -1,5 +1,4 @@
 import type { DataSource } from 'typeorm';
-import type { z } from 'zod';
 import { EditorialVerdictEntity } from '../entities/editorial-verdict.entity';
 import { AppError, notFound } from '../errors';
 import { loadPeople, personOrNull } from '../mappers/people';
@@ -10,9 +9,7 @@ import { verdictContradictions } from '../../shared/domain/editorial/verdict-con
 import { editorialLabelNames } from '../../shared/domain/editorial/editorial-labels';
 import { roundupStateLabels, type RoundupState } from '../../shared/domain/planning/roundup-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
-import type { RoundupVerdicts, setVerdictRequestSchema, VerdictEvidenceDto } from '../../shared/schemas/verdicts';
-
-type SetVerdictInput = z.output<typeof setVerdictRequestSchema>;
+import type { ParsedSetVerdictRequest, RoundupVerdicts, VerdictEvidenceDto } from '../../shared/schemas/verdicts';
 
 /** States in which verdicts and charts are decided: once there are results, until the roundup is scheduled. */
 export const editorialStates: readonly RoundupState[] = ['on-the-bench', 'writing', 'in-review'];
@@ -95,7 +92,12 @@ export class VerdictsService {
    * Sets the editor's verdict on a tested product. A label that goes against the rubric verdicts of its runs of
    * record (shared/domain/editorial/verdict-contradiction) stands only with a written reason: 422 otherwise.
    */
-  async set(actor: CurrentUser, roundupId: number, entryId: number, input: SetVerdictInput): Promise<RoundupVerdicts> {
+  async set(
+    actor: CurrentUser,
+    roundupId: number,
+    entryId: number,
+    input: ParsedSetVerdictRequest,
+  ): Promise<RoundupVerdicts> {
     await this.dataSource.transaction(async (manager) => {
       const roundup = await lockRoundup(manager, roundupId, 'pessimistic_read');
       assertEditorialState(roundup.state);

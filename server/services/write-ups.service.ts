@@ -30,18 +30,17 @@ import {
 import { writeUpLockedReason, writeUpReadableStates } from '../../shared/domain/editorial/write-up-availability';
 import type { PersonRef } from '../../shared/schemas/planning-fields';
 import type {
-  addCommentRequestSchema,
   CommentThread,
   LiveBlockPreview,
+  ParsedAddCommentRequest,
+  ParsedSaveSectionRequest,
   RevisionDetail,
   RevisionSummary,
-  saveSectionRequestSchema,
   SectionDetail,
   SectionSummary,
   StaleVersionDetails,
   WriteUpOverview,
 } from '../../shared/schemas/write-ups';
-import type { z } from 'zod';
 import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import {
@@ -50,9 +49,6 @@ import {
   type BlockNode,
   type WriteUpDocument,
 } from '../../shared/schemas/write-up-document';
-
-type SaveInput = z.output<typeof saveSectionRequestSchema>;
-type CommentInput = z.output<typeof addCommentRequestSchema>;
 
 /** Saves by one author within this time of their last share one revision. */
 const sittingMilliseconds = 10 * 60 * 1000;
@@ -176,7 +172,7 @@ export class WriteUpsService {
    * refused with 409 and the refused text is kept as a revision, so nothing typed is lost. Changing a signed-off
    * section hands it back to drafting.
    */
-  async save(actor: CurrentUser, sectionId: number, input: SaveInput): Promise<SectionSummary> {
+  async save(actor: CurrentUser, sectionId: number, input: ParsedSaveSectionRequest): Promise<SectionSummary> {
     const refused = await this.dataSource.transaction(async (manager) => {
       const section = await this.lockSection(manager, sectionId);
       await this.assertEditable(manager, section.roundupId);
@@ -341,7 +337,7 @@ export class WriteUpsService {
       }));
   }
 
-  async addComment(actor: CurrentUser, sectionId: number, input: CommentInput): Promise<CommentThread> {
+  async addComment(actor: CurrentUser, sectionId: number, input: ParsedAddCommentRequest): Promise<CommentThread> {
     const threadId = await this.dataSource.transaction(async (manager) => {
       const section = await this.lockSection(manager, sectionId);
       const repo = manager.getRepository(WriteUpCommentEntity);

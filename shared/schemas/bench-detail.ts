@@ -27,9 +27,11 @@ export const createInstrumentRequestSchema = z.strictObject({
     .max(60, 'At most 60 months.'),
 });
 export type CreateInstrumentRequest = z.input<typeof createInstrumentRequestSchema>;
+export type ParsedCreateInstrumentRequest = z.output<typeof createInstrumentRequestSchema>;
 
 export const updateInstrumentRequestSchema = createInstrumentRequestSchema.partial();
 export type UpdateInstrumentRequest = z.input<typeof updateInstrumentRequestSchema>;
+export type ParsedUpdateInstrumentRequest = z.output<typeof updateInstrumentRequestSchema>;
 
 export const instrumentSchema = z.object({
   id: z.number().int(),
@@ -51,6 +53,7 @@ export const createMaintenanceRequestSchema = z.strictObject({
   description: multiLineText(500, 'Say what was done.'),
 });
 export type CreateMaintenanceRequest = z.input<typeof createMaintenanceRequestSchema>;
+export type ParsedCreateMaintenanceRequest = z.output<typeof createMaintenanceRequestSchema>;
 
 export const maintenanceEntrySchema = z.object({
   id: z.number().int(),

@@ -30,12 +30,14 @@ const benchProfileFields = {
 
 export const createBenchProfileRequestSchema = z.strictObject(benchProfileFields);
 export type CreateBenchProfileRequest = z.input<typeof createBenchProfileRequestSchema>;
+export type ParsedCreateBenchProfileRequest = z.output<typeof createBenchProfileRequestSchema>;
 
 /** Partial update; `archived: true` hides the profile from pickers (roundups that use it keep it). */
 export const updateBenchProfileRequestSchema = z
   .strictObject({ ...benchProfileFields, archived: z.boolean() })
   .partial();
 export type UpdateBenchProfileRequest = z.input<typeof updateBenchProfileRequestSchema>;
+export type ParsedUpdateBenchProfileRequest = z.output<typeof updateBenchProfileRequestSchema>;
 
 export const benchProfileSchema = z.object({
   id: z.number().int(),

@@ -15,6 +15,7 @@ export const createBenchRequestSchema = z.strictObject({
   notes: optionalMultiLineText(500),
 });
 export type CreateBenchRequest = z.input<typeof createBenchRequestSchema>;
+export type ParsedCreateBenchRequest = z.output<typeof createBenchRequestSchema>;
 
 export const updateBenchRequestSchema = z
   .strictObject({
@@ -27,6 +28,7 @@ export const updateBenchRequestSchema = z
   })
   .partial();
 export type UpdateBenchRequest = z.input<typeof updateBenchRequestSchema>;
+export type ParsedUpdateBenchRequest = z.output<typeof updateBenchRequestSchema>;
 
 export const benchSchema = z.object({
   id: z.number().int(),
@@ -84,6 +86,7 @@ export const createBookingRequestSchema = z
     { when: whenValid('startsAt', 'endsAt') },
   );
 export type CreateBookingRequest = z.input<typeof createBookingRequestSchema>;
+export type ParsedCreateBookingRequest = z.output<typeof createBookingRequestSchema>;
 
 export const bookingSchema = z.object({
   id: z.number().int(),

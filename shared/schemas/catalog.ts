@@ -184,6 +184,7 @@ export const createPriceRequestSchema = z.strictObject({
   source: requiredTextSchema(200, 'Say where the price was seen.'),
 });
 export type CreatePriceRequest = z.input<typeof createPriceRequestSchema>;
+export type ParsedCreatePriceRequest = z.output<typeof createPriceRequestSchema>;
 
 export const priceSchema = z.object({
   id: z.number().int(),
@@ -336,6 +337,7 @@ export const productListQuerySchema = z.object({
   offset: z.coerce.number().int().min(0).default(0),
 });
 export type ProductListQuery = z.input<typeof productListQuerySchema>;
+export type ParsedProductListQuery = z.output<typeof productListQuerySchema>;
 
 export const productListSchema = z.object({
   products: z.array(productSchema),

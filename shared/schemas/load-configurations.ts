@@ -47,6 +47,7 @@ export const createLoadConfigurationRequestSchema = z
   .strictObject(loadConfigurationFields)
   .superRefine(fixedNeedsClock, { when: whenValid('settingsMode', 'fixedClockMhz') });
 export type CreateLoadConfigurationRequest = z.input<typeof createLoadConfigurationRequestSchema>;
+export type ParsedCreateLoadConfigurationRequest = z.output<typeof createLoadConfigurationRequestSchema>;
 
 /** Partial update; the server re-checks the fixed-needs-clock rule on the merged record. */
 export const updateLoadConfigurationRequestSchema = z
@@ -57,6 +58,7 @@ export const updateLoadConfigurationRequestSchema = z
   })
   .partial();
 export type UpdateLoadConfigurationRequest = z.input<typeof updateLoadConfigurationRequestSchema>;
+export type ParsedUpdateLoadConfigurationRequest = z.output<typeof updateLoadConfigurationRequestSchema>;
 
 export const loadConfigurationSchema = z.object({
   id: z.number().int(),

@@ -85,6 +85,7 @@ export const assignCellsRequestSchema = z
     when: whenValid('cellIds', 'entryIds'),
   });
 export type AssignCellsRequest = z.input<typeof assignCellsRequestSchema>;
+export type ParsedAssignCellsRequest = z.output<typeof assignCellsRequestSchema>;
 export const assignCellsResponseSchema = z.object({ cells: z.array(matrixCellSchema) });
 
 /** Move one cell. `note` is required for send-back (the reason) and optional otherwise. */

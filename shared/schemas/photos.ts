@@ -25,16 +25,19 @@ export const photoUploadFieldsSchema = z.object({
   altText: altTextSchema,
 });
 export type PhotoUploadFields = z.input<typeof photoUploadFieldsSchema>;
+export type ParsedPhotoUploadFields = z.output<typeof photoUploadFieldsSchema>;
 
 export const updatePhotoRequestSchema = z.strictObject({
   kind: photoKindSchema.optional(),
   caption: captionSchema.optional(),
   altText: altTextSchema.optional(),
 });
+export type ParsedUpdatePhotoRequest = z.output<typeof updatePhotoRequestSchema>;
 
 export const reorderPhotosRequestSchema = z.strictObject({
   photoIds: z.array(idSchema).min(1, 'List the photos in their new order.').max(200),
 });
+export type ParsedReorderPhotosRequest = z.output<typeof reorderPhotosRequestSchema>;
 
 export const photoSizeSchema = z.object({
   width: z.number().int(),

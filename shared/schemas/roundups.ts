@@ -73,6 +73,7 @@ export const createRoundupRequestSchema = z
     { when: whenValid('targetPublishDate') },
   );
 export type CreateRoundupRequest = z.input<typeof createRoundupRequestSchema>;
+export type ParsedCreateRoundupRequest = z.output<typeof createRoundupRequestSchema>;
 
 /** Partial update of the plan's header. The state changes through POST /api/roundups/:id/state. */
 export const updateRoundupRequestSchema = z
@@ -87,6 +88,7 @@ export const updateRoundupRequestSchema = z
   })
   .partial();
 export type UpdateRoundupRequest = z.input<typeof updateRoundupRequestSchema>;
+export type ParsedUpdateRoundupRequest = z.output<typeof updateRoundupRequestSchema>;
 
 /** Replace the ordered list of load configurations (adds and removes matrix columns). */
 export const setRoundupLoadConfigurationsRequestSchema = z.strictObject({ loadConfigurationIds: uniqueIds });
@@ -97,6 +99,7 @@ export const roundupStateChangeRequestSchema = z.strictObject({ to: roundupState
 export const roundupListQuerySchema = z.object({
   state: z.preprocess((v) => (v === '' ? undefined : v), roundupStateSchema.optional()),
 });
+export type ParsedRoundupListQuery = z.output<typeof roundupListQuerySchema>;
 
 export const priceBandOutSchema = z.object({
   minMinor: z.number().int(),
@@ -194,6 +197,7 @@ export const addRoundupEntryRequestSchema = z.strictObject({
   referenceRoundupId: idSchema.nullable().default(null),
 });
 export type AddRoundupEntryRequest = z.input<typeof addRoundupEntryRequestSchema>;
+export type ParsedAddRoundupEntryRequest = z.output<typeof addRoundupEntryRequestSchema>;
 
 export const addRoundupEntryResponseSchema = z.object({
   entry: roundupEntrySchema,

@@ -97,6 +97,7 @@ export const updateSampleRequestSchema = z
     { when: whenValid('returnBy', 'receivedOn', 'returnedOn') },
   );
 export type UpdateSampleRequest = z.input<typeof updateSampleRequestSchema>;
+export type ParsedUpdateSampleRequest = z.output<typeof updateSampleRequestSchema>;
 
 /** Dates of one sample that cannot all be true, by field (ISO dates compare as text). */
 export function sampleDateOrderProblems(sample: {

@@ -42,6 +42,7 @@ export const loggerRunRequestSchema = z.strictObject({
   rememberMapping: z.boolean().default(true),
 });
 export type LoggerRunRequest = z.input<typeof loggerRunRequestSchema>;
+export type ParsedLoggerRunRequest = z.output<typeof loggerRunRequestSchema>;
 
 /** A run entered by hand when no log exists: peak and ambient. Marked "manual" everywhere it is shown. */
 export const manualRunRequestSchema = z.strictObject({
@@ -51,6 +52,7 @@ export const manualRunRequestSchema = z.strictObject({
   throttled: z.boolean().default(false),
 });
 export type ManualRunRequest = z.input<typeof manualRunRequestSchema>;
+export type ParsedManualRunRequest = z.output<typeof manualRunRequestSchema>;
 
 export const vrmLoadSchema = z.object({
   packagePowerW: z.number(),
@@ -164,11 +166,13 @@ export const reviewRunRequestSchema = z.strictObject({
   reason: optionalMultiLineText(2000),
 });
 export type ReviewRunRequest = z.input<typeof reviewRunRequestSchema>;
+export type ParsedReviewRunRequest = z.output<typeof reviewRunRequestSchema>;
 
 export const reanalyseRunRequestSchema = z.strictObject({
   mapping: columnMappingSchema.optional(),
   options: analysisOptionsSchema.optional(),
 });
+export type ParsedReanalyseRunRequest = z.output<typeof reanalyseRunRequestSchema>;
 
 export type ReanalyseRunRequest = z.input<typeof reanalyseRunRequestSchema>;
 

@@ -17,6 +17,7 @@ export const setVerdictRequestSchema = z.strictObject({
   reason: optionalMultiLineText(2000),
 });
 export type SetVerdictRequest = z.input<typeof setVerdictRequestSchema>;
+export type ParsedSetVerdictRequest = z.output<typeof setVerdictRequestSchema>;
 
 export const verdictEntryParamsSchema = z.object({
   id: z.coerce.number().int().positive(),

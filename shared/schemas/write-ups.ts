@@ -89,6 +89,7 @@ export const saveSectionRequestSchema = z.strictObject({
   content: writeUpDocumentSchema,
 });
 export type SaveSectionRequest = z.input<typeof saveSectionRequestSchema>;
+export type ParsedSaveSectionRequest = z.output<typeof saveSectionRequestSchema>;
 
 /** What a 409 `stale_version` carries: the section as it stands, and where the refused text was kept. */
 export const staleVersionDetailsSchema = z.object({
@@ -152,3 +153,4 @@ export const addCommentRequestSchema = z.strictObject({
   parentId: z.number().int().positive().nullable().optional(),
 });
 export type AddCommentRequest = z.input<typeof addCommentRequestSchema>;
+export type ParsedAddCommentRequest = z.output<typeof addCommentRequestSchema>;

@@ -17,6 +17,8 @@ import { parseChartKey } from '../../shared/domain/editorial/chart-data';
 import type { ReaderSite } from '../public-site/render-layout';
 import { renderHomePage } from '../public-site/render-home-page';
 import { renderRoundupPage } from '../public-site/render-roundup-page';
+import { readCompareChoice, renderComparePage } from '../public-site/render-compare-page';
+import { estimatePointsFor, productAppearances, renderProductPage } from '../public-site/render-product-page';
 import type { PublicSiteRenderer, RenderedPage } from './public-site-renderer';
 
 const htmlType = 'text/html; charset=utf-8';
@@ -28,8 +30,10 @@ const unitVariants = [
 
 /**
  * Publishing through the reader site's model and renderers (server/public-site): the frozen model is
- * `buildPublishedRoundup`'s, and the snapshot holds the home page and each roundup's results page in both units.
- * Addresses the reader router renders on request (open data, photos, pages with a query) follow the roundup's state.
+ * `buildPublishedRoundup`'s, and the snapshot holds, in both units, the home page, each roundup's results page, each
+ * published board's page and the empty compare form: every reader page without a query is served from memory. The
+ * reader router renders the rest on request (open data, photos, feeds, pages with a query) from the same frozen
+ * models, with the same renderers, so a page is the same whichever answers it.
  */
 export function readerSiteRenderer(
   dataSource: DataSource,
@@ -109,6 +113,23 @@ export function readerSiteRenderer(
         }
         const home = renderHomePage(readerSite, models, { unit });
         pages.push({ path: readerBase, variant, contentType: htmlType, body: home, roundupId: null });
+        // A board's page at its address of record (the roundup that tested it); other slugs are redirected there.
+        for (const productId of new Set(models.flatMap((m) => m.products.map((p) => p.productId)))) {
+          const appearances = productAppearances(models, productId);
+          const path = (appearances.find((a) => a.product.kind === 'tested') ?? appearances[0]).product.path;
+          const body = renderProductPage(readerSite, appearances, {
+            unit,
+            estimate: null,
+            pointCount: estimatePointsFor(appearances).length,
+            query: new URLSearchParams(),
+          });
+          pages.push({ path, variant, contentType: htmlType, body, roundupId: null });
+        }
+        const compare = renderComparePage(readerSite, models, readCompareChoice({}), {
+          unit,
+          query: new URLSearchParams(),
+        });
+        pages.push({ path: publicPaths.compare(), variant, contentType: htmlType, body: compare, roundupId: null });
       }
       return pages;
     },

@@ -99,6 +99,29 @@ describe('reader pages, feeds and open data', () => {
     expect(tooFew.text).toContain('Choose a load configuration.');
   });
 
+  it('board pages and the compare form are stored at publication and served from memory, the same bytes the router renders', async () => {
+    const fixture = await publishedFixture([[{ peakC: 66.0 }], [{ peakC: 72.0 }]]);
+    const app = await testApp({ PUBLIC_SITE_URL: 'https://results.test' });
+    const board = await followToPage(app, `/read/products/${fixture.products[0].productId}`);
+    const path = board.request.url.replace(/^https?:\/\/[^/]+/, '');
+    // Test files publish side by side, each under its own public address: compare the pages without it.
+    const withoutOrigin = (text: string) => text.replace(/https?:\/\/[a-z0-9.:-]+(?=\/)/g, 'ORIGIN');
+    for (const [address, unit] of [
+      [path, 'C'],
+      [path, 'F'],
+      ['/read/compare', 'C'],
+      ['/read/compare', 'F'],
+    ]) {
+      const stored = await request(app).get(address).set('Cookie', `bw_unit=${unit}`);
+      expect(stored.status, address).toBe(200);
+      // Only the lean path (stored pages) sends an ETag; `?unit=` makes the router render the page on request.
+      expect(stored.headers.etag, `${address} in °${unit} comes from the stored pages`).toBeTruthy();
+      const rendered = await request(app).get(`${address}?unit=${unit}`);
+      expect(rendered.headers.etag).toBeUndefined();
+      expect(withoutOrigin(stored.text), `${address} in °${unit}`).toBe(withoutOrigin(rendered.text));
+    }
+  });
+
   it('the Atom feed carries RFC 4287 required elements; the sitemap and robots point crawlers at the reader site', async () => {
     const fixture = await publishedFixture([[{ peakC: 70.0 }]]);
     const hidden = await publishedFixture([[{ peakC: 70.0 }]], { state: 'scheduled' });

@@ -3,14 +3,21 @@
 // next day, and only while the sample is still with the outlet (not returned, not kept with the vendor's
 // agreement). The same rule makes a matrix cell's due date overdue.
 
+// Building a formatter loads the zone's rules, which costs far more than formatting: lists and matrices ask for
+// one per row, so each zone's formatter is built once.
+const dateFormats = new Map<string, Intl.DateTimeFormat>();
+function dateFormatIn(timeZone: string): Intl.DateTimeFormat {
+  let format = dateFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' });
+    dateFormats.set(timeZone, format);
+  }
+  return format;
+}
+
 /** The calendar date (YYYY-MM-DD) an instant falls on in an IANA time zone. */
 export function calendarDateIn(timeZone: string, instant: Date): string {
-  const parts = new Intl.DateTimeFormat('en-CA', {
-    timeZone,
-    year: 'numeric',
-    month: '2-digit',
-    day: '2-digit',
-  }).formatToParts(instant);
+  const parts = dateFormatIn(timeZone).formatToParts(instant);
   const part = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
   return `${part('year')}-${part('month')}-${part('day')}`;
 }

@@ -31,6 +31,8 @@ const envSchema = z
     /** A session ends this many days after sign-in however much it is used (the idle limit is SESSION_DAYS). */
     SESSION_ABSOLUTE_DAYS: z.coerce.number().positive().default(30),
     DB_LOGGING: booleanFlag,
+    /** Pooled MariaDB connections of the server process; requests beyond them wait for one (DATABASE_ACQUIRE_TIMEOUT_MS). */
+    DB_POOL_SIZE: z.coerce.number().int().min(1).max(200).default(10),
     /** Where uploaded files are kept: local disk (UPLOADS_DIR) or S3-compatible object storage (S3_*). */
     STORAGE_DRIVER: z.enum(['local', 's3']).default('local'),
     UPLOADS_DIR: z.string().default('uploads'),

@@ -10,7 +10,9 @@ import { JobRunner } from './jobs/job-runner';
 import { MailWorker } from './mail/mail-worker';
 
 const env = loadEnv();
-const dataSource = await initializeDataSource(createDataSource(env.DATABASE_URL, { logging: env.DB_LOGGING }));
+const dataSource = await initializeDataSource(
+  createDataSource(env.DATABASE_URL, { logging: env.DB_LOGGING, poolSize: env.DB_POOL_SIZE }),
+);
 const services = createServices(dataSource, env);
 // The built client is dist/client: beside dist/server when this is the built server, under the project root
 // when it runs from source.

@@ -1,6 +1,6 @@
 /**
  * Load benchmark of the whole product (issue 14): for 60 s (`-- --seconds N` for another length) 200 readers open
- * published pages while editors and testers work through the API (lists, a roundup and its matrix, the dashboard,
+ * published pages (home, results pages, board pages, the compare form: all served from memory) while editors and testers work through the API (lists, a roundup and its matrix, the dashboard,
  * new catalog products, logger files checked), all against one app server process on 127.0.0.1 with the demo
  * outlet seeded. In the same run nginx (Debian's nginx-light) serves the very same reader-page bytes to 200
  * readers as the static-file baseline. Prints requests, p50 and p99 per kind and the server's memory before and
@@ -20,10 +20,10 @@ import {
   freePort,
   queryDatabase,
   setUpDatabase,
-  signIn,
   siteHeaders,
   sleep,
-  startApp,
+  startDemoOutlet,
+  storedReaderPages,
   type AppProcess,
 } from './lib/app-process';
 import { productRequest } from '../tests/support/plan-requests';
@@ -84,29 +84,18 @@ try {
   const url = new URL(database.url);
   url.pathname = `/benchwire_bench_load_${process.pid}`;
   databaseUrl = url.toString();
-  setUpDatabase(databaseUrl, ['--fresh', '--seed', '--quiet']);
-  app = await startApp(databaseUrl, { JOB_RUNNER: 'on', UPLOADS_DIR: join(workDir, 'uploads') });
+  const outlet = await startDemoOutlet(databaseUrl, {
+    fresh: true,
+    env: { JOB_RUNNER: 'on', UPLOADS_DIR: join(workDir, 'uploads') },
+    staff: ['editor', 'tester'],
+  });
+  app = outlet.app;
   const base = app.baseUrl;
+  const { editor, tester } = outlet.cookies;
 
-  // Reader pages: the published pages (the snapshots publishing writes, served from memory).
-  const snapshots = await queryDatabase<{ path: string }>(
-    databaseUrl,
-    "SELECT path FROM published_pages WHERE variant = '' AND content_type LIKE 'text/html%' ORDER BY path LIMIT 30",
-  );
-  const readerPaths = snapshots.map((s) => s.path);
-  // The board pages they link to are rendered per request from the database: timed once each, not in the load.
-  const boards = new Set<string>();
-  for (const path of readerPaths) {
-    const html = (await fetchRaw(`${base}${path}`, 'identity')).body.toString('utf8');
-    for (const match of html.matchAll(/href="(\/read\/products\/[a-z0-9-]+)"/g)) boards.add(match[1]);
-  }
-  const boardTimes: number[] = [];
-  for (const path of boards) {
-    const started = performance.now();
-    const response = await fetchRaw(`${base}${path}`, 'gzip');
-    if (response.status !== 200) throw new Error(`${path} answered ${response.status}`);
-    boardTimes.push(performance.now() - started);
-  }
+  // Reader pages: every page publishing stored (home, results pages, board pages, the compare form), served from
+  // memory. The board pages the results pages link to must be among them.
+  const readerPaths = await storedReaderPages(databaseUrl, 'all');
   const pages = new Map<string, { identity: Buffer; gzip: Buffer }>();
   for (const path of readerPaths) {
     const identity = await fetchRaw(`${base}${path}`, 'identity');
@@ -114,14 +103,12 @@ try {
     if (identity.status !== 200 || gzip.status !== 200) throw new Error(`${path} answered ${identity.status}`);
     pages.set(path, { identity: identity.body, gzip: gzip.body });
   }
+  const boards = readerPaths.filter((path) => path.startsWith('/read/products/'));
+  if (boards.length === 0) throw new Error('no board page is stored: publishing did not render them');
   console.log(
-    `[load] ${pages.size} published pages: ${[...pages.keys()].join(', ')}; ${boardTimes.length} board pages ` +
-      `(rendered per request, not in the load) took ${boardTimes.map((t) => t.toFixed(0)).join(', ')} ms one at a time`,
+    `[load] ${pages.size} published pages, ${boards.length} of them board pages: ${[...pages.keys()].join(', ')}`,
   );
 
-  // Staff: the demo editor and tester, signed in once each.
-  const editor = await signIn(base, 'editor@soaksheet.example', 'demo-editor-pass');
-  const tester = await signIn(base, 'tester@soaksheet.example', 'demo-tester-pass');
   const [roundup] = await queryDatabase<{ id: number }>(databaseUrl, 'SELECT id FROM roundups ORDER BY id LIMIT 1');
   const get = (path: string, cookie: string): Request => ({ method: 'GET', path, headers: siteHeaders(base, cookie) });
   const editorReads = [
@@ -181,19 +168,24 @@ try {
     path,
     headers: { 'accept-encoding': 'gzip' },
   }));
-  // Warm-up, not counted.
-  await autocannon({ url: base, connections: 50, duration: 3, requests: readerRequests });
+  const staff = { editorReads: 10, testerReads: 10, writes: 4, checks: 4 };
+  const everyone = (duration: number) =>
+    Promise.all([
+      cannon(base, READERS, readerRequests, { ...readerPace, duration }),
+      cannon(base, staff.editorReads, editorReads, { connectionRate: 2, duration }),
+      cannon(base, staff.testerReads, testerReads, { connectionRate: 2, duration }),
+      cannon(base, staff.writes, [productWrite], { connectionRate: 1, duration }),
+      cannon(base, staff.checks, [logCheck], { connectionRate: 1, duration }),
+    ]);
+  // Warm-up with the whole mix, not counted: the worker threads, connection pool and caches fill before "before".
+  await everyone(10);
   await sleep(2_000);
   const rssBefore = app.rssMiB();
+  const loadBefore = loadavg()[0];
 
-  const staff = { editorReads: 10, testerReads: 10, writes: 4, checks: 4 };
-  const [readers, editorsReading, testersReading, editorsWriting, testersChecking] = await Promise.all([
-    cannon(base, READERS, readerRequests, readerPace),
-    cannon(base, staff.editorReads, editorReads, { connectionRate: 2 }),
-    cannon(base, staff.testerReads, testerReads, { connectionRate: 2 }),
-    cannon(base, staff.writes, [productWrite], { connectionRate: 1 }),
-    cannon(base, staff.checks, [logCheck], { connectionRate: 1 }),
-  ]);
+  const [readers, editorsReading, testersReading, editorsWriting, testersChecking] = await everyone(seconds);
+  // The one-minute load average as the run ends: how busy the machine was (other work on it skews every figure).
+  const loadDuring = loadavg()[0];
   await sleep(5_000);
   const rssAfter = app.rssMiB();
   const written = await queryDatabase<{ n: number }>(
@@ -270,6 +262,9 @@ ${locations.join('\n')}
   if (baseline) console.log(line('reader pages (nginx)', READERS, baseline));
   const apiReads = [editorsReading, testersReading];
   const apiP99 = Math.max(...apiReads.map((r) => r.latency.p99));
+  // Staff connections ask at a fixed pace: what the server kept up with, against what was asked.
+  const apiReadRate = apiReads.reduce((sum, r) => sum + r.requests.total, 0) / seconds;
+  const apiReadAsked = (staff.editorReads + staff.testerReads) * 2;
   const totalErrors = [readers, editorsReading, testersReading, editorsWriting, testersChecking].reduce(
     (sum, r) => sum + errorsOf(r),
     0,
@@ -277,7 +272,10 @@ ${locations.join('\n')}
   const growth = rssAfter - rssBefore;
   console.log(
     `\nreader pages p99 ${readers.latency.p99} ms${baseline ? ` (static baseline ${baseline.latency.p99} ms)` : ''}; ` +
-      `API reads p99 ${apiP99} ms; ${editorsWriting['2xx']} products created, ${written[0].n} in the database\n` +
+      `API reads p99 ${apiP99} ms at ${apiReadRate.toFixed(1)} req/s (${apiReadAsked} asked); API writes p99 ` +
+      `${editorsWriting.latency.p99} ms; ${editorsWriting['2xx']} products created, ${written[0].n} in the database\n` +
+      `load average (1 min) ${loadBefore.toFixed(2)} as the run started, ${loadDuring.toFixed(2)} as it ended ` +
+      `(${availableParallelism()} CPUs)\n` +
       `errors: ${totalErrors}\n` +
       `server memory (RSS): ${rssBefore.toFixed(0)} MiB before, ${rssAfter.toFixed(0)} MiB after ` +
       `(+${growth.toFixed(0)} MiB; bound ${MEMORY_GROWTH_BOUND_MIB} MiB) — ${growth <= MEMORY_GROWTH_BOUND_MIB ? 'within' : 'OVER'}`,

@@ -17,11 +17,10 @@ import {
   freePort,
   percentile,
   queryDatabase,
-  setUpDatabase,
   siteHeaders,
-  signIn,
   sleep,
-  startApp,
+  startDemoOutlet,
+  storedReaderPages,
   type AppProcess,
 } from './lib/app-process';
 import { productRequest } from '../tests/support/plan-requests';
@@ -51,19 +50,15 @@ try {
   const started = Date.now();
   database = await startPrivateMariadb();
   const databaseUrl = database!.url;
-  setUpDatabase(databaseUrl, ['--seed', '--quiet']);
-  app = await startApp(databaseUrl, { JOB_RUNNER: 'on' });
+  const outlet = await startDemoOutlet(databaseUrl, { env: { JOB_RUNNER: 'on' }, staff: ['editor', 'writer'] });
+  app = outlet.app;
   const pid = app.child.pid;
   const base = app.baseUrl;
+  const { editor, writer } = outlet.cookies;
   console.log(
     `[drill] private MariaDB on ${new URL(databaseUrl).port}, app pid ${pid}, ready in ${((Date.now() - started) / 1000).toFixed(1)} s`,
   );
-  const editor = await signIn(base, 'editor@soaksheet.example', 'demo-editor-pass');
-  const writer = await signIn(base, 'writer@soaksheet.example', 'demo-writer-pass');
-  const [page] = await queryDatabase<{ path: string }>(
-    databaseUrl,
-    "SELECT path FROM published_pages WHERE roundup_id IS NOT NULL AND variant = '' LIMIT 1",
-  );
+  const [pagePath] = await storedReaderPages(databaseUrl, 'results', 1);
   const platform = `Helix-1700 drill ${process.pid}`;
 
   const t0 = Date.now();
@@ -84,8 +79,7 @@ try {
         body: JSON.stringify(productRequest('Korvath', `HX4 Drill ${process.pid}-${++serial}`, platform)),
         signal: AbortSignal.timeout(REQUEST_BOUND_MS + 5_000),
       }),
-    'reader page': () =>
-      fetch(`${base}${page?.path ?? '/'}`, { signal: AbortSignal.timeout(REQUEST_BOUND_MS + 5_000) }),
+    'reader page': () => fetch(`${base}${pagePath ?? '/'}`, { signal: AbortSignal.timeout(REQUEST_BOUND_MS + 5_000) }),
   };
   async function loop(kind: keyof typeof requests) {
     while (Date.now() < end) {

@@ -1,5 +1,5 @@
-// Helpers of the drill and load scripts: free ports, the app as its own process, signed-in staff and a query
-// straight to MariaDB. Figures these scripts print come from the real server process on 127.0.0.1.
+// Helpers of the drill and load scripts: free ports, the app as its own process on the seeded demo outlet, signed-in
+// staff, the stored reader pages and a query straight to MariaDB. Figures these scripts print come from the real server process on 127.0.0.1.
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { createServer } from 'node:net';
@@ -44,7 +44,10 @@ export interface AppProcess {
 /** Starts `server/index.ts` as its own Node.js process on a free port and waits until it answers. */
 export async function startApp(databaseUrl: string, env: Record<string, string> = {}): Promise<AppProcess> {
   const port = await freePort();
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+  // BENCHWIRE_APP_NODE_ARGS adds Node.js flags to the server process alone, e.g. `--cpu-prof --cpu-prof-dir=/tmp/p`
+  // to see where its time goes during a run.
+  const nodeArgs = (process.env.BENCHWIRE_APP_NODE_ARGS ?? '').split(' ').filter(Boolean);
+  const child = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', 'server/index.ts'], {
     cwd: projectRoot,
     env: {
       ...process.env,
@@ -108,6 +111,58 @@ export async function signIn(baseUrl: string, email: string, password: string): 
     throw new Error(`sign-in of ${email} failed: ${response.status} ${await response.text()}`);
   const cookie = response.headers.get('set-cookie') ?? '';
   return cookie.split(';')[0];
+}
+
+/** The demo outlet's staff accounts (server/seed), by role. */
+export const demoStaff = {
+  editor: { email: 'editor@soaksheet.example', password: 'demo-editor-pass' },
+  tester: { email: 'tester@soaksheet.example', password: 'demo-tester-pass' },
+  writer: { email: 'writer@soaksheet.example', password: 'demo-writer-pass' },
+} as const;
+export type DemoRole = keyof typeof demoStaff;
+
+export interface DemoOutlet {
+  app: AppProcess;
+  baseUrl: string;
+  /** The session cookie (`name=value`) of each staff member signed in. */
+  cookies: Record<DemoRole, string>;
+}
+
+/**
+ * The demo outlet as the drill and load scripts use it: seeded into the database the URL names (`fresh` drops what is
+ * there first), the app server started on it as its own process, and the named staff signed in. The caller stops the
+ * app (`app.stop()`) and drops or stops the database.
+ */
+export async function startDemoOutlet(
+  databaseUrl: string,
+  options: { fresh?: boolean; env?: Record<string, string>; staff: DemoRole[] },
+): Promise<DemoOutlet> {
+  setUpDatabase(databaseUrl, [...(options.fresh ? ['--fresh'] : []), '--seed', '--quiet']);
+  const app = await startApp(databaseUrl, options.env);
+  const cookies = {} as Record<DemoRole, string>;
+  try {
+    for (const role of options.staff) {
+      cookies[role] = await signIn(app.baseUrl, demoStaff[role].email, demoStaff[role].password);
+    }
+  } catch (error) {
+    await app.stop();
+    throw error;
+  }
+  return { app, baseUrl: app.baseUrl, cookies };
+}
+
+/**
+ * Addresses of the reader pages publishing stored (served from memory), as every reader gets them (no unit variant):
+ * `results` keeps only roundups' results pages; `all` adds the home page, board pages and the compare form.
+ */
+export async function storedReaderPages(databaseUrl: string, which: 'results' | 'all', limit = 30): Promise<string[]> {
+  const rows = await queryDatabase<{ path: string }>(
+    databaseUrl,
+    `SELECT path FROM published_pages WHERE variant = '' AND content_type LIKE 'text/html%'
+       ${which === 'results' ? 'AND roundup_id IS NOT NULL' : ''} ORDER BY path LIMIT ?`,
+    [limit],
+  );
+  return rows.map((row) => row.path);
 }
 
 /** One query straight to MariaDB (not through the app). */

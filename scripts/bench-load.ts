@@ -9,15 +9,13 @@
  * Staff are paced like people at work (each connection a request or two a second); each reader opens a page a
  * second (`-- --reader-rate 0` sends as fast as the server answers), and the nginx baseline gets the same pace.
  */
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { chmodSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { get } from 'node:http';
+import type { ChildProcess } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import autocannon from 'autocannon';
 import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
 import {
-  freePort,
   queryDatabase,
   setUpDatabase,
   siteHeaders,
@@ -26,6 +24,7 @@ import {
   storedReaderPages,
   type AppProcess,
 } from './lib/app-process';
+import { ensureNginx, fetchRaw, startStaticBaseline } from './lib/static-baseline';
 import { productRequest } from '../tests/support/plan-requests';
 
 const secondsArg = process.argv.indexOf('--seconds');
@@ -37,17 +36,6 @@ const READER_RATE = Number(rateArg > 0 ? process.argv[rateArg + 1] : 1);
 const readerPace = READER_RATE > 0 ? { connectionRate: READER_RATE } : {};
 /** Resident memory of the server may grow by at most this much over the run (caches fill, the heap settles). */
 const MEMORY_GROWTH_BOUND_MIB = 150;
-
-/** The raw bytes of a response, as sent (no decoding). */
-function fetchRaw(url: string, acceptEncoding: string) {
-  return new Promise<{ status: number; headers: Record<string, unknown>; body: Buffer }>((done, fail) => {
-    get(url, { headers: { 'accept-encoding': acceptEncoding } }, (res) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => done({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
-    }).on('error', fail);
-  });
-}
 
 type Request = autocannon.Request & { headers?: Record<string, string> };
 type Result = autocannon.Result;
@@ -195,62 +183,11 @@ try {
 
   // The baseline: nginx serves the same bytes (identity and gzip) of every reader page, in this run.
   let baseline: Result | null = null;
-  if (spawnSync('sh', ['-c', 'command -v nginx'], { stdio: 'ignore' }).status === 0) {
-    const root = join(workDir, 'root');
-    mkdirSync(root, { recursive: true });
-    // nginx started by root reads files as its unprivileged worker user: the temp folder must be readable to it.
-    chmodSync(workDir, 0o755);
-    const locations: string[] = [];
-    [...pages.entries()].forEach(([path, bytes], n) => {
-      const file = join(root, `page-${n}.html`);
-      writeFileSync(file, bytes.identity);
-      writeFileSync(`${file}.gz`, bytes.gzip);
-      locations.push(`    location = ${path} { alias ${file}; }`);
-    });
-    mkdirSync(join(workDir, 'temp'), { recursive: true });
-    const port = await freePort();
-    const conf = join(workDir, 'nginx.conf');
-    const temp = join(workDir, 'temp');
-    writeFileSync(
-      conf,
-      `worker_processes 1;
-daemon off;
-pid ${join(workDir, 'nginx.pid')};
-error_log stderr warn;
-events { worker_connections 4096; }
-http {
-  access_log off;
-  sendfile on;
-  keepalive_requests 1000000;
-  client_body_temp_path ${temp}; proxy_temp_path ${temp}; fastcgi_temp_path ${temp}; uwsgi_temp_path ${temp}; scgi_temp_path ${temp};
-  server {
-    listen 127.0.0.1:${port};
-    default_type "text/html; charset=utf-8";
-    gzip_static on;
-${locations.join('\n')}
-  }
-}
-`,
-    );
-    const nginx = spawn('nginx', ['-p', workDir, '-c', conf, '-e', 'stderr'], {
-      stdio: ['ignore', 'ignore', 'inherit'],
-    });
-    children.push(nginx);
-    const nginxUrl = `http://127.0.0.1:${port}`;
-    for (let tries = 0; ; tries++) {
-      const up = await fetchRaw(`${nginxUrl}${readerPaths[0]}`, 'gzip').catch(() => null);
-      if (up?.status === 200) break;
-      if (tries > 80) throw new Error('nginx did not answer');
-      await sleep(250);
-    }
-    for (const [path, bytes] of pages) {
-      const same = await fetchRaw(`${nginxUrl}${path}`, 'gzip');
-      if (!same.body.equals(bytes.gzip)) throw new Error(`nginx does not serve the same bytes for ${path}`);
-    }
+  if (ensureNginx((text) => console.log(`[load] ${text}`))) {
+    const nginx = await startStaticBaseline(workDir, pages);
+    children.push(nginx.child);
     console.log('[load] nginx serves the same gzip bytes for every reader page (checked)');
-    baseline = await cannon(nginxUrl, READERS, readerRequests, readerPace);
-  } else {
-    console.log('[load] nginx is not installed (apt-get install nginx-light): no static baseline');
+    baseline = await cannon(nginx.url, READERS, readerRequests, readerPace);
   }
 
   console.log(`\nkind                       conns  requests   req/s  p50 ms p99 ms  errors`);

@@ -44,7 +44,8 @@ function cannon(url: string, connections: number, requests: Request[], extra: Pa
   return autocannon({ url, connections, duration: seconds, pipelining: 1, timeout: 10, requests, ...extra });
 }
 
-const errorsOf = (r: Result) => r.errors + r.non2xx + r.timeouts;
+// autocannon counts timeouts among `errors` (connection errors, timeouts included).
+const errorsOf = (r: Result) => r.errors + r.non2xx;
 
 function line(label: string, connections: number, r: Result) {
   return (
@@ -197,6 +198,17 @@ try {
   console.log(line('API writes, new products', staff.writes, editorsWriting));
   console.log(line('log checks (upload)', staff.checks, testersChecking));
   if (baseline) console.log(line('reader pages (nginx)', READERS, baseline));
+  // What the errors were: statuses other than 2xx, and requests without an answer in autocannon's 10 s.
+  const kinds = { readers, editorsReading, testersReading, editorsWriting, testersChecking };
+  for (const [kind, r] of Object.entries(kinds)) {
+    if (errorsOf(r) === 0) continue;
+    const statuses = Object.entries(r.statusCodeStats ?? {})
+      .filter(([code]) => !code.startsWith('2'))
+      .map(([code, stat]) => `${stat.count} × ${code}`);
+    console.log(
+      `  ${kind}: ${[...statuses, `${r.timeouts} timed out`, `${r.errors - r.timeouts} socket errors`].join(', ')}`,
+    );
+  }
   const apiReads = [editorsReading, testersReading];
   const apiP99 = Math.max(...apiReads.map((r) => r.latency.p99));
   // Staff connections ask at a fixed pace: what the server kept up with, against what was asked.

@@ -209,6 +209,37 @@ function omissionReason(run: RunOfRecordFacts | undefined, metric: ChartMetric):
   return null;
 }
 
+/** The run of record of one product under one load configuration, if there is one. */
+function runOf(sources: ChartSources, entryId: number, configurationId: number) {
+  return sources.runs.find((r) => r.entryId === entryId && r.loadConfigurationId === configurationId);
+}
+
+/**
+ * The bars of a chart as it is built: `add` puts a run's bar in, or notes under `omittedLabel` why the run has
+ * none; `shownRuns` are the runs behind the bars, for the footnote.
+ */
+function barCollector(metric: ChartMetric) {
+  const bars: ChartValue[] = [];
+  const omitted: ChartOmission[] = [];
+  const shownRuns: RunOfRecordFacts[] = [];
+  const add = (
+    run: RunOfRecordFacts | undefined,
+    key: string,
+    label: string,
+    role: ChartValue['role'],
+    referenceRoundupTitle: string | null,
+    omittedLabel = label,
+  ) => {
+    const reason = omissionReason(run, metric);
+    if (reason || !run) omitted.push({ label: omittedLabel, reason: reason ?? 'No run of record.' });
+    else {
+      bars.push(chartValue(key, label, role, run, metric, referenceRoundupTitle));
+      shownRuns.push(run);
+    }
+  };
+  return { bars, omitted, shownRuns, add };
+}
+
 function chartValue(
   key: string,
   label: string,
@@ -306,29 +337,16 @@ export function configurationChart(
   settings: ChartSettings,
 ): BarChartData {
   const metric = settings.metric;
-  const bars: ChartValue[] = [];
-  const omitted: ChartOmission[] = [];
-  const shownRuns: RunOfRecordFacts[] = [];
+  const { bars, omitted, shownRuns, add } = barCollector(metric);
   for (const entry of sources.tested) {
-    const run = sources.runs.find((r) => r.entryId === entry.entryId && r.loadConfigurationId === configuration.id);
-    const reason = omissionReason(run, metric);
-    if (reason || !run) omitted.push({ label: entry.productName, reason: reason ?? 'No run of record.' });
-    else {
-      bars.push(chartValue(`entry-${entry.entryId}`, entry.productName, 'roundup', run, metric, null));
-      shownRuns.push(run);
-    }
+    add(runOf(sources, entry.entryId, configuration.id), `entry-${entry.entryId}`, entry.productName, 'roundup', null);
   }
   const references = selectReferences(sources, configuration.id, settings.referenceEntryIds);
   omitted.push(...references.omitted);
   for (const { entry, run } of references.chosen) {
-    const reason = omissionReason(run, metric);
-    if (reason) omitted.push({ label: `${entry.productName} (reference)`, reason });
-    else {
-      bars.push(
-        chartValue(`entry-${entry.entryId}`, entry.productName, 'reference', run, metric, entry.referenceRoundupTitle),
-      );
-      shownRuns.push(run);
-    }
+    const key = `entry-${entry.entryId}`;
+    const omittedLabel = `${entry.productName} (reference)`;
+    add(run, key, entry.productName, 'reference', entry.referenceRoundupTitle, omittedLabel);
   }
   bars.sort(compareChartValues);
   const { title, axis } = titleFor(metric, sources.referenceRoomC, configuration.name);
@@ -347,17 +365,10 @@ export function configurationChart(
 /** One product across the roundup's load configurations, in the plan's order (lightest load first as planned). */
 export function productChart(sources: ChartSources, entry: ChartEntryFacts, settings: ChartSettings): BarChartData {
   const metric = settings.metric;
-  const bars: ChartValue[] = [];
-  const omitted: ChartOmission[] = [];
-  const shownRuns: RunOfRecordFacts[] = [];
+  const { bars, omitted, shownRuns, add } = barCollector(metric);
   for (const configuration of sources.configurations) {
-    const run = sources.runs.find((r) => r.entryId === entry.entryId && r.loadConfigurationId === configuration.id);
-    const reason = omissionReason(run, metric);
-    if (reason || !run) omitted.push({ label: configuration.name, reason: reason ?? 'No run of record.' });
-    else {
-      bars.push(chartValue(`configuration-${configuration.id}`, configuration.name, 'roundup', run, metric, null));
-      shownRuns.push(run);
-    }
+    const run = runOf(sources, entry.entryId, configuration.id);
+    add(run, `configuration-${configuration.id}`, configuration.name, 'roundup', null);
   }
   const { title, axis } = titleFor(metric, sources.referenceRoomC, entry.productName);
   return {

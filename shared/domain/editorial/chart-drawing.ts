@@ -156,6 +156,16 @@ function legendItem(text: string, fill: string, stroke: string, fontColor: strin
   return { text, fillStyle: fill, strokeStyle: stroke, lineWidth: 1, hidden: false, fontColor };
 }
 
+/** The legend above a chart, listing `items`; clicking it hides nothing. */
+function legend(palette: ChartPalette, fontFamily: string, items: () => ReturnType<typeof legendItem>[]) {
+  return {
+    display: true,
+    position: 'top' as const,
+    labels: { color: palette.ink, font: { size: 12, family: fontFamily }, generateLabels: items },
+    onClick: () => undefined,
+  };
+}
+
 function common(chart: ChartData, palette: ChartPalette, fontFamily: string, interactive: boolean) {
   return {
     responsive: interactive,
@@ -228,30 +238,21 @@ export function barChartConfig(chart: BarChartData, options: DrawingOptions = {}
       },
       plugins: {
         ...base.plugins,
-        legend: {
-          display: true,
-          position: 'top',
-          labels: {
-            color: palette.ink,
-            font: { size: 12, family: fontFamily },
-            generateLabels: () => [
-              legendItem(
-                chart.kind === 'product' ? 'This product' : 'This roundup',
-                palette.roundup,
-                palette.roundup,
-                palette.ink,
-              ),
-              ...(hasReference
-                ? [legendItem('Reference, earlier roundups', palette.reference, palette.reference, palette.ink)]
-                : []),
-              ...(hasThrottled
-                ? [legendItem('Throttled (hatched)', palette.throttled, palette.throttled, palette.ink)]
-                : []),
-              legendItem('Whisker: probe tolerance', palette.background, palette.ink, palette.ink),
-            ],
-          },
-          onClick: () => undefined,
-        },
+        legend: legend(palette, fontFamily, () => [
+          legendItem(
+            chart.kind === 'product' ? 'This product' : 'This roundup',
+            palette.roundup,
+            palette.roundup,
+            palette.ink,
+          ),
+          ...(hasReference
+            ? [legendItem('Reference, earlier roundups', palette.reference, palette.reference, palette.ink)]
+            : []),
+          ...(hasThrottled
+            ? [legendItem('Throttled (hatched)', palette.throttled, palette.throttled, palette.ink)]
+            : []),
+          legendItem('Whisker: probe tolerance', palette.background, palette.ink, palette.ink),
+        ]),
       },
     },
     plugins: [barMarksPlugin(chart, palette, fontFamily)],
@@ -305,21 +306,12 @@ export function scatterChartConfig(
       },
       plugins: {
         ...base.plugins,
-        legend: {
-          display: true,
-          position: 'top',
-          labels: {
-            color: palette.ink,
-            font: { size: 12, family: fontFamily },
-            generateLabels: () => [
-              legendItem('This roundup', palette.roundup, palette.roundup, palette.ink),
-              ...(chart.points.some((p) => p.throttled)
-                ? [legendItem('Throttled (cross)', palette.throttled, palette.throttled, palette.ink)]
-                : []),
-            ],
-          },
-          onClick: () => undefined,
-        },
+        legend: legend(palette, fontFamily, () => [
+          legendItem('This roundup', palette.roundup, palette.roundup, palette.ink),
+          ...(chart.points.some((p) => p.throttled)
+            ? [legendItem('Throttled (cross)', palette.throttled, palette.throttled, palette.ink)]
+            : []),
+        ]),
       },
     },
     plugins: [scatterMarksPlugin(chart, palette, fontFamily)],

@@ -44,15 +44,20 @@ export function calendarDateProblem(text: string, range: YearRange): string | nu
   return null;
 }
 
-/** A calendar date (no time, no zone) YYYY-MM-DD, with a plausible year for the kind of field. */
-export function calendarDate(range: YearRange) {
+/** Text that `problemOf` accepts (it says what is wrong, or null), described in the API document as `format`. */
+function checkedText(problemOf: (text: string, range: YearRange) => string | null, range: YearRange, format: string) {
   return z
     .string()
     .check((payload) => {
-      const problem = calendarDateProblem(payload.value, range);
+      const problem = problemOf(payload.value, range);
       if (problem) payload.issues.push({ code: 'custom', message: problem, input: payload.value });
     })
-    .meta({ format: 'date', 'x-year-range': [range.fromYear, range.toYear] });
+    .meta({ format, 'x-year-range': [range.fromYear, range.toYear] });
+}
+
+/** A calendar date (no time, no zone) YYYY-MM-DD, with a plausible year for the kind of field. */
+export function calendarDate(range: YearRange) {
+  return checkedText(calendarDateProblem, range, 'date');
 }
 
 export const releaseDateSchema = calendarDate(dateRanges.release);
@@ -91,13 +96,7 @@ export function zonedInstantProblem(text: string, range: YearRange): string | nu
 
 /** An instant with an explicit zone, within the range once converted to UTC. */
 export function zonedInstant(range: YearRange) {
-  return z
-    .string()
-    .check((payload) => {
-      const problem = zonedInstantProblem(payload.value, range);
-      if (problem) payload.issues.push({ code: 'custom', message: problem, input: payload.value });
-    })
-    .meta({ format: 'date-time', 'x-year-range': [range.fromYear, range.toYear] });
+  return checkedText(zonedInstantProblem, range, 'date-time');
 }
 
 export const bookingInstantSchema = zonedInstant(dateRanges.booking);

@@ -68,42 +68,44 @@ const tooLong = (max: number) => `Use at most ${max} characters.`;
 /** Marks the field's kind in the OpenAPI document (`x-text`), so tests generated from it know the rule. */
 const textMeta = (kind: TextKind) => ({ 'x-text': kind });
 
+/** Text as typed, trimmed; text that may span lines has its line endings made \n first. */
+function trimmedText(kind: TextKind) {
+  const text = checkedString(kind);
+  return (kind === 'multi-line' ? text.overwrite((value) => value.replace(/\r\n?/g, '\n')) : text).trim();
+}
+
+function requiredText(kind: TextKind, max: number, emptyMessage: string) {
+  return trimmedText(kind).min(1, emptyMessage).max(max, tooLong(max)).meta(textMeta(kind));
+}
+
+/** Empty, null or absent become null. */
+function optionalText(kind: TextKind, max: number) {
+  return trimmedText(kind)
+    .max(max, tooLong(max))
+    .meta(textMeta(kind))
+    .nullable()
+    .optional()
+    .transform((value) => (value ? value : null));
+}
+
 /** Required one-line text: trimmed, 1 to max characters. */
 export function singleLineText(max: number, emptyMessage = 'This cannot be empty.') {
-  return checkedString('single-line').trim().min(1, emptyMessage).max(max, tooLong(max)).meta(textMeta('single-line'));
+  return requiredText('single-line', max, emptyMessage);
 }
 
 /** Optional one-line text: trimmed; empty, null or absent become null. */
 export function optionalSingleLineText(max: number) {
-  return checkedString('single-line')
-    .trim()
-    .max(max, tooLong(max))
-    .meta(textMeta('single-line'))
-    .nullable()
-    .optional()
-    .transform((value) => (value ? value : null));
+  return optionalText('single-line', max);
 }
 
 /** Required text that may span lines: line endings become \n, trimmed, 1 to max characters. */
 export function multiLineText(max: number, emptyMessage = 'This cannot be empty.') {
-  return checkedString('multi-line')
-    .overwrite((value) => value.replace(/\r\n?/g, '\n'))
-    .trim()
-    .min(1, emptyMessage)
-    .max(max, tooLong(max))
-    .meta(textMeta('multi-line'));
+  return requiredText('multi-line', max, emptyMessage);
 }
 
 /** Optional text that may span lines: line endings become \n, trimmed; empty, null or absent become null. */
 export function optionalMultiLineText(max: number) {
-  return checkedString('multi-line')
-    .overwrite((value) => value.replace(/\r\n?/g, '\n'))
-    .trim()
-    .max(max, tooLong(max))
-    .meta(textMeta('multi-line'))
-    .nullable()
-    .optional()
-    .transform((value) => (value ? value : null));
+  return optionalText('multi-line', max);
 }
 
 /** Free text in a query string (search boxes, filters): one line, trimmed, at most max characters. */

@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
-import { decimalSchema, requiredTextSchema } from './planning-fields';
+import { archivableRecordFields, archivedFilterSchema, decimalSchema, requiredTextSchema } from './planning-fields';
 import { optionalMultiLineText } from './text';
 
 /**
@@ -52,15 +51,11 @@ export const benchProfileSchema = z.object({
   probePlacement: z.string(),
   requiredSoakMinutes: z.number().int(),
   notes: z.string().nullable(),
-  archived: z.boolean(),
-  /** Roundups whose plan uses this profile. */
-  roundupCount: z.number().int(),
-  createdAt: instantSchema,
-  updatedAt: instantSchema,
+  ...archivableRecordFields,
 });
 export type BenchProfile = z.infer<typeof benchProfileSchema>;
 export const benchProfileListSchema = z.object({ benchProfiles: z.array(benchProfileSchema) });
 
 export const benchProfileListQuerySchema = z.object({
-  archived: z.enum(['exclude', 'include', 'only']).default('exclude'),
+  archived: archivedFilterSchema,
 });

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { catalogImportUploadLimit } from '../upload-limits';
-import { calendarDateSchema } from './planning-fields';
+import { archivedFilterSchema, calendarDateSchema } from './planning-fields';
 import { multiLineText, queryText } from './text';
 
 /**
@@ -125,6 +125,6 @@ export type CatalogImportResult = z.infer<typeof catalogImportResultSchema>;
 /** Export query: the same filters as the list; `priceRegion` picks which latest price fills the price columns. */
 export const catalogExportQuerySchema = z.object({
   priceRegion: z.preprocess((v) => (v === '' ? undefined : v), queryText(8).toUpperCase().optional()),
-  archived: z.enum(['exclude', 'include', 'only']).default('exclude'),
+  archived: archivedFilterSchema,
   platform: z.preprocess((v) => (v === '' ? undefined : v), queryText(80).optional()),
 });

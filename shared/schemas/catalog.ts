@@ -9,6 +9,7 @@ import {
   personRefSchema,
   regionSchema,
   requiredTextSchema,
+  archivedFilterSchema,
 } from './planning-fields';
 import { phaseMultiplications, stagesPerPhaseProblem } from '../domain/planning/power-design';
 import { roundupStateSchema } from './roundup-state';
@@ -330,7 +331,7 @@ export const productListQuerySchema = z.object({
   vcoreStageType: z.preprocess(emptyToUndefined, vcoreStageTypeSchema.optional()),
   minEffectivePhases: z.preprocess(emptyToUndefined, z.coerce.number().int().min(0).optional()),
   priceRegion: z.preprocess(emptyToUndefined, regionSchema.optional()),
-  archived: z.enum(['exclude', 'include', 'only']).default('exclude'),
+  archived: archivedFilterSchema,
   sort: productSortKeySchema.default('maker'),
   direction: z.enum(['asc', 'desc']).default('asc'),
   limit: z.coerce.number().int().min(1).max(500).default(200),

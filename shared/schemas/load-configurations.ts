@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
-import { decimalSchema, requiredTextSchema } from './planning-fields';
+import { archivableRecordFields, archivedFilterSchema, decimalSchema, requiredTextSchema } from './planning-fields';
 import { optionalMultiLineText } from './text';
 import { whenValid } from './checks';
 
@@ -70,14 +69,11 @@ export const loadConfigurationSchema = z.object({
   expectedPackagePowerW: z.number(),
   coreVoltageV: z.number(),
   soakMinutes: z.number().int(),
-  archived: z.boolean(),
-  roundupCount: z.number().int(),
-  createdAt: instantSchema,
-  updatedAt: instantSchema,
+  ...archivableRecordFields,
 });
 export type LoadConfiguration = z.infer<typeof loadConfigurationSchema>;
 export const loadConfigurationListSchema = z.object({ loadConfigurations: z.array(loadConfigurationSchema) });
 
 export const loadConfigurationListQuerySchema = z.object({
-  archived: z.enum(['exclude', 'include', 'only']).default('exclude'),
+  archived: archivedFilterSchema,
 });

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { isKnownCurrency } from '../domain/planning/money';
 import { isValidTimeZone } from '../domain/planning/loan-overdue';
 import { optionalSingleLineText, singleLineText } from './text';
+import { instantSchema } from './common';
 
 /**
  * A calendar date without time or zone, YYYY-MM-DD, as responses carry it. Requests use the ranged schemas of
@@ -70,3 +71,15 @@ export const idSchema = z.number().int().positive();
 /** A staff member as other records mention them. */
 export const personRefSchema = z.object({ id: z.number().int(), displayName: z.string() });
 export type PersonRef = z.infer<typeof personRefSchema>;
+
+/** Which records a list of archivable ones shows: the archived ones are hidden unless asked for. */
+export const archivedFilterSchema = z.enum(['exclude', 'include', 'only']).default('exclude');
+
+/** What staff see of every archivable record (bench profile, load configuration) after its own fields. */
+export const archivableRecordFields = {
+  archived: z.boolean(),
+  /** Roundups whose plan uses the record. */
+  roundupCount: z.number().int(),
+  createdAt: instantSchema,
+  updatedAt: instantSchema,
+};

@@ -139,22 +139,14 @@ export function toPriceDto(price: ProductPriceEntity, people: Map<number, Person
 }
 
 export function toProductDto(product: ProductEntity, latestPrices: Price[]): Product {
-  const input = productInputFromEntity(product);
-  const design = input.powerDesign;
+  const { powerDesign: design, features, ...identity } = productInputFromEntity(product);
   const stageCount =
     design.controllerPhases && design.phaseMultiplication && design.stagesPerPhase
       ? vcoreStageCount(design.controllerPhases, design.phaseMultiplication, design.stagesPerPhase)
       : null;
   return {
     id: product.id,
-    maker: input.maker,
-    model: input.model,
-    category: input.category,
-    platform: input.platform,
-    socket: input.socket,
-    chipset: input.chipset,
-    formFactor: input.formFactor,
-    releaseDate: input.releaseDate,
+    ...identity,
     powerDesign: {
       controller: design.controller,
       controllerPhases: design.controllerPhases,
@@ -173,16 +165,7 @@ export function toProductDto(product: ProductEntity, latestPrices: Price[]): Pro
       otherRails: design.otherRails,
       heatsinkNotes: design.heatsinkNotes,
     },
-    features: {
-      rearUsb: { ...input.features.rearUsb },
-      frontUsbCHeader: input.features.frontUsbCHeader,
-      lanSpeedMbps: input.features.lanSpeedMbps,
-      wifi: input.features.wifi,
-      m2Slots: input.features.m2Slots,
-      sataPorts: input.features.sataPorts,
-      audio: input.features.audio,
-      ioShieldPrefitted: input.features.ioShieldPrefitted,
-    },
+    features,
     archived: product.archivedAt != null,
     archivedAt: isoOrNull(product.archivedAt),
     latestPrices,

@@ -1,3 +1,4 @@
+import { sendInertHtml } from '../lib/inert-html';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
 import { accountManagers } from '../../shared/access/roles';
@@ -42,17 +43,12 @@ export function registerDevInboxRoutes(api: ApiRegistry, { services }: AppContex
     produces: 'text/html',
     handler: async ({ params, res }) => {
       const message = await services.devInbox.message(params.id);
-      res.setHeader('Content-Type', 'text/html; charset=utf-8');
       // A mail's HTML styles itself inline and carries its images as data:; scripts, forms and requests stay shut.
-      res.setHeader(
-        'Content-Security-Policy',
-        "default-src 'none'; img-src data:; style-src 'unsafe-inline'; base-uri 'none'; form-action 'none'; frame-ancestors 'self'; sandbox allow-popups allow-popups-to-escape-sandbox",
+      sendInertHtml(
+        res,
+        message.html ?? '<!doctype html><title>No HTML part</title><p>This message has no HTML part.</p>',
+        { imgSrc: 'data:', sandbox: 'allow-popups allow-popups-to-escape-sandbox' },
       );
-      res.setHeader('X-Content-Type-Options', 'nosniff');
-      res.setHeader('Cache-Control', 'no-store');
-      res
-        .status(200)
-        .end(message.html ?? '<!doctype html><title>No HTML part</title><p>This message has no HTML part.</p>');
     },
   });
 }

@@ -1,3 +1,4 @@
+import { sendInertHtml } from '../lib/inert-html';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
 import { planningReaders, writeUpApprovers, writeUpWriters } from '../../shared/access/roles';
@@ -47,15 +48,8 @@ export function registerWriteUpRoutes(api: ApiRegistry, { services }: AppContext
     produces: 'text/html',
     handler: async ({ params, res }) => {
       const html = writeUpPreviewPage(await writeUps.renderedSections(params.id));
-      res.setHeader('Content-Type', 'text/html; charset=utf-8');
       // Nothing on this page runs: even a fragment that slipped past the renderer could not execute here.
-      res.setHeader(
-        'Content-Security-Policy',
-        "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'; base-uri 'none'; form-action 'none'; frame-ancestors 'self'",
-      );
-      res.setHeader('X-Content-Type-Options', 'nosniff');
-      res.setHeader('Cache-Control', 'no-store');
-      res.status(200).end(html);
+      sendInertHtml(res, html, { imgSrc: "'self'" });
     },
   });
 

@@ -1,41 +1,19 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { MemoryRouter } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { LogCheckPage } from '../../src/features/log-check/components/log-check-page';
 import { syntheticLoggerLog } from '../../shared/generators/synthetic-logger-log';
-import { installFakeUploadServer } from './support/fake-upload-server';
-import { answerLogCheck, csvFile } from './support/log-check-server';
+import { deadThirdProbeSpec } from '../support/soak-logs';
+import { csvFile } from './support/log-check-server';
+import { renderLogCheckPage } from './support/render-log-check';
 
 afterEach(() => vi.unstubAllGlobals());
 
 function renderPage() {
-  const server = installFakeUploadServer(answerLogCheck);
   vi.spyOn(Element.prototype, 'scrollIntoView').mockImplementation(() => undefined);
-  render(
-    <QueryClientProvider client={new QueryClient()}>
-      <MemoryRouter>
-        <LogCheckPage signInPath="/sign-in" />
-      </MemoryRouter>
-    </QueryClientProvider>,
-  );
-  return server;
+  return renderLogCheckPage();
 }
 
-/** An hour at 1 Hz with three VRM probes; VRM 3 reads OPEN from the first sample to the last (a dead probe). */
-const deadThirdProbe = syntheticLoggerLog({
-  durationS: 3600,
-  sampleHz: 1,
-  seed: 9,
-  probes: [
-    { name: 'VRM 1', startC: 30, riseC: 45, tauS: 420 },
-    { name: 'VRM 2', startC: 30, riseC: 40, tauS: 400 },
-    { name: 'VRM 3', startC: 30, riseC: 40, tauS: 400, dropouts: [{ fromS: 0, toS: 3600, marker: 'OPEN' }] },
-  ],
-  ambient: { name: 'Ambient', startC: 21 },
-  clock: { name: 'CPU clock [MHz]', mhz: 4600 },
-});
+const deadThirdProbe = syntheticLoggerLog(deadThirdProbeSpec());
 
 describe('a dead probe on the log check page', () => {
   it(

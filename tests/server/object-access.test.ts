@@ -1,16 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { UserEntity } from '../../server/entities/user.entity';
 import { roles } from '../../shared/schemas/common';
-import { createTestUser, signedIn, testApp, testDataSource } from './support/test-app';
-import {
-  addEntry,
-  createProduct,
-  createRoundup,
-  dayFromToday,
-  matrixOf,
-  moveToBench,
-  recordManualRun,
-} from './planning/support/planning-fixtures';
+import { createTestUser, signedIn, signedInTeam, testApp, testDataSource } from './support/test-app';
+import { assignCells, dayFromToday, recordManualRun, roundupOnTheBench } from './planning/support/planning-fixtures';
 
 /**
  * Rules about whose object it is, beyond the role × route matrix (route-access.test.ts): the routes admit the
@@ -18,26 +10,11 @@ import {
  */
 
 async function twoTestersWithRuns() {
-  const app = await testApp();
-  const editor = await signedIn(app, 'editor');
-  const tester = await signedIn(app, 'tester');
-  const otherTester = await signedIn(app, 'tester');
-  const writer = await signedIn(app, 'writer');
-  const { roundupId, platform } = await createRoundup(editor.agent, { configurations: 1 });
-  await addEntry(editor.agent, roundupId, await createProduct(editor.agent, platform));
-  await addEntry(editor.agent, roundupId, await createProduct(editor.agent, platform));
-  await moveToBench(editor.agent, roundupId);
-  const matrix = await matrixOf(editor.agent, roundupId);
+  const { app, editor, tester, otherTester, writer } = await signedInTeam();
+  const { roundupId, matrix } = await roundupOnTheBench(editor.agent, { configurations: 1, products: 2 });
   const [mine, theirs] = matrix.rows.map((row) => row.cells[0].id);
-  for (const [cellId, who] of [
-    [mine, tester],
-    [theirs, otherTester],
-  ] as const) {
-    const assigned = await editor.agent
-      .post(`/api/roundups/${roundupId}/assignments`)
-      .send({ cellIds: [cellId], testerId: who.user.id, dueDate: dayFromToday(3) });
-    expect(assigned.status, assigned.text).toBeLessThan(300);
-  }
+  await assignCells(editor.agent, roundupId, { cellIds: [mine] }, tester.user.id, dayFromToday(3));
+  await assignCells(editor.agent, roundupId, { cellIds: [theirs] }, otherTester.user.id, dayFromToday(3));
   const myRun = await recordManualRun(tester.agent, mine);
   const theirRun = await recordManualRun(otherTester.agent, theirs);
   return { app, editor, tester, otherTester, writer, roundupId, mine, theirs, myRun, theirRun };

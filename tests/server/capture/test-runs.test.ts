@@ -6,17 +6,8 @@ import { StoredFileEntity } from '../../../server/entities/stored-file.entity';
 import { TestRunEntity } from '../../../server/entities/test-run.entity';
 import { analysisEngineVersion } from '../../../shared/domain/analysis/engine-version';
 import { syntheticLoggerLog } from '../../../shared/generators/synthetic-logger-log';
-import { signedIn, testApp, testDataSource, testUploadsDir, type Client } from '../support/test-app';
-import {
-  addEntry,
-  createProduct,
-  createRoundup,
-  dayFromToday,
-  matrixOf,
-  moveToBench,
-  recordManualRun,
-  tag,
-} from '../planning/support/planning-fixtures';
+import { signedInTeam, testDataSource, testUploadsDir, type Client } from '../support/test-app';
+import { bookedCell, dayFromToday, matrixOf, recordManualRun } from '../planning/support/planning-fixtures';
 
 /** A one-hour soak at 1 Hz rising first-order from 21 °C by 50 °C with τ = 600 s (peak ≈ 71 °C), ambient steady. */
 function soakLog(seed = 1) {
@@ -32,35 +23,8 @@ function soakLog(seed = 1) {
 const mapping = { time: 'Time [s]', vrm: ['VRM 1 [°C]'], ambient: 'Ambient [°C]' };
 
 async function setUp() {
-  const app = await testApp();
-  const editor = await signedIn(app, 'editor');
-  const tester = await signedIn(app, 'tester');
-  const otherTester = await signedIn(app, 'tester');
-  const writer = await signedIn(app, 'writer');
-  const { roundupId, platform, benchProfileId } = await createRoundup(editor.agent, { configurations: 1 });
-  await addEntry(editor.agent, roundupId, await createProduct(editor.agent, platform));
-  await moveToBench(editor.agent, roundupId);
-  const [cell] = (await matrixOf(editor.agent, roundupId)).rows[0].cells;
-  await editor.agent
-    .post(`/api/roundups/${roundupId}/assignments`)
-    .send({ cellIds: [cell.id], testerId: tester.user.id, dueDate: dayFromToday(3) });
-  const bench = await editor.agent.post('/api/benches').send({ name: `Bench ${tag()}`, location: 'Back room' });
-  const startsAt = `${dayFromToday(1)}T08:00:00.000Z`;
-  const booking = await tester.agent
-    .post(`/api/benches/${bench.body.id}/bookings`)
-    .send({ startsAt, endsAt: `${dayFromToday(1)}T12:00:00.000Z`, cellIds: [cell.id] });
-  expect(booking.status, booking.text).toBe(201);
-  return {
-    editor,
-    tester,
-    otherTester,
-    writer,
-    roundupId,
-    benchProfileId,
-    cellId: cell.id,
-    benchId: bench.body.id as number,
-    startedAt: `${dayFromToday(1)}T08:30:00.000Z`,
-  };
+  const { editor, tester, otherTester, writer } = await signedInTeam();
+  return { editor, tester, otherTester, writer, ...(await bookedCell(editor.agent, tester)) };
 }
 
 function uploadRun(agent: Client, cellId: number, body: Buffer, request: Record<string, unknown>, name = 'soak.csv') {

@@ -11,15 +11,7 @@ import { StoredFileEntity } from '../../../server/entities/stored-file.entity';
 import { TestRunEntity } from '../../../server/entities/test-run.entity';
 import { syntheticLoggerLog } from '../../../shared/generators/synthetic-logger-log';
 import { signedIn, testApp, testDataSource, type Client } from '../support/test-app';
-import {
-  addEntry,
-  createProduct,
-  createRoundup,
-  dayFromToday,
-  matrixOf,
-  moveToBench,
-  tag,
-} from '../planning/support/planning-fixtures';
+import { bookedCell, tag } from '../planning/support/planning-fixtures';
 
 /**
  * The uploads folder cannot be written (made read-only) or the disk is full: every upload route answers a JSON error
@@ -102,36 +94,22 @@ async function setUp(uploadsDir: string) {
   const app = await testApp({ UPLOADS_DIR: uploadsDir });
   const editor = await signedIn(app, 'editor');
   const tester = await signedIn(app, 'tester');
-  const { roundupId, platform } = await createRoundup(editor.agent, { configurations: 1 });
-  const { entry } = await addEntry(editor.agent, roundupId, await createProduct(editor.agent, platform));
-  await moveToBench(editor.agent, roundupId);
-  const [cell] = (await matrixOf(editor.agent, roundupId)).rows[0].cells;
-  await editor.agent
-    .post(`/api/roundups/${roundupId}/assignments`)
-    .send({ cellIds: [cell.id], testerId: tester.user.id, dueDate: dayFromToday(3) });
-  const bench = await editor.agent.post('/api/benches').send({ name: `Bench ${tag()}`, location: 'Back room' });
-  const booking = await tester.agent.post(`/api/benches/${bench.body.id}/bookings`).send({
-    startsAt: `${dayFromToday(1)}T08:00:00.000Z`,
-    endsAt: `${dayFromToday(1)}T12:00:00.000Z`,
-    cellIds: [cell.id],
-  });
-  expect(booking.status, booking.text).toBe(201);
-  const startedAt = `${dayFromToday(1)}T08:30:00.000Z`;
+  const { roundupId, entryId, cellId, startedAt } = await bookedCell(editor.agent, tester);
   return {
     editor,
     tester,
     roundupId,
-    entryId: entry.id as number,
-    cellId: cell.id as number,
+    entryId,
+    cellId,
     uploadPhoto: async (agent: Client) =>
       agent
-        .post(`/api/roundups/${roundupId}/entries/${entry.id}/photos`)
+        .post(`/api/roundups/${roundupId}/entries/${entryId}/photos`)
         .attach('file', await photo(), 'board.jpg')
         .field('kind', 'overview')
         .field('altText', 'The board seen from above'),
     uploadRun: (agent: Client) =>
       agent
-        .post(`/api/cells/${cell.id}/runs`)
+        .post(`/api/cells/${cellId}/runs`)
         .attach('file', soakLog(), { filename: 'soak.csv', contentType: 'text/csv' })
         .field('request', JSON.stringify({ firmwareVersion: 'F1.2', startedAt, mapping })),
   };

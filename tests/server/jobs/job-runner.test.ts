@@ -3,10 +3,10 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import type { DataSource } from 'typeorm';
 import { JobEntity } from '../../../server/entities/job.entity';
-import { ManualClock } from '../../../server/jobs/clock';
+import { ManualClock, systemClock } from '../../../server/jobs/clock';
 import { cancelJob, enqueueJob } from '../../../server/jobs/enqueue';
 import { JobRegistry, PermanentJobError, RetryJobLater } from '../../../server/jobs/job-registry';
-import { JobRunner } from '../../../server/jobs/job-runner';
+import { JobRunner, type JobRunnerOptions } from '../../../server/jobs/job-runner';
 import { testDataSource } from '../support/test-app';
 
 const quiet = { error: () => {}, warn: () => {} };
@@ -26,17 +26,33 @@ beforeAll(async () => {
   dataSource = await testDataSource();
 });
 
+/**
+ * A queue of a kind of its own: a runner on a manual clock at 12:00 UTC on 1 March 2031 (the system clock with
+ * `clock: systemClock`), and `enqueue` for jobs of that kind, due now unless told.
+ */
+function queueOf(kind: string, registry: JobRegistry, options: JobRunnerOptions = {}) {
+  const clock = new ManualClock('2031-03-01T12:00:00.000Z');
+  const runner = new JobRunner(dataSource, registry, { clock, log: quiet, ...options });
+  const enqueue = (job: { payload: unknown; runAt?: Date; uniqueKey?: string }, onDuplicate?: 'replace') =>
+    enqueueJob(dataSource.manager, { kind, ...job, runAt: job.runAt ?? clock.now() }, onDuplicate);
+  return { clock, runner, enqueue };
+}
+
+/** A queue whose handler notes each job's `n` in `seen`. */
+function recordingQueue(options: JobRunnerOptions = {}) {
+  const kind = kindName();
+  const seen: number[] = [];
+  const registry = new JobRegistry().register(kind, {
+    payload,
+    handler: async ({ job }) => void seen.push(job.payload.n),
+  });
+  return { kind, seen, ...queueOf(kind, registry, options) };
+}
+
 describe('job runner', () => {
   it('runs a job only once its time has come, by the runner clock', async () => {
-    const kind = kindName();
-    const seen: number[] = [];
-    const registry = new JobRegistry().register(kind, {
-      payload,
-      handler: async ({ job }) => void seen.push(job.payload.n),
-    });
-    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
-    const runner = new JobRunner(dataSource, registry, { clock, log: quiet });
-    await enqueueJob(dataSource.manager, { kind, payload: { n: 1 }, runAt: new Date('2031-03-01T12:00:10.000Z') });
+    const { kind, seen, clock, runner, enqueue } = recordingQueue();
+    await enqueue({ payload: { n: 1 }, runAt: new Date('2031-03-01T12:00:10.000Z') });
 
     clock.set('2031-03-01T12:00:09.999Z');
     expect(await runner.runDue()).toBe(0);
@@ -53,31 +69,20 @@ describe('job runner', () => {
   });
 
   it('keeps one job per unique key; replace re-times it; cancel stops it', async () => {
-    const kind = kindName();
-    const seen: number[] = [];
-    const registry = new JobRegistry().register(kind, {
-      payload,
-      handler: async ({ job }) => void seen.push(job.payload.n),
-    });
-    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
-    const runner = new JobRunner(dataSource, registry, { clock, log: quiet });
+    const { kind, seen, clock, runner, enqueue } = recordingQueue();
     const key = `${kind}:one`;
-    await enqueueJob(dataSource.manager, { kind, payload: { n: 1 }, runAt: clock.now(), uniqueKey: key });
-    await enqueueJob(dataSource.manager, { kind, payload: { n: 2 }, runAt: clock.now(), uniqueKey: key });
+    await enqueue({ payload: { n: 1 }, uniqueKey: key });
+    await enqueue({ payload: { n: 2 }, uniqueKey: key });
     expect(await jobsOf(kind)).toHaveLength(1);
 
-    await enqueueJob(
-      dataSource.manager,
-      { kind, payload: { n: 3 }, runAt: new Date('2031-03-01T13:00:00.000Z'), uniqueKey: key },
-      'replace',
-    );
+    await enqueue({ payload: { n: 3 }, runAt: new Date('2031-03-01T13:00:00.000Z'), uniqueKey: key }, 'replace');
     expect(await runner.runDue()).toBe(0);
     clock.set('2031-03-01T13:00:00.000Z');
     expect(await runner.runDue()).toBe(1);
     expect(seen).toEqual([3]);
 
     const other = `${kind}:two`;
-    await enqueueJob(dataSource.manager, { kind, payload: { n: 4 }, runAt: clock.now(), uniqueKey: other });
+    await enqueue({ payload: { n: 4 }, uniqueKey: other });
     await cancelJob(dataSource.manager, other, clock.now());
     expect(await runner.runDue()).toBe(0);
     expect((await jobsOf(kind)).map((j) => j.state)).toEqual(['done', 'cancelled']);
@@ -93,9 +98,8 @@ describe('job runner', () => {
         if (calls < 3) throw new Error(`relay busy (${calls})`);
       },
     });
-    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
-    const runner = new JobRunner(dataSource, registry, { clock, log: quiet });
-    await enqueueJob(dataSource.manager, { kind, payload: { n: 1 }, runAt: clock.now() });
+    const { clock, runner, enqueue } = queueOf(kind, registry);
+    await enqueue({ payload: { n: 1 } });
 
     expect(await runner.runDue()).toBe(1);
     let [job] = await jobsOf(kind);
@@ -129,11 +133,8 @@ describe('job runner', () => {
         if (job.payload.n === 2) throw new PermanentJobError('address refused');
       },
     });
-    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
-    const runner = new JobRunner(dataSource, registry, { clock, log: quiet });
-    await enqueueJob(dataSource.manager, { kind, payload: { n: 1 }, runAt: clock.now() });
-    await enqueueJob(dataSource.manager, { kind, payload: { n: 2 }, runAt: clock.now() });
-    await enqueueJob(dataSource.manager, { kind, payload: { wrong: true }, runAt: clock.now() });
+    const { clock, runner, enqueue } = queueOf(kind, registry);
+    for (const jobPayload of [{ n: 1 }, { n: 2 }, { wrong: true }]) await enqueue({ payload: jobPayload });
 
     expect(await runner.runDue()).toBe(3);
     const [pending, refused, malformed] = await jobsOf(kind);
@@ -157,18 +158,12 @@ describe('job runner', () => {
       runs.set(job.payload.n, (runs.get(job.payload.n) ?? 0) + 1);
       await new Promise((resolve) => setTimeout(resolve, 2));
     };
-    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
-    const first = new JobRunner(dataSource, new JobRegistry().register(kind, { payload, handler }), {
-      clock,
-      log: quiet,
-    });
+    const { clock, runner: first, enqueue } = queueOf(kind, new JobRegistry().register(kind, { payload, handler }));
     const second = new JobRunner(dataSource, new JobRegistry().register(kind, { payload, handler }), {
       clock,
       log: quiet,
     });
-    for (let n = 0; n < 30; n += 1) {
-      await enqueueJob(dataSource.manager, { kind, payload: { n }, runAt: clock.now() });
-    }
+    for (let n = 0; n < 30; n += 1) await enqueue({ payload: { n } });
     const [a, b] = await Promise.all([first.runDue(), second.runDue()]);
     expect(a + b).toBe(30);
     expect([...runs.values()].every((count) => count === 1)).toBe(true);
@@ -176,19 +171,12 @@ describe('job runner', () => {
   });
 
   it('takes over a job whose runner died once its lease has run out', async () => {
-    const kind = kindName();
-    const seen: number[] = [];
-    const registry = new JobRegistry().register(kind, {
-      payload,
-      handler: async ({ job }) => void seen.push(job.payload.n),
-    });
-    const clock = new ManualClock('2031-03-01T12:00:00.000Z');
+    const { kind, seen, clock, runner } = recordingQueue({ leaseMs: 60_000 });
     await dataSource.query(
       `INSERT INTO jobs (kind, payload, run_at, state, attempts, locked_by, locked_at)
        VALUES (?, '{"n":7}', ?, 'running', 1, 'a process that died', ?)`,
       [kind, clock.now(), clock.now()],
     );
-    const runner = new JobRunner(dataSource, registry, { clock, leaseMs: 60_000, log: quiet });
     clock.advance(59_999);
     expect(await runner.runDue()).toBe(0);
     clock.advance(1);
@@ -200,18 +188,12 @@ describe('job runner', () => {
   });
 
   it('started, it runs overdue jobs at once and keeps polling until stopped', async () => {
-    const kind = kindName();
-    const seen: number[] = [];
-    const registry = new JobRegistry().register(kind, {
-      payload,
-      handler: async ({ job }) => void seen.push(job.payload.n),
-    });
-    await enqueueJob(dataSource.manager, { kind, payload: { n: 1 }, runAt: new Date(Date.now() - 3_600_000) });
-    const runner = new JobRunner(dataSource, registry, { pollIntervalMs: 50, log: quiet });
+    const { seen, runner, enqueue } = recordingQueue({ clock: systemClock, pollIntervalMs: 50 });
+    await enqueue({ payload: { n: 1 }, runAt: new Date(Date.now() - 3_600_000) });
     runner.start();
     try {
       await expect.poll(() => seen, { timeout: 5_000 }).toEqual([1]);
-      await enqueueJob(dataSource.manager, { kind, payload: { n: 2 }, runAt: new Date() });
+      await enqueue({ payload: { n: 2 }, runAt: new Date() });
       await expect.poll(() => seen, { timeout: 5_000 }).toEqual([1, 2]);
     } finally {
       await runner.stop();

@@ -1,15 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { AuditEntryEntity } from '../../../server/entities/audit-entry.entity';
 import { BenchBookingEntity } from '../../../server/entities/bench-booking.entity';
-import { signedIn, testApp, testDataSource, type Client } from '../support/test-app';
+import { signedInTeam, testDataSource, type Client } from '../support/test-app';
 import {
-  addEntry,
+  assignCells,
+  createBench,
   createBenchProfile,
-  createProduct,
-  createRoundup,
   dayFromToday,
-  matrixOf,
-  moveToBench,
+  roundupOnTheBench,
   tag,
 } from './support/planning-fixtures';
 
@@ -23,23 +21,13 @@ function slot(hoursAhead: number, hours = 1) {
 }
 
 async function setUp() {
-  const app = await testApp();
-  const editor = await signedIn(app, 'editor');
-  const tester = await signedIn(app, 'tester');
-  const otherTester = await signedIn(app, 'tester');
-  const { roundupId, platform } = await createRoundup(editor.agent, { configurations: 2 });
-  const { entry } = await addEntry(editor.agent, roundupId, await createProduct(editor.agent, platform));
-  await moveToBench(editor.agent, roundupId);
-  const cells = (await matrixOf(editor.agent, roundupId)).rows[0].cells;
-  await editor.agent
-    .post(`/api/roundups/${roundupId}/assignments`)
-    .send({ cellIds: [cells[0].id], testerId: tester.user.id, dueDate: dayFromToday(3) });
-  await editor.agent
-    .post(`/api/roundups/${roundupId}/assignments`)
-    .send({ cellIds: [cells[1].id], testerId: otherTester.user.id, dueDate: dayFromToday(3) });
-  const bench = await editor.agent.post('/api/benches').send({ name: `Bench ${tag()}`, location: 'Back room' });
-  expect(bench.status, bench.text).toBe(201);
-  return { app, editor, tester, otherTester, roundupId, entryId: entry.id, cells, benchId: bench.body.id as number };
+  const { app, editor, tester, otherTester } = await signedInTeam();
+  const { roundupId, entryIds, matrix } = await roundupOnTheBench(editor.agent, { configurations: 2 });
+  const cells = matrix.rows[0].cells;
+  await assignCells(editor.agent, roundupId, { cellIds: [cells[0].id] }, tester.user.id, dayFromToday(3));
+  await assignCells(editor.agent, roundupId, { cellIds: [cells[1].id] }, otherTester.user.id, dayFromToday(3));
+  const benchId = await createBench(editor.agent);
+  return { app, editor, tester, otherTester, roundupId, entryId: entryIds[0], cells, benchId };
 }
 
 function book(agent: Client, benchId: number, body: Record<string, unknown>) {

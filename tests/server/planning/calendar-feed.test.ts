@@ -3,54 +3,32 @@ import ICAL from 'ical.js';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { CalendarFeedEntity } from '../../../server/entities/calendar-feed.entity';
-import { signedIn, testApp, testDataSource, TEST_HOST, type TestApp } from '../support/test-app';
-import {
-  addEntry,
-  createProduct,
-  createRoundup,
-  dayFromToday,
-  matrixOf,
-  moveToBench,
-  tag,
-} from './support/planning-fixtures';
+import { signedInTeam, testApp, testDataSource, TEST_HOST, type TestApp } from '../support/test-app';
+import { assignCells, bookBench, createBench, dayFromToday, roundupOnTheBench } from './support/planning-fixtures';
 
 /** A note with every character RFC 5545 §3.3.11 escapes in TEXT: backslash, semicolon, comma and a line break. */
 const awkwardNote = 'Probe 2; taped, re-seat first\nPath C:\\logs\\run-07 — about 90 characters so the line folds too';
 
 async function setUp() {
-  const app = await testApp();
-  const editor = await signedIn(app, 'editor');
-  const tester = await signedIn(app, 'tester');
-  const otherTester = await signedIn(app, 'tester');
-  const { roundupId, platform } = await createRoundup(editor.agent, { configurations: 2 });
-  await addEntry(editor.agent, roundupId, await createProduct(editor.agent, platform));
-  await moveToBench(editor.agent, roundupId);
-  const cells = (await matrixOf(editor.agent, roundupId)).rows[0].cells;
-  for (const [cell, who] of [
-    [cells[0], tester],
-    [cells[1], otherTester],
-  ] as const) {
-    const assigned = await editor.agent
-      .post(`/api/roundups/${roundupId}/assignments`)
-      .send({ cellIds: [cell.id], testerId: who.user.id, dueDate: dayFromToday(4) });
-    expect(assigned.status, assigned.text).toBe(200);
-  }
-  const bench = await editor.agent.post('/api/benches').send({ name: `Bench ${tag()}`, location: 'Lab, back room' });
+  const { app, editor, tester, otherTester } = await signedInTeam();
+  const { roundupId, matrix } = await roundupOnTheBench(editor.agent, { configurations: 2 });
+  const cells = matrix.rows[0].cells;
+  await assignCells(editor.agent, roundupId, { cellIds: [cells[0].id] }, tester.user.id, dayFromToday(4));
+  await assignCells(editor.agent, roundupId, { cellIds: [cells[1].id] }, otherTester.user.id, dayFromToday(4));
+  const benchId = await createBench(editor.agent, 'Lab, back room');
   const day = dayFromToday(2);
-  const booking = await tester.agent.post(`/api/benches/${bench.body.id}/bookings`).send({
+  const booking = await bookBench(tester.agent, benchId, {
     startsAt: `${day}T09:00:00Z`,
     endsAt: `${day}T12:30:00Z`,
     cellIds: [cells[0].id],
     note: awkwardNote,
   });
-  expect(booking.status, booking.text).toBe(201);
-  const theirs = await otherTester.agent.post(`/api/benches/${bench.body.id}/bookings`).send({
+  const theirs = await bookBench(otherTester.agent, benchId, {
     startsAt: `${day}T13:00:00Z`,
     endsAt: `${day}T15:00:00Z`,
     cellIds: [cells[1].id],
   });
-  expect(theirs.status, theirs.text).toBe(201);
-  return { app, tester, otherTester, cells, booking: booking.body, theirs: theirs.body, day };
+  return { app, tester, otherTester, cells, booking, theirs, day };
 }
 
 /** Fetches a feed the way a calendar app does: no cookie, no Origin. */

@@ -1,15 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { AuditEntryEntity } from '../../../server/entities/audit-entry.entity';
-import { signedIn, testApp, testDataSource, type Client } from '../support/test-app';
-import {
-  addEntry,
-  createProduct,
-  createRoundup,
-  dayFromToday,
-  matrixOf,
-  moveToBench,
-  recordManualRun,
-} from './support/planning-fixtures';
+import { signedInTeam, testDataSource, type Client } from '../support/test-app';
+import { dayFromToday, matrixOf, moveToBench, plannedRoundup, recordManualRun } from './support/planning-fixtures';
 
 function move(agent: Client, roundupId: number, cellId: number, action: string, note?: string) {
   return agent.post(`/api/roundups/${roundupId}/cells/${cellId}/transitions`).send({
@@ -23,15 +15,9 @@ function move(agent: Client, roundupId: number, cellId: number, action: string, 
 const startWithoutBooking = 'Bench free this morning; booking follows';
 
 async function setUp() {
-  const app = await testApp();
-  const editor = await signedIn(app, 'editor');
-  const tester = await signedIn(app, 'tester');
-  const otherTester = await signedIn(app, 'tester');
-  const writer = await signedIn(app, 'writer');
-  const setup = await createRoundup(editor.agent, { configurations: 3 });
-  const first = await addEntry(editor.agent, setup.roundupId, await createProduct(editor.agent, setup.platform));
-  const second = await addEntry(editor.agent, setup.roundupId, await createProduct(editor.agent, setup.platform));
-  return { app, editor, tester, otherTester, writer, ...setup, entryIds: [first.entry.id, second.entry.id] };
+  const { app, editor, tester, otherTester, writer } = await signedInTeam();
+  const roundup = await plannedRoundup(editor.agent, { configurations: 3, products: 2 });
+  return { app, editor, tester, otherTester, writer, ...roundup };
 }
 
 describe('the test matrix', () => {

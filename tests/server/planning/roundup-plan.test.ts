@@ -11,6 +11,8 @@ import {
   moveToBench,
   tag,
   recordManualRun,
+  assignCells,
+  moveCell,
 } from './support/planning-fixtures';
 
 describe('roundup plans', () => {
@@ -146,13 +148,9 @@ describe('roundup plans', () => {
     const back = await editor.post(`/api/roundups/${roundupId}/state`).send({ to: 'planning' });
     expect(back.status).toBe(422);
 
-    await editor
-      .post(`/api/roundups/${roundupId}/assignments`)
-      .send({ entryIds: [entry.id], testerId: testerUser.id, dueDate: dayFromToday(2) });
+    await assignCells(editor, roundupId, { entryIds: [entry.id] }, testerUser.id, dayFromToday(2));
     const [cell] = (await matrixOf(editor, roundupId)).rows[0].cells;
-    await tester
-      .post(`/api/roundups/${roundupId}/cells/${cell.id}/transitions`)
-      .send({ action: 'start', overrideReason: 'Bench free this morning; booking follows' });
+    await moveCell(tester, roundupId, cell.id, 'start');
     const drop = await editor.put(`/api/roundups/${roundupId}/load-configurations`).send({ loadConfigurationIds: [] });
     expect(drop.status).toBe(409);
     expect(drop.body.error.code).toBe('configuration_has_work');
@@ -161,8 +159,8 @@ describe('roundup plans', () => {
     expect(early.status).toBe(422);
     expect(early.body.error.message).toMatch(/1 matrix cell\(s\) are not accepted yet/);
     await recordManualRun(tester, cell.id);
-    await tester.post(`/api/roundups/${roundupId}/cells/${cell.id}/transitions`).send({ action: 'record' });
-    await editor.post(`/api/roundups/${roundupId}/cells/${cell.id}/transitions`).send({ action: 'accept' });
+    await moveCell(tester, roundupId, cell.id, 'record');
+    await moveCell(editor, roundupId, cell.id, 'accept');
     const writing = await editor.post(`/api/roundups/${roundupId}/state`).send({ to: 'writing' });
     expect(writing.status, writing.text).toBe(200);
     expect(writing.body).toMatchObject({ state: 'writing', planEditable: false, progress: { percentAccepted: 100 } });

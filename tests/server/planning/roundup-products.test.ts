@@ -1,14 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import { signedIn, testApp, type Client } from '../support/test-app';
 import {
+  acceptedCell,
   addEntry,
-  addPrice,
+  assignCells,
   createProduct,
   createRoundup,
   dayFromToday,
   matrixOf,
+  moveCell,
   moveToBench,
-  recordManualRun,
+  pricedProduct,
+  roundupOnTheBench,
 } from './support/planning-fixtures';
 
 type Suggestion = { product: { id: number }; priceCheck: { fit: string; latestPrice: { amountMinor: number } | null } };
@@ -26,57 +29,30 @@ describe('adding catalog products to a roundup', () => {
     // Band 150.00–220.00 EUR in DE (createRoundup's default).
     const { roundupId, platform } = await createRoundup(editor);
     const recent = dayFromToday(-3);
-    const atMin = await createProduct(editor, platform);
-    await addPrice(editor, atMin, { region: 'DE', currency: 'EUR', amountMinor: 15000, observedOn: recent });
-    const atMax = await createProduct(editor, platform);
-    await addPrice(editor, atMax, { region: 'DE', currency: 'EUR', amountMinor: 22000, observedOn: recent });
-    const justBelow = await createProduct(editor, platform);
-    await addPrice(editor, justBelow, { region: 'DE', currency: 'EUR', amountMinor: 14999, observedOn: recent });
-    const justAbove = await createProduct(editor, platform);
-    await addPrice(editor, justAbove, { region: 'DE', currency: 'EUR', amountMinor: 22001, observedOn: recent });
+    const priced = (...prices: Parameters<typeof pricedProduct>[2]) => pricedProduct(editor, platform, prices);
+    const atMin = await priced({ amountMinor: 15000, observedOn: recent });
+    const atMax = await priced({ amountMinor: 22000, observedOn: recent });
+    await priced({ amountMinor: 14999, observedOn: recent }); // just below
+    await priced({ amountMinor: 22001, observedOn: recent }); // just above
     // In the band in another region only.
-    const otherRegion = await createProduct(editor, platform);
-    await addPrice(editor, otherRegion, { region: 'AT', currency: 'EUR', amountMinor: 18000, observedOn: recent });
+    await priced({ region: 'AT', amountMinor: 18000, observedOn: recent });
     // Was in the band, but its latest DE price is above it: the latest price counts, history does not.
-    const roseAbove = await createProduct(editor, platform);
-    await addPrice(editor, roseAbove, {
-      region: 'DE',
-      currency: 'EUR',
-      amountMinor: 19000,
-      observedOn: dayFromToday(-30),
-    });
-    await addPrice(editor, roseAbove, {
-      region: 'DE',
-      currency: 'EUR',
-      amountMinor: 23900,
-      observedOn: dayFromToday(-2),
-    });
+    await priced(
+      { amountMinor: 19000, observedOn: dayFromToday(-30) },
+      { amountMinor: 23900, observedOn: dayFromToday(-2) },
+    );
     // Was above, latest is inside.
-    const fellInside = await createProduct(editor, platform);
-    await addPrice(editor, fellInside, {
-      region: 'DE',
-      currency: 'EUR',
-      amountMinor: 25900,
-      observedOn: dayFromToday(-30),
-    });
-    await addPrice(editor, fellInside, {
-      region: 'DE',
-      currency: 'EUR',
-      amountMinor: 17900,
-      observedOn: dayFromToday(-1),
-    });
+    const fellInside = await priced(
+      { amountMinor: 25900, observedOn: dayFromToday(-30) },
+      { amountMinor: 17900, observedOn: dayFromToday(-1) },
+    );
     // Two prices on the same day: the later record wins.
-    const sameDay = await createProduct(editor, platform);
-    await addPrice(editor, sameDay, { region: 'DE', currency: 'EUR', amountMinor: 16000, observedOn: recent });
-    await addPrice(editor, sameDay, { region: 'DE', currency: 'EUR', amountMinor: 30000, observedOn: recent });
+    await priced({ amountMinor: 16000, observedOn: recent }, { amountMinor: 30000, observedOn: recent });
     // Inside by number, but priced in another currency: never converted, never in the band.
-    const otherCurrency = await createProduct(editor, platform);
-    await addPrice(editor, otherCurrency, { region: 'DE', currency: 'USD', amountMinor: 18000, observedOn: recent });
+    await priced({ currency: 'USD', amountMinor: 18000, observedOn: recent });
     // Inside, but on another platform, or archived.
-    const otherPlatform = await createProduct(editor, `${platform} other`);
-    await addPrice(editor, otherPlatform, { region: 'DE', currency: 'EUR', amountMinor: 18000, observedOn: recent });
-    const archived = await createProduct(editor, platform);
-    await addPrice(editor, archived, { region: 'DE', currency: 'EUR', amountMinor: 18000, observedOn: recent });
+    await pricedProduct(editor, `${platform} other`, [{ amountMinor: 18000, observedOn: recent }]);
+    const archived = await priced({ amountMinor: 18000, observedOn: recent });
     await editor.patch(`/api/catalog/products/${archived}`).send({ archived: true });
 
     // Inclusive bounds (first principles: min ≤ price ≤ max), ordered by price.
@@ -91,31 +67,13 @@ describe('adding catalog products to a roundup', () => {
     const app = await testApp();
     const { agent: editor } = await signedIn(app, 'editor');
     const { roundupId, platform } = await createRoundup(editor);
-    const above = await createProduct(editor, platform);
-    await addPrice(editor, above, { region: 'DE', currency: 'EUR', amountMinor: 24900, observedOn: dayFromToday(-1) });
-    const unpriced = await createProduct(editor, platform);
-    await addPrice(editor, unpriced, {
-      region: 'GB',
-      currency: 'GBP',
-      amountMinor: 17900,
-      observedOn: dayFromToday(-1),
-    });
-    const dollars = await createProduct(editor, platform);
-    await addPrice(editor, dollars, {
-      region: 'DE',
-      currency: 'USD',
-      amountMinor: 19900,
-      observedOn: dayFromToday(-1),
-    });
-    const stale = await createProduct(editor, platform);
-    await addPrice(editor, stale, {
-      region: 'DE',
-      currency: 'EUR',
-      amountMinor: 19900,
-      observedOn: dayFromToday(-200),
-    });
-    const fine = await createProduct(editor, platform);
-    await addPrice(editor, fine, { region: 'DE', currency: 'EUR', amountMinor: 19900, observedOn: dayFromToday(-1) });
+    const yesterday = dayFromToday(-1);
+    const priced = (price: Parameters<typeof pricedProduct>[2][number]) => pricedProduct(editor, platform, [price]);
+    const above = await priced({ amountMinor: 24900, observedOn: yesterday });
+    const unpriced = await priced({ region: 'GB', currency: 'GBP', amountMinor: 17900, observedOn: yesterday });
+    const dollars = await priced({ currency: 'USD', amountMinor: 19900, observedOn: yesterday });
+    const stale = await priced({ amountMinor: 19900, observedOn: dayFromToday(-200) });
+    const fine = await priced({ amountMinor: 19900, observedOn: yesterday });
 
     const outside = await addEntry(editor, roundupId, above);
     expect(outside.warnings).toEqual([expect.stringMatching(/above the band €150\.00–€220\.00/)]);
@@ -146,28 +104,11 @@ describe('adding catalog products to a roundup', () => {
     const app = await testApp();
     const { agent: editor } = await signedIn(app, 'editor');
     const { agent: tester, user: testerUser } = await signedIn(app, 'tester');
-    const earlier = await createRoundup(editor, { configurations: 1 });
-    const veteran = await createProduct(editor, earlier.platform);
-    const { entry } = await addEntry(editor, earlier.roundupId, veteran);
-    await moveToBench(editor, earlier.roundupId);
-    const [cell] = (await matrixOf(editor, earlier.roundupId)).rows[0].cells;
-    await editor
-      .post(`/api/roundups/${earlier.roundupId}/assignments`)
-      .send({ entryIds: [entry.id], testerId: testerUser.id, dueDate: dayFromToday(7) });
-    for (const action of ['start', 'record']) {
-      if (action === 'record') await recordManualRun(tester, cell.id);
-      expect(
-        (
-          await tester
-            .post(`/api/roundups/${earlier.roundupId}/cells/${cell.id}/transitions`)
-            .send({ action, overrideReason: 'Bench free this morning' })
-        ).status,
-      ).toBe(200);
-    }
-    expect(
-      (await editor.post(`/api/roundups/${earlier.roundupId}/cells/${cell.id}/transitions`).send({ action: 'accept' }))
-        .status,
-    ).toBe(200);
+    const earlier = await roundupOnTheBench(editor, { configurations: 1 });
+    const [veteran] = earlier.productIds;
+    const [cell] = earlier.matrix.rows[0].cells;
+    await assignCells(editor, earlier.roundupId, { entryIds: earlier.entryIds }, testerUser.id, dayFromToday(7));
+    await acceptedCell(editor, tester, earlier.roundupId, cell.id);
 
     const { roundupId, platform } = await createRoundup(editor, { platform: earlier.platform, configurations: 2 });
     const untested = await createProduct(editor, platform);
@@ -215,13 +156,9 @@ describe('adding catalog products to a roundup', () => {
     expect(twice.body.error.code).toBe('entry_exists');
 
     await moveToBench(editor, roundupId);
-    await editor
-      .post(`/api/roundups/${roundupId}/assignments`)
-      .send({ entryIds: [entry.id], testerId: testerUser.id, dueDate: dayFromToday(3) });
+    await assignCells(editor, roundupId, { entryIds: [entry.id] }, testerUser.id, dayFromToday(3));
     const [cell] = (await matrixOf(editor, roundupId)).rows[0].cells;
-    await tester
-      .post(`/api/roundups/${roundupId}/cells/${cell.id}/transitions`)
-      .send({ action: 'start', overrideReason: 'Bench free this morning; booking follows' });
+    await moveCell(tester, roundupId, cell.id, 'start');
     const remove = await editor.delete(`/api/roundups/${roundupId}/entries/${entry.id}`);
     expect(remove.status).toBe(409);
     expect(remove.body.error.code).toBe('entry_has_work');

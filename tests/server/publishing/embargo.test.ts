@@ -14,7 +14,7 @@ import { ManualClock } from '../../../server/jobs/clock';
 import { JobRunner } from '../../../server/jobs/job-runner';
 import { buildPublishedRoundup } from '../../../server/public-site/published-roundup';
 import { publishJobKey } from '../../../server/services/publishing.service';
-import { signedIn, testDataSource, testEnv, TEST_HOST, type TestApp } from '../support/test-app';
+import { signedIn, testDataSource, testEnv, TEST_HOST, type Client, type TestApp } from '../support/test-app';
 import { WriteUpSectionEntity } from '../../../server/entities/write-up-section.entity';
 import { addEntry, createProduct, createRoundup } from '../planning/support/planning-fixtures';
 import { roundupInReview, scheduleAt } from './support/publishing-fixtures';
@@ -37,6 +37,24 @@ function runnerAt(clock: ManualClock, roundupId: number) {
     log: quiet,
     onlyUniqueKeys: [publishJobKey(roundupId)],
   });
+}
+
+/** A whole second about an hour from now. */
+function anHourAhead() {
+  return new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+}
+
+/** Schedules the roundup an hour ahead and lets the publish job run at that time; answers its public path. */
+async function publishByJob(editor: Client, roundupId: number) {
+  const at = anHourAhead();
+  await scheduleAt(editor, roundupId, at);
+  await runnerAt(new ManualClock(at), roundupId).runDue();
+  return (await services.publishing.status(roundupId)).publicPath as string;
+}
+
+/** Asks for a publishing time as the schedule form sends it: a local date and time in a time zone. */
+function putSchedule(agent: Client, roundupId: number, date: string, time: string, timeZone: string) {
+  return agent.put(`/api/roundups/${roundupId}/schedule`).send({ date, time, timeZone });
 }
 
 /** Every address a published roundup appears at, and whether the response shows it. */
@@ -66,7 +84,7 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
   it('nothing is public one second before the time; everything is at the time, published once', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
     const { roundupId, title } = await roundupInReview(app, editor, dataSource);
-    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+    const at = anHourAhead();
     const scheduled = await scheduleAt(editor, roundupId, at);
     expect(scheduled.state).toBe('scheduled');
     expect(scheduled.schedule.publishAt).toBe(at.toISOString());
@@ -124,10 +142,7 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
   it('serves the snapshot with ETag, 304, the accepted compression, caching and content-type', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
     const { roundupId, title } = await roundupInReview(app, editor, dataSource);
-    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
-    await scheduleAt(editor, roundupId, at);
-    await runnerAt(new ManualClock(at), roundupId).runDue();
-    const path = (await services.publishing.status(roundupId)).publicPath as string;
+    const path = await publishByJob(editor, roundupId);
 
     const plain = await reader().get(path).set('Accept-Encoding', 'identity');
     expect(plain.status).toBe(200);
@@ -164,10 +179,7 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
   it('later edits reach readers only with a published update, logged on the page with its note and date', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
     const { roundupId, title } = await roundupInReview(app, editor, dataSource);
-    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
-    await scheduleAt(editor, roundupId, at);
-    await runnerAt(new ManualClock(at), roundupId).runDue();
-    const path = (await services.publishing.status(roundupId)).publicPath as string;
+    const path = await publishByJob(editor, roundupId);
     const before = await reader().get(path);
 
     const renamed = `${title} (corrected)`;
@@ -206,7 +218,7 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
   it('reschedules and unschedules; the job follows the schedule', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
     const { roundupId } = await roundupInReview(app, editor, dataSource);
-    const first = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+    const first = anHourAhead();
     const later = new Date(first.getTime() + 86_400_000);
     await scheduleAt(editor, roundupId, first);
     await scheduleAt(editor, roundupId, later, 'America/Los_Angeles');
@@ -232,18 +244,12 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
     const { roundupId } = await roundupInReview(app, editor, dataSource);
     // United States daylight time begins 14 March 2027 at 02:00 local (15 U.S.C. § 260a): 09:00 is UTC−8 the day
     // before and UTC−7 the day after.
-    const before = await editor
-      .put(`/api/roundups/${roundupId}/schedule`)
-      .send({ date: '2027-03-13', time: '09:00', timeZone: 'America/Los_Angeles' });
+    const before = await putSchedule(editor, roundupId, '2027-03-13', '09:00', 'America/Los_Angeles');
     expect(before.status, before.text).toBe(200);
     expect(before.body.schedule).toMatchObject({ publishAt: '2027-03-13T17:00:00.000Z', utcOffset: 'UTC−08:00' });
-    const after = await editor
-      .put(`/api/roundups/${roundupId}/schedule`)
-      .send({ date: '2027-03-15', time: '09:00', timeZone: 'America/Los_Angeles' });
+    const after = await putSchedule(editor, roundupId, '2027-03-15', '09:00', 'America/Los_Angeles');
     expect(after.body.schedule).toMatchObject({ publishAt: '2027-03-15T16:00:00.000Z', utcOffset: 'UTC−07:00' });
-    const gap = await editor
-      .put(`/api/roundups/${roundupId}/schedule`)
-      .send({ date: '2027-03-14', time: '02:30', timeZone: 'America/Los_Angeles' });
+    const gap = await putSchedule(editor, roundupId, '2027-03-14', '02:30', 'America/Los_Angeles');
     expect(gap.status).toBe(422);
     expect(gap.body.error.fields.time).toMatch(/does not exist/);
   });
@@ -251,24 +257,18 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
   it('refuses a schedule in the past, for a roundup not in review, and from a writer', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
     const { roundupId } = await roundupInReview(app, editor, dataSource);
-    const past = await editor
-      .put(`/api/roundups/${roundupId}/schedule`)
-      .send({ date: '2026-01-05', time: '09:00', timeZone: 'UTC' });
+    const past = await putSchedule(editor, roundupId, '2026-01-05', '09:00', 'UTC');
     expect(past.status).toBe(422);
     expect(past.body.error.fields.time).toMatch(/passed/);
 
     await dataSource.getRepository(RoundupEntity).update({ id: roundupId }, { state: 'writing' });
-    const notReady = await editor
-      .put(`/api/roundups/${roundupId}/schedule`)
-      .send({ date: '2030-01-05', time: '09:00', timeZone: 'UTC' });
+    const notReady = await putSchedule(editor, roundupId, '2030-01-05', '09:00', 'UTC');
     expect(notReady.status).toBe(409);
     const status = await editor.get(`/api/roundups/${roundupId}/publishing`);
     expect(status.body.readiness.ready).toBe(false);
 
     const { agent: writer } = await signedIn(app, 'writer');
-    const denied = await writer
-      .put(`/api/roundups/${roundupId}/schedule`)
-      .send({ date: '2030-01-05', time: '09:00', timeZone: 'UTC' });
+    const denied = await putSchedule(writer, roundupId, '2030-01-05', '09:00', 'UTC');
     expect(denied.status).toBe(403);
   });
 
@@ -282,9 +282,7 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
 
     const status = await editor.get(`/api/roundups/${setup.roundupId}/publishing`);
     expect(status.body.readiness.ready).toBe(false);
-    const refused = await editor
-      .put(`/api/roundups/${setup.roundupId}/schedule`)
-      .send({ date: '2030-01-05', time: '09:00', timeZone: 'UTC' });
+    const refused = await putSchedule(editor, setup.roundupId, '2030-01-05', '09:00', 'UTC');
     expect(refused.status).toBe(422);
     expect(refused.body.error.code).toBe('not_ready');
     const problems = refused.body.error.details.problems as { message: string; link: string | null }[];
@@ -305,7 +303,7 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
   it('the publish job refuses a roundup that gained a blocker after scheduling: back In review, nothing public', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
     const { roundupId, title } = await roundupInReview(app, editor, dataSource);
-    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
+    const at = anHourAhead();
     await scheduleAt(editor, roundupId, at);
     // A signed-off section goes back to the writer after scheduling.
     await dataSource
@@ -330,10 +328,7 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
   it('pages outside the snapshot read the publication: an edit shows only once an update is published', async () => {
     const { agent: editor } = await signedIn(app, 'editor');
     const { roundupId, products } = await roundupInReview(app, editor, dataSource);
-    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
-    await scheduleAt(editor, roundupId, at);
-    await runnerAt(new ManualClock(at), roundupId).runDue();
-    const path = (await services.publishing.status(roundupId)).publicPath as string;
+    const path = await publishByJob(editor, roundupId);
     const board = (await services.publishing.publishedModels()).find((m) => m.roundupId === roundupId) as unknown as {
       products: { productId: number; name: string; path: string }[];
       configurations: { id: number }[];
@@ -404,9 +399,7 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
     }
     await dataSource.getRepository(RoundupEntity).update({ id: roundupId }, { state: 'in-review' });
 
-    const at = new Date(Math.ceil((Date.now() + 3_600_000) / 1000) * 1000);
-    await scheduleAt(editor, roundupId, at);
-    await runnerAt(new ManualClock(at), roundupId).runDue();
+    await publishByJob(editor, roundupId);
     const photo = await reader().get(photoPath);
     expect(photo.status).toBe(200);
     expect(photo.headers['content-type']).toBe('image/webp');

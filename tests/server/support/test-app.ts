@@ -107,3 +107,15 @@ export async function signedIn(app: TestApp, roleOrUser: Role | TestUser) {
   if (response.status !== 200) throw new Error(`sign-in failed for ${user.email}: ${response.status} ${response.text}`);
   return { agent, user };
 }
+
+/** The people of a lab test on a fresh app: an editor, a tester, another tester and a writer, each signed in. */
+export async function signedInTeam(app?: TestApp) {
+  const on = app ?? (await testApp());
+  return {
+    app: on,
+    editor: await signedIn(on, 'editor'),
+    tester: await signedIn(on, 'tester'),
+    otherTester: await signedIn(on, 'tester'),
+    writer: await signedIn(on, 'writer'),
+  };
+}

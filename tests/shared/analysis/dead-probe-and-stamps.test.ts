@@ -1,24 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { analyseLog, previewLog } from '../../../shared/domain/analysis/analyse-log';
 import { qaFlagLabels } from '../../../shared/domain/analysis/qa-flag-labels';
-import { syntheticLoggerLog, type SyntheticLogSpec } from '../../../shared/generators/synthetic-logger-log';
+import { syntheticLoggerLog } from '../../../shared/generators/synthetic-logger-log';
 import { qaFlagCodes, type AnalysisRequestInput } from '../../../shared/schemas/analysis';
-
-/** An hour at 1 Hz with three VRM probes; VRM 3 reads OPEN from first to last sample (a dead probe). */
-function threeProbes(): SyntheticLogSpec {
-  return {
-    durationS: 3600,
-    sampleHz: 1,
-    seed: 9,
-    probes: [
-      { name: 'VRM 1', startC: 30, riseC: 45, tauS: 420 },
-      { name: 'VRM 2', startC: 30, riseC: 40, tauS: 400 },
-      { name: 'VRM 3', startC: 30, riseC: 40, tauS: 400, dropouts: [{ fromS: 0, toS: 3600, marker: 'OPEN' }] },
-    ],
-    ambient: { name: 'Ambient', startC: 21 },
-    clock: { name: 'CPU clock [MHz]', mhz: 4600 },
-  };
-}
+import { deadThirdProbeSpec } from '../../support/soak-logs';
 
 const mapping = {
   vrm: ['VRM 1 [°C]', 'VRM 2 [°C]', 'VRM 3 [°C]'],
@@ -33,7 +18,7 @@ function analyse(text: string, request: AnalysisRequestInput) {
 }
 
 describe('a dead probe', () => {
-  const text = syntheticLoggerLog(threeProbes());
+  const text = syntheticLoggerLog(deadThirdProbeSpec());
 
   it('when one VRM channel of three has no reading at all, then the verdict is withheld until the tester acts', () => {
     const analysis = analyse(text, { mapping });

@@ -2,34 +2,18 @@ import { expect } from 'vitest';
 import { WriteUpSectionEntity } from '../../../../server/entities/write-up-section.entity';
 import { testDataSource, type Client } from '../../support/test-app';
 import {
-  addEntry,
-  addPrice,
-  createProduct,
+  addTestedBoards,
+  assignCells,
   createRoundup,
   dayFromToday,
   matrixOf,
+  moveCell,
+  moveRoundup,
   moveToBench,
-  tag,
+  recordManualRun,
+  pricedProduct,
+  type ManualFigures,
 } from '../../planning/support/planning-fixtures';
-
-export interface ManualFigures {
-  peakC: number;
-  throttled?: boolean;
-}
-
-/** A manual run on a running cell (no booking, so with a reason). */
-export async function manualRun(tester: Client, cellId: number, figures: ManualFigures) {
-  const response = await tester.post(`/api/cells/${cellId}/manual-runs`).send({
-    firmwareVersion: 'F1.0',
-    startedAt: new Date().toISOString(),
-    manualPeakC: figures.peakC,
-    manualAmbientC: 21.0,
-    throttled: figures.throttled ?? false,
-    outsideBookingReason: 'Set-up check before the booking system was used.',
-  });
-  expect(response.status, response.text).toBe(201);
-  return response.body.run.id as number;
-}
 
 export interface TestedProduct {
   entryId: number;
@@ -56,21 +40,11 @@ export async function roundupWithResults(
   } = {},
 ) {
   const configurations = figures[0].length;
-  const setup = options.plan
-    ? await roundupOnPlan(editor, options.plan)
-    : await createRoundup(editor, { configurations });
-  const products: TestedProduct[] = [];
-  for (const [index] of figures.entries()) {
-    const productId = await createProduct(editor, setup.platform);
-    await addPrice(editor, productId, {
-      region: 'DE',
-      currency: 'EUR',
-      amountMinor: 16000 + index * 1500,
-      observedOn: dayFromToday(-3),
-    });
-    const { entry } = await addEntry(editor, setup.roundupId, productId);
-    products.push({ entryId: entry.id, productId, runIds: [], cellIds: [] });
-  }
+  const setup = await createRoundup(editor, { configurations, plan: options.plan });
+  const boards = await addTestedBoards(editor, setup, figures.length, (index) =>
+    pricedProduct(editor, setup.platform, [{ amountMinor: 16000 + index * 1500, observedOn: dayFromToday(-3) }]),
+  );
+  const products: TestedProduct[] = boards.map((board) => ({ ...board, runIds: [], cellIds: [] }));
   for (const productId of options.referenceProductIds ?? []) {
     const reference = await editor
       .post(`/api/roundups/${setup.roundupId}/entries`)
@@ -78,56 +52,26 @@ export async function roundupWithResults(
     expect(reference.status, reference.text).toBe(201);
   }
   await moveToBench(editor, setup.roundupId);
-  const assign = await editor
-    .post(`/api/roundups/${setup.roundupId}/assignments`)
-    .send({ entryIds: products.map((p) => p.entryId), testerId: tester.user.id, dueDate: dayFromToday(5) });
-  expect(assign.status, assign.text).toBe(200);
+  const entryIds = products.map((p) => p.entryId);
+  await assignCells(editor, setup.roundupId, { entryIds }, tester.user.id, dayFromToday(5));
   const matrix = await matrixOf(editor, setup.roundupId);
   for (const [index, product] of products.entries()) {
     const row = matrix.rows.find((r) => r.entryId === product.entryId)!;
     for (const [column, cell] of row.cells.entries()) {
-      const start = await tester.agent
-        .post(`/api/roundups/${setup.roundupId}/cells/${cell.id}/transitions`)
-        .send({ action: 'start', overrideReason: 'Bench free this morning; booking follows' });
-      expect(start.status, start.text).toBe(200);
+      await moveCell(tester.agent, setup.roundupId, cell.id, 'start');
       const runIds: number[] = [];
-      for (const run of figures[index][column]) runIds.push(await manualRun(tester.agent, cell.id, run));
+      for (const run of figures[index][column]) runIds.push((await recordManualRun(tester.agent, cell.id, run)).id);
       product.runIds.push(runIds);
       product.cellIds.push(cell.id);
       if (options.leaveOpen && index === products.length - 1 && column === row.cells.length - 1) continue;
-      const record = await tester.agent
-        .post(`/api/roundups/${setup.roundupId}/cells/${cell.id}/transitions`)
-        .send({ action: 'record' });
-      expect(record.status, record.text).toBe(200);
-      const accept = await editor
-        .post(`/api/roundups/${setup.roundupId}/cells/${cell.id}/transitions`)
-        .send({ action: 'accept' });
-      expect(accept.status, accept.text).toBe(200);
+      await moveCell(tester.agent, setup.roundupId, cell.id, 'record');
+      await moveCell(editor, setup.roundupId, cell.id, 'accept');
       const ofRecord = await editor.post(`/api/runs/${runIds[0]}/run-of-record`).send({});
       expect(ofRecord.status, ofRecord.text).toBe(200);
     }
   }
-  if (!options.leaveOpen) {
-    const writing = await editor.post(`/api/roundups/${setup.roundupId}/state`).send({ to: 'writing' });
-    expect(writing.status, writing.text).toBe(200);
-  }
+  if (!options.leaveOpen) await moveRoundup(editor, setup.roundupId, 'writing');
   return { ...setup, products };
-}
-
-/** A roundup on a given bench profile and load configurations (say, an earlier roundup's), in Planning. */
-async function roundupOnPlan(editor: Client, plan: { benchProfileId: number; loadConfigurationIds: number[] }) {
-  const platform = `Helix-1700 ${tag()}`;
-  const response = await editor.post('/api/roundups').send({
-    title: `Helix-1700 follow-up ${tag()}`,
-    platform,
-    priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE' },
-    targetPublishDate: dayFromToday(60),
-    timeZone: 'Europe/Berlin',
-    benchProfileId: plan.benchProfileId,
-    loadConfigurationIds: plan.loadConfigurationIds,
-  });
-  expect(response.status, response.text).toBe(201);
-  return { roundupId: response.body.id as number, platform, ...plan };
 }
 
 /** Approves every chart that has something to draw, as the editor saw it. */

@@ -11,13 +11,14 @@ import { SampleEntity } from '../../../../server/entities/sample.entity';
 import type { RoundupState } from '../../../../shared/domain/planning/roundup-states';
 import { signedIn, testApp, testDataSource, testEnv, type Client } from '../../support/test-app';
 import {
-  addEntry,
-  addPrice,
-  createProduct,
+  addTestedBoards,
+  assignCells,
   createRoundup,
   dayFromToday,
   matrixOf,
   moveToBench,
+  pricedProduct,
+  recordManualRun,
   tag,
 } from '../../planning/support/planning-fixtures';
 
@@ -40,19 +41,6 @@ export interface PublishedFixture {
   runIds: number[][];
   editor: Client;
   tester: Client;
-}
-
-async function manualRun(agent: Client, cellId: number, run: PlannedRun) {
-  const response = await agent.post(`/api/cells/${cellId}/manual-runs`).send({
-    firmwareVersion: 'F1.0',
-    startedAt: new Date(Date.now() - 86_400_000).toISOString(),
-    manualPeakC: run.peakC,
-    manualAmbientC: run.ambientC ?? 21.0,
-    throttled: run.throttled ?? false,
-    outsideBookingReason: 'Recorded from the bench display.',
-  });
-  expect(response.status, response.text).toBe(201);
-  return response.body.run.id as number;
 }
 
 /**
@@ -83,24 +71,18 @@ export async function publishedFixture(
     expect(put.status, put.text).toBe(200);
     configurationIds = options.configurationIds;
   }
-  const products: PublishedFixture['products'] = [];
-  for (const [index] of grid.entries()) {
-    const model = options.models?.[index] ?? `Testboard ${tag()}`;
-    const maker = `Vendrel ${tag()}`;
-    const productId = await createProduct(editor.agent, setup.platform, { maker, model });
-    for (const price of options.prices?.[index] ?? []) {
-      await addPrice(editor.agent, productId, { region: 'DE', currency: 'EUR', ...price });
-    }
-    const { entry } = await addEntry(editor.agent, setup.roundupId, productId);
-    products.push({ productId, entryId: entry.id, model, maker });
-  }
+  const names = grid.map((_, index) => ({
+    model: options.models?.[index] ?? `Testboard ${tag()}`,
+    maker: `Vendrel ${tag()}`,
+  }));
+  const boards = await addTestedBoards(editor.agent, setup, grid.length, (index) =>
+    pricedProduct(editor.agent, setup.platform, options.prices?.[index] ?? [], names[index]),
+  );
+  const products = boards.map((board, index) => ({ ...board, ...names[index] }));
   await moveToBench(editor.agent, setup.roundupId);
   const matrix = await matrixOf(editor.agent, setup.roundupId);
   const cellIds = matrix.rows.flatMap((row) => row.cells.map((cell) => cell.id));
-  const assigned = await editor.agent
-    .post(`/api/roundups/${setup.roundupId}/assignments`)
-    .send({ cellIds, testerId: tester.user.id, dueDate: dayFromToday(3) });
-  expect(assigned.status, assigned.text).toBe(200);
+  await assignCells(editor.agent, setup.roundupId, { cellIds }, tester.user.id, dayFromToday(3));
 
   const runIds: number[][] = [];
   for (const [row, runs] of grid.entries()) {
@@ -109,7 +91,8 @@ export async function publishedFixture(
     for (const [column, planned] of runs.entries()) {
       const cell = entryRow?.cells[column];
       if (!cell) throw new Error('cell missing');
-      const runId = await manualRun(tester.agent, cell.id, planned);
+      const startedAt = new Date(Date.now() - 86_400_000).toISOString();
+      const runId = (await recordManualRun(tester.agent, cell.id, { ...planned, startedAt })).id;
       runIds[row].push(runId);
       const review = await editor.agent
         .post(`/api/runs/${runId}/review`)

@@ -3,9 +3,8 @@
 // Vitest (unit + API integration on a throwaway database) and Playwright (production build, seeded
 // throwaway database), and stop what it started.
 import { randomBytes } from 'node:crypto';
-import { createServer } from 'node:net';
 import { ensureBuilt } from './lib/build.mjs';
-import { startMailRelay } from './lib/mail-relay.mjs';
+import { freePort, startMailRelay } from './lib/mail-relay.mjs';
 import { ensureDebianPackages, SetupError } from './lib/mariadb.mjs';
 import { ensureDatabase, ensureDependencies, runStep } from './lib/setup.mjs';
 
@@ -35,18 +34,6 @@ const unitUrl = withDatabase(`benchwire_test_unit_${suffix}`);
 const e2eUrl = withDatabase(`benchwire_test_e2e_${suffix}`);
 const created = [];
 let mailRelay = null;
-
-function freePort() {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.unref();
-    server.on('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address();
-      server.close(() => resolve(port));
-    });
-  });
-}
 
 let exitCode = 0;
 const started = Date.now();

@@ -5,7 +5,8 @@ import { connect, createServer } from 'node:net';
 import { resolve } from 'node:path';
 import { projectRoot } from './setup.mjs';
 
-function freePort() {
+/** A port of 127.0.0.1 free right now (the OS picks it). */
+export function freePort() {
   return new Promise((resolvePort, reject) => {
     const server = createServer();
     server.unref();

@@ -1,6 +1,6 @@
 import sharp from 'sharp';
 import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
-import { demoAccounts } from './support/demo-accounts';
+import { apiAs, ok, plannedRoundup, testedAndAccepted } from './support/ready-roundup';
 import { signInAs, signOut } from './support/sign-in';
 import { uniqueSuffix } from './support/unique';
 
@@ -9,156 +9,21 @@ import { uniqueSuffix } from './support/unique';
 // every chart, signs off every section and sees the roundup become ready to schedule. The roundup is built through
 // the API (two boards under one stock load, one of which throttled, each cell accepted with a manual run of record).
 
-async function apiAs(
-  playwright: { request: { newContext: (options: object) => Promise<APIRequestContext> } },
-  baseURL: string,
-  role: 'editor' | 'tester',
-) {
-  const api = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { Origin: baseURL } });
-  const account = demoAccounts[role];
-  const signIn = await api.post('/api/auth/sign-in', { data: { email: account.email, password: account.password } });
-  expect(signIn.status()).toBe(200);
-  return api;
-}
-
-async function ok<T>(response: Promise<import('@playwright/test').APIResponse>): Promise<T> {
-  const answer = await response;
-  expect(answer.ok(), `${answer.url()}: ${answer.status()} ${await answer.text()}`).toBe(true);
-  return (await answer.json()) as T;
-}
-
-const day = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
-
 /** A roundup in Writing: two boards under one stock load, each cell accepted with a manual run of record. */
 async function roundupReadyForEditing(editor: APIRequestContext, tester: APIRequestContext) {
   const suffix = uniqueSuffix();
-  const profile = await ok<{ id: number }>(
-    editor.post('/api/bench-profiles', {
-      data: {
-        name: `Charts bench ${suffix}`,
-        caseAndFans: 'Open test bench, one 120 mm fan',
-        cooler: 'Quillon Arctide 360 liquid cooler',
-        psu: 'Ostrel Works 1000 W Platinum',
-        memory: '2 × 16 GB at 6000 MT/s',
-        roomTempTargetC: 21,
-        roomTempToleranceC: 1,
-        probeType: 'Type K thermocouple, 0.1 mm bead',
-        probePlacement: 'Board rear under the V-core stages',
-        requiredSoakMinutes: 60,
-      },
-    }),
-  );
-  const config = await ok<{ id: number }>(
-    editor.post('/api/load-configurations', {
-      data: {
-        name: `Stock all-core ${suffix}`,
-        cpuDescription: 'Helix HX-16 sample, 16 cores',
-        settingsMode: 'stock',
-        expectedPackagePowerW: 230,
-        coreVoltageV: 1.25,
-        soakMinutes: 60,
-      },
-    }),
-  );
-  const platform = `Helix-1700 ${suffix}`;
-  const roundup = await ok<{ id: number }>(
-    editor.post('/api/roundups', {
-      data: {
-        title: `Charts check ${suffix}`,
-        platform,
-        priceBand: { minMinor: 15000, maxMinor: 22000, currency: 'EUR', region: 'DE' },
-        targetPublishDate: day(40),
-        timeZone: 'Europe/Berlin',
-        benchProfileId: profile.id,
-        loadConfigurationIds: [config.id],
-      },
-    }),
-  );
   const boards = [
     { model: `Tallow B70 ${suffix}`, peakC: 74.2, throttled: false, price: 17900 },
     { model: `Quarry B70 ${suffix}`, peakC: 69.5, throttled: true, price: 16400 },
   ];
-  for (const board of boards) {
-    const product = await ok<{ id: number }>(
-      editor.post('/api/catalog/products', {
-        data: {
-          maker: 'Korvath',
-          model: board.model,
-          platform,
-          socket: 'HX4',
-          chipset: 'HX-B70',
-          formFactor: 'atx',
-          releaseDate: '2025-03-14',
-          powerDesign: {
-            controller: 'KV-PWM8',
-            controllerPhases: 8,
-            phaseMultiplication: 'doubled',
-            stagesPerPhase: 1,
-            vcoreStageType: 'integrated-power-stage',
-            vcoreStagePart: 'KVS-60',
-            vcoreStageCurrentA: 60,
-            socRailStages: 2,
-            otherRails: '1 stage auxiliary',
-            heatsinkNotes: 'Two finned blocks',
-          },
-          features: {
-            rearUsb: { usb2: 4, usb5g: 2, usb10g: 2, usb20g: 1, usb40g: 0 },
-            frontUsbCHeader: 'usb-10g',
-            lanSpeedMbps: 2500,
-            wifi: 'wifi-6e',
-            m2Slots: 3,
-            sataPorts: 4,
-            audio: '7.1 HD audio',
-            ioShieldPrefitted: true,
-          },
-        },
-      }),
-    );
-    await ok(
-      editor.post(`/api/catalog/products/${product.id}/prices`, {
-        data: {
-          region: 'DE',
-          currency: 'EUR',
-          amountMinor: board.price,
-          observedOn: day(-2),
-          source: 'Brightmoor Direct',
-        },
-      }),
-    );
-    await ok(editor.post(`/api/roundups/${roundup.id}/entries`, { data: { productId: product.id, kind: 'tested' } }));
-  }
-  await ok(editor.post(`/api/roundups/${roundup.id}/state`, { data: { to: 'on-the-bench' } }));
-  const testerId = (await ok<{ user: { id: number } }>(tester.get('/api/auth/session'))).user.id;
-  const matrix = await ok<{ rows: { entryId: number; cells: { id: number }[] }[] }>(
-    editor.get(`/api/roundups/${roundup.id}/matrix`),
-  );
-  await ok(
-    editor.post(`/api/roundups/${roundup.id}/assignments`, {
-      data: { entryIds: matrix.rows.map((r) => r.entryId), testerId, dueDate: day(3) },
-    }),
-  );
-  for (const [index, row] of matrix.rows.entries()) {
-    const cellId = row.cells[0].id;
-    const transitions = `/api/roundups/${roundup.id}/cells/${cellId}/transitions`;
-    await ok(tester.post(transitions, { data: { action: 'start', overrideReason: 'Bench free this morning' } }));
-    const { run } = await ok<{ run: { id: number } }>(
-      tester.post(`/api/cells/${cellId}/manual-runs`, {
-        data: {
-          firmwareVersion: '1.04',
-          startedAt: new Date().toISOString(),
-          manualPeakC: boards[index].peakC,
-          manualAmbientC: 21.0,
-          throttled: boards[index].throttled,
-          outsideBookingReason: 'Logger was away for calibration; read off the meter.',
-        },
-      }),
-    );
-    await ok(tester.post(transitions, { data: { action: 'record' } }));
-    await ok(editor.post(transitions, { data: { action: 'accept' } }));
-    await ok(editor.post(`/api/runs/${run.id}/run-of-record`, { data: {} }));
-  }
-  await ok(editor.post(`/api/roundups/${roundup.id}/state`, { data: { to: 'writing' } }));
-  return { roundupId: roundup.id, boards };
+  const roundup = await plannedRoundup(editor, {
+    title: `Charts check ${suffix}`,
+    benchName: `Charts bench ${suffix}`,
+    configurations: [{ name: `Stock all-core ${suffix}`, packagePowerW: 230 }],
+    boards,
+  });
+  await testedAndAccepted(editor, tester, roundup, (row) => boards[row]);
+  return { roundupId: roundup.roundupId, boards };
 }
 
 /** A plain picture standing in for a product photo (the journey needs no real photograph). */

@@ -1,14 +1,11 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
 import { Badge } from '../../../components/ui/badge';
-import { Button, buttonStyles } from '../../../components/ui/button';
-import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
+import { buttonStyles } from '../../../components/ui/button';
 import { cx } from '../../../lib/class-names';
-import { describeSubmitError } from '../../../lib/form-errors';
 import type { Bench, Booking } from '../../../../shared/schemas/benches';
 import { formatDayHeading, formatLongDay, formatShortDate, formatSlot } from '../../../lib/format-time';
-import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
-import { useCancelBooking } from '../api/cancel-booking';
+import { BookingDetails, CancelBookingButton, CancelBookingDialog } from './booking-details';
 import { addDays, dateParam, dayShare, formatDuration, overlapsDay } from './booking-time';
 
 export interface BookingAgendaProps {
@@ -39,9 +36,7 @@ export function BookingAgenda({
   weekHref,
   zoneLabel,
 }: BookingAgendaProps) {
-  const cancel = useCancelBooking();
   const [cancelling, setCancelling] = useState<Booking | null>(null);
-  const [cancelError, setCancelError] = useState<string | undefined>();
   const shownBenches = benches.filter((bench) => (benchId === null ? bench.active : bench.id === benchId));
   const shown = bookings.filter((booking) => benchId === null || booking.bench.id === benchId);
   const days = Array.from({ length: 7 }, (_, index) => addDays(weekStart, index));
@@ -108,10 +103,7 @@ export function BookingAgenda({
                           key={booking.id}
                           booking={booking}
                           own={booking.tester.id === currentUserId}
-                          onCancel={() => {
-                            setCancelError(undefined);
-                            setCancelling(booking);
-                          }}
+                          onCancel={() => setCancelling(booking)}
                         />
                       ))}
                     </ul>
@@ -123,32 +115,7 @@ export function BookingAgenda({
         })}
       </ol>
 
-      <ConfirmDialog
-        open={cancelling !== null}
-        title="Cancel this booking?"
-        confirmLabel="Cancel booking"
-        cancelLabel="Keep it"
-        pending={cancel.isPending}
-        error={cancelError}
-        onCancel={() => setCancelling(null)}
-        onConfirm={() => {
-          if (!cancelling) return;
-          cancel.mutate(
-            { benchId: cancelling.bench.id, bookingId: cancelling.id },
-            {
-              onSuccess: () => setCancelling(null),
-              onError: (error) => setCancelError(describeSubmitError(error).message),
-            },
-          );
-        }}
-      >
-        {cancelling && (
-          <p>
-            {cancelling.bench.name}, {formatSlot(cancelling.startsAt, cancelling.endsAt)} ({zoneLabel}), booked by{' '}
-            {cancelling.tester.displayName}. The slot becomes free for others at once.
-          </p>
-        )}
-      </ConfirmDialog>
+      <CancelBookingDialog booking={cancelling} zoneLabel={zoneLabel} onClose={() => setCancelling(null)} />
     </section>
   );
 }
@@ -167,33 +134,9 @@ function BookingLine({ booking, own, onCancel }: { booking: Booking; own: boolea
           <span>{booking.tester.displayName}</span>
           {own && <Badge tone="accent">Yours</Badge>}
         </p>
-        {booking.cells.length > 0 && (
-          <ul className="mt-0.5 text-[0.8125rem] text-muted">
-            {booking.cells.map((item) => (
-              <li key={item.cell.id}>
-                {productDisplayName(item.product)} · {item.loadConfiguration.name}{' '}
-                <span className="whitespace-nowrap">({item.roundup.title})</span>
-              </li>
-            ))}
-          </ul>
-        )}
-        {booking.note && <p className="mt-0.5 text-[0.8125rem] text-ink italic">“{booking.note}”</p>}
-        {booking.overrideReason && (
-          <p className="mt-0.5 text-[0.8125rem] text-amber">
-            Set-up differs from the profile: {booking.overrideReason}
-          </p>
-        )}
+        <BookingDetails booking={booking} />
       </div>
-      {booking.cancellable && (
-        <Button
-          size="sm"
-          variant="quiet"
-          onClick={onCancel}
-          aria-label={`Cancel the booking of ${booking.bench.name}, ${formatSlot(booking.startsAt, booking.endsAt)}`}
-        >
-          Cancel
-        </Button>
-      )}
+      <CancelBookingButton booking={booking} onCancel={onCancel} />
     </li>
   );
 }

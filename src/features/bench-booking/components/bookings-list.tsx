@@ -1,35 +1,15 @@
 import { useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { describeSubmitError } from '../../../lib/form-errors';
 import { formatSlot, userTimeZone } from '../../../lib/format-time';
 import type { Booking } from '../../../../shared/schemas/benches';
-import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
-import { useCancelBooking } from '../api/cancel-booking';
+import { BookingDetails, CancelBookingButton, CancelBookingDialog } from './booking-details';
 
 /** The tester's upcoming slots, soonest first, each with the cells it covers. */
 export function BookingsList({ bookings }: { bookings: readonly Booking[] }) {
-  const cancel = useCancelBooking();
   const [cancelling, setCancelling] = useState<Booking | null>(null);
-  const [error, setError] = useState<string | undefined>();
   const [notice, setNotice] = useState<string | null>(null);
-
-  const confirm = () => {
-    if (!cancelling) return;
-    const what = `${cancelling.bench.name}, ${formatSlot(cancelling.startsAt, cancelling.endsAt)}`;
-    cancel.mutate(
-      { benchId: cancelling.bench.id, bookingId: cancelling.id },
-      {
-        onSuccess: () => {
-          setCancelling(null);
-          setNotice(`Cancelled: ${what}.`);
-        },
-        onError: (failure) => setError(describeSubmitError(failure).message),
-      },
-    );
-  };
+  const zone = userTimeZone();
 
   return (
     <div className="space-y-3">
@@ -49,56 +29,26 @@ export function BookingsList({ bookings }: { bookings: readonly Booking[] }) {
                   {booking.bench.name}{' '}
                   <span className="numeric font-normal">{formatSlot(booking.startsAt, booking.endsAt)}</span>
                 </p>
-                <ul className="mt-0.5 text-[0.8125rem] text-muted">
-                  {booking.cells.map((item) => (
-                    <li key={item.cell.id}>
-                      {productDisplayName(item.product)} · {item.loadConfiguration.name}
-                    </li>
-                  ))}
-                </ul>
-                {booking.note && <p className="mt-0.5 text-[0.8125rem]">{booking.note}</p>}
-                {booking.overrideReason && (
-                  <p className="mt-0.5 text-[0.8125rem] text-amber">
-                    Set-up differs from the profile: {booking.overrideReason}
-                  </p>
-                )}
+                <BookingDetails booking={booking} />
               </div>
-              {booking.cancellable && (
-                <Button
-                  size="sm"
-                  variant="quiet"
-                  aria-label={`Cancel booking: ${booking.bench.name}, ${formatSlot(booking.startsAt, booking.endsAt)}`}
-                  onClick={() => {
-                    setError(undefined);
-                    setNotice(null);
-                    setCancelling(booking);
-                  }}
-                >
-                  Cancel
-                </Button>
-              )}
+              <CancelBookingButton
+                booking={booking}
+                onCancel={() => {
+                  setNotice(null);
+                  setCancelling(booking);
+                }}
+              />
             </li>
           ))}
         </ul>
       )}
-      <p className="text-[0.8125rem] text-muted">Times are in {userTimeZone()}, the time zone of this device.</p>
-      <ConfirmDialog
-        open={cancelling !== null}
-        title="Cancel this booking?"
-        confirmLabel="Cancel booking"
-        cancelLabel="Keep it"
-        pending={cancel.isPending}
-        error={error}
-        onConfirm={confirm}
-        onCancel={() => setCancelling(null)}
-      >
-        {cancelling && (
-          <p>
-            {cancelling.bench.name}, {formatSlot(cancelling.startsAt, cancelling.endsAt)}. The slot becomes free for
-            others.
-          </p>
-        )}
-      </ConfirmDialog>
+      <p className="text-[0.8125rem] text-muted">Times are in {zone}, the time zone of this device.</p>
+      <CancelBookingDialog
+        booking={cancelling}
+        zoneLabel={zone}
+        onClose={() => setCancelling(null)}
+        onCancelled={(what) => setNotice(`Cancelled: ${what}.`)}
+      />
     </div>
   );
 }

@@ -1,4 +1,4 @@
-import type { ReactNode, Ref } from 'react';
+import type { Ref } from 'react';
 import { AnalysisResults } from './analysis-results';
 import { ColumnMappingForm } from './column-mapping-form';
 import { LogPreviewPanel } from './log-preview';
@@ -11,10 +11,11 @@ export interface LogCheckStepsProps {
   check: LogCheck;
   /** The level of the "Mapping and options" heading in its page. */
   headingLevel: 2 | 3;
-  /** Said above the mapping form, e.g. that it was filled in from a mapping used before. */
-  mappingNote?: ReactNode;
-  /** False when the draft did not come from the server's guess (no field is marked as guessed). */
-  showGuess?: boolean;
+  /**
+   * Where the mapping was filled in from when it is not the server's guess (a mapping used before), said above the
+   * form; with it, no field is marked as guessed.
+   */
+  filledFrom?: string | null;
   /** Focused when a new result arrives. */
   resultHeadingRef?: Ref<HTMLHeadingElement>;
 }
@@ -24,13 +25,7 @@ export interface LogCheckStepsProps {
  * analysing a stored run again): how the file reads, the mapping and options, what could not be read, and the
  * analysis with its chart. A dead probe confirmed from the result is analysed again at once.
  */
-export function LogCheckSteps({
-  check,
-  headingLevel,
-  mappingNote,
-  showGuess = true,
-  resultHeadingRef,
-}: LogCheckStepsProps) {
+export function LogCheckSteps({ check, headingLevel, filledFrom, resultHeadingRef }: LogCheckStepsProps) {
   const { file, reading, draft, failure, result, sending } = check;
   const Heading = headingLevel === 2 ? 'h2' : 'h3';
   return (
@@ -49,11 +44,18 @@ export function LogCheckSteps({
           <LogPreviewPanel preview={reading.preview} fileName={file.name} />
           <div>
             <Heading className="mb-3 text-lg font-semibold text-ink">2 · Mapping and options</Heading>
-            {mappingNote}
+            {filledFrom && (
+              <p role="status" className="mb-3 text-sm text-ink">
+                <span aria-hidden="true" className="mr-1.5 font-mono text-teal">
+                  ↺
+                </span>
+                {filledFrom}
+              </p>
+            )}
             <ColumnMappingForm
               preview={reading.preview}
               draft={draft}
-              guess={showGuess ? reading.guess : null}
+              guess={filledFrom ? null : reading.guess}
               onChange={check.setDraft}
               pending={sending?.stage === 'analysing'}
               disabled={sending?.stage === 'reading'}

@@ -5,14 +5,28 @@ import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { describeSubmitError } from '../../../lib/form-errors';
 import { useRecordManualRun } from '../api/test-runs-api';
-import { CelsiusField } from './celsius-field';
+import { CelsiusFields, readCelsius, type CelsiusFieldSpec } from './celsius-field';
 import { emptyFacts, factsRequest, RunFactsFields } from './record-run';
+
+const manualFields: readonly CelsiusFieldSpec<'manualPeakC' | 'manualAmbientC'>[] = [
+  {
+    name: 'manualPeakC',
+    id: 'manual-peak',
+    label: 'Peak VRM temperature (°C)',
+    invalid: 'Enter the peak in °C, such as 84.5.',
+  },
+  {
+    name: 'manualAmbientC',
+    id: 'manual-ambient',
+    label: 'Ambient (°C)',
+    invalid: 'Enter the ambient in °C, such as 21.0.',
+  },
+];
 
 /** A run entered by hand when no log exists: peak and ambient. Marked "Manual" everywhere it is shown. */
 export function ManualRunForm({ cellId, onRecorded }: { cellId: number; onRecorded: (runId: number) => void }) {
   const [facts, setFacts] = useState(emptyFacts);
-  const [peak, setPeak] = useState('');
-  const [ambient, setAmbient] = useState('');
+  const [temperatures, setTemperatures] = useState({ manualPeakC: '', manualAmbientC: '' });
   const [throttled, setThrottled] = useState(false);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [message, setMessage] = useState<string | null>(null);
@@ -22,16 +36,13 @@ export function ManualRunForm({ cellId, onRecorded }: { cellId: number; onRecord
   const submit = (event: FormEvent) => {
     event.preventDefault();
     const checked = factsRequest(facts);
-    const found = { ...checked.errors };
-    const peakC = Number(peak.trim());
-    const ambientC = Number(ambient.trim());
-    if (!peak.trim() || !Number.isFinite(peakC)) found.manualPeakC = 'Enter the peak in °C, such as 84.5.';
-    if (!ambient.trim() || !Number.isFinite(ambientC)) found.manualAmbientC = 'Enter the ambient in °C, such as 21.0.';
+    const measured = readCelsius(manualFields, temperatures);
+    const found = { ...checked.errors, ...measured.errors };
     setErrors(found);
     setMessage(null);
     if (!checked.request || Object.keys(found).length > 0) return;
     record.mutate(
-      { cellId, request: { ...checked.request, manualPeakC: peakC, manualAmbientC: ambientC, throttled } },
+      { cellId, request: { ...checked.request, ...measured.values, throttled } },
       {
         onSuccess: ({ run }) => onRecorded(run.id),
         onError: (error) => {
@@ -54,22 +65,7 @@ export function ManualRunForm({ cellId, onRecorded }: { cellId: number; onRecord
         askBookingReason={askBookingReason}
       />
       <div className="grid gap-4 sm:grid-cols-2">
-        <CelsiusField
-          id="manual-peak"
-          label="Peak VRM temperature (°C)"
-          value={peak}
-          onValueChange={setPeak}
-          error={errors.manualPeakC}
-          required
-        />
-        <CelsiusField
-          id="manual-ambient"
-          label="Ambient (°C)"
-          value={ambient}
-          onValueChange={setAmbient}
-          error={errors.manualAmbientC}
-          required
-        />
+        <CelsiusFields fields={manualFields} typed={temperatures} onChange={setTemperatures} errors={errors} required />
       </div>
       <Checkbox
         label="The board throttled"

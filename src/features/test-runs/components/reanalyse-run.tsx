@@ -98,16 +98,10 @@ export function ReanalyseRun({ run, onClose }: ReanalyseRunProps) {
         <LogCheckSteps
           check={check}
           headingLevel={3}
-          showGuess={!applied}
-          mappingNote={
-            applied && (
-              <p role="status" className="mb-3 text-sm text-ink">
-                <span aria-hidden="true" className="mr-1.5 font-mono text-teal">
-                  ↺
-                </span>
-                Filled in with the mapping and options of the analysis that counts now. Change them, then press Analyse.
-              </p>
-            )
+          filledFrom={
+            applied
+              ? 'Filled in with the mapping and options of the analysis that counts now. Change them, then press Analyse.'
+              : null
           }
         />
         {result && !check.resultOutdated && (

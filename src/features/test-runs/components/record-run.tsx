@@ -169,16 +169,8 @@ export function RecordLoggerRun({ cellId, rememberedMapping, signInPath, onRecor
       <LogCheckSteps
         check={check}
         headingLevel={3}
-        showGuess={!remembered}
-        mappingNote={
-          remembered && (
-            <p role="status" className="mb-3 text-sm text-ink">
-              <span aria-hidden="true" className="mr-1.5 font-mono text-teal">
-                ↺
-              </span>
-              Mapping remembered from this bench profile’s last run. Check it, then press Analyse.
-            </p>
-          )
+        filledFrom={
+          remembered ? 'Mapping remembered from this bench profile’s last run. Check it, then press Analyse.' : null
         }
       />
       {file && result && !check.resultOutdated && (

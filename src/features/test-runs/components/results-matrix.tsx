@@ -11,7 +11,7 @@ import { defaultVerdictRubric, type VerdictCode, type VerdictRubric } from '../.
 import type { ResultCell } from '../../../../shared/schemas/test-runs';
 import { formatC, formatDeltaC } from '../../log-check/components/format-figures';
 import { useRoundupResults, useSetRubric } from '../api/test-runs-api';
-import { CelsiusField } from './celsius-field';
+import { CelsiusFields, readCelsius, type CelsiusFieldSpec } from './celsius-field';
 import { FlagCount } from './run-detail';
 
 type ResultsRow = { entryId: number; name: string };
@@ -61,6 +61,21 @@ function ResultCellView({ cell, figure, href }: { cell: ResultCell; figure: 'pea
   );
 }
 
+const rubricFields: readonly CelsiusFieldSpec<'comfortableBelowC' | 'warmUpToC'>[] = [
+  {
+    name: 'comfortableBelowC',
+    id: 'rubric-comfortable',
+    label: 'Comfortable below (°C)',
+    invalid: 'Enter a temperature in °C.',
+  },
+  { name: 'warmUpToC', id: 'rubric-warm', label: 'Warm up to (°C)', invalid: 'Enter a temperature in °C.' },
+];
+
+const typedLimits = (rubric: VerdictRubric) => ({
+  comfortableBelowC: String(rubric.comfortableBelowC),
+  warmUpToC: String(rubric.warmUpToC),
+});
+
 function RubricForm({
   roundupId,
   rubric,
@@ -70,8 +85,7 @@ function RubricForm({
   rubric: VerdictRubric;
   isDefault: boolean;
 }) {
-  const [comfortable, setComfortable] = useState(String(rubric.comfortableBelowC));
-  const [warm, setWarm] = useState(String(rubric.warmUpToC));
+  const [limits, setLimits] = useState(typedLimits(rubric));
   const [errors, setErrors] = useState<FieldErrors>({});
   const [message, setMessage] = useState<string | null>(null);
   const save = useSetRubric();
@@ -82,10 +96,7 @@ function RubricForm({
       { roundupId, rubric: next },
       {
         onSuccess: () => {
-          if (next === null) {
-            setComfortable(String(defaultVerdictRubric.comfortableBelowC));
-            setWarm(String(defaultVerdictRubric.warmUpToC));
-          }
+          if (next === null) setLimits(typedLimits(defaultVerdictRubric));
         },
         onError: (error) => {
           const described = describeSubmitError(error);
@@ -101,36 +112,17 @@ function RubricForm({
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const comfortableBelowC = Number(comfortable);
-    const warmUpToC = Number(warm);
-    const found: FieldErrors = {};
-    if (!comfortable.trim() || !Number.isFinite(comfortableBelowC))
-      found.comfortableBelowC = 'Enter a temperature in °C.';
-    if (!warm.trim() || !Number.isFinite(warmUpToC)) found.warmUpToC = 'Enter a temperature in °C.';
-    else if (comfortableBelowC > warmUpToC) found.warmUpToC = 'The warm limit must not be below the comfortable limit.';
+    const { values, errors: found } = readCelsius(rubricFields, limits);
+    if (!found.warmUpToC && values.comfortableBelowC > values.warmUpToC)
+      found.warmUpToC = 'The warm limit must not be below the comfortable limit.';
     setErrors(found);
     if (Object.keys(found).length > 0) return;
-    send({ ...rubric, comfortableBelowC, warmUpToC });
+    send({ ...rubric, ...values });
   };
 
   return (
     <form noValidate onSubmit={submit} aria-label="Verdict rubric" className="flex flex-wrap items-end gap-3">
-      <CelsiusField
-        id="rubric-comfortable"
-        label="Comfortable below (°C)"
-        value={comfortable}
-        onValueChange={setComfortable}
-        error={errors.comfortableBelowC}
-        className="w-44"
-      />
-      <CelsiusField
-        id="rubric-warm"
-        label="Warm up to (°C)"
-        value={warm}
-        onValueChange={setWarm}
-        error={errors.warmUpToC}
-        className="w-44"
-      />
+      <CelsiusFields fields={rubricFields} typed={limits} onChange={setLimits} errors={errors} className="w-44" />
       <Button type="submit" pending={save.isPending && save.variables?.rubric !== null}>
         Save the rubric
       </Button>

@@ -29,6 +29,19 @@ export interface FieldProps {
   className?: string;
 }
 
+/** Separates what the field shell takes from the attributes meant for the control itself. */
+export function splitFieldProps<Rest extends object>({
+  label,
+  description,
+  error,
+  optional,
+  id,
+  className,
+  ...control
+}: FieldProps & Rest): [FieldProps, Omit<Rest, keyof FieldProps>] {
+  return [{ label, description, error, optional, id, className }, control];
+}
+
 /** The attributes that tie a control to its label, hint and error. */
 export interface ControlLink {
   id: string;

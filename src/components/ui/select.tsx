@@ -1,6 +1,6 @@
 import type { Ref, SelectHTMLAttributes } from 'react';
 import { cx } from '../../lib/class-names';
-import { controlStyles, FieldShell, type FieldProps } from './field-shell';
+import { controlStyles, FieldShell, splitFieldProps, type FieldProps } from './field-shell';
 
 export interface SelectOption {
   value: string;
@@ -16,19 +16,10 @@ export interface SelectProps
   ref?: Ref<HTMLSelectElement>;
 }
 
-export function Select({
-  label,
-  description,
-  error,
-  optional,
-  id,
-  className,
-  options,
-  placeholder,
-  ...selectProps
-}: SelectProps) {
+export function Select({ options, placeholder, ...props }: SelectProps) {
+  const [field, selectProps] = splitFieldProps(props);
   return (
-    <FieldShell {...{ label, description, error, optional, id, className }}>
+    <FieldShell {...field}>
       {(control) => (
         <select {...control} className={cx(controlStyles, 'appearance-auto pr-8')} {...selectProps}>
           {placeholder !== undefined && <option value="">{placeholder}</option>}

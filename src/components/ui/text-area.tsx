@@ -1,6 +1,6 @@
 import type { Ref, TextareaHTMLAttributes } from 'react';
 import { cx } from '../../lib/class-names';
-import { controlStyles, FieldShell, type FieldProps } from './field-shell';
+import { controlStyles, FieldShell, splitFieldProps, type FieldProps } from './field-shell';
 
 export interface TextAreaProps
   extends FieldProps, Omit<TextareaHTMLAttributes<HTMLTextAreaElement>, 'id' | 'className'> {
@@ -9,19 +9,10 @@ export interface TextAreaProps
 }
 
 /** A multi-line text field with the kit's label, hint and error layout. */
-export function TextArea({
-  label,
-  description,
-  error,
-  optional,
-  id,
-  className,
-  textAreaClassName,
-  rows = 3,
-  ...textAreaProps
-}: TextAreaProps) {
+export function TextArea({ textAreaClassName, rows = 3, ...props }: TextAreaProps) {
+  const [field, textAreaProps] = splitFieldProps(props);
   return (
-    <FieldShell {...{ label, description, error, optional, id, className }}>
+    <FieldShell {...field}>
       {(control) => (
         <textarea
           rows={rows}

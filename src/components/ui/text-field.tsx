@@ -1,6 +1,6 @@
 import type { InputHTMLAttributes, ReactNode, Ref } from 'react';
 import { cx } from '../../lib/class-names';
-import { controlStyles, FieldShell, type FieldProps } from './field-shell';
+import { controlStyles, FieldShell, splitFieldProps, type FieldProps } from './field-shell';
 
 export interface TextFieldProps extends FieldProps, Omit<InputHTMLAttributes<HTMLInputElement>, 'id' | 'className'> {
   /** Extra content right of the input, e.g. a show-password button. */
@@ -9,20 +9,10 @@ export interface TextFieldProps extends FieldProps, Omit<InputHTMLAttributes<HTM
   ref?: Ref<HTMLInputElement>;
 }
 
-export function TextField({
-  label,
-  description,
-  error,
-  optional,
-  id,
-  className,
-  addon,
-  inputClassName,
-  type = 'text',
-  ...inputProps
-}: TextFieldProps) {
+export function TextField({ addon, inputClassName, type = 'text', ...props }: TextFieldProps) {
+  const [field, inputProps] = splitFieldProps(props);
   return (
-    <FieldShell {...{ label, description, error, optional, id, className }}>
+    <FieldShell {...field}>
       {(control) => (
         <div className="flex gap-1.5">
           <input

@@ -1,9 +1,10 @@
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { Panel } from '../../../components/ui/panel';
 import { Select } from '../../../components/ui/select';
 import { DateTime } from '../../../components/ui/date-time';
 import { describeSubmitError } from '../../../lib/form-errors';
@@ -96,7 +97,6 @@ export function ChartCard({
   onApprove,
   onSettings,
 }: ChartCardProps) {
-  const headingId = useId();
   const [metric, setMetric] = useState<ChartMetric>(chart.settings.metric);
   const [references, setReferences] = useState<number[] | null>(chart.settings.referenceEntryIds);
   const [configuration, setConfiguration] = useState<number | null>(chart.settings.loadConfigurationId);
@@ -118,135 +118,126 @@ export function ChartCard({
   };
 
   return (
-    <section
+    <Panel
       id={chart.key}
-      aria-labelledby={headingId}
-      className="scroll-mt-4 rounded-[3px] border border-rule bg-surface"
+      title={chart.title}
+      actions={<Badge tone={statusTones[chart.status]}>{chartStatusLabels[chart.status]}</Badge>}
+      bodyClassName="space-y-3"
     >
-      <div className="flex flex-wrap items-start justify-between gap-2 border-b border-rule px-4 py-3">
-        <h2 id={headingId} className="min-w-0 text-base font-semibold text-ink">
-          {chart.title}
-        </h2>
-        <Badge tone={statusTones[chart.status]}>{chartStatusLabels[chart.status]}</Badge>
-      </div>
-      <div className="space-y-3 px-4 py-4">
-        {chart.status === 'stale' && (
-          <Alert tone="warning" title="Changed since it was approved: approve it again">
-            <ul className="list-disc pl-4">
-              {chart.changes.map((change) => (
-                <li key={change}>{change}</li>
-              ))}
-            </ul>
-          </Alert>
-        )}
-        {values.length > 0 ? (
-          <ChartCanvas
-            chart={chart.data}
-            label={`${chart.title}. ${values.map((v) => `${v.label}: ${v.valueText}${v.marks.length ? ` (${v.marks.join(', ')})` : ''}`).join('; ')}.`}
-          />
-        ) : (
-          <p className="text-sm text-muted">Nothing to draw yet: no product has a figure this chart can show.</p>
-        )}
-        {chart.data.omitted.length > 0 && (
-          <div className="text-sm">
-            <p className="font-semibold text-ink">Left off the chart</p>
-            <ul className="list-disc pl-5 text-muted">
-              {chart.data.omitted.map((o) => (
-                <li key={`${o.label}-${o.reason}`}>
-                  {o.label}: {o.reason}
-                </li>
-              ))}
-            </ul>
-          </div>
-        )}
-        {values.length > 0 && <ChartTable chart={chart.data} />}
-        {chart.approval && (
-          <p className="text-sm text-muted">
-            Approved by {chart.approval.approvedBy?.displayName ?? 'former staff'},{' '}
-            <DateTime value={chart.approval.approvedAt} />.
-            {chart.approval.imageUrl && (
-              <>
-                {' '}
-                <a href={chart.approval.imageUrl} className="text-copper underline" target="_blank" rel="noreferrer">
-                  Approved image (PNG)
-                </a>
-              </>
-            )}
-          </p>
-        )}
-        {canDecide && (
-          <div className="space-y-3 border-t border-rule pt-3">
-            <div className="grid gap-3 sm:grid-cols-2">
+      {chart.status === 'stale' && (
+        <Alert tone="warning" title="Changed since it was approved: approve it again">
+          <ul className="list-disc pl-4">
+            {chart.changes.map((change) => (
+              <li key={change}>{change}</li>
+            ))}
+          </ul>
+        </Alert>
+      )}
+      {values.length > 0 ? (
+        <ChartCanvas
+          chart={chart.data}
+          label={`${chart.title}. ${values.map((v) => `${v.label}: ${v.valueText}${v.marks.length ? ` (${v.marks.join(', ')})` : ''}`).join('; ')}.`}
+        />
+      ) : (
+        <p className="text-sm text-muted">Nothing to draw yet: no product has a figure this chart can show.</p>
+      )}
+      {chart.data.omitted.length > 0 && (
+        <div className="text-sm">
+          <p className="font-semibold text-ink">Left off the chart</p>
+          <ul className="list-disc pl-5 text-muted">
+            {chart.data.omitted.map((o) => (
+              <li key={`${o.label}-${o.reason}`}>
+                {o.label}: {o.reason}
+              </li>
+            ))}
+          </ul>
+        </div>
+      )}
+      {values.length > 0 && <ChartTable chart={chart.data} />}
+      {chart.approval && (
+        <p className="text-sm text-muted">
+          Approved by {chart.approval.approvedBy?.displayName ?? 'former staff'},{' '}
+          <DateTime value={chart.approval.approvedAt} />.
+          {chart.approval.imageUrl && (
+            <>
+              {' '}
+              <a href={chart.approval.imageUrl} className="text-copper underline" target="_blank" rel="noreferrer">
+                Approved image (PNG)
+              </a>
+            </>
+          )}
+        </p>
+      )}
+      {canDecide && (
+        <div className="space-y-3 border-t border-rule pt-3">
+          <div className="grid gap-3 sm:grid-cols-2">
+            <Select
+              label="Metric"
+              value={metric}
+              onChange={(event) => setMetric(event.target.value as ChartMetric)}
+              options={chartMetrics.map((m) => ({ value: m, label: chartMetricNames[m] }))}
+            />
+            {chart.kind === 'price-scatter' && (
               <Select
-                label="Metric"
-                value={metric}
-                onChange={(event) => setMetric(event.target.value as ChartMetric)}
-                options={chartMetrics.map((m) => ({ value: m, label: chartMetricNames[m] }))}
+                label="Load configuration"
+                value={String(configuration ?? loadConfigurations[0]?.id ?? '')}
+                onChange={(event) => setConfiguration(Number(event.target.value))}
+                options={loadConfigurations.map((c) => ({ value: String(c.id), label: c.name }))}
               />
-              {chart.kind === 'price-scatter' && (
-                <Select
-                  label="Load configuration"
-                  value={String(configuration ?? loadConfigurations[0]?.id ?? '')}
-                  onChange={(event) => setConfiguration(Number(event.target.value))}
-                  options={loadConfigurations.map((c) => ({ value: String(c.id), label: c.name }))}
-                />
-              )}
-            </div>
-            {chart.kind === 'configuration' && chart.referenceChoices.length > 0 && (
-              <fieldset>
-                <legend className="mb-1 text-sm font-semibold text-ink">
-                  Reference products from earlier roundups
-                </legend>
-                <div className="space-y-1">
-                  {chart.referenceChoices.map((choice) => (
-                    <Checkbox
-                      key={choice.entryId}
-                      label={`${choice.productName} (${choice.roundupTitle})${choice.measured ? '' : ' — not measured under this load'}`}
-                      checked={shownReferences.includes(choice.entryId)}
-                      disabled={!choice.measured}
-                      onChange={(event) =>
-                        setReferences(
-                          event.target.checked
-                            ? [...shownReferences, choice.entryId]
-                            : shownReferences.filter((id) => id !== choice.entryId),
-                        )
-                      }
-                    />
-                  ))}
-                </div>
-              </fieldset>
             )}
-            {error && (
-              <Alert tone="danger" announce>
-                {error}
-              </Alert>
-            )}
-            <div className="flex flex-wrap gap-2">
-              <Button
-                disabled={!dirty}
-                pending={savingSettings}
-                onClick={() =>
-                  run(() =>
-                    onSettings({
-                      metric,
-                      referenceEntryIds: chart.kind === 'configuration' ? references : null,
-                      loadConfigurationId: chart.kind === 'price-scatter' ? configuration : null,
-                    }),
-                  )
-                }
-              >
-                Save chart settings
-              </Button>
-              {chart.status !== 'approved' && chart.status !== 'empty' && (
-                <Button variant="primary" disabled={dirty} pending={approving} onClick={() => run(onApprove)}>
-                  {chart.status === 'stale' ? 'Approve again' : 'Approve chart'}
-                </Button>
-              )}
-            </div>
-            {dirty && <p className="text-xs text-muted">Save the settings first; then approve what the chart shows.</p>}
           </div>
-        )}
-      </div>
-    </section>
+          {chart.kind === 'configuration' && chart.referenceChoices.length > 0 && (
+            <fieldset>
+              <legend className="mb-1 text-sm font-semibold text-ink">Reference products from earlier roundups</legend>
+              <div className="space-y-1">
+                {chart.referenceChoices.map((choice) => (
+                  <Checkbox
+                    key={choice.entryId}
+                    label={`${choice.productName} (${choice.roundupTitle})${choice.measured ? '' : ' — not measured under this load'}`}
+                    checked={shownReferences.includes(choice.entryId)}
+                    disabled={!choice.measured}
+                    onChange={(event) =>
+                      setReferences(
+                        event.target.checked
+                          ? [...shownReferences, choice.entryId]
+                          : shownReferences.filter((id) => id !== choice.entryId),
+                      )
+                    }
+                  />
+                ))}
+              </div>
+            </fieldset>
+          )}
+          {error && (
+            <Alert tone="danger" announce>
+              {error}
+            </Alert>
+          )}
+          <div className="flex flex-wrap gap-2">
+            <Button
+              disabled={!dirty}
+              pending={savingSettings}
+              onClick={() =>
+                run(() =>
+                  onSettings({
+                    metric,
+                    referenceEntryIds: chart.kind === 'configuration' ? references : null,
+                    loadConfigurationId: chart.kind === 'price-scatter' ? configuration : null,
+                  }),
+                )
+              }
+            >
+              Save chart settings
+            </Button>
+            {chart.status !== 'approved' && chart.status !== 'empty' && (
+              <Button variant="primary" disabled={dirty} pending={approving} onClick={() => run(onApprove)}>
+                {chart.status === 'stale' ? 'Approve again' : 'Approve chart'}
+              </Button>
+            )}
+          </div>
+          {dirty && <p className="text-xs text-muted">Save the settings first; then approve what the chart shows.</p>}
+        </div>
+      )}
+    </Panel>
   );
 }

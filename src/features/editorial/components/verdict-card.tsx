@@ -2,6 +2,7 @@ import { useId, useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
+import { Panel } from '../../../components/ui/panel';
 import { Select } from '../../../components/ui/select';
 import { TextArea } from '../../../components/ui/text-area';
 import { TextField } from '../../../components/ui/text-field';
@@ -99,140 +100,134 @@ export function VerdictCard({
     }
   };
 
-  const headingId = `${formId}-heading`;
   return (
-    <section
+    <Panel
       id={`verdict-${product.entryId}`}
-      aria-labelledby={headingId}
-      className="scroll-mt-4 rounded-[3px] border border-rule bg-surface"
-    >
-      <div className="flex flex-wrap items-baseline justify-between gap-2 border-b border-rule px-4 py-3">
-        <h2 id={headingId} className="text-base font-semibold text-ink">
-          {product.productName}
-        </h2>
-        {product.verdict ? (
+      title={product.productName}
+      actions={
+        product.verdict ? (
           <Badge tone="accent">{editorialLabelNames[product.verdict.label]}</Badge>
         ) : (
           <Badge tone="muted">No verdict yet</Badge>
+        )
+      }
+      bodyClassName="grid gap-4 md:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]"
+    >
+      <div>
+        <h3 className="mb-2 text-sm font-semibold text-ink">Measurements (runs of record)</h3>
+        <ul className="space-y-1.5 text-sm">
+          {product.evidence.map((evidence) => (
+            <li key={evidence.loadConfigurationId} className="flex flex-wrap items-center gap-2">
+              <span className="min-w-0 text-ink">{evidence.loadConfigurationName}</span>
+              {!evidence.hasRunOfRecord ? (
+                <Badge tone="muted">No run of record</Badge>
+              ) : evidence.verdictCode === null || evidence.verdictStatus === 'withheld' ? (
+                <Badge tone="muted">{evidence.verdictLabel ?? 'No verdict yet'}</Badge>
+              ) : (
+                <Badge
+                  tone={verdictTones[evidence.verdictCode]}
+                  className={evidence.verdictStatus === 'provisional' ? 'border-dashed' : undefined}
+                >
+                  {evidence.verdictLabel ?? evidence.verdictCode}
+                </Badge>
+              )}
+              {evidence.peakC !== null && (
+                <span className="numeric text-muted">{`${evidence.peakC.toFixed(1)}\u2009°C`}</span>
+              )}
+            </li>
+          ))}
+        </ul>
+        {product.verdict?.updatedBy && (
+          <p className="mt-3 text-xs text-muted">
+            Set by {product.verdict.updatedBy.displayName}, price {formatPrice(product.verdict.price)}.
+          </p>
         )}
       </div>
-      <div className="grid gap-4 px-4 py-4 md:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
-        <div>
-          <h3 className="mb-2 text-sm font-semibold text-ink">Measurements (runs of record)</h3>
-          <ul className="space-y-1.5 text-sm">
-            {product.evidence.map((evidence) => (
-              <li key={evidence.loadConfigurationId} className="flex flex-wrap items-center gap-2">
-                <span className="min-w-0 text-ink">{evidence.loadConfigurationName}</span>
-                {!evidence.hasRunOfRecord ? (
-                  <Badge tone="muted">No run of record</Badge>
-                ) : evidence.verdictCode === null || evidence.verdictStatus === 'withheld' ? (
-                  <Badge tone="muted">{evidence.verdictLabel ?? 'No verdict yet'}</Badge>
-                ) : (
-                  <Badge
-                    tone={verdictTones[evidence.verdictCode]}
-                    className={evidence.verdictStatus === 'provisional' ? 'border-dashed' : undefined}
-                  >
-                    {evidence.verdictLabel ?? evidence.verdictCode}
-                  </Badge>
-                )}
-                {evidence.peakC !== null && (
-                  <span className="numeric text-muted">{`${evidence.peakC.toFixed(1)}\u2009°C`}</span>
-                )}
-              </li>
-            ))}
-          </ul>
-          {product.verdict?.updatedBy && (
-            <p className="mt-3 text-xs text-muted">
-              Set by {product.verdict.updatedBy.displayName}, price {formatPrice(product.verdict.price)}.
-            </p>
-          )}
-        </div>
-        {editable ? (
-          <form id={formId} noValidate onSubmit={submit} className="space-y-3">
-            <Select
-              label="Label"
-              placeholder="Choose a label…"
-              value={values.label}
-              onChange={(event) => set('label', event.target.value)}
-              options={editorialLabels.map((l) => ({ value: l, label: editorialLabelNames[l] }))}
-              error={errors.label}
+      {editable ? (
+        <form id={formId} noValidate onSubmit={submit} className="space-y-3">
+          <Select
+            label="Label"
+            placeholder="Choose a label…"
+            value={values.label}
+            onChange={(event) => set('label', event.target.value)}
+            options={editorialLabels.map((l) => ({ value: l, label: editorialLabelNames[l] }))}
+            error={errors.label}
+          />
+          <TextField
+            label="Best for"
+            description="One line: who should buy this board."
+            value={values.bestFor}
+            maxLength={160}
+            onChange={(event) => set('bestFor', event.target.value)}
+            error={errors.bestFor}
+          />
+          <div className="grid grid-cols-[minmax(0,2fr)_minmax(0,1fr)] gap-3">
+            <TextField
+              label="Price at publication"
+              inputMode="decimal"
+              value={values.price}
+              onChange={(event) => set('price', event.target.value)}
+              error={errors.price}
+              description={product.catalogPrice ? `Catalog: ${formatPrice(product.catalogPrice)}` : undefined}
             />
             <TextField
-              label="Best for"
-              description="One line: who should buy this board."
-              value={values.bestFor}
-              maxLength={160}
-              onChange={(event) => set('bestFor', event.target.value)}
-              error={errors.bestFor}
+              label="Currency"
+              value={values.currency}
+              maxLength={3}
+              autoCapitalize="characters"
+              onChange={(event) => set('currency', event.target.value)}
+              error={errors.currency}
             />
-            <div className="grid grid-cols-[minmax(0,2fr)_minmax(0,1fr)] gap-3">
-              <TextField
-                label="Price at publication"
-                inputMode="decimal"
-                value={values.price}
-                onChange={(event) => set('price', event.target.value)}
-                error={errors.price}
-                description={product.catalogPrice ? `Catalog: ${formatPrice(product.catalogPrice)}` : undefined}
-              />
-              <TextField
-                label="Currency"
-                value={values.currency}
-                maxLength={3}
-                autoCapitalize="characters"
-                onChange={(event) => set('currency', event.target.value)}
-                error={errors.currency}
-              />
-            </div>
-            {contradictions.length > 0 && (
-              <Alert tone="warning" title="This label goes against the measurements">
-                <ul className="list-disc pl-4">
-                  {contradictions.map((text) => (
-                    <li key={text}>{text}</li>
-                  ))}
-                </ul>
-              </Alert>
-            )}
-            <TextArea
-              label="Reason"
-              optional={contradictions.length === 0}
-              description="Needed when the label goes against the measurements."
-              value={values.reason}
-              rows={3}
-              maxLength={2000}
-              onChange={(event) => set('reason', event.target.value)}
-              error={errors.reason}
-            />
-            {formError && (
-              <Alert tone="danger" announce>
-                {formError}
-              </Alert>
-            )}
-            <div className="flex items-center gap-3">
-              <Button type="submit" variant="primary" pending={saving}>
-                Save verdict
-              </Button>
-              {saved && (
-                <span role="status" className="text-sm text-teal">
-                  Saved
-                </span>
-              )}
-            </div>
-          </form>
-        ) : (
-          <div className="text-sm text-ink">
-            {product.verdict ? (
-              <>
-                <p>
-                  <strong>{editorialLabelNames[product.verdict.label]}</strong> — best for {product.verdict.bestFor}
-                </p>
-                {product.verdict.reason && <p className="mt-2 text-muted">Reason: {product.verdict.reason}</p>}
-              </>
-            ) : (
-              <p className="text-muted">No verdict yet.</p>
+          </div>
+          {contradictions.length > 0 && (
+            <Alert tone="warning" title="This label goes against the measurements">
+              <ul className="list-disc pl-4">
+                {contradictions.map((text) => (
+                  <li key={text}>{text}</li>
+                ))}
+              </ul>
+            </Alert>
+          )}
+          <TextArea
+            label="Reason"
+            optional={contradictions.length === 0}
+            description="Needed when the label goes against the measurements."
+            value={values.reason}
+            rows={3}
+            maxLength={2000}
+            onChange={(event) => set('reason', event.target.value)}
+            error={errors.reason}
+          />
+          {formError && (
+            <Alert tone="danger" announce>
+              {formError}
+            </Alert>
+          )}
+          <div className="flex items-center gap-3">
+            <Button type="submit" variant="primary" pending={saving}>
+              Save verdict
+            </Button>
+            {saved && (
+              <span role="status" className="text-sm text-teal">
+                Saved
+              </span>
             )}
           </div>
-        )}
-      </div>
-    </section>
+        </form>
+      ) : (
+        <div className="text-sm text-ink">
+          {product.verdict ? (
+            <>
+              <p>
+                <strong>{editorialLabelNames[product.verdict.label]}</strong> — best for {product.verdict.bestFor}
+              </p>
+              {product.verdict.reason && <p className="mt-2 text-muted">Reason: {product.verdict.reason}</p>}
+            </>
+          ) : (
+            <p className="text-muted">No verdict yet.</p>
+          )}
+        </div>
+      )}
+    </Panel>
   );
 }

@@ -1,6 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 import { bookingSchema, type Booking, type CreateBookingRequest } from '../../../../shared/schemas/benches';
 
 export interface BookBenchInput {
@@ -18,6 +17,5 @@ export function bookBench({ benchId, booking }: BookBenchInput): Promise<Booking
 }
 
 export function useBookBench() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: bookBench, onSuccess: () => invalidateAfter(queryClient, 'booking') });
+  return useChangeMutation(bookBench, 'booking');
 }

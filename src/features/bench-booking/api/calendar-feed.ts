@@ -1,23 +1,16 @@
-import { queryOptions, useMutation, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { endpointQueryOptions } from '../../../lib/endpoint-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidateAfter, useChangeMutation } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 import {
   calendarFeedCreatedSchema,
   calendarFeedSchema,
-  type CalendarFeed,
   type CalendarFeedCreated,
 } from '../../../../shared/schemas/calendar-feed';
 import { bookingKeys } from './booking-keys';
 
-export function getCalendarFeed(signal?: AbortSignal): Promise<CalendarFeed> {
-  return apiClient.get('/api/account/calendar-feed', { signal, schema: calendarFeedSchema });
-}
-
 export function calendarFeedQueryOptions() {
-  return queryOptions({
-    queryKey: bookingKeys.item('calendar-feed'),
-    queryFn: ({ signal }) => getCalendarFeed(signal),
-  });
+  return endpointQueryOptions(bookingKeys.item('calendar-feed'), '/api/account/calendar-feed', calendarFeedSchema);
 }
 
 export function useCalendarFeed() {
@@ -34,8 +27,7 @@ export function disableCalendarFeed(): Promise<void> {
 }
 
 export function useResetCalendarFeed() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: resetCalendarFeed, onSuccess: () => invalidateAfter(queryClient, 'calendarFeed') });
+  return useChangeMutation(resetCalendarFeed, 'calendarFeed');
 }
 
 export function useDisableCalendarFeed() {

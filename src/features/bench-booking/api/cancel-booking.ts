@@ -1,6 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface CancelBookingInput {
   benchId: number;
@@ -13,6 +12,5 @@ export function cancelBooking({ benchId, bookingId }: CancelBookingInput): Promi
 }
 
 export function useCancelBooking() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: cancelBooking, onSuccess: () => invalidateAfter(queryClient, 'booking') });
+  return useChangeMutation(cancelBooking, 'booking');
 }

@@ -1,6 +1,6 @@
-import { queryOptions, useMutation, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 import {
   benchDetailSchema,
   instrumentSchema,
@@ -52,16 +52,13 @@ export function logMaintenance({ benchId, entry }: { benchId: number; entry: Cre
 }
 
 export function useAddInstrument() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: addInstrument, onSuccess: () => invalidateAfter(queryClient, 'bench') });
+  return useChangeMutation(addInstrument, 'bench');
 }
 
 export function useUpdateInstrument() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: updateInstrument, onSuccess: () => invalidateAfter(queryClient, 'bench') });
+  return useChangeMutation(updateInstrument, 'bench');
 }
 
 export function useLogMaintenance() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: logMaintenance, onSuccess: () => invalidateAfter(queryClient, 'bench') });
+  return useChangeMutation(logMaintenance, 'bench');
 }

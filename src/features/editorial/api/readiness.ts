@@ -1,19 +1,17 @@
-import { queryOptions, useMutation, useQuery, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
-import { apiClient, apiRequest } from '../../../lib/api-client';
+import { useMutation, useQuery, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { endpointQueryOptions } from '../../../lib/endpoint-query';
 import { invalidateAfter } from '../../../lib/stale-after';
-import { readinessSchema, type Readiness } from '../../../../shared/schemas/readiness';
+import { readinessSchema } from '../../../../shared/schemas/readiness';
 import { roundupDetailSchema } from '../../../../shared/schemas/roundups';
 import { editorialKeys } from './editorial-keys';
 
-export function getReadiness(roundupId: number, signal?: AbortSignal): Promise<Readiness> {
-  return apiClient.get(`/api/roundups/${roundupId}/readiness`, { signal, schema: readinessSchema });
-}
-
 export function readinessQueryOptions(roundupId: number) {
-  return queryOptions({
-    queryKey: [...editorialKeys.detail(roundupId), 'readiness'],
-    queryFn: ({ signal }) => getReadiness(roundupId, signal),
-  });
+  return endpointQueryOptions(
+    [...editorialKeys.detail(roundupId), 'readiness'],
+    `/api/roundups/${roundupId}/readiness`,
+    readinessSchema,
+  );
 }
 
 export function useReadiness(roundupId: number) {
@@ -39,11 +37,11 @@ export function useCellExclusion(roundupId: number) {
     mutationFn: ({ cellId, reason }: { cellId: number; reason: string | null }) =>
       reason === null
         ? apiClient.delete(`/api/roundups/${roundupId}/cells/${cellId}/exclusion`, { schema: readinessSchema })
-        : apiRequest(`/api/roundups/${roundupId}/cells/${cellId}/exclusion`, {
-            method: 'PUT',
-            body: { reason },
-            schema: readinessSchema,
-          }),
+        : apiClient.put(
+            `/api/roundups/${roundupId}/cells/${cellId}/exclusion`,
+            { reason },
+            { schema: readinessSchema },
+          ),
     onSuccess: () => Promise.all([invalidateAfter(queryClient, 'editorial'), invalidateAfter(queryClient, 'plan')]),
   });
 }

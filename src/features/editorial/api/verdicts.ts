@@ -1,22 +1,16 @@
-import { queryOptions, useMutation, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
-import { apiClient, apiRequest } from '../../../lib/api-client';
-import { invalidateAfter } from '../../../lib/stale-after';
-import {
-  roundupVerdictsSchema,
-  type RoundupVerdicts,
-  type SetVerdictRequest,
-} from '../../../../shared/schemas/verdicts';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { endpointQueryOptions } from '../../../lib/endpoint-query';
+import { useChangeMutation } from '../../../lib/stale-after';
+import { roundupVerdictsSchema, type SetVerdictRequest } from '../../../../shared/schemas/verdicts';
 import { editorialKeys } from './editorial-keys';
 
-export function getVerdicts(roundupId: number, signal?: AbortSignal): Promise<RoundupVerdicts> {
-  return apiClient.get(`/api/roundups/${roundupId}/verdicts`, { signal, schema: roundupVerdictsSchema });
-}
-
 export function verdictsQueryOptions(roundupId: number) {
-  return queryOptions({
-    queryKey: [...editorialKeys.detail(roundupId), 'verdicts'],
-    queryFn: ({ signal }) => getVerdicts(roundupId, signal),
-  });
+  return endpointQueryOptions(
+    [...editorialKeys.detail(roundupId), 'verdicts'],
+    `/api/roundups/${roundupId}/verdicts`,
+    roundupVerdictsSchema,
+  );
 }
 
 export function useVerdicts(roundupId: number) {
@@ -24,14 +18,9 @@ export function useVerdicts(roundupId: number) {
 }
 
 export function useSetVerdict(roundupId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ entryId, body }: { entryId: number; body: SetVerdictRequest }) =>
-      apiRequest(`/api/roundups/${roundupId}/verdicts/${entryId}`, {
-        method: 'PUT',
-        body: body,
-        schema: roundupVerdictsSchema,
-      }),
-    onSuccess: () => invalidateAfter(queryClient, 'editorial'),
-  });
+  return useChangeMutation(
+    ({ entryId, body }: { entryId: number; body: SetVerdictRequest }) =>
+      apiClient.put(`/api/roundups/${roundupId}/verdicts/${entryId}`, body, { schema: roundupVerdictsSchema }),
+    'editorial',
+  );
 }

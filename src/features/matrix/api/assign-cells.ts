@@ -1,8 +1,7 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 import { assignCellsResponseSchema, type AssignCellsRequest } from '../../../../shared/schemas/matrix';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface AssignCellsInput {
   roundupId: number;
@@ -17,6 +16,5 @@ export function assignCells({ roundupId, assignment }: AssignCellsInput): Promis
 }
 
 export function useAssignCells() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: assignCells, onSuccess: () => invalidateAfter(queryClient, 'plan') });
+  return useChangeMutation(assignCells, 'plan');
 }

@@ -1,8 +1,7 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { matrixCellSchema, type MatrixCell } from '../../../../shared/schemas/matrix';
 import type { CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface TransitionCellInput {
   roundupId: number;
@@ -30,6 +29,5 @@ export function transitionCell({
 }
 
 export function useTransitionCell() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: transitionCell, onSuccess: () => invalidateAfter(queryClient, 'plan') });
+  return useChangeMutation(transitionCell, 'plan');
 }

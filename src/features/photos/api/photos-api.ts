@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient, apiRequest } from '../../../lib/api-client';
 import { createQueryKeys } from '../../../lib/query-keys';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { invalidateAfter, useChangeMutation } from '../../../lib/stale-after';
 import { uploadFile, type UploadProgress } from '../../../lib/upload';
 import { photoUploadLimit } from '../../../../shared/upload-limits';
 import { photoListSchema, photoSchema, type Photo, type PhotoUploadFields } from '../../../../shared/schemas/photos';
@@ -55,20 +55,15 @@ export function useUploadPhoto(roundupId: number, entryId: number) {
 }
 
 export function useUpdatePhoto() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ photoId, fields }: { photoId: number; fields: Partial<PhotoUploadFields> }) =>
+  return useChangeMutation(
+    ({ photoId, fields }: { photoId: number; fields: Partial<PhotoUploadFields> }) =>
       apiClient.patch(`/api/photos/${photoId}`, fields, { schema: photoSchema }),
-    onSuccess: () => invalidateAfter(queryClient, 'photo'),
-  });
+    'photo',
+  );
 }
 
 export function useRemovePhoto() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (photoId: number) => apiClient.delete(`/api/photos/${photoId}`),
-    onSuccess: () => invalidateAfter(queryClient, 'photo'),
-  });
+  return useChangeMutation((photoId: number) => apiClient.delete(`/api/photos/${photoId}`), 'photo');
 }
 
 /** Puts the photos in a new order: shown at once, put back if the server refuses. */

@@ -1,8 +1,9 @@
-import { queryOptions, useMutation, useQuery, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { z } from 'zod';
+import { endpointQueryOptions } from '../../../lib/endpoint-query';
 import { apiClient, apiRequest } from '../../../lib/api-client';
 import { createQueryKeys } from '../../../lib/query-keys';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 import { uploadFile, type UploadProgress } from '../../../lib/upload';
 import { logFileUploadLimit } from '../../../../shared/upload-limits';
 import type { VerdictRubric } from '../../../../shared/schemas/analysis';
@@ -11,40 +12,32 @@ import {
   createRunResponseSchema,
   roundupResultsSchema,
   testRunSchema,
-  type CellRuns,
   type LoggerRunRequest,
   type ManualRunRequest,
   type ReanalyseRunRequest,
   type ReviewRunRequest,
-  type RoundupResults,
 } from '../../../../shared/schemas/test-runs';
 
 export const testRunKeys = createQueryKeys('test-runs');
 
-export function getCellRuns(cellId: number, signal?: AbortSignal): Promise<CellRuns> {
-  return apiClient.get(`/api/cells/${cellId}/runs`, { signal, schema: cellRunsSchema });
-}
-
 export function cellRunsQueryOptions(cellId: number) {
-  return queryOptions({
-    queryKey: [...testRunKeys.all, 'cell', cellId] as const,
-    queryFn: ({ signal }) => getCellRuns(cellId, signal),
-  });
+  return endpointQueryOptions(
+    [...testRunKeys.all, 'cell', cellId] as const,
+    `/api/cells/${cellId}/runs`,
+    cellRunsSchema,
+  );
 }
 
 export function useCellRuns(cellId: number) {
   return useSuspenseQuery(cellRunsQueryOptions(cellId)).data;
 }
 
-export function getRoundupResults(roundupId: number, signal?: AbortSignal): Promise<RoundupResults> {
-  return apiClient.get(`/api/roundups/${roundupId}/results`, { signal, schema: roundupResultsSchema });
-}
-
 export function roundupResultsQueryOptions(roundupId: number) {
-  return queryOptions({
-    queryKey: [...testRunKeys.all, 'results', roundupId] as const,
-    queryFn: ({ signal }) => getRoundupResults(roundupId, signal),
-  });
+  return endpointQueryOptions(
+    [...testRunKeys.all, 'results', roundupId] as const,
+    `/api/roundups/${roundupId}/results`,
+    roundupResultsSchema,
+  );
 }
 
 export function useRoundupResults(roundupId: number) {
@@ -63,9 +56,8 @@ export interface RecordLoggerRunInput {
 
 /** POST /api/cells/:cellId/runs: the same file the preview read, with the run's facts and the confirmed mapping. */
 export function useRecordLoggerRun() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ cellId, file, request, onProgress, signal }: RecordLoggerRunInput) =>
+  return useChangeMutation(
+    ({ cellId, file, request, onProgress, signal }: RecordLoggerRunInput) =>
       uploadFile({
         path: `/api/cells/${cellId}/runs`,
         file: { blob: file, fileName: file.name },
@@ -75,50 +67,42 @@ export function useRecordLoggerRun() {
         onProgress,
         signal,
       }),
-    onSuccess: () => invalidateAfter(queryClient, 'run'),
-  });
+    'run',
+  );
 }
 
 export function useRecordManualRun() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ cellId, request }: { cellId: number; request: ManualRunRequest }) =>
+  return useChangeMutation(
+    ({ cellId, request }: { cellId: number; request: ManualRunRequest }) =>
       apiClient.post(`/api/cells/${cellId}/manual-runs`, request, { schema: runResponseSchema }),
-    onSuccess: () => invalidateAfter(queryClient, 'run'),
-  });
+    'run',
+  );
 }
 
 export function useReviewRun() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ runId, review }: { runId: number; review: ReviewRunRequest }) =>
+  return useChangeMutation(
+    ({ runId, review }: { runId: number; review: ReviewRunRequest }) =>
       apiClient.post(`/api/runs/${runId}/review`, review),
-    onSuccess: () => invalidateAfter(queryClient, 'run'),
-  });
+    'run',
+  );
 }
 
 export function useMarkRunOfRecord() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (runId: number) => apiClient.post(`/api/runs/${runId}/run-of-record`, {}),
-    onSuccess: () => invalidateAfter(queryClient, 'run'),
-  });
+  return useChangeMutation((runId: number) => apiClient.post(`/api/runs/${runId}/run-of-record`, {}), 'run');
 }
 
 export function useReanalyseRun() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ runId, request = {} }: { runId: number; request?: ReanalyseRunRequest }) =>
+  return useChangeMutation(
+    ({ runId, request = {} }: { runId: number; request?: ReanalyseRunRequest }) =>
       apiClient.post(`/api/runs/${runId}/analyses`, request),
-    onSuccess: () => invalidateAfter(queryClient, 'run'),
-  });
+    'run',
+  );
 }
 
 export function useSetRubric() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ roundupId, rubric }: { roundupId: number; rubric: VerdictRubric | null }) =>
+  return useChangeMutation(
+    ({ roundupId, rubric }: { roundupId: number; rubric: VerdictRubric | null }) =>
       apiRequest(`/api/roundups/${roundupId}/rubric`, { method: 'PUT', body: { rubric } }),
-    onSuccess: () => invalidateAfter(queryClient, 'run'),
-  });
+    'run',
+  );
 }

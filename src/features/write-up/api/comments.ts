@@ -1,6 +1,6 @@
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 import {
   commentThreadListSchema,
   commentThreadSchema,
@@ -23,21 +23,19 @@ export function useCommentThreads(sectionId: number) {
 }
 
 export function useAddComment(sectionId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (body: AddCommentRequest) =>
+  return useChangeMutation(
+    (body: AddCommentRequest) =>
       apiClient.post(`/api/write-up/sections/${sectionId}/comments`, body, { schema: commentThreadSchema }),
-    onSuccess: () => invalidateAfter(queryClient, 'writeUp'),
-  });
+    'writeUp',
+  );
 }
 
 export function useResolveThread() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ commentId, resolved }: { commentId: number; resolved: boolean }) =>
+  return useChangeMutation(
+    ({ commentId, resolved }: { commentId: number; resolved: boolean }) =>
       apiClient.post(`/api/write-up/comments/${commentId}/${resolved ? 'resolve' : 'reopen'}`, undefined, {
         schema: commentThreadSchema,
       }),
-    onSuccess: () => invalidateAfter(queryClient, 'writeUp'),
-  });
+    'writeUp',
+  );
 }

@@ -1,6 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 import type { SectionReviewMove } from '../../../../shared/domain/editorial/section-states';
 import { sectionSummarySchema, type SectionSummary } from '../../../../shared/schemas/write-ups';
 
@@ -24,6 +23,5 @@ export function reviewSection({ sectionId, move, note }: ReviewSectionInput): Pr
 }
 
 export function useReviewSection() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: reviewSection, onSuccess: () => invalidateAfter(queryClient, 'writeUp') });
+  return useChangeMutation(reviewSection, 'writeUp');
 }

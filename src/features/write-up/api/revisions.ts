@@ -1,6 +1,6 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 import {
   revisionDetailSchema,
   revisionListSchema,
@@ -49,6 +49,5 @@ export function restoreRevision(input: {
 }
 
 export function useRestoreRevision() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: restoreRevision, onSuccess: () => invalidateAfter(queryClient, 'writeUp') });
+  return useChangeMutation(restoreRevision, 'writeUp');
 }

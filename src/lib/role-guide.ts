@@ -12,7 +12,7 @@ export const roleGuides: Record<Role, RoleGuide> = {
   admin: {
     summary: 'Admins look after the outlet’s staff accounts: who can sign in to Benchwire, and with which role.',
     tasks: [
-      'Add colleagues and give each one a role.',
+      'Invite colleagues by mail and give each one a role; they choose their own password from the link.',
       'Change a role, reset a forgotten password, deactivate an account when someone leaves.',
       'Role changes, password resets and deactivations sign the person out everywhere at once.',
     ],

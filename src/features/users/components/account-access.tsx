@@ -32,8 +32,20 @@ export function AccountAccess({ user, isSelf, onSaved }: AccountAccessProps) {
     <div className="flex flex-wrap items-center justify-between gap-3">
       <div className="text-sm">
         <p className="flex items-center gap-2">
-          {user.active ? <Badge tone="positive">Active</Badge> : <Badge tone="muted">Deactivated</Badge>}
-          <span>{user.active ? 'Can sign in.' : 'Cannot sign in.'}</span>
+          {!user.active ? (
+            <Badge tone="muted">Deactivated</Badge>
+          ) : user.passwordSet ? (
+            <Badge tone="positive">Active</Badge>
+          ) : (
+            <Badge tone="caution">Invited</Badge>
+          )}
+          <span>
+            {!user.active
+              ? 'Cannot sign in.'
+              : user.passwordSet
+                ? 'Can sign in.'
+                : 'Cannot sign in until they set a password from their invitation.'}
+          </span>
         </p>
         {isSelf && <p className="mt-1 text-muted">You cannot deactivate your own account.</p>}
       </div>
@@ -69,8 +81,17 @@ export function AccountAccess({ user, isSelf, onSaved }: AccountAccessProps) {
           </>
         ) : (
           <>
-            <p>{user.displayName} can sign in again with their current password.</p>
-            <p className="text-muted">If they no longer have it, set a new password after reactivating.</p>
+            {user.passwordSet ? (
+              <>
+                <p>{user.displayName} can sign in again with their current password.</p>
+                <p className="text-muted">If they no longer have it, set a new password after reactivating.</p>
+              </>
+            ) : (
+              <p>
+                {user.displayName} has never set a password: after reactivating, send the invitation again from the
+                users table, or set a first password here.
+              </p>
+            )}
           </>
         )}
       </ConfirmDialog>

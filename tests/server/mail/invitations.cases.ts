@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { UserEntity } from '../../../server/entities/user.entity';
 import { AuditEntryEntity } from '../../../server/entities/audit-entry.entity';
-import { client, signedIn, uniqueEmail, type Client } from '../support/test-app';
+import { randomBytes } from 'node:crypto';
+import { client, signedIn, testApp, uniqueEmail, type Client } from '../support/test-app';
 import {
   closeMailTestContext,
   linkIn,
@@ -210,5 +211,24 @@ describe('staff invitations', () => {
     expect(mail.html).not.toContain('<img src=x');
     expect(mail.html).toContain('&lt;img src=x onerror=alert(1)&gt; Probe');
     expect(mail.html).toContain('&lt;b&gt;x&lt;/b&gt;');
+  });
+
+  it('guessing links is throttled per client address like sign-in: 429 with Retry-After', async () => {
+    const app = await testApp({ TRUST_PROXY: 'true', SIGN_IN_LIMIT_PER_IP: '3', SIGN_IN_WINDOW_MINUTES: '15' });
+    // An address of this test's own (the documentation prefix, RFC 3849; IPv6 counts per /56), so no other test's
+    // counters are touched.
+    const hex = randomBytes(3).toString('hex');
+    const from = `2001:db8:${hex.slice(0, 4)}:${hex.slice(4)}00::1`;
+    const guess = () =>
+      client(app)
+        .set('X-Forwarded-For', from)
+        .get(`/api/invitations/${randomBytes(32).toString('base64url')}`);
+    const statuses: number[] = [];
+    for (let i = 0; i < 5; i++) statuses.push((await guess()).status);
+    expect(statuses.slice(0, 3)).toEqual([404, 404, 404]);
+    expect(statuses.slice(3)).toEqual([429, 429]);
+    const refused = await guess();
+    expect(refused.headers['retry-after']).toMatch(/^\d+$/);
+    expect(refused.body.error.message).toContain('invitation links');
   });
 });

@@ -51,15 +51,20 @@ function transitionRoute() {
   return { sent, moveCell };
 }
 
+/** My bench of the tester, its moves answered by `transitionRoute`; returns the user and the moves sent. */
+function renderMyBench() {
+  const { sent, moveCell } = transitionRoute();
+  render(
+    <MemoryRouter>
+      <MyBenchOverview myBench={myBench} matrixPath={(id) => `/roundups/${id}`} moveCell={moveCell} />
+    </MemoryRouter>,
+  );
+  return { user: userEvent.setup(), sent };
+}
+
 describe('My bench: starting a run outside its bookings', () => {
   it('warns with the server’s reason, asks why, and starts with the reason once it is given', async () => {
-    const user = userEvent.setup();
-    const { sent, moveCell } = transitionRoute();
-    render(
-      <MemoryRouter>
-        <MyBenchOverview myBench={myBench} matrixPath={(id) => `/roundups/${id}`} moveCell={moveCell} />
-      </MemoryRouter>,
-    );
+    const { user, sent } = renderMyBench();
 
     await user.click(screen.getByRole('button', { name: /^Start.*Quillon Q50 Steady · Stock all-core/ }));
     const dialog = await screen.findByRole('dialog', { name: 'Start outside your bookings?' });
@@ -82,13 +87,7 @@ describe('My bench: starting a run outside its bookings', () => {
   });
 
   it('keeps the cell queued when the tester does not want to start after all', async () => {
-    const user = userEvent.setup();
-    const { sent, moveCell } = transitionRoute();
-    render(
-      <MemoryRouter>
-        <MyBenchOverview myBench={myBench} matrixPath={(id) => `/roundups/${id}`} moveCell={moveCell} />
-      </MemoryRouter>,
-    );
+    const { user, sent } = renderMyBench();
     await user.click(screen.getByRole('button', { name: /^Start.*Quillon Q50 Steady/ }));
     const dialog = await screen.findByRole('dialog', { name: 'Start outside your bookings?' });
     await user.click(within(dialog).getByRole('button', { name: 'Keep it queued' }));

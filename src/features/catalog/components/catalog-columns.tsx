@@ -7,6 +7,7 @@ import { paths } from '../../../lib/paths';
 import type { Product } from '../../../../shared/schemas/catalog';
 import { formatPrice } from '../../../lib/format-money';
 import { formatCalendarDate } from '../../../lib/format-time';
+import { countOf } from '../../../lib/plural';
 import {
   featureSummary,
   formatAmps,
@@ -34,6 +35,52 @@ export interface CatalogColumn extends DataTableColumn<Product> {
 const muted = (text: string) => (text === '—' ? <span className="text-muted">—</span> : text);
 const nowrap = (text: string) => <span className="whitespace-nowrap">{muted(text)}</span>;
 
+type ColumnHead = Pick<CatalogColumn, 'id' | 'header'> & Partial<Pick<CatalogColumn, 'label' | 'hideBelow'>>;
+
+/** Whether a column shows before the user chooses. */
+const shown = true;
+const hidden = false;
+
+/**
+ * A column of words, sorted and filtered by them (or by `sortBy`), kept on one line unless `wraps`; "—" is greyed.
+ */
+function wordsColumn(
+  head: ColumnHead & {
+    text: (product: Product) => string;
+    sortBy?: (product: Product) => string | number | null;
+    wraps?: boolean;
+  },
+  defaultVisible: boolean,
+): CatalogColumn {
+  const { text, sortBy = text, wraps = false, ...rest } = head;
+  return {
+    ...rest,
+    label: head.label ?? head.header,
+    defaultVisible,
+    sortValue: sortBy,
+    cell: (product) => (wraps ? muted : nowrap)(text(product)),
+  };
+}
+
+/** A right-aligned figure sorted by its value; `text` writes it ("—" when not known). */
+function figureColumn(
+  head: ColumnHead & {
+    value: (product: Product) => number | string | null;
+    text?: (product: Product) => string;
+  },
+  defaultVisible: boolean,
+): CatalogColumn {
+  const { value, text = (product) => String(value(product) ?? '—'), ...rest } = head;
+  return {
+    ...rest,
+    label: head.label ?? head.header,
+    defaultVisible,
+    numeric: true,
+    sortValue: value,
+    cell: (product) => muted(text(product)),
+  };
+}
+
 export function catalogColumns(options: { regions: readonly string[]; canEdit: boolean }): CatalogColumn[] {
   const priceColumns: CatalogColumn[] = options.regions.map((region) => ({
     id: `price:${region}`,
@@ -52,15 +99,7 @@ export function catalogColumns(options: { regions: readonly string[]; canEdit: b
   }));
 
   const columns: CatalogColumn[] = [
-    {
-      id: 'maker',
-      header: 'Maker',
-      label: 'Maker',
-      defaultVisible: true,
-      hideBelow: 'sm',
-      sortValue: (product) => product.maker,
-      cell: (product) => nowrap(product.maker),
-    },
+    wordsColumn({ id: 'maker', header: 'Maker', hideBelow: 'sm', text: (product) => product.maker }, shown),
     {
       id: 'model',
       header: 'Model',
@@ -82,47 +121,41 @@ export function catalogColumns(options: { regions: readonly string[]; canEdit: b
         </span>
       ),
     },
-    {
-      id: 'platform',
-      header: 'Platform / socket',
-      label: 'Platform and socket',
-      defaultVisible: true,
-      sortValue: (product) => `${product.platform} ${product.socket}`,
-      cell: (product) => nowrap(`${product.platform} · ${product.socket}`),
-    },
-    {
-      id: 'chipset',
-      header: 'Chipset',
-      label: 'Chipset',
-      defaultVisible: true,
-      sortValue: (product) => product.chipset,
-      cell: (product) => nowrap(product.chipset),
-    },
-    {
-      id: 'formFactor',
-      header: 'Form factor',
-      label: 'Form factor',
-      defaultVisible: true,
-      sortValue: (product) => formatFormFactor(product.formFactor),
-      cell: (product) => nowrap(formatFormFactor(product.formFactor)),
-    },
-    {
-      id: 'releaseDate',
-      header: 'Released',
-      label: 'Release date',
-      defaultVisible: true,
-      numeric: true,
-      sortValue: (product) => product.releaseDate,
-      cell: (product) => muted(product.releaseDate ? formatCalendarDate(product.releaseDate) : '—'),
-    },
-    {
-      id: 'controller',
-      header: 'Controller',
-      label: 'V-core controller',
-      defaultVisible: true,
-      sortValue: (product) => product.powerDesign.controller,
-      cell: (product) => nowrap(product.powerDesign.controller ?? '—'),
-    },
+    wordsColumn(
+      {
+        id: 'platform',
+        header: 'Platform / socket',
+        label: 'Platform and socket',
+        text: (product) => `${product.platform} · ${product.socket}`,
+        sortBy: (product) => `${product.platform} ${product.socket}`,
+      },
+      shown,
+    ),
+    wordsColumn({ id: 'chipset', header: 'Chipset', text: (product) => product.chipset }, shown),
+    wordsColumn(
+      { id: 'formFactor', header: 'Form factor', text: (product) => formatFormFactor(product.formFactor) },
+      shown,
+    ),
+    figureColumn(
+      {
+        id: 'releaseDate',
+        header: 'Released',
+        label: 'Release date',
+        value: (product) => product.releaseDate,
+        text: (product) => (product.releaseDate ? formatCalendarDate(product.releaseDate) : '—'),
+      },
+      shown,
+    ),
+    wordsColumn(
+      {
+        id: 'controller',
+        header: 'Controller',
+        label: 'V-core controller',
+        text: (product) => product.powerDesign.controller ?? '—',
+        sortBy: (product) => product.powerDesign.controller,
+      },
+      shown,
+    ),
     {
       id: 'phases',
       header: 'Phases',
@@ -150,37 +183,38 @@ export function catalogColumns(options: { regions: readonly string[]; canEdit: b
         </span>
       ),
     },
-    {
-      id: 'stageRating',
-      header: 'Stage rating',
-      label: 'Continuous rating per stage',
-      defaultVisible: true,
-      numeric: true,
-      sortValue: (product) => product.powerDesign.vcoreStageCurrentA,
-      cell: (product) => muted(formatAmps(product.powerDesign.vcoreStageCurrentA, 0)),
-    },
-    {
-      id: 'ratedSum',
-      header: 'Rating sum',
-      label: 'V-core stages × rating',
-      defaultVisible: false,
-      numeric: true,
-      sortValue: (product) => product.powerDesign.vcoreRatedCurrentA,
-      cell: (product) => {
-        const { vcoreStageCount, vcoreRatedCurrentA } = product.powerDesign;
-        if (vcoreRatedCurrentA === null) return <span className="text-muted">—</span>;
-        return `${formatAmps(vcoreRatedCurrentA)} (${vcoreStageCount} stages)`;
+    figureColumn(
+      {
+        id: 'stageRating',
+        header: 'Stage rating',
+        label: 'Continuous rating per stage',
+        value: (product) => product.powerDesign.vcoreStageCurrentA,
+        text: (product) => formatAmps(product.powerDesign.vcoreStageCurrentA, 0),
       },
-    },
-    {
-      id: 'socRail',
-      header: 'SoC stages',
-      label: 'SoC rail stages',
-      defaultVisible: false,
-      numeric: true,
-      sortValue: (product) => product.powerDesign.socRailStages,
-      cell: (product) => muted(String(product.powerDesign.socRailStages ?? '—')),
-    },
+      shown,
+    ),
+    figureColumn(
+      {
+        id: 'ratedSum',
+        header: 'Rating sum',
+        label: 'V-core stages × rating',
+        value: (product) => product.powerDesign.vcoreRatedCurrentA,
+        text: ({ powerDesign: { vcoreStageCount, vcoreRatedCurrentA } }) =>
+          vcoreRatedCurrentA === null
+            ? '—'
+            : `${formatAmps(vcoreRatedCurrentA)} (${countOf(vcoreStageCount ?? 0, 'stage', 'stages')})`,
+      },
+      hidden,
+    ),
+    figureColumn(
+      {
+        id: 'socRail',
+        header: 'SoC stages',
+        label: 'SoC rail stages',
+        value: (product) => product.powerDesign.socRailStages,
+      },
+      hidden,
+    ),
     ...priceColumns,
     {
       id: 'features',
@@ -192,73 +226,61 @@ export function catalogColumns(options: { regions: readonly string[]; canEdit: b
         <span className="block min-w-[18rem] text-[0.8125rem]">{muted(featureSummary(product.features))}</span>
       ),
     },
-    {
-      id: 'rearUsb',
-      header: 'Rear USB',
-      label: 'Rear USB by speed',
-      defaultVisible: false,
-      sortValue: (product) => rearUsbTotal(product.features.rearUsb),
-      cell: (product) => nowrap(formatRearUsb(product.features.rearUsb)),
-    },
-    {
-      id: 'frontUsbC',
-      header: 'Front USB-C',
-      label: 'Front USB-C header',
-      defaultVisible: false,
-      sortValue: (product) => formatFrontUsbC(product.features.frontUsbCHeader),
-      cell: (product) => nowrap(formatFrontUsbC(product.features.frontUsbCHeader)),
-    },
-    {
-      id: 'lan',
-      header: 'LAN',
-      label: 'Wired LAN speed',
-      defaultVisible: false,
-      numeric: true,
-      sortValue: (product) => product.features.lanSpeedMbps,
-      cell: (product) => muted(formatLanSpeed(product.features.lanSpeedMbps)),
-    },
-    {
-      id: 'wifi',
-      header: 'Wi-Fi',
-      label: 'Wi-Fi',
-      defaultVisible: false,
-      sortValue: (product) => formatWifi(product.features.wifi),
-      cell: (product) => nowrap(formatWifi(product.features.wifi)),
-    },
-    {
-      id: 'm2',
-      header: 'M.2',
-      label: 'M.2 slots',
-      defaultVisible: false,
-      numeric: true,
-      sortValue: (product) => product.features.m2Slots,
-      cell: (product) => muted(String(product.features.m2Slots ?? '—')),
-    },
-    {
-      id: 'sata',
-      header: 'SATA',
-      label: 'SATA ports',
-      defaultVisible: false,
-      numeric: true,
-      sortValue: (product) => product.features.sataPorts,
-      cell: (product) => muted(String(product.features.sataPorts ?? '—')),
-    },
-    {
-      id: 'audio',
-      header: 'Audio',
-      label: 'Audio',
-      defaultVisible: false,
-      sortValue: (product) => product.features.audio,
-      cell: (product) => muted(product.features.audio ?? '—'),
-    },
-    {
-      id: 'ioShield',
-      header: 'I/O shield',
-      label: 'Pre-fitted I/O shield',
-      defaultVisible: false,
-      sortValue: (product) => formatYesNo(product.features.ioShieldPrefitted),
-      cell: (product) => muted(formatYesNo(product.features.ioShieldPrefitted)),
-    },
+    wordsColumn(
+      {
+        id: 'rearUsb',
+        header: 'Rear USB',
+        label: 'Rear USB by speed',
+        text: (product) => formatRearUsb(product.features.rearUsb),
+        sortBy: (product) => rearUsbTotal(product.features.rearUsb),
+      },
+      hidden,
+    ),
+    wordsColumn(
+      {
+        id: 'frontUsbC',
+        header: 'Front USB-C',
+        label: 'Front USB-C header',
+        text: (product) => formatFrontUsbC(product.features.frontUsbCHeader),
+      },
+      hidden,
+    ),
+    figureColumn(
+      {
+        id: 'lan',
+        header: 'LAN',
+        label: 'Wired LAN speed',
+        value: (product) => product.features.lanSpeedMbps,
+        text: (product) => formatLanSpeed(product.features.lanSpeedMbps),
+      },
+      hidden,
+    ),
+    wordsColumn({ id: 'wifi', header: 'Wi-Fi', text: (product) => formatWifi(product.features.wifi) }, hidden),
+    figureColumn({ id: 'm2', header: 'M.2', label: 'M.2 slots', value: (product) => product.features.m2Slots }, hidden),
+    figureColumn(
+      { id: 'sata', header: 'SATA', label: 'SATA ports', value: (product) => product.features.sataPorts },
+      hidden,
+    ),
+    wordsColumn(
+      {
+        id: 'audio',
+        header: 'Audio',
+        text: (product) => product.features.audio ?? '—',
+        sortBy: (product) => product.features.audio,
+        wraps: true,
+      },
+      hidden,
+    ),
+    wordsColumn(
+      {
+        id: 'ioShield',
+        header: 'I/O shield',
+        label: 'Pre-fitted I/O shield',
+        text: (product) => formatYesNo(product.features.ioShieldPrefitted),
+        wraps: true,
+      },
+      hidden,
+    ),
     {
       id: 'updated',
       header: 'Updated',

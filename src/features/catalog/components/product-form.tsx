@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState, type FormEvent, type ReactNode } from 'react';
+import { useEffect, useRef, useState, type ChangeEvent, type FormEvent, type ReactNode } from 'react';
 import { Link, useBlocker } from 'react-router';
 import { Button, buttonStyles } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
@@ -32,6 +32,7 @@ import {
   productIssueMessage,
   productRequestFrom,
   readNumber,
+  type ProductField,
   type ProductFormValues,
 } from './product-form-values';
 import { TextArea } from '../../../components/ui/text-area';
@@ -57,6 +58,96 @@ function lanOptions(current: string): SelectOption[] {
   if (typeof typed === 'number' && !speeds.includes(typed)) speeds.push(typed);
   return speeds.sort((a, b) => a - b).map((speed) => ({ value: String(speed), label: formatLanSpeed(speed) }));
 }
+
+/**
+ * How one field is typed: free text, a whole number, a count in a narrow numeric box, a decimal, a date, a short
+ * note over two lines, or a choice from a list (which may depend on what is typed elsewhere).
+ */
+type ProductFieldSpec = {
+  name: ProductField;
+  description?: string;
+  className?: string;
+} & (
+  | { kind: 'text' | 'integer' | 'count' | 'decimal' | 'date' | 'notes' }
+  | { kind: 'choice'; options: (values: ProductFormValues) => SelectOption[] }
+);
+
+/** Everything else may stay empty while it is not known. */
+const requiredFields = new Set<ProductField>(['maker', 'model', 'platform', 'socket', 'chipset', 'formFactor']);
+
+const identityFields: ProductFieldSpec[] = [
+  { name: 'maker', kind: 'text' },
+  { name: 'model', kind: 'text' },
+  { name: 'platform', kind: 'text', description: 'The CPU platform, e.g. Helix-1700.' },
+  { name: 'socket', kind: 'text' },
+  { name: 'chipset', kind: 'text' },
+  { name: 'formFactor', kind: 'choice', options: () => options(formFactors, formFactorLabels) },
+  { name: 'releaseDate', kind: 'date' },
+];
+
+const powerDesignFields: ProductFieldSpec[] = [
+  { name: 'powerDesign.controller', kind: 'text', description: 'Its marking.' },
+  { name: 'powerDesign.controllerPhases', kind: 'integer', description: 'Phases the controller drives, 1–32.' },
+  {
+    name: 'powerDesign.phaseMultiplication',
+    kind: 'choice',
+    options: () => options(phaseMultiplications, phaseMultiplicationLabels),
+  },
+  {
+    name: 'powerDesign.stagesPerPhase',
+    kind: 'integer',
+    description: '1 for direct and doubled; 2 or more when teamed.',
+  },
+  { name: 'powerDesign.vcoreStageType', kind: 'choice', options: () => options(vcoreStageTypes, vcoreStageTypeLabels) },
+  { name: 'powerDesign.vcoreStagePart', kind: 'text', description: 'As printed on the stage or MOSFET.' },
+  {
+    name: 'powerDesign.vcoreStageCurrentA',
+    kind: 'decimal',
+    description: 'Continuous current of one stage in A, e.g. 60 or 62.5.',
+  },
+  { name: 'powerDesign.socRailStages', kind: 'integer', description: 'Stages on the SoC rail.' },
+];
+
+const powerDesignNoteFields: ProductFieldSpec[] = [
+  {
+    name: 'powerDesign.otherRails',
+    kind: 'notes',
+    description: 'In words, e.g. “1 stage graphics, 1 stage auxiliary”.',
+  },
+  { name: 'powerDesign.heatsinkNotes', kind: 'notes', description: 'Fins, heat pipes, pads, contact with the stages.' },
+];
+
+const rearUsbFields: ProductFieldSpec[] = (['usb2', 'usb5g', 'usb10g', 'usb20g', 'usb40g'] as const).map((speed) => ({
+  name: `features.rearUsb.${speed}`,
+  kind: 'count',
+}));
+
+const featureFields: ProductFieldSpec[] = [
+  { name: 'features.frontUsbCHeader', kind: 'choice', options: () => options(frontUsbCHeaders, frontUsbCHeaderLabels) },
+  {
+    name: 'features.lanSpeedMbps',
+    kind: 'choice',
+    options: (values) => lanOptions(values['features.lanSpeedMbps']),
+    description: 'The fastest wired port.',
+  },
+  { name: 'features.wifi', kind: 'choice', options: () => options(wifiGenerations, wifiGenerationLabels) },
+  { name: 'features.m2Slots', kind: 'integer' },
+  { name: 'features.sataPorts', kind: 'integer' },
+  {
+    name: 'features.ioShieldPrefitted',
+    kind: 'choice',
+    options: () => [
+      { value: 'yes', label: 'Pre-fitted' },
+      { value: 'no', label: 'Separate plate' },
+    ],
+  },
+  {
+    name: 'features.audio',
+    kind: 'text',
+    className: 'sm:col-span-2 lg:col-span-3',
+    description: 'In words, e.g. “7.1 HD audio, optical out”.',
+  },
+];
 
 /** All fields of a catalog product: identity, the V-core power design and the board's features. */
 export function ProductForm({ initialValues, submitLabel, cancelTo, save, onSaved, errorTitle }: ProductFormProps) {
@@ -105,141 +196,24 @@ export function ProductForm({ initialValues, submitLabel, cancelTo, save, onSave
       <FormErrorSummary title={errorTitle} items={form.summaryItems} message={form.formError} attempt={form.attempt} />
 
       <FormSection title="Product" description="What the board is and where it fits.">
-        <div className="grid gap-4 sm:grid-cols-2">
-          <TextField {...form.field('maker')} autoComplete="off" />
-          <TextField {...form.field('model')} autoComplete="off" />
-          <TextField {...form.field('platform')} autoComplete="off" description="The CPU platform, e.g. Helix-1700." />
-          <TextField {...form.field('socket')} autoComplete="off" />
-          <TextField {...form.field('chipset')} autoComplete="off" />
-          <Select
-            {...form.field('formFactor')}
-            options={options(formFactors, formFactorLabels)}
-            placeholder="Choose…"
-          />
-          <TextField {...form.field('releaseDate')} type="date" optional />
-        </div>
+        <ProductFields form={form} fields={identityFields} className="grid gap-4 sm:grid-cols-2" />
       </FormSection>
 
       <FormSection
         title="V-core power design"
         description="Leave a field empty while it is not known. Effective phases are worked out from the controller phases and how they are multiplied."
       >
-        <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
-          <TextField {...form.field('powerDesign.controller')} optional autoComplete="off" description="Its marking." />
-          <TextField
-            {...form.field('powerDesign.controllerPhases')}
-            optional
-            inputMode="numeric"
-            description="Phases the controller drives, 1–32."
-          />
-          <Select
-            {...form.field('powerDesign.phaseMultiplication')}
-            optional
-            placeholder="Not known"
-            options={options(phaseMultiplications, phaseMultiplicationLabels)}
-          />
-          <TextField
-            {...form.field('powerDesign.stagesPerPhase')}
-            optional
-            inputMode="numeric"
-            description="1 for direct and doubled; 2 or more when teamed."
-          />
-          <Select
-            {...form.field('powerDesign.vcoreStageType')}
-            optional
-            placeholder="Not known"
-            options={options(vcoreStageTypes, vcoreStageTypeLabels)}
-          />
-          <TextField
-            {...form.field('powerDesign.vcoreStagePart')}
-            optional
-            autoComplete="off"
-            description="As printed on the stage or MOSFET."
-          />
-          <TextField
-            {...form.field('powerDesign.vcoreStageCurrentA')}
-            optional
-            inputMode="decimal"
-            description="Continuous current of one stage in A, e.g. 60 or 62.5."
-          />
-          <TextField
-            {...form.field('powerDesign.socRailStages')}
-            optional
-            inputMode="numeric"
-            description="Stages on the SoC rail."
-          />
-        </div>
+        <ProductFields form={form} fields={powerDesignFields} className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3" />
         <PowerDesignSummary values={values} />
-        <div className="mt-4 grid gap-4 lg:grid-cols-2">
-          <TextArea
-            {...form.field('powerDesign.otherRails')}
-            optional
-            rows={2}
-            description="In words, e.g. “1 stage graphics, 1 stage auxiliary”."
-          />
-          <TextArea
-            {...form.field('powerDesign.heatsinkNotes')}
-            optional
-            rows={2}
-            description="Fins, heat pipes, pads, contact with the stages."
-          />
-        </div>
+        <ProductFields form={form} fields={powerDesignNoteFields} className="mt-4 grid gap-4 lg:grid-cols-2" />
       </FormSection>
 
       <FormSection title="Features" description="Counts are ports or slots on the board; leave empty when not known.">
         <fieldset>
           <legend className="mb-2 text-sm font-semibold text-ink">Rear USB ports by speed</legend>
-          <div className="grid grid-cols-2 gap-3 sm:grid-cols-5">
-            {(['usb2', 'usb5g', 'usb10g', 'usb20g', 'usb40g'] as const).map((speed) => (
-              <TextField
-                key={speed}
-                {...form.field(`features.rearUsb.${speed}`)}
-                optional
-                inputMode="numeric"
-                inputClassName="numeric"
-              />
-            ))}
-          </div>
+          <ProductFields form={form} fields={rearUsbFields} className="grid grid-cols-2 gap-3 sm:grid-cols-5" />
         </fieldset>
-        <div className="mt-4 grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
-          <Select
-            {...form.field('features.frontUsbCHeader')}
-            optional
-            placeholder="Not known"
-            options={options(frontUsbCHeaders, frontUsbCHeaderLabels)}
-          />
-          <Select
-            {...form.field('features.lanSpeedMbps')}
-            optional
-            placeholder="Not known"
-            options={lanOptions(values['features.lanSpeedMbps'])}
-            description="The fastest wired port."
-          />
-          <Select
-            {...form.field('features.wifi')}
-            optional
-            placeholder="Not known"
-            options={options(wifiGenerations, wifiGenerationLabels)}
-          />
-          <TextField {...form.field('features.m2Slots')} optional inputMode="numeric" />
-          <TextField {...form.field('features.sataPorts')} optional inputMode="numeric" />
-          <Select
-            {...form.field('features.ioShieldPrefitted')}
-            optional
-            placeholder="Not known"
-            options={[
-              { value: 'yes', label: 'Pre-fitted' },
-              { value: 'no', label: 'Separate plate' },
-            ]}
-          />
-          <TextField
-            {...form.field('features.audio')}
-            optional
-            autoComplete="off"
-            className="sm:col-span-2 lg:col-span-3"
-            description="In words, e.g. “7.1 HD audio, optical out”."
-          />
-        </div>
+        <ProductFields form={form} fields={featureFields} className="mt-4 grid gap-4 sm:grid-cols-2 lg:grid-cols-3" />
       </FormSection>
 
       <div className="flex flex-wrap items-center gap-3 border-t border-rule pt-4">
@@ -264,6 +238,64 @@ export function ProductForm({ initialValues, submitLabel, cancelTo, save, onSave
       </ConfirmDialog>
     </form>
   );
+}
+
+interface ProductFieldsProps {
+  form: {
+    values: ProductFormValues;
+    field: (name: ProductField) => {
+      id: string;
+      name: string;
+      label: string;
+      value: string;
+      error?: string;
+      onChange: (event: ChangeEvent<HTMLInputElement | HTMLSelectElement | HTMLTextAreaElement>) => void;
+    };
+  };
+  fields: ProductFieldSpec[];
+  className: string;
+}
+
+/** One grid of the form, each field drawn from its line in the field table. */
+function ProductFields({ form, fields, className }: ProductFieldsProps) {
+  return (
+    <div className={className}>
+      {fields.map((spec) => (
+        <ProductFieldControl key={spec.name} form={form} spec={spec} />
+      ))}
+    </div>
+  );
+}
+
+function ProductFieldControl({ form, spec }: { form: ProductFieldsProps['form']; spec: ProductFieldSpec }) {
+  const common = {
+    ...form.field(spec.name),
+    optional: !requiredFields.has(spec.name),
+    description: spec.description,
+    className: spec.className,
+  };
+  switch (spec.kind) {
+    case 'choice':
+      return (
+        <Select
+          {...common}
+          placeholder={common.optional ? 'Not known' : 'Choose…'}
+          options={spec.options(form.values)}
+        />
+      );
+    case 'notes':
+      return <TextArea {...common} rows={2} />;
+    case 'text':
+      return <TextField {...common} autoComplete="off" />;
+    case 'date':
+      return <TextField {...common} type="date" />;
+    case 'decimal':
+      return <TextField {...common} inputMode="decimal" />;
+    case 'integer':
+      return <TextField {...common} inputMode="numeric" />;
+    case 'count':
+      return <TextField {...common} inputMode="numeric" inputClassName="numeric" />;
+  }
 }
 
 function FormSection({ title, description, children }: { title: string; description?: string; children: ReactNode }) {

@@ -26,76 +26,104 @@ function Row({ term, children, numeric }: { term: string; children: ReactNode; n
   );
 }
 
+/** One line of the spec: its term, what it shows (null when not known) and whether it is a figure. */
+interface SpecLine {
+  term: string;
+  value: (product: ProductDetail) => ReactNode;
+  numeric?: boolean;
+}
+
+const productLines: SpecLine[] = [
+  { term: 'Maker', value: (product) => product.maker },
+  { term: 'Model', value: (product) => product.model },
+  { term: 'Platform', value: (product) => product.platform },
+  { term: 'Socket', value: (product) => product.socket },
+  { term: 'Chipset', value: (product) => product.chipset },
+  { term: 'Form factor', value: (product) => formatFormFactor(product.formFactor) },
+  {
+    term: 'Release date',
+    numeric: true,
+    value: (product) => (product.releaseDate ? formatCalendarDate(product.releaseDate) : null),
+  },
+];
+
+const powerDesignLines: SpecLine[] = [
+  { term: 'Controller', value: ({ powerDesign: pd }) => pd.controller },
+  {
+    term: 'Phases',
+    numeric: true,
+    value: ({ powerDesign: pd }) => (pd.controllerPhases !== null ? formatPhases(pd) : null),
+  },
+  {
+    term: 'Multiplication',
+    value: ({ powerDesign: pd }) => (pd.phaseMultiplication ? phaseMultiplicationLabels[pd.phaseMultiplication] : null),
+  },
+  { term: 'Stages per phase', numeric: true, value: ({ powerDesign: pd }) => pd.stagesPerPhase },
+  { term: 'V-core stages', numeric: true, value: ({ powerDesign: pd }) => pd.vcoreStageCount },
+  { term: 'Stage type', value: ({ powerDesign: pd }) => (pd.vcoreStageType ? stageTypeLong(pd) : null) },
+  { term: 'Stage part', value: ({ powerDesign: pd }) => pd.vcoreStagePart },
+  {
+    term: 'Rating per stage',
+    numeric: true,
+    value: ({ powerDesign: pd }) =>
+      pd.vcoreStageCurrentA !== null ? `${formatAmps(pd.vcoreStageCurrentA, 0)} continuous` : null,
+  },
+  {
+    term: 'Sum of ratings',
+    numeric: true,
+    value: ({ powerDesign: pd }) => (pd.vcoreRatedCurrentA !== null ? formatAmps(pd.vcoreRatedCurrentA) : null),
+  },
+  { term: 'SoC rail stages', numeric: true, value: ({ powerDesign: pd }) => pd.socRailStages },
+  { term: 'Other rails', value: ({ powerDesign: pd }) => pd.otherRails },
+  { term: 'Heatsink', value: ({ powerDesign: pd }) => pd.heatsinkNotes },
+];
+
+const featureLines: SpecLine[] = [
+  { term: 'Rear USB', value: ({ features: f }) => formatRearUsb(f.rearUsb) },
+  {
+    term: 'Front USB-C header',
+    value: ({ features: f }) => (f.frontUsbCHeader ? formatFrontUsbC(f.frontUsbCHeader) : null),
+  },
+  { term: 'Wired LAN', value: ({ features: f }) => (f.lanSpeedMbps !== null ? formatLanSpeed(f.lanSpeedMbps) : null) },
+  { term: 'Wi-Fi', value: ({ features: f }) => (f.wifi ? formatWifi(f.wifi) : null) },
+  { term: 'M.2 slots', numeric: true, value: ({ features: f }) => f.m2Slots },
+  { term: 'SATA ports', numeric: true, value: ({ features: f }) => f.sataPorts },
+  { term: 'Audio', value: ({ features: f }) => f.audio },
+  {
+    term: 'I/O shield',
+    value: ({ features: f }) =>
+      f.ioShieldPrefitted === null ? null : f.ioShieldPrefitted ? 'Pre-fitted' : 'Separate plate',
+  },
+];
+
+function SpecLines({ product, lines }: { product: ProductDetail; lines: SpecLine[] }) {
+  return (
+    <dl>
+      {lines.map(({ term, value, numeric }) => (
+        <Row key={term} term={term} numeric={numeric}>
+          {value(product)}
+        </Row>
+      ))}
+    </dl>
+  );
+}
+
 /** The product's recorded facts, in three groups: identity, V-core power design, features. */
 export function ProductSpec({ product }: { product: ProductDetail }) {
-  const pd = product.powerDesign;
-  const f = product.features;
   return (
     <div className="grid grid-cols-1 gap-5 lg:grid-cols-3">
       <Panel title="Product">
-        <dl>
-          <Row term="Maker">{product.maker}</Row>
-          <Row term="Model">{product.model}</Row>
-          <Row term="Platform">{product.platform}</Row>
-          <Row term="Socket">{product.socket}</Row>
-          <Row term="Chipset">{product.chipset}</Row>
-          <Row term="Form factor">{formatFormFactor(product.formFactor)}</Row>
-          <Row term="Release date" numeric>
-            {product.releaseDate ? formatCalendarDate(product.releaseDate) : null}
-          </Row>
-        </dl>
+        <SpecLines product={product} lines={productLines} />
       </Panel>
       <Panel title="V-core power design">
-        <dl>
-          <Row term="Controller">{pd.controller}</Row>
-          <Row term="Phases" numeric>
-            {pd.controllerPhases !== null ? formatPhases(pd) : null}
-          </Row>
-          <Row term="Multiplication">
-            {pd.phaseMultiplication ? phaseMultiplicationLabels[pd.phaseMultiplication] : null}
-          </Row>
-          <Row term="Stages per phase" numeric>
-            {pd.stagesPerPhase}
-          </Row>
-          <Row term="V-core stages" numeric>
-            {pd.vcoreStageCount}
-          </Row>
-          <Row term="Stage type">{pd.vcoreStageType ? stageTypeLong(pd) : null}</Row>
-          <Row term="Stage part">{pd.vcoreStagePart}</Row>
-          <Row term="Rating per stage" numeric>
-            {pd.vcoreStageCurrentA !== null ? `${formatAmps(pd.vcoreStageCurrentA, 0)} continuous` : null}
-          </Row>
-          <Row term="Sum of ratings" numeric>
-            {pd.vcoreRatedCurrentA !== null ? formatAmps(pd.vcoreRatedCurrentA) : null}
-          </Row>
-          <Row term="SoC rail stages" numeric>
-            {pd.socRailStages}
-          </Row>
-          <Row term="Other rails">{pd.otherRails}</Row>
-          <Row term="Heatsink">{pd.heatsinkNotes}</Row>
-        </dl>
+        <SpecLines product={product} lines={powerDesignLines} />
         <p className="mt-2 text-[0.8125rem] text-muted">
           The sum of ratings adds up the parts’ data-sheet figures; it says nothing about how well the board cools them.
           That is what the bench measures.
         </p>
       </Panel>
       <Panel title="Features">
-        <dl>
-          <Row term="Rear USB">{formatRearUsb(f.rearUsb)}</Row>
-          <Row term="Front USB-C header">{f.frontUsbCHeader ? formatFrontUsbC(f.frontUsbCHeader) : null}</Row>
-          <Row term="Wired LAN">{f.lanSpeedMbps !== null ? formatLanSpeed(f.lanSpeedMbps) : null}</Row>
-          <Row term="Wi-Fi">{f.wifi ? formatWifi(f.wifi) : null}</Row>
-          <Row term="M.2 slots" numeric>
-            {f.m2Slots}
-          </Row>
-          <Row term="SATA ports" numeric>
-            {f.sataPorts}
-          </Row>
-          <Row term="Audio">{f.audio}</Row>
-          <Row term="I/O shield">
-            {f.ioShieldPrefitted === null ? null : f.ioShieldPrefitted ? 'Pre-fitted' : 'Separate plate'}
-          </Row>
-        </dl>
+        <SpecLines product={product} lines={featureLines} />
       </Panel>
     </div>
   );

@@ -1,4 +1,4 @@
-import { useDeferredValue, useId, useState } from 'react';
+import { useDeferredValue, useId, useState, type ReactNode } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
@@ -33,25 +33,75 @@ export function AddProducts({ roundup, pendingProductId, onAdd }: AddProductsPro
   );
 }
 
-function SectionTitle({ id, children }: { id: string; children: string }) {
+/** One way in: a titled section with a line on what it offers. */
+function AddSection({ title, intro, children }: { title: string; intro: ReactNode; children: ReactNode }) {
+  const headingId = useId();
   return (
-    <h3 id={id} className="text-sm font-semibold text-ink">
+    <section aria-labelledby={headingId}>
+      <h3 id={headingId} className="text-sm font-semibold text-ink">
+        {title}
+      </h3>
+      <p className="mt-0.5 text-[0.8125rem] text-muted">{intro}</p>
       {children}
-    </h3>
+    </section>
+  );
+}
+
+/** Products that can join the roundup, each with a line of detail, what it costs and its Add button. */
+function ProductChoices<Item>({
+  items,
+  productOf,
+  detail,
+  price,
+  className,
+  pendingProductId,
+  onAdd,
+}: {
+  items: readonly Item[];
+  productOf: (item: Item) => ProductBrief;
+  detail: (item: Item) => ReactNode;
+  price: (item: Item) => ReactNode;
+  className: string;
+} & Pick<AddProductsProps, 'pendingProductId' | 'onAdd'>) {
+  return (
+    <ul className={`${className} divide-y divide-rule rounded-[3px] border border-rule`}>
+      {items.map((item) => {
+        const product = productOf(item);
+        return (
+          <li key={product.id} className="flex flex-wrap items-center gap-x-3 gap-y-2 px-3 py-2">
+            <div className="min-w-0 flex-1 basis-48">
+              <p className="font-medium">{productDisplayName(product)}</p>
+              <p className="text-xs text-muted">{detail(item)}</p>
+            </div>
+            {price(item)}
+            <Button
+              size="sm"
+              onClick={() => onAdd(product, 'tested')}
+              pending={pendingProductId === product.id}
+              aria-label={`Add ${productDisplayName(product)}`}
+            >
+              Add
+            </Button>
+          </li>
+        );
+      })}
+    </ul>
   );
 }
 
 function Suggestions({ roundup, pendingProductId, onAdd }: AddProductsProps) {
-  const headingId = useId();
   const suggestions = useSuggestions(roundup.id, true);
   const list = suggestions.data?.suggestions ?? [];
   return (
-    <section aria-labelledby={headingId}>
-      <SectionTitle id={headingId}>Suggested from the catalog</SectionTitle>
-      <p className="mt-0.5 text-[0.8125rem] text-muted">
-        {roundup.platform} boards whose latest price in {roundup.priceBand.region} is inside{' '}
-        {formatBand(roundup.priceBand)}, cheapest first.
-      </p>
+    <AddSection
+      title="Suggested from the catalog"
+      intro={
+        <>
+          {roundup.platform} boards whose latest price in {roundup.priceBand.region} is inside{' '}
+          {formatBand(roundup.priceBand)}, cheapest first.
+        </>
+      }
+    >
       {suggestions.isPending ? (
         <p className="mt-3 text-sm text-muted" role="status">
           Looking through the catalog…
@@ -66,44 +116,33 @@ function Suggestions({ roundup, pendingProductId, onAdd }: AddProductsProps) {
           anyway.
         </p>
       ) : (
-        <ul className="mt-3 divide-y divide-rule rounded-[3px] border border-rule">
-          {list.map(({ product, priceCheck }) => (
-            <li key={product.id} className="flex flex-wrap items-center gap-x-3 gap-y-2 px-3 py-2">
-              <div className="min-w-0 flex-1 basis-48">
-                <p className="font-medium">{productDisplayName(product)}</p>
-                <p className="text-xs text-muted">{product.chipset}</p>
-              </div>
-              <PriceCheckCell check={priceCheck} />
-              <Button
-                size="sm"
-                onClick={() => onAdd(product, 'tested')}
-                pending={pendingProductId === product.id}
-                aria-label={`Add ${productDisplayName(product)}`}
-              >
-                Add
-              </Button>
-            </li>
-          ))}
-        </ul>
+        <ProductChoices
+          items={list}
+          productOf={(suggestion) => suggestion.product}
+          detail={(suggestion) => suggestion.product.chipset}
+          price={(suggestion) => <PriceCheckCell check={suggestion.priceCheck} />}
+          className="mt-3"
+          pendingProductId={pendingProductId}
+          onAdd={onAdd}
+        />
       )}
-    </section>
+    </AddSection>
   );
 }
 
 function CatalogSearch({ roundup, pendingProductId, onAdd }: AddProductsProps) {
-  const headingId = useId();
   const [search, setSearch] = useState('');
   const deferred = useDeferredValue(search.trim());
   const enabled = deferred.length >= 2;
   const results = useCatalogProducts({ search: deferred, priceRegion: roundup.priceBand.region, limit: 20 }, enabled);
   const inRoundup = new Set(roundup.entries.map((e) => e.product.id));
   const products = (results.data?.products ?? []).filter((p) => !inRoundup.has(p.id));
+  const region = roundup.priceBand.region;
   return (
-    <section aria-labelledby={headingId}>
-      <SectionTitle id={headingId}>Any catalog product</SectionTitle>
-      <p className="mt-0.5 text-[0.8125rem] text-muted">
-        Outside the band or without a current price? It can still join; you will see why it was not suggested.
-      </p>
+    <AddSection
+      title="Any catalog product"
+      intro="Outside the band or without a current price? It can still join; you will see why it was not suggested."
+    >
       <TextField
         label="Search the catalog"
         type="search"
@@ -121,57 +160,44 @@ function CatalogSearch({ roundup, pendingProductId, onAdd }: AddProductsProps) {
           ) : products.length === 0 ? (
             <p className="mt-2 text-sm text-muted">No catalog product outside this roundup matches “{deferred}”.</p>
           ) : (
-            <ul className="mt-2 divide-y divide-rule rounded-[3px] border border-rule">
-              {products.map((product) => {
-                const price = product.latestPrices.find((p) => p.region === roundup.priceBand.region);
+            <ProductChoices
+              items={products}
+              productOf={(product) => product}
+              detail={(product) => `${product.platform} · ${product.chipset}`}
+              price={(product) => {
+                const price = product.latestPrices.find((p) => p.region === region);
                 return (
-                  <li key={product.id} className="flex flex-wrap items-center gap-x-3 gap-y-1 px-3 py-2">
-                    <div className="min-w-0 flex-1 basis-48">
-                      <p className="font-medium">{productDisplayName(product)}</p>
-                      <p className="text-xs text-muted">
-                        {product.platform} · {product.chipset}
-                      </p>
-                    </div>
-                    <span className="numeric">
-                      {price ? (
-                        formatMoney(price.amountMinor, price.currency)
-                      ) : (
-                        <span className="text-muted">No {roundup.priceBand.region} price</span>
-                      )}
-                    </span>
-                    <Button
-                      size="sm"
-                      onClick={() => onAdd(product, 'tested')}
-                      pending={pendingProductId === product.id}
-                      aria-label={`Add ${productDisplayName(product)}`}
-                    >
-                      Add
-                    </Button>
-                  </li>
+                  <span className="numeric">
+                    {price ? (
+                      formatMoney(price.amountMinor, price.currency)
+                    ) : (
+                      <span className="text-muted">No {region} price</span>
+                    )}
+                  </span>
                 );
-              })}
-            </ul>
+              }}
+              className="mt-2"
+              pendingProductId={pendingProductId}
+              onAdd={onAdd}
+            />
           )}
         </div>
       )}
-    </section>
+    </AddSection>
   );
 }
 
 function ReferencePicker({ roundup, pendingProductId, onAdd }: AddProductsProps) {
-  const headingId = useId();
   const candidates = useReferenceCandidates(roundup.id, true);
   const [productId, setProductId] = useState('');
   const [earlierId, setEarlierId] = useState('');
   const list = candidates.data ?? [];
   const chosen = list.find((c) => String(c.product.id) === productId);
   return (
-    <section aria-labelledby={headingId}>
-      <SectionTitle id={headingId}>Reference entry</SectionTitle>
-      <p className="mt-0.5 text-[0.8125rem] text-muted">
-        A product tested in an earlier roundup, shown in the comparisons with its accepted results. It is not re-tested
-        and has no sample.
-      </p>
+    <AddSection
+      title="Reference entry"
+      intro="A product tested in an earlier roundup, shown in the comparisons with its accepted results. It is not re-tested and has no sample."
+    >
       {candidates.isPending ? (
         <p className="mt-2 text-sm text-muted">Loading earlier results…</p>
       ) : list.length === 0 ? (
@@ -214,6 +240,6 @@ function ReferencePicker({ roundup, pendingProductId, onAdd }: AddProductsProps)
           </Button>
         </div>
       )}
-    </section>
+    </AddSection>
   );
 }

@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { TextField } from '../../../components/ui/text-field';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { createBenchProfileRequestSchema, type BenchProfile } from '../../../../shared/schemas/bench-profiles';
 import { useCreateBenchProfile } from '../api/create-bench-profile';
 import { numberFromText } from './form-numbers';
+import { SetupFields, type SetupFieldSpec } from './setup-fields';
 import { FormDialog } from '../../../components/ui/form-dialog';
 
 const shape = createBenchProfileRequestSchema.shape;
@@ -44,6 +44,26 @@ const labels = {
   notes: 'Notes',
 };
 
+type BenchProfileField = keyof typeof labels;
+
+const nameField: SetupFieldSpec<BenchProfileField>[] = [{ name: 'name', placeholder: 'Open bench, 360 mm loop' }];
+
+const setupFields: SetupFieldSpec<BenchProfileField>[] = [
+  { name: 'caseAndFans', description: 'Case or open bench, fans and their speeds.' },
+  { name: 'cooler' },
+  { name: 'psu' },
+  { name: 'memory', description: 'Kit, speed, timings, voltage.' },
+  { name: 'roomTempTargetC', inputMode: 'decimal', placeholder: '21.0' },
+  { name: 'roomTempToleranceC', inputMode: 'decimal', placeholder: '1.0' },
+  { name: 'probeType', placeholder: 'Type K thermocouple, 0.1 mm bead' },
+  { name: 'requiredSoakMinutes', inputMode: 'numeric', description: 'Readings count only after this long under load.' },
+];
+
+const placementFields: SetupFieldSpec<BenchProfileField>[] = [
+  { name: 'probePlacement', description: 'Where the probes go, e.g. board rear under the V-core stages, taped.' },
+  { name: 'notes', optional: true },
+];
+
 export interface BenchProfileDialogProps {
   open: boolean;
   onClose: () => void;
@@ -67,32 +87,11 @@ export function BenchProfileDialog({ open, onClose, onCreated }: BenchProfileDia
       onSubmit={() => form.submitWith(create, onCreated)}
       problems={form.problems('The profile was not saved')}
     >
-      <TextField {...form.field('name')} autoComplete="off" placeholder="Open bench, 360 mm loop" />
+      <SetupFields field={form.field} specs={nameField} />
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField
-          {...form.field('caseAndFans')}
-          autoComplete="off"
-          description="Case or open bench, fans and their speeds."
-        />
-        <TextField {...form.field('cooler')} autoComplete="off" />
-        <TextField {...form.field('psu')} autoComplete="off" />
-        <TextField {...form.field('memory')} autoComplete="off" description="Kit, speed, timings, voltage." />
-        <TextField {...form.field('roomTempTargetC')} inputMode="decimal" autoComplete="off" placeholder="21.0" />
-        <TextField {...form.field('roomTempToleranceC')} inputMode="decimal" autoComplete="off" placeholder="1.0" />
-        <TextField {...form.field('probeType')} autoComplete="off" placeholder="Type K thermocouple, 0.1 mm bead" />
-        <TextField
-          {...form.field('requiredSoakMinutes')}
-          inputMode="numeric"
-          autoComplete="off"
-          description="Readings count only after this long under load."
-        />
+        <SetupFields field={form.field} specs={setupFields} />
       </div>
-      <TextField
-        {...form.field('probePlacement')}
-        autoComplete="off"
-        description="Where the probes go, e.g. board rear under the V-core stages, taped."
-      />
-      <TextField {...form.field('notes')} optional autoComplete="off" />
+      <SetupFields field={form.field} specs={placementFields} />
     </FormDialog>
   );
 }

@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { Select } from '../../../components/ui/select';
-import { TextField } from '../../../components/ui/text-field';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { whenValid } from '../../../../shared/schemas/checks';
 import {
@@ -14,6 +13,7 @@ import {
 } from '../../../../shared/schemas/load-configurations';
 import { useCreateLoadConfiguration } from '../api/create-load-configuration';
 import { numberFromText, optionalNumberFromText } from './form-numbers';
+import { SetupFields, type SetupFieldSpec } from './setup-fields';
 import { FormDialog } from '../../../components/ui/form-dialog';
 
 const shape = createLoadConfigurationRequestSchema.shape;
@@ -61,6 +61,32 @@ const labels = {
 
 const modeOptions = loadSettingsModes.map((mode) => ({ value: mode, label: loadSettingsModeLabels[mode] }));
 
+type LoadConfigurationField = keyof typeof labels;
+
+const whatFields: SetupFieldSpec<LoadConfigurationField>[] = [
+  { name: 'name', placeholder: 'Stock all-core' },
+  { name: 'cpuDescription', description: 'The CPU used, in words.' },
+];
+
+const clockFields: SetupFieldSpec<LoadConfigurationField>[] = [
+  { name: 'fixedClockMhz', inputMode: 'numeric', placeholder: '5200' },
+];
+
+const loadFields = (fixed: boolean): SetupFieldSpec<LoadConfigurationField>[] => [
+  { name: 'expectedPackagePowerW', inputMode: 'decimal', placeholder: '230.0' },
+  {
+    name: 'coreVoltageV',
+    inputMode: 'decimal',
+    placeholder: '1.250',
+    description: fixed ? 'The voltage you set.' : 'The voltage expected under this load.',
+  },
+  { name: 'soakMinutes', inputMode: 'numeric', description: 'How long the load runs before readings count.' },
+];
+
+const notesFields: SetupFieldSpec<LoadConfigurationField>[] = [
+  { name: 'settingsNotes', optional: true, description: 'Power limits, load-line calibration, the load program.' },
+];
+
 export interface LoadConfigurationDialogProps {
   open: boolean;
   onClose: () => void;
@@ -91,40 +117,16 @@ export function LoadConfigurationDialog({ open, onClose, onCreated }: LoadConfig
       problems={form.problems('The configuration was not saved')}
     >
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField {...form.field('name')} autoComplete="off" placeholder="Stock all-core" />
-        <TextField {...form.field('cpuDescription')} autoComplete="off" description="The CPU used, in words." />
+        <SetupFields field={form.field} specs={whatFields} />
         <Select {...form.field('settingsMode')} options={modeOptions} />
         {fixed ? (
-          <TextField {...form.field('fixedClockMhz')} inputMode="numeric" autoComplete="off" placeholder="5200" />
+          <SetupFields field={form.field} specs={clockFields} />
         ) : (
           <div aria-hidden="true" className="hidden sm:block" />
         )}
-        <TextField
-          {...form.field('expectedPackagePowerW')}
-          inputMode="decimal"
-          autoComplete="off"
-          placeholder="230.0"
-        />
-        <TextField
-          {...form.field('coreVoltageV')}
-          inputMode="decimal"
-          autoComplete="off"
-          placeholder="1.250"
-          description={fixed ? 'The voltage you set.' : 'The voltage expected under this load.'}
-        />
-        <TextField
-          {...form.field('soakMinutes')}
-          inputMode="numeric"
-          autoComplete="off"
-          description="How long the load runs before readings count."
-        />
+        <SetupFields field={form.field} specs={loadFields(fixed)} />
       </div>
-      <TextField
-        {...form.field('settingsNotes')}
-        optional
-        autoComplete="off"
-        description="Power limits, load-line calibration, the load program."
-      />
+      <SetupFields field={form.field} specs={notesFields} />
       {fixed && (
         <Alert tone="caution">
           Fixed clocks and raised voltages can shorten component life and void warranties. Stay within the maker’s

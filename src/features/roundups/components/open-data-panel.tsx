@@ -4,8 +4,8 @@ import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { Panel } from '../../../components/ui/panel';
 import { TextField } from '../../../components/ui/text-field';
-import { describeSubmitError } from '../../../lib/form-errors';
 import { useOpenDataSettings, useSetOpenDataSettings } from '../api/publishing';
+import { useSubmitProblems } from './use-submit-problems';
 
 /**
  * Editors and admins: whether readers may download this roundup's raw logger files, and the outlet's licence line
@@ -16,25 +16,16 @@ export function OpenDataPanel({ roundupId }: { roundupId: number }) {
   const save = useSetOpenDataSettings();
   const [rawFilesAllowed, setRawFilesAllowed] = useState(settings.rawFilesAllowed);
   const [licence, setLicence] = useState(settings.licence);
-  const [fields, setFields] = useState<Partial<Record<string, string>>>({});
-  const [message, setMessage] = useState<string | null>(null);
+  const { fields, message, clear, fail } = useSubmitProblems();
   const [saved, setSaved] = useState(false);
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    setFields({});
-    setMessage(null);
+    clear();
     setSaved(false);
     save.mutate(
       { id: roundupId, settings: { rawFilesAllowed, licence } },
-      {
-        onSuccess: () => setSaved(true),
-        onError: (error) => {
-          const described = describeSubmitError(error);
-          setFields(described.fields);
-          setMessage(described.message);
-        },
-      },
+      { onSuccess: () => setSaved(true), onError: fail },
     );
   };
 

@@ -7,7 +7,6 @@ import { Select } from '../../../components/ui/select';
 import { TextArea } from '../../../components/ui/text-area';
 import { TextField } from '../../../components/ui/text-field';
 import { ApiError } from '../../../lib/api-client';
-import { describeSubmitError } from '../../../lib/form-errors';
 import { roundupStateLabels } from '../../../../shared/domain/planning/roundup-states';
 import {
   formatUtcOffset,
@@ -22,6 +21,7 @@ import {
   useScheduleRoundup,
   useUnscheduleRoundup,
 } from '../api/publishing';
+import { useSubmitProblems } from './use-submit-problems';
 
 export interface PublishingPanelProps {
   roundupId: number;
@@ -60,6 +60,21 @@ function ProblemList({ problems, label }: { problems: Problem[]; label: string }
   );
 }
 
+type ScheduleValues = { date: string; time: string; timeZone: string };
+
+/** The embargo as the editor types it: a wall-clock date and time in a named zone. */
+const scheduleFields: {
+  name: keyof ScheduleValues;
+  label: string;
+  type?: string;
+  step?: number;
+  description?: string;
+}[] = [
+  { name: 'date', label: 'Date', type: 'date' },
+  { name: 'time', label: 'Time', type: 'time', step: 1 },
+  { name: 'timeZone', label: 'Time zone', description: 'An IANA name, e.g. Europe/Berlin' },
+];
+
 function inZone(instant: string, timeZone: string) {
   const local = instantToZonedTime(new Date(instant), timeZone);
   return `${local.date} ${local.time} ${timeZone}`;
@@ -72,42 +87,38 @@ export function PublishingPanel({ roundupId, defaultTimeZone, canEdit }: Publish
   const unschedule = useUnscheduleRoundup();
   const publishUpdate = usePublishUpdate();
   const previewLink = useCreatePreviewLink();
-  const initial = publishing.schedule ?? { date: '', time: '09:00', timeZone: defaultTimeZone };
-  const [date, setDate] = useState(initial.date);
-  const [time, setTime] = useState(initial.time);
-  const [timeZone, setTimeZone] = useState(initial.timeZone);
-  const [fields, setFields] = useState<Partial<Record<string, string>>>({});
-  const [message, setMessage] = useState<string | null>(null);
+  const [when, setWhen] = useState<ScheduleValues>(() => {
+    const { date, time, timeZone } = publishing.schedule ?? { date: '', time: '09:00', timeZone: defaultTimeZone };
+    return { date, time, timeZone };
+  });
+  const problems = useSubmitProblems();
+  const { fields, message } = problems;
   const [refused, setRefused] = useState<Problem[]>([]);
   const [notice, setNotice] = useState<string | null>(null);
   const [kind, setKind] = useState<'update' | 'correction'>('update');
   const [note, setNote] = useState('');
   const [link, setLink] = useState<{ url: string; expiresAt: string } | null>(null);
 
-  const zoned = date && time ? zonedTimeToInstant({ date, time, timeZone }) : null;
+  const zoned = when.date && when.time ? zonedTimeToInstant(when) : null;
   const live = publishing.state === 'live' || publishing.state === 'updated';
   const fail = (error: unknown) => {
-    const described = describeSubmitError(error);
-    setFields(described.fields);
-    setMessage(described.message);
+    problems.fail(error);
     setRefused(refusedProblems(error));
   };
 
   const submitSchedule = (event: FormEvent) => {
     event.preventDefault();
-    setFields({});
-    setMessage(null);
+    problems.clear();
     setRefused([]);
     schedule.mutate(
-      { id: roundupId, schedule: { date, time, timeZone } },
+      { id: roundupId, schedule: when },
       { onSuccess: () => setNotice('Scheduled. It goes live by itself at that time.'), onError: fail },
     );
   };
 
   const submitUpdate = (event: FormEvent) => {
     event.preventDefault();
-    setFields({});
-    setMessage(null);
+    problems.clear();
     publishUpdate.mutate(
       { id: roundupId, kind, note },
       {
@@ -173,31 +184,16 @@ export function PublishingPanel({ roundupId, defaultTimeZone, canEdit }: Publish
         )}
         {canEdit && !live && (publishing.readiness.ready || publishing.schedule) && (
           <form onSubmit={submitSchedule} noValidate className="grid gap-3 sm:grid-cols-3">
-            <TextField
-              label="Date"
-              type="date"
-              required
-              value={date}
-              onChange={(e) => setDate(e.target.value)}
-              error={fields.date}
-            />
-            <TextField
-              label="Time"
-              type="time"
-              step={1}
-              required
-              value={time}
-              onChange={(e) => setTime(e.target.value)}
-              error={fields.time}
-            />
-            <TextField
-              label="Time zone"
-              description="An IANA name, e.g. Europe/Berlin"
-              required
-              value={timeZone}
-              onChange={(e) => setTimeZone(e.target.value)}
-              error={fields.timeZone}
-            />
+            {scheduleFields.map(({ name, ...field }) => (
+              <TextField
+                key={name}
+                {...field}
+                required
+                value={when[name]}
+                onChange={(e) => setWhen((current) => ({ ...current, [name]: e.target.value }))}
+                error={fields[name]}
+              />
+            ))}
             <p className="text-sm sm:col-span-3" aria-live="polite">
               {zoned?.ok
                 ? `= ${zoned.instant.toISOString()} UTC (${formatUtcOffset(zoned.offsetMinutes)})${zoned.ambiguous ? ' — this time happens twice that night; the first is used' : ''}`

@@ -129,11 +129,12 @@ export function createServices(dataSource: DataSource, env: Env) {
   const charts = new ChartsService(dataSource, files);
   // readiness.readiness(roundupId): "ready to schedule" and what still blocks it; the write-ups plug in their sections.
   const readiness = new ReadinessService(dataSource, charts, roundups);
+  // Each section's blocker opens that section; "not started" opens the write-up overview, where it is started.
   readiness.useSectionsBlocking(async (roundupId) =>
-    (await writeUps.sectionsBlocking(roundupId)).map((label) => ({
+    (await writeUps.sectionBlockers(roundupId)).map(({ label, sectionId }) => ({
       kind: 'section',
       label,
-      link: `/roundups/${roundupId}/write-up`,
+      link: sectionId === null ? `/roundups/${roundupId}/write-up` : `/roundups/${roundupId}/write-up/${sectionId}`,
     })),
   );
   // Scheduling and the publish job ask readiness: a roundup with blockers is neither scheduled nor published. The

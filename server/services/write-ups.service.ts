@@ -22,7 +22,7 @@ import {
   sectionKindLabels,
   sectionReviewMove,
   sectionReviewMoves,
-  writeUpBlockingReasons,
+  writeUpBlockers,
   type SectionKind,
   type SectionReviewMove,
   type SectionReviewState,
@@ -495,6 +495,11 @@ export class WriteUpsService {
    * off with no open comment thread). The roundup's readiness check lists these beside the charts' reasons.
    */
   async sectionsBlocking(roundupId: number): Promise<string[]> {
+    return (await this.sectionBlockers(roundupId)).map((blocker) => blocker.label);
+  }
+
+  /** As sectionsBlocking, each sentence with the section it is about (null when the write-up was never started). */
+  async sectionBlockers(roundupId: number): Promise<{ label: string; sectionId: number | null }[]> {
     await this.ensureSections(roundupId);
     const manager = this.dataSource.manager;
     const sections = await manager
@@ -504,13 +509,14 @@ export class WriteUpsService {
       manager,
       sections.map((s) => s.id),
     );
-    return writeUpBlockingReasons(
+    return writeUpBlockers(
       sections.map((section) => ({
+        id: section.id,
         title: section.title,
         reviewState: section.reviewState,
         openThreadCount: openThreads.get(section.id) ?? 0,
       })),
-    );
+    ).map(({ reason, section }) => ({ label: reason, sectionId: section?.id ?? null }));
   }
 
   // ---- helpers ----

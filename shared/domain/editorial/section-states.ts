@@ -63,25 +63,36 @@ export interface SectionReviewFacts {
 }
 
 /**
- * What keeps a write-up from being ready, in plain sentences; an empty list means every section is signed off and no
- * comment thread is left open. `sections` empty means the write-up was never started.
+ * What keeps a write-up from being ready, in plain sentences, each with the section it is about (none when the
+ * write-up was never started); an empty list means every section is signed off and no comment thread is left open.
  */
-export function writeUpBlockingReasons(sections: readonly SectionReviewFacts[]): string[] {
-  if (sections.length === 0) return ['The write-up has not been started: open Write-up to create its sections.'];
-  const reasons: string[] = [];
+export function writeUpBlockers<Section extends SectionReviewFacts>(
+  sections: readonly Section[],
+): { reason: string; section: Section | null }[] {
+  if (sections.length === 0) {
+    return [{ reason: 'The write-up has not been started: open Write-up to create its sections.', section: null }];
+  }
+  const blockers: { reason: string; section: Section }[] = [];
   for (const section of sections) {
     if (section.reviewState !== 'signed-off') {
-      reasons.push(
-        `Write-up section “${section.title}” is ${sectionReviewStateLabels[section.reviewState]}, not signed off.`,
-      );
+      blockers.push({
+        reason: `Write-up section “${section.title}” is ${sectionReviewStateLabels[section.reviewState]}, not signed off.`,
+        section,
+      });
     }
     if (section.openThreadCount > 0) {
-      reasons.push(
-        `Write-up section “${section.title}” has ${section.openThreadCount} open comment thread${section.openThreadCount === 1 ? '' : 's'}.`,
-      );
+      blockers.push({
+        reason: `Write-up section “${section.title}” has ${section.openThreadCount} open comment thread${section.openThreadCount === 1 ? '' : 's'}.`,
+        section,
+      });
     }
   }
-  return reasons;
+  return blockers;
+}
+
+/** The blockers' sentences alone (the write-up overview lists them). */
+export function writeUpBlockingReasons(sections: readonly SectionReviewFacts[]): string[] {
+  return writeUpBlockers(sections).map((blocker) => blocker.reason);
 }
 
 /** True when every section is signed off (and there is at least one). */

@@ -133,6 +133,27 @@ describe('write-up sections through the API', () => {
     );
   });
 
+  it('when a write-up section blocks readiness, then its line in the readiness list opens that section, not the overview', async () => {
+    const app = await testApp();
+    const { editor, roundupId } = await roundupInWriting(app, { products: 2 });
+    const sections = (await overview(editor.agent, roundupId)).sections;
+    const readiness = await editor.agent.get(`/api/roundups/${roundupId}/readiness`);
+    expect(readiness.status, readiness.text).toBe(200);
+    const sectionLines = (readiness.body.blocking as { kind: string; label: string; link: string | null }[]).filter(
+      (blocker) => blocker.kind === 'section',
+    );
+    // Every section starts in Drafting, so each one blocks once.
+    expect(sectionLines).toHaveLength(sections.length);
+    for (const section of sections) {
+      expect(sectionLines).toContainEqual(
+        expect.objectContaining({
+          label: `Write-up section “${section.title}” is Drafting, not signed off.`,
+          link: `/roundups/${roundupId}/write-up/${section.id}`,
+        }),
+      );
+    }
+  });
+
   it('when a revision is restored, then it becomes a new version and the history keeps every step', async () => {
     const app = await testApp();
     const { writer, roundupId } = await roundupInWriting(app, { products: 1 });

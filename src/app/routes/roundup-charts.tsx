@@ -1,15 +1,13 @@
-import { useEffect } from 'react';
-import { useLocation, useParams } from 'react-router';
-import { PageHeader } from '../../components/ui/page-header';
+import { useParams } from 'react-router';
 import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
-import { useRoundup } from '../../features/roundups/api/get-roundup';
+import { countOf } from '../../lib/plural';
 import { chartsQueryOptions, useApproveChart, useCharts, useChartSettings } from '../../features/editorial/api/charts';
 import { ChartCard } from '../../features/editorial/components/chart-card';
-import { EditorialNav } from '../../features/editorial/components/editorial-nav';
 import { editorialDeciders, may } from '../../../shared/access/roles';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { gatedPage, roundupPageLoader } from '../page-route';
+import { EditorialPage, useScrollToHash } from '../editorial-page';
 
 export const loader = roundupPageLoader((queryClient, id) => [queryClient.ensureQueryData(chartsQueryOptions(id))]);
 
@@ -17,28 +15,22 @@ export const Component = gatedPage({ path: paths.roundups, pageName: 'Charts' },
 
 function ChartsPage({ user }: { user: CurrentUser }) {
   const roundupId = addressId(useParams().id);
-  const roundup = useRoundup(roundupId);
   const charts = useCharts(roundupId);
   const approve = useApproveChart(roundupId);
   const settings = useChartSettings(roundupId);
-  const { hash } = useLocation();
-  useEffect(() => {
-    if (hash) document.getElementById(hash.slice(1))?.scrollIntoView();
-  }, [hash]);
+  useScrollToHash();
   const canDecide = charts.editable && may(user.role, editorialDeciders);
   const open = charts.charts.filter((c) => c.status === 'not-approved' || c.status === 'stale').length;
   return (
-    <>
-      <PageHeader
-        eyebrow={roundup.title}
-        title="Charts"
-        description={
-          open === 0
-            ? 'Every chart with something to draw is approved.'
-            : `${open} chart${open === 1 ? '' : 's'} to approve. Approving freezes exactly what the chart shows; a later change to a run of record, its analysis, the rubric, the references or a price marks it stale.`
-        }
-      />
-      <EditorialNav roundupId={roundupId} />
+    <EditorialPage
+      roundupId={roundupId}
+      title="Charts"
+      description={
+        open === 0
+          ? 'Every chart with something to draw is approved.'
+          : `${countOf(open, 'chart', 'charts')} to approve. Approving freezes exactly what the chart shows; a later change to a run of record, its analysis, the rubric, the references or a price marks it stale.`
+      }
+    >
       <div className="space-y-5">
         {charts.charts.map((chart) => (
           <ChartCard
@@ -53,6 +45,6 @@ function ChartsPage({ user }: { user: CurrentUser }) {
           />
         ))}
       </div>
-    </>
+    </EditorialPage>
   );
 }

@@ -2,7 +2,6 @@ import { useState } from 'react';
 import { useParams } from 'react-router';
 import { Alert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
-import { PageHeader } from '../../components/ui/page-header';
 import { describeSubmitError } from '../../lib/form-errors';
 import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
@@ -13,11 +12,11 @@ import {
   useReadiness,
   useRequestReview,
 } from '../../features/editorial/api/readiness';
-import { EditorialNav } from '../../features/editorial/components/editorial-nav';
 import { ReadinessPanel } from '../../features/editorial/components/readiness-panel';
 import { editorialDeciders, may } from '../../../shared/access/roles';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { gatedPage, roundupPageLoader } from '../page-route';
+import { EditorialPage } from '../editorial-page';
 import { roundupStateLabels } from '../../../shared/domain/planning/roundup-states';
 
 export const loader = roundupPageLoader((queryClient, id) => [queryClient.ensureQueryData(readinessQueryOptions(id))]);
@@ -32,31 +31,29 @@ function ReadinessPage({ user }: { user: CurrentUser }) {
   const exclusion = useCellExclusion(roundupId);
   const [reviewError, setReviewError] = useState<string>();
   return (
-    <>
-      <PageHeader
-        eyebrow={roundup.title}
-        title="Ready to schedule?"
-        description={`The roundup is ${roundupStateLabels[roundup.state]}. It is ready to schedule once it is in review and nothing below blocks it.`}
-        actions={
-          readiness.canRequestReview ? (
-            <Button
-              variant="primary"
-              pending={review.isPending}
-              onClick={async () => {
-                setReviewError(undefined);
-                try {
-                  await review.mutateAsync();
-                } catch (failure) {
-                  setReviewError(describeSubmitError(failure).message);
-                }
-              }}
-            >
-              Send to review
-            </Button>
-          ) : undefined
-        }
-      />
-      <EditorialNav roundupId={roundupId} />
+    <EditorialPage
+      roundupId={roundupId}
+      title="Ready to schedule?"
+      description={`The roundup is ${roundupStateLabels[roundup.state]}. It is ready to schedule once it is in review and nothing below blocks it.`}
+      actions={
+        readiness.canRequestReview ? (
+          <Button
+            variant="primary"
+            pending={review.isPending}
+            onClick={async () => {
+              setReviewError(undefined);
+              try {
+                await review.mutateAsync();
+              } catch (failure) {
+                setReviewError(describeSubmitError(failure).message);
+              }
+            }}
+          >
+            Send to review
+          </Button>
+        ) : undefined
+      }
+    >
       {reviewError && (
         <Alert tone="danger" announce className="mb-4">
           {reviewError}
@@ -70,6 +67,6 @@ function ReadinessPage({ user }: { user: CurrentUser }) {
         onExclude={(cellId, reason) => exclusion.mutateAsync({ cellId, reason })}
         onInclude={(cellId) => exclusion.mutateAsync({ cellId, reason: null })}
       />
-    </>
+    </EditorialPage>
   );
 }

@@ -1,15 +1,12 @@
-import { useEffect } from 'react';
-import { useLocation, useParams } from 'react-router';
-import { PageHeader } from '../../components/ui/page-header';
+import { useParams } from 'react-router';
 import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
-import { useRoundup } from '../../features/roundups/api/get-roundup';
 import { useSetVerdict, useVerdicts, verdictsQueryOptions } from '../../features/editorial/api/verdicts';
-import { EditorialNav } from '../../features/editorial/components/editorial-nav';
 import { VerdictCard } from '../../features/editorial/components/verdict-card';
 import { editorialDeciders, may } from '../../../shared/access/roles';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { gatedPage, roundupPageLoader } from '../page-route';
+import { EditorialPage, useScrollToHash } from '../editorial-page';
 import { EmptyState } from '../../components/ui/empty-state';
 
 export const loader = roundupPageLoader((queryClient, id) => [queryClient.ensureQueryData(verdictsQueryOptions(id))]);
@@ -18,23 +15,17 @@ export const Component = gatedPage({ path: paths.roundups, pageName: 'Verdicts' 
 
 function VerdictsPage({ user }: { user: CurrentUser }) {
   const roundupId = addressId(useParams().id);
-  const roundup = useRoundup(roundupId);
   const verdicts = useVerdicts(roundupId);
   const save = useSetVerdict(roundupId);
   // The readiness list links to a product's verdict (#verdict-<entry>).
-  const { hash } = useLocation();
-  useEffect(() => {
-    if (hash) document.getElementById(hash.slice(1))?.scrollIntoView();
-  }, [hash]);
+  useScrollToHash();
   const editable = verdicts.editable && may(user.role, editorialDeciders);
   return (
-    <>
-      <PageHeader
-        eyebrow={roundup.title}
-        title="Verdicts"
-        description="The editor’s label per product, with the rubric verdicts of its runs of record beside it. A label that goes against them needs a written reason."
-      />
-      <EditorialNav roundupId={roundupId} />
+    <EditorialPage
+      roundupId={roundupId}
+      title="Verdicts"
+      description="The editor’s label per product, with the rubric verdicts of its runs of record beside it. A label that goes against them needs a written reason."
+    >
       {verdicts.products.length === 0 ? (
         <EmptyState title="No tested products">Add products to the roundup first.</EmptyState>
       ) : (
@@ -51,6 +42,6 @@ function VerdictsPage({ user }: { user: CurrentUser }) {
           ))}
         </div>
       )}
-    </>
+    </EditorialPage>
   );
 }

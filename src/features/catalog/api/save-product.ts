@@ -27,10 +27,11 @@ export function deleteProduct(id: number): Promise<void> {
   return apiClient.delete(`/api/catalog/products/${id}`);
 }
 
-export function useCreateProduct() {
+/** A save that answers with the whole product: it goes straight into the cache, and lists are refetched. */
+function useProductSave<Input>(mutationFn: (input: Input) => Promise<ProductDetail>) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: createProduct,
+    mutationFn,
     onSuccess: (product) => {
       queryClient.setQueryData(catalogKeys.detail(product.id), product);
       return invalidateAfter(queryClient, 'product');
@@ -38,15 +39,12 @@ export function useCreateProduct() {
   });
 }
 
+export function useCreateProduct() {
+  return useProductSave(createProduct);
+}
+
 export function useUpdateProduct() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: updateProduct,
-    onSuccess: (product) => {
-      queryClient.setQueryData(catalogKeys.detail(product.id), product);
-      return invalidateAfter(queryClient, 'product');
-    },
-  });
+  return useProductSave(updateProduct);
 }
 
 export function useDeleteProduct() {

@@ -1,6 +1,6 @@
 import { useId, useState, type FormEvent } from 'react';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
-import { TextField } from '../../../components/ui/text-field';
+import { TextField, type TextFieldProps } from '../../../components/ui/text-field';
 import { ApiError, isApiError } from '../../../lib/api-client';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { formSchema } from '../../../lib/form-schema';
@@ -58,10 +58,23 @@ export interface AddPriceFormProps {
   onAdded?: (price: Price) => void;
 }
 
+/** A short code typed in capitals (region, currency), with the codes already used offered as suggestions. */
+function CodeField({ suggestions, ...field }: TextFieldProps & { suggestions: readonly string[] }) {
+  const listId = useId();
+  return (
+    <>
+      <TextField {...field} list={listId} autoComplete="off" autoCapitalize="characters" inputClassName="uppercase" />
+      <datalist id={listId}>
+        {suggestions.map((code) => (
+          <option key={code} value={code} />
+        ))}
+      </datalist>
+    </>
+  );
+}
+
 export function AddPriceForm({ productId, knownRegions, knownCurrencies, onAdded }: AddPriceFormProps) {
   const addPrice = useAddPrice();
-  const regionListId = useId();
-  const currencyListId = useId();
   const [saved, setSaved] = useState<string | null>(null);
   const form = useZodForm({
     schema: priceFormSchema,
@@ -102,22 +115,8 @@ export function AddPriceForm({ productId, knownRegions, knownCurrencies, onAdded
         attempt={form.attempt}
       />
       <div className="grid grid-cols-2 gap-3">
-        <TextField
-          {...form.field('region')}
-          list={regionListId}
-          autoComplete="off"
-          autoCapitalize="characters"
-          description="e.g. DE, GB, US"
-          inputClassName="uppercase"
-        />
-        <TextField
-          {...form.field('currency')}
-          list={currencyListId}
-          autoComplete="off"
-          autoCapitalize="characters"
-          description="ISO 4217, e.g. EUR"
-          inputClassName="uppercase"
-        />
+        <CodeField {...form.field('region')} suggestions={knownRegions} description="e.g. DE, GB, US" />
+        <CodeField {...form.field('currency')} suggestions={knownCurrencies} description="ISO 4217, e.g. EUR" />
         <TextField
           {...form.field('amount')}
           inputMode="decimal"
@@ -132,16 +131,6 @@ export function AddPriceForm({ productId, knownRegions, knownCurrencies, onAdded
         autoComplete="off"
         description="Shop name, or a note such as “maker’s list price”."
       />
-      <datalist id={regionListId}>
-        {knownRegions.map((region) => (
-          <option key={region} value={region} />
-        ))}
-      </datalist>
-      <datalist id={currencyListId}>
-        {knownCurrencies.map((currency) => (
-          <option key={currency} value={currency} />
-        ))}
-      </datalist>
       <SubmitRow label="Add price" pending={addPrice.isPending} done={saved} />
     </form>
   );

@@ -9,6 +9,7 @@ import { CATALOG_IMPORT_MAX_ROWS, catalogCsvColumns } from '../../../../shared/s
 import { CatalogImportCheck, plural } from './catalog-import-check';
 import { CatalogImportSourceForm } from './catalog-import-source-form';
 import { useCatalogImport } from './use-catalog-import';
+import { CatalogBreadcrumb } from './catalog-breadcrumb';
 
 const templateHref = `data:text/csv;charset=utf-8,${encodeURIComponent(
   `${catalogCsvColumns.map((column) => column.name).join(',')}\r\n`,
@@ -31,15 +32,7 @@ export function CatalogImport() {
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link to={paths.catalog} className="text-muted underline underline-offset-2 hover:text-ink">
-          Catalog
-        </Link>
-        <span aria-hidden="true" className="mx-1.5 text-muted">
-          /
-        </span>
-        <span aria-current="page">Import</span>
-      </nav>
+      <CatalogBreadcrumb current="Import" />
       <PageHeader
         title="Import products from CSV"
         description={`One product per row, header row first, UTF-8. A row whose maker and model are already in the catalog updates that product; price columns add to its price history. Up to ${CATALOG_IMPORT_MAX_ROWS} rows per file.`}

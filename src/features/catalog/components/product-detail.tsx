@@ -19,6 +19,7 @@ import { formatFormFactor } from './catalog-format';
 import { PriceHistory } from './price-history';
 import { ProductSpec } from './product-spec';
 import { productDisplayName } from '../../../../shared/domain/planning/product-display-name';
+import { CatalogBreadcrumb } from './catalog-breadcrumb';
 
 export interface ProductDetailViewProps {
   productId: number;
@@ -78,15 +79,7 @@ export function ProductDetailView({ productId, canEdit, canDelete }: ProductDeta
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link to={paths.catalog} className="text-muted underline underline-offset-2 hover:text-ink">
-          Catalog
-        </Link>
-        <span aria-hidden="true" className="mx-1.5 text-muted">
-          /
-        </span>
-        <span aria-current="page">{product.model}</span>
-      </nav>
+      <CatalogBreadcrumb current={product.model} />
       <PageHeader
         eyebrow={`${product.platform} · ${product.socket} · ${product.chipset} · ${formatFormFactor(product.formFactor)}`}
         title={name}

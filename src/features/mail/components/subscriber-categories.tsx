@@ -16,6 +16,29 @@ interface Draft {
 
 const emptyDraft: Draft = { id: null, name: '', description: '', matchProductClass: '', matchPlatform: '' };
 
+/** The subject's text fields, in the order the form shows them; only the name is required. */
+const draftFields: {
+  name: Exclude<keyof Draft, 'id'>;
+  label: string;
+  description?: string;
+  optional?: boolean;
+}[] = [
+  { name: 'name', label: 'Name' },
+  { name: 'description', label: 'Description', optional: true },
+  {
+    name: 'matchProductClass',
+    label: 'Product class it covers',
+    description: 'e.g. motherboard; empty covers every class',
+    optional: true,
+  },
+  {
+    name: 'matchPlatform',
+    label: 'Platform it covers',
+    description: 'e.g. Helix-1700; empty covers every platform',
+    optional: true,
+  },
+];
+
 /** The subjects readers choose from, with confirmed subscribers per subject; editors add, change and remove them. */
 export function SubscriberCategories({ canEdit }: { canEdit: boolean }) {
   const { categories, subscribers } = useSubscriberCategories();
@@ -108,35 +131,15 @@ export function SubscriberCategories({ canEdit }: { canEdit: boolean }) {
             );
           }}
         >
-          <TextField
-            label="Name"
-            value={draft.name}
-            onChange={(e) => setDraft({ ...draft, name: e.target.value })}
-            error={fields.name}
-          />
-          <TextField
-            label="Description"
-            optional
-            value={draft.description}
-            onChange={(e) => setDraft({ ...draft, description: e.target.value })}
-            error={fields.description}
-          />
-          <TextField
-            label="Product class it covers"
-            description="e.g. motherboard; empty covers every class"
-            optional
-            value={draft.matchProductClass}
-            onChange={(e) => setDraft({ ...draft, matchProductClass: e.target.value })}
-            error={fields.matchProductClass}
-          />
-          <TextField
-            label="Platform it covers"
-            description="e.g. Helix-1700; empty covers every platform"
-            optional
-            value={draft.matchPlatform}
-            onChange={(e) => setDraft({ ...draft, matchPlatform: e.target.value })}
-            error={fields.matchPlatform}
-          />
+          {draftFields.map(({ name, ...field }) => (
+            <TextField
+              key={name}
+              {...field}
+              value={draft[name]}
+              onChange={(e) => setDraft({ ...draft, [name]: e.target.value })}
+              error={fields[name]}
+            />
+          ))}
           {save.isError && !Object.keys(fields).length && (
             <Alert tone="danger" announce className="sm:col-span-2">
               {save.error.message}

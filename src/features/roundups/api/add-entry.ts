@@ -1,8 +1,7 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { apiClient } from '../../../lib/api-client';
 import { addRoundupEntryResponseSchema, type AddRoundupEntryRequest } from '../../../../shared/schemas/roundups';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export type AddEntryResult = z.infer<typeof addRoundupEntryResponseSchema>;
 
@@ -17,6 +16,5 @@ export function addEntry({ roundupId, entry }: AddEntryInput): Promise<AddEntryR
 }
 
 export function useAddEntry() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: addEntry, onSuccess: () => invalidateAfter(queryClient, 'plan') });
+  return useChangeMutation(addEntry, 'plan');
 }

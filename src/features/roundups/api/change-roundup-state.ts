@@ -1,8 +1,7 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { roundupDetailSchema, type RoundupDetail } from '../../../../shared/schemas/roundups';
 import type { RoundupState } from '../../../../shared/domain/planning/roundup-states';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface ChangeRoundupStateInput {
   id: number;
@@ -15,6 +14,5 @@ export function changeRoundupState({ id, to }: ChangeRoundupStateInput): Promise
 }
 
 export function useChangeRoundupState() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: changeRoundupState, onSuccess: () => invalidateAfter(queryClient, 'plan') });
+  return useChangeMutation(changeRoundupState, 'plan');
 }

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient, apiRequest } from '../../../lib/api-client';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 import {
   openDataSettingsSchema,
   previewLinkSchema,
@@ -29,8 +29,7 @@ export function usePublishing(id: number) {
 }
 
 function useRoundupChange<I>(mutationFn: (input: I) => Promise<unknown>) {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn, onSuccess: () => invalidateAfter(queryClient, 'plan') });
+  return useChangeMutation(mutationFn, 'plan');
 }
 
 export function useScheduleRoundup() {

@@ -1,6 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface RemoveEntryInput {
   roundupId: number;
@@ -13,6 +12,5 @@ export function removeEntry({ roundupId, entryId }: RemoveEntryInput): Promise<v
 }
 
 export function useRemoveEntry() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: removeEntry, onSuccess: () => invalidateAfter(queryClient, 'plan') });
+  return useChangeMutation(removeEntry, 'plan');
 }

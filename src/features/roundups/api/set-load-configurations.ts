@@ -1,7 +1,6 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 import { roundupDetailSchema, type RoundupDetail } from '../../../../shared/schemas/roundups';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface SetLoadConfigurationsInput {
   id: number;
@@ -22,6 +21,5 @@ export function setLoadConfigurations({
 }
 
 export function useSetLoadConfigurations() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: setLoadConfigurations, onSuccess: () => invalidateAfter(queryClient, 'plan') });
+  return useChangeMutation(setLoadConfigurations, 'plan');
 }

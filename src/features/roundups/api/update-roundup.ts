@@ -1,11 +1,10 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import {
   roundupDetailSchema,
   type RoundupDetail,
   type UpdateRoundupRequest,
 } from '../../../../shared/schemas/roundups';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface UpdateRoundupInput {
   id: number;
@@ -17,6 +16,5 @@ export function updateRoundup({ id, changes }: UpdateRoundupInput): Promise<Roun
 }
 
 export function useUpdateRoundup() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: updateRoundup, onSuccess: () => invalidateAfter(queryClient, 'plan') });
+  return useChangeMutation(updateRoundup, 'plan');
 }

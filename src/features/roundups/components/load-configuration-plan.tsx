@@ -36,6 +36,12 @@ export function describeConfiguration(configuration: LoadConfiguration): string 
  * The ordered list of load configurations: each one becomes a matrix column in this order. Moves use buttons
  * (no dragging), so the order can be set from the keyboard and with a screen reader.
  */
+/** Moving a configuration one place up or down the matrix; the button at the list's end is shown as unavailable. */
+const moves = [
+  { step: -1, word: 'Up', arrow: '↑' },
+  { step: 1, word: 'Down', arrow: '↓' },
+] as const;
+
 export function LoadConfigurationPlan({
   configurations,
   value,
@@ -116,24 +122,21 @@ export function LoadConfigurationPlan({
                 </div>
                 {!disabled && (
                   <div className="flex gap-1.5">
-                    <Button
-                      size="sm"
-                      aria-label={`Move ${configuration.name} up`}
-                      aria-disabled={index === 0 || undefined}
-                      className={cx(index === 0 && 'opacity-55')}
-                      onClick={() => move(index, -1)}
-                    >
-                      <span aria-hidden="true">↑</span> Up
-                    </Button>
-                    <Button
-                      size="sm"
-                      aria-label={`Move ${configuration.name} down`}
-                      aria-disabled={index === chosen.length - 1 || undefined}
-                      className={cx(index === chosen.length - 1 && 'opacity-55')}
-                      onClick={() => move(index, 1)}
-                    >
-                      <span aria-hidden="true">↓</span> Down
-                    </Button>
+                    {moves.map(({ step, word, arrow }) => {
+                      const atEdge = index + step < 0 || index + step >= chosen.length;
+                      return (
+                        <Button
+                          key={word}
+                          size="sm"
+                          aria-label={`Move ${configuration.name} ${word.toLowerCase()}`}
+                          aria-disabled={atEdge || undefined}
+                          className={cx(atEdge && 'opacity-55')}
+                          onClick={() => move(index, step)}
+                        >
+                          <span aria-hidden="true">{arrow}</span> {word}
+                        </Button>
+                      );
+                    })}
                     <Button
                       size="sm"
                       variant="quiet"

@@ -1,7 +1,6 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { sampleSchema, type Sample, type UpdateSampleRequest } from '../../../../shared/schemas/samples';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 
 export interface UpdateSampleInput {
   roundupId: number;
@@ -15,6 +14,5 @@ export function updateSample({ roundupId, sampleId, changes }: UpdateSampleInput
 }
 
 export function useUpdateSample() {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: updateSample, onSuccess: () => invalidateAfter(queryClient, 'sample') });
+  return useChangeMutation(updateSample, 'sample');
 }

@@ -3,7 +3,7 @@ import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Panel } from '../../../components/ui/panel';
 import { Select } from '../../../components/ui/select';
-import { TextField } from '../../../components/ui/text-field';
+import { TextField, type TextFieldProps } from '../../../components/ui/text-field';
 import { ApiError, isApiError } from '../../../lib/api-client';
 import { userTimeZone } from '../../../lib/format-time';
 import { useZodForm } from '../../../lib/use-zod-form';
@@ -104,10 +104,23 @@ export interface CreateRoundupFormProps {
 }
 
 /** Plans a new roundup: what is compared, in which price band, when it should publish, and how it is tested. */
+/** A free-text field that offers the values already known (platforms in the catalog, time zones) as suggestions. */
+function SuggestingField({ suggestions, ...field }: TextFieldProps & { suggestions: readonly string[] }) {
+  const listId = useId();
+  return (
+    <>
+      <TextField {...field} autoComplete="off" list={listId} />
+      <datalist id={listId}>
+        {suggestions.map((suggestion) => (
+          <option key={suggestion} value={suggestion} />
+        ))}
+      </datalist>
+    </>
+  );
+}
+
 export function CreateRoundupForm({ onCreated, onCancel }: CreateRoundupFormProps) {
   const formId = useId();
-  const platformListId = useId();
-  const zoneListId = useId();
   const profiles = useBenchProfiles();
   const savedConfigurations = useLoadConfigurations();
   const catalog = useCatalogProducts({ limit: 1 });
@@ -176,17 +189,11 @@ export function CreateRoundupForm({ onCreated, onCancel }: CreateRoundupFormProp
               placeholder="Boards for the new platform, mid-price"
             />
             <Select {...form.field('category')} options={categoryOptions} />
-            <TextField
+            <SuggestingField
               {...form.field('platform')}
-              autoComplete="off"
-              list={platformListId}
+              suggestions={platforms}
               description="As the catalog names it: suggestions come from products of this platform."
             />
-            <datalist id={platformListId}>
-              {platforms.map((platform) => (
-                <option key={platform} value={platform} />
-              ))}
-            </datalist>
           </div>
         </Panel>
 
@@ -222,17 +229,11 @@ export function CreateRoundupForm({ onCreated, onCancel }: CreateRoundupFormProp
         <Panel title="Timing">
           <div className="grid gap-4 sm:grid-cols-2">
             <TextField {...form.field('targetPublishDate')} type="date" optional />
-            <TextField
+            <SuggestingField
               {...form.field('timeZone')}
-              autoComplete="off"
-              list={zoneListId}
+              suggestions={zones}
               description="Due dates and loan return-by dates end at midnight in this zone."
             />
-            <datalist id={zoneListId}>
-              {zones.map((zone) => (
-                <option key={zone} value={zone} />
-              ))}
-            </datalist>
           </div>
         </Panel>
 

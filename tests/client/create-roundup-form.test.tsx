@@ -3,8 +3,8 @@ import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
 import { CreateRoundupForm } from '../../src/features/roundups/components/create-roundup-form';
-import { benchProfilesQueryOptions } from '../../src/features/roundups/api/get-bench-profiles';
-import { loadConfigurationsQueryOptions } from '../../src/features/roundups/api/get-load-configurations';
+import { benchProfilesQueryOptions } from '../../src/features/roundups/api/bench-profiles';
+import { loadConfigurationsQueryOptions } from '../../src/features/roundups/api/load-configurations';
 import { catalogProductsQueryOptions } from '../../src/features/roundups/api/get-catalog-products';
 
 /** A query client already holding what the form reads, so it renders without a server. */

@@ -7,7 +7,7 @@ import { weekFromParams } from '../../features/bench-booking/components/booking-
 import { benchesQueryOptions, useBenches } from '../../features/benches/api/get-benches';
 import { BenchesOverview } from '../../features/benches/components/benches-overview';
 import { myBenchQueryOptions, useMyBench } from '../../features/my-bench/api/get-my-bench';
-import { benchProfilesQueryOptions, useBenchProfiles } from '../../features/roundups/api/get-bench-profiles';
+import { benchProfilesQueryOptions, useBenchProfiles } from '../../features/roundups/api/bench-profiles';
 import { bookableStates } from '../../../shared/domain/planning/matrix-cell-states';
 import type { Role } from '../../../shared/schemas/common';
 import type { CurrentUser } from '../../../shared/schemas/auth';

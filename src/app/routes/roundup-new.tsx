@@ -1,8 +1,8 @@
 import { useNavigate } from 'react-router';
 import { PageHeader } from '../../components/ui/page-header';
 import { paths } from '../../lib/paths';
-import { benchProfilesQueryOptions } from '../../features/roundups/api/get-bench-profiles';
-import { loadConfigurationsQueryOptions } from '../../features/roundups/api/get-load-configurations';
+import { benchProfilesQueryOptions } from '../../features/roundups/api/bench-profiles';
+import { loadConfigurationsQueryOptions } from '../../features/roundups/api/load-configurations';
 import { CreateRoundupForm } from '../../features/roundups/components/create-roundup-form';
 import { may, planEditors } from '../../../shared/access/roles';
 import { gatedPage, pageLoader } from '../page-route';

@@ -320,8 +320,12 @@ describe('embargo publishing', { timeout: 120_000 }, () => {
     expect((await reader().get('/read')).text).not.toContain(title);
     const status = await editor.get(`/api/roundups/${roundupId}/publishing`);
     expect(status.body.schedule).toBeNull();
+    // The blocker opens the section that went back to the writer.
+    const conclusion = await dataSource
+      .getRepository(WriteUpSectionEntity)
+      .findOneByOrFail({ roundupId, sectionKey: 'conclusion' });
     expect(status.body.readiness.problems.map((p: { link: string }) => p.link)).toContain(
-      `/roundups/${roundupId}/write-up`,
+      `/roundups/${roundupId}/write-up/${conclusion.id}`,
     );
   });
 

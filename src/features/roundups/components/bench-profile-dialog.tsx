@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { createBenchProfileRequestSchema, type BenchProfile } from '../../../../shared/schemas/bench-profiles';
-import { useCreateBenchProfile } from '../api/create-bench-profile';
+import { useCreateBenchProfile } from '../api/bench-profiles';
 import { numberFromText } from './form-numbers';
 import { SetupFields, type SetupFieldSpec } from './setup-fields';
 import { FormDialog } from '../../../components/ui/form-dialog';

@@ -15,10 +15,10 @@ import {
   type CreateRoundupRequest,
   type RoundupDetail,
 } from '../../../../shared/schemas/roundups';
-import { useBenchProfiles } from '../api/get-bench-profiles';
+import { useBenchProfiles } from '../api/bench-profiles';
 import { useCatalogProducts } from '../api/get-catalog-products';
 import { useCreateRoundup } from '../api/create-roundup';
-import { useLoadConfigurations } from '../api/get-load-configurations';
+import { useLoadConfigurations } from '../api/load-configurations';
 import { BenchProfilePicker } from './bench-profile-picker';
 import { uniqueById, usePlanDialogs } from './plan-dialogs';
 import { LoadConfigurationPlan } from './load-configuration-plan';

@@ -11,7 +11,7 @@ import {
   loadSettingsModes,
   type LoadConfiguration,
 } from '../../../../shared/schemas/load-configurations';
-import { useCreateLoadConfiguration } from '../api/create-load-configuration';
+import { useCreateLoadConfiguration } from '../api/load-configurations';
 import { numberFromText, optionalNumberFromText } from './form-numbers';
 import { SetupFields, type SetupFieldSpec } from './setup-fields';
 import { FormDialog } from '../../../components/ui/form-dialog';

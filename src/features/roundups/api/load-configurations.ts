@@ -1,6 +1,12 @@
 import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { loadConfigurationListSchema, type LoadConfiguration } from '../../../../shared/schemas/load-configurations';
+import { useChangeMutation } from '../../../lib/stale-after';
+import {
+  loadConfigurationListSchema,
+  loadConfigurationSchema,
+  type CreateLoadConfigurationRequest,
+  type LoadConfiguration,
+} from '../../../../shared/schemas/load-configurations';
 import { roundupKeys } from './roundup-keys';
 
 /** Load configurations that may be chosen (archived ones are left out). */
@@ -21,4 +27,12 @@ export function loadConfigurationsQueryOptions() {
 
 export function useLoadConfigurations() {
   return useSuspenseQuery(loadConfigurationsQueryOptions()).data;
+}
+
+export function createLoadConfiguration(input: CreateLoadConfigurationRequest): Promise<LoadConfiguration> {
+  return apiClient.post('/api/load-configurations', input, { schema: loadConfigurationSchema });
+}
+
+export function useCreateLoadConfiguration() {
+  return useChangeMutation(createLoadConfiguration, 'loadConfiguration');
 }

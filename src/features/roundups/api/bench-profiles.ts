@@ -1,6 +1,12 @@
 import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { benchProfileListSchema, type BenchProfile } from '../../../../shared/schemas/bench-profiles';
+import { useChangeMutation } from '../../../lib/stale-after';
+import {
+  benchProfileListSchema,
+  benchProfileSchema,
+  type BenchProfile,
+  type CreateBenchProfileRequest,
+} from '../../../../shared/schemas/bench-profiles';
 import { roundupKeys } from './roundup-keys';
 
 /** Bench profiles that may be chosen (archived ones are left out). */
@@ -18,4 +24,12 @@ export function benchProfilesQueryOptions() {
 
 export function useBenchProfiles() {
   return useSuspenseQuery(benchProfilesQueryOptions()).data;
+}
+
+export function createBenchProfile(input: CreateBenchProfileRequest): Promise<BenchProfile> {
+  return apiClient.post('/api/bench-profiles', input, { schema: benchProfileSchema });
+}
+
+export function useCreateBenchProfile() {
+  return useChangeMutation(createBenchProfile, 'benchProfile');
 }

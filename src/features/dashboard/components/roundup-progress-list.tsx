@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import { EmptyState } from '../../../components/ui/empty-state';
 import type { RoundupSummary } from '../../../../shared/schemas/roundups';
 import { formatCalendarDate } from '../../../lib/format-time';
-import { ProgressBar } from './progress-bar';
+import { ProgressMeter } from '../../../components/ui/progress-meter';
 import { RoundupStateBadge } from '../../../components/ui/roundup-state-badge';
 
 export interface RoundupProgressListProps {
@@ -40,7 +40,7 @@ export function RoundupProgressList({ roundups, roundupPath, emptyTitle }: Round
             )}
           </p>
           <div className="mt-1">
-            <ProgressBar progress={roundup.progress} />
+            <ProgressMeter progress={roundup.progress} words="beside" />
           </div>
         </li>
       ))}

@@ -9,7 +9,7 @@ import type { RoundupDetail } from '../../../../shared/schemas/roundups';
 import { useChangeRoundupState } from '../api/change-roundup-state';
 import { formatCalendarDate } from '../../../lib/format-time';
 import { formatBand } from './planning-format';
-import { ProgressMeter } from './progress-meter';
+import { ProgressMeter } from '../../../components/ui/progress-meter';
 import { RoundupStateBadge } from '../../../components/ui/roundup-state-badge';
 
 export interface RoundupHeaderProps {
@@ -66,7 +66,7 @@ export function RoundupHeader({ roundup, canChangeState }: RoundupHeaderProps) {
               </strong>{' '}
               · Time zone {roundup.timeZone}
             </p>
-            <ProgressMeter progress={roundup.progress} detailed />
+            <ProgressMeter progress={roundup.progress} words="below" />
           </div>
         }
         actions={

@@ -13,7 +13,7 @@ import {
 import type { RoundupSummary } from '../../../../shared/schemas/roundups';
 import { formatCalendarDate } from '../../../lib/format-time';
 import { formatBandRange } from './planning-format';
-import { ProgressMeter } from './progress-meter';
+import { ProgressMeter } from '../../../components/ui/progress-meter';
 import { RoundupStateBadge } from '../../../components/ui/roundup-state-badge';
 
 export interface RoundupsTableProps {

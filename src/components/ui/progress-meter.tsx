@@ -1,18 +1,19 @@
-import type { MatrixProgress } from '../../../../shared/schemas/matrix';
+import type { MatrixProgress } from '../../../shared/schemas/matrix';
 
 export interface ProgressMeterProps {
   progress: MatrixProgress;
-  /** Show the "n of m accepted" line under the bar. */
-  detailed?: boolean;
+  /** Where the "n of m accepted" words go: nowhere (tables), under the bar (roundup header) or beside it (dashboard). */
+  words?: 'none' | 'below' | 'beside';
 }
 
 /** Accepted cells as a share of the matrix: a thin bar with the number printed beside it. */
-export function ProgressMeter({ progress, detailed = false }: ProgressMeterProps) {
+export function ProgressMeter({ progress, words = 'none' }: ProgressMeterProps) {
   const { percentAccepted, acceptedCount, cellCount } = progress;
-  const label =
-    cellCount === 0 ? 'No cells yet' : `${acceptedCount} of ${cellCount} cells accepted (${percentAccepted} %)`;
+  const counted = cellCount === 0 ? 'No cells yet' : `${acceptedCount} of ${cellCount} cells accepted`;
+  const label = cellCount === 0 ? counted : `${counted} (${percentAccepted} %)`;
+  const wordsClass = 'text-[0.8125rem] text-muted';
   return (
-    <div className="min-w-28">
+    <div className={words === 'beside' ? 'flex items-center gap-2' : 'min-w-28'}>
       <div className="flex items-center gap-2">
         <div
           role="meter"
@@ -27,7 +28,8 @@ export function ProgressMeter({ progress, detailed = false }: ProgressMeterProps
         </div>
         <span className="numeric whitespace-nowrap">{cellCount === 0 ? '—' : `${percentAccepted}\u2009%`}</span>
       </div>
-      {detailed && <p className="mt-0.5 text-[0.8125rem] text-muted">{label}</p>}
+      {words === 'below' && <p className={`mt-0.5 ${wordsClass}`}>{label}</p>}
+      {words === 'beside' && <span className={`whitespace-nowrap ${wordsClass}`}>{counted}</span>}
     </div>
   );
 }

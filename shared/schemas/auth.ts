@@ -9,6 +9,25 @@ export const PASSWORD_MAX = 128;
 /** New passwords: 12 to 128 characters, used as typed (no trimming, no truncation), not only spaces. */
 export const newPasswordSchema = passwordText(PASSWORD_MIN, PASSWORD_MAX);
 
+interface RepeatedPassword {
+  newPassword: string;
+  confirmPassword: string;
+}
+
+/**
+ * A form that sets a new password, typed twice, besides its other `fields`; when the two differ, `mismatch` is said
+ * on the second.
+ */
+export function withRepeatedPassword<Fields extends z.ZodRawShape>(fields: Fields, mismatch: string) {
+  return z
+    .strictObject({ ...fields, newPassword: newPasswordSchema, confirmPassword: passwordText(0, PASSWORD_MAX) })
+    .refine((v) => (v as RepeatedPassword).newPassword === (v as RepeatedPassword).confirmPassword, {
+      path: ['confirmPassword'],
+      message: mismatch,
+      when: whenValid('newPassword', 'confirmPassword'),
+    });
+}
+
 export const emailSchema = z
   .string()
   .trim()
@@ -32,17 +51,10 @@ export type CurrentUser = z.infer<typeof currentUserSchema>;
 
 export const sessionResponseSchema = z.object({ user: currentUserSchema });
 
-export const changePasswordRequestSchema = z
-  .strictObject({
-    currentPassword: passwordText(1, PASSWORD_MAX, 'Enter your current password.'),
-    newPassword: newPasswordSchema,
-    confirmPassword: passwordText(0, PASSWORD_MAX),
-  })
-  .refine((v) => v.newPassword === v.confirmPassword, {
-    path: ['confirmPassword'],
-    message: 'The two new passwords do not match.',
-    when: whenValid('newPassword', 'confirmPassword'),
-  });
+export const changePasswordRequestSchema = withRepeatedPassword(
+  { currentPassword: passwordText(1, PASSWORD_MAX, 'Enter your current password.') },
+  'The two new passwords do not match.',
+);
 export type ChangePasswordRequest = z.infer<typeof changePasswordRequestSchema>;
 
 export const sessionInfoSchema = z.object({

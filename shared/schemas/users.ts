@@ -1,8 +1,7 @@
 import { z } from 'zod';
 import { instantSchema, roleSchema } from './common';
-import { emailSchema, newPasswordSchema, PASSWORD_MAX } from './auth';
-import { passwordText, singleLineText } from './text';
-import { whenValid } from './checks';
+import { emailSchema, newPasswordSchema, withRepeatedPassword } from './auth';
+import { singleLineText } from './text';
 
 export const displayNameSchema = singleLineText(120, 'Enter a name.');
 
@@ -72,14 +71,5 @@ export type Invitation = z.infer<typeof invitationSchema>;
 export const invitationTokenParamsSchema = z.object({ token: z.string().min(1).max(200) });
 
 /** The invited person's password, typed twice. Nothing else may be set here. */
-export const acceptInvitationRequestSchema = z
-  .strictObject({
-    newPassword: newPasswordSchema,
-    confirmPassword: passwordText(0, PASSWORD_MAX),
-  })
-  .refine((v) => v.newPassword === v.confirmPassword, {
-    path: ['confirmPassword'],
-    message: 'The two passwords do not match.',
-    when: whenValid('newPassword', 'confirmPassword'),
-  });
+export const acceptInvitationRequestSchema = withRepeatedPassword({}, 'The two passwords do not match.');
 export type AcceptInvitationRequest = z.infer<typeof acceptInvitationRequestSchema>;

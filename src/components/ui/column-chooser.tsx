@@ -1,4 +1,4 @@
-import { useRef, type KeyboardEvent } from 'react';
+import { useDisclosureEscape } from '../../lib/use-disclosure-escape';
 import type { ColumnChoice } from '../../lib/use-column-choice';
 import { Button } from './button';
 import { Checkbox } from './checkbox';
@@ -17,18 +17,11 @@ export interface ColumnChooserProps extends ColumnChoice {
 
 /** A disclosure with one checkbox per column; the choice is remembered on this device. */
 export function ColumnChooser({ columns, isVisible, setVisible, reset }: ColumnChooserProps) {
-  const detailsRef = useRef<HTMLDetailsElement>(null);
+  const escape = useDisclosureEscape();
   const visibleCount = columns.filter((column) => isVisible(column.id, column.defaultVisible)).length;
 
-  const closeOnEscape = (event: KeyboardEvent<HTMLDetailsElement>) => {
-    if (event.key !== 'Escape' || !detailsRef.current?.open) return;
-    event.preventDefault();
-    detailsRef.current.open = false;
-    detailsRef.current.querySelector('summary')?.focus();
-  };
-
   return (
-    <details ref={detailsRef} onKeyDown={closeOnEscape} className="group relative">
+    <details {...escape} className="group relative">
       <summary className="inline-flex min-h-9 cursor-pointer list-none items-center gap-2 rounded-[3px] border border-edge bg-surface px-3.5 text-sm font-medium text-ink hover:bg-wash [&::-webkit-details-marker]:hidden">
         Columns
         <span className="numeric text-muted">

@@ -3,9 +3,9 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Panel } from '../../../components/ui/panel';
-import { PasswordField } from '../../../components/ui/password-field';
+import { NewPasswordFields } from '../../../components/ui/new-password-fields';
 import { useZodForm } from '../../../lib/use-zod-form';
-import { changePasswordRequestSchema, PASSWORD_MIN } from '../../../../shared/schemas/auth';
+import { changePasswordRequestSchema } from '../../../../shared/schemas/auth';
 import { useChangePassword } from '../api/change-password';
 
 const emptyForm = { currentPassword: '', newPassword: '', confirmPassword: '' };
@@ -46,20 +46,13 @@ export function ChangePasswordForm({ email }: ChangePasswordFormProps) {
             Your password is changed. Your other sessions have ended; this one stays signed in.
           </Alert>
         )}
-        <FormErrorSummary
-          title="The password was not changed"
-          items={form.summaryItems}
-          message={form.formError}
-          attempt={form.attempt}
+        <FormErrorSummary {...form.problems('The password was not changed')} />
+        <NewPasswordFields
+          username={email}
+          current={form.field('currentPassword')}
+          password={form.field('newPassword')}
+          confirm={form.field('confirmPassword')}
         />
-        <input type="text" name="username" autoComplete="username" value={email} readOnly hidden />
-        <PasswordField {...form.field('currentPassword')} autoComplete="current-password" />
-        <PasswordField
-          {...form.field('newPassword')}
-          autoComplete="new-password"
-          description={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
-        />
-        <PasswordField {...form.field('confirmPassword')} autoComplete="new-password" />
         <Button type="submit" variant="primary" pending={changePassword.isPending}>
           Change password
         </Button>

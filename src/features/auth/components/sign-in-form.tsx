@@ -47,12 +47,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
           {retryAt !== null && <RetryCountdown key={retryAt} until={retryAt} />}
         </Alert>
       ) : (
-        <FormErrorSummary
-          title="Sign-in did not work"
-          items={form.summaryItems}
-          message={form.formError}
-          attempt={form.attempt}
-        />
+        <FormErrorSummary {...form.problems('Sign-in did not work')} />
       )}
       <TextField {...form.field('email')} type="email" autoComplete="username" inputMode="email" autoFocus />
       <PasswordField {...form.field('password')} autoComplete="current-password" />

@@ -237,7 +237,7 @@ function AddInstrumentForm({ benchId }: { benchId: number }) {
           {added}
         </Alert>
       )}
-      <FormErrorSummary title="Not added" items={form.summaryItems} message={form.formError} attempt={form.attempt} />
+      <FormErrorSummary {...form.problems('Not added')} />
       <div className="grid grid-cols-[repeat(auto-fit,minmax(12rem,1fr))] gap-3">
         <Select
           {...form.field('kind')}
@@ -271,7 +271,7 @@ function MaintenanceForm({ benchId, today }: { benchId: number; today: string })
   };
   return (
     <form noValidate onSubmit={submit} aria-label="Log maintenance" className="space-y-3">
-      <FormErrorSummary title="Not logged" items={form.summaryItems} message={form.formError} attempt={form.attempt} />
+      <FormErrorSummary {...form.problems('Not logged')} />
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-[12rem_1fr]">
         <TextField {...form.field('doneOn')} type="date" max={today} />
         <TextField {...form.field('description')} autoComplete="off" maxLength={500} />

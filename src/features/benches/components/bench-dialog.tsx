@@ -98,12 +98,7 @@ function BenchForm({ bench, profiles, onClose, onSaved }: Omit<BenchDialogProps,
 
   return (
     <form id={formId} noValidate onSubmit={submit} className="space-y-4">
-      <FormErrorSummary
-        title={bench ? 'The changes were not saved' : 'The bench was not added'}
-        items={form.summaryItems}
-        message={form.formError}
-        attempt={form.attempt}
-      />
+      <FormErrorSummary {...form.problems(bench ? 'The changes were not saved' : 'The bench was not added')} />
       <TextField {...form.field('name')} autoComplete="off" description="How testers know it, e.g. “Bench 2”." />
       <TextField {...form.field('location')} optional autoComplete="off" description="Room or corner of the lab." />
       <Select

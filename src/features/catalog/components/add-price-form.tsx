@@ -108,12 +108,7 @@ export function AddPriceForm({ productId, knownRegions, knownCurrencies, onAdded
 
   return (
     <form noValidate onSubmit={submit} className="space-y-3" aria-label="Add a price">
-      <FormErrorSummary
-        title="The price was not added"
-        items={form.summaryItems}
-        message={form.formError}
-        attempt={form.attempt}
-      />
+      <FormErrorSummary {...form.problems('The price was not added')} />
       <div className="grid grid-cols-2 gap-3">
         <CodeField {...form.field('region')} suggestions={knownRegions} description="e.g. DE, GB, US" />
         <CodeField {...form.field('currency')} suggestions={knownCurrencies} description="ISO 4217, e.g. EUR" />

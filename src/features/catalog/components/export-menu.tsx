@@ -1,4 +1,5 @@
-import { useId, useRef, useState, type KeyboardEvent } from 'react';
+import { useId, useState } from 'react';
+import { useDisclosureEscape } from '../../../lib/use-disclosure-escape';
 import { buttonStyles } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select';
 import { catalogExportUrl } from '../api/import-catalog';
@@ -11,7 +12,7 @@ export interface ExportMenuProps {
 
 /** Download the catalog as CSV in the import format; the price columns carry the latest price of one region. */
 export function ExportMenu({ regions, archived, platform }: ExportMenuProps) {
-  const detailsRef = useRef<HTMLDetailsElement>(null);
+  const escape = useDisclosureEscape();
   const [region, setRegion] = useState('');
   const hintId = useId();
   const href = catalogExportUrl({
@@ -20,15 +21,8 @@ export function ExportMenu({ regions, archived, platform }: ExportMenuProps) {
     priceRegion: region,
   });
 
-  const closeOnEscape = (event: KeyboardEvent<HTMLDetailsElement>) => {
-    if (event.key !== 'Escape' || !detailsRef.current?.open) return;
-    event.preventDefault();
-    detailsRef.current.open = false;
-    detailsRef.current.querySelector('summary')?.focus();
-  };
-
   return (
-    <details ref={detailsRef} onKeyDown={closeOnEscape} className="group relative">
+    <details {...escape} className="group relative">
       <summary
         className={buttonStyles('secondary', 'md', 'cursor-pointer list-none [&::-webkit-details-marker]:hidden')}
       >

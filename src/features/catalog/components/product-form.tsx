@@ -193,7 +193,7 @@ export function ProductForm({ initialValues, submitLabel, cancelTo, save, onSave
 
   return (
     <form noValidate onSubmit={submit} className="space-y-6">
-      <FormErrorSummary title={errorTitle} items={form.summaryItems} message={form.formError} attempt={form.attempt} />
+      <FormErrorSummary {...form.problems(errorTitle)} />
 
       <FormSection title="Product" description="What the board is and where it fits.">
         <ProductFields form={form} fields={identityFields} className="grid gap-4 sm:grid-cols-2" />

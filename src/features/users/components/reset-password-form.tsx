@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
-import { PasswordField } from '../../../components/ui/password-field';
+import { NewPasswordFields } from '../../../components/ui/new-password-fields';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { PASSWORD_MIN } from '../../../../shared/schemas/auth';
 import { updateUserRequestSchema, type User } from '../../../../shared/schemas/users';
@@ -46,16 +46,10 @@ export function ResetPasswordForm({ user, isSelf, onSaved }: ResetPasswordFormPr
 
   return (
     <form noValidate onSubmit={submit} className="space-y-3">
-      <FormErrorSummary
-        title="The password was not set"
-        items={form.summaryItems}
-        message={form.formError}
-        attempt={form.attempt}
-      />
-      <input type="text" name="username" autoComplete="username" value={user.email} readOnly hidden />
-      <PasswordField
-        {...form.field('password')}
-        autoComplete="new-password"
+      <FormErrorSummary {...form.problems('The password was not set')} />
+      <NewPasswordFields
+        username={user.email}
+        password={form.field('password')}
         description={
           isSelf
             ? `At least ${PASSWORD_MIN} characters. This signs you out too; change your own password under Account instead.`

@@ -56,12 +56,7 @@ export function UserDetailsForm({ user, isSelf, onSaved }: UserDetailsFormProps)
 
   return (
     <form noValidate onSubmit={submit} className="space-y-4">
-      <FormErrorSummary
-        title="The changes were not saved"
-        items={form.summaryItems}
-        message={form.formError}
-        attempt={form.attempt}
-      />
+      <FormErrorSummary {...form.problems('The changes were not saved')} />
       <div className="grid gap-4 sm:grid-cols-2">
         <TextField {...form.field('displayName')} autoComplete="off" />
         <TextField {...form.field('email')} type="email" autoComplete="off" inputMode="email" />

@@ -5,11 +5,11 @@ import { Button } from '../../../components/ui/button';
 import { DateTime } from '../../../components/ui/date-time';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { LoadingState } from '../../../components/ui/loading-state';
-import { PasswordField } from '../../../components/ui/password-field';
+import { NewPasswordFields } from '../../../components/ui/new-password-fields';
 import { isApiError } from '../../../lib/api-client';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { roleGuides } from '../../../lib/role-guide';
-import { PASSWORD_MIN, type CurrentUser } from '../../../../shared/schemas/auth';
+import type { CurrentUser } from '../../../../shared/schemas/auth';
 import { roleLabels } from '../../../../shared/schemas/common';
 import { acceptInvitationRequestSchema } from '../../../../shared/schemas/users';
 import { useAcceptInvitation, useInvitation } from '../api/invitation';
@@ -102,20 +102,13 @@ export function WelcomeForm({ token, onAccepted }: WelcomeFormProps) {
             <p>{rateLimited.message}</p>
           </Alert>
         ) : (
-          <FormErrorSummary
-            title="Your password was not set"
-            items={form.summaryItems}
-            message={form.formError}
-            attempt={form.attempt}
-          />
+          <FormErrorSummary {...form.problems('Your password was not set')} />
         )}
-        <input type="text" name="username" autoComplete="username" value={invited.email} readOnly hidden />
-        <PasswordField
-          {...form.field('newPassword')}
-          autoComplete="new-password"
-          description={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
+        <NewPasswordFields
+          username={invited.email}
+          password={form.field('newPassword')}
+          confirm={form.field('confirmPassword')}
         />
-        <PasswordField {...form.field('confirmPassword')} autoComplete="new-password" />
         <Button type="submit" variant="primary" pending={accept.isPending} className="w-full">
           Set password and sign in
         </Button>

@@ -1,4 +1,3 @@
-import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type Page } from '@playwright/test';
 import type { Role } from '../shared/schemas/common';
 import { clientRoutePatterns } from '../tests/support/client-routes';
@@ -8,6 +7,7 @@ import { publicRoutePatterns } from './support/public-pages';
 import { invitedWelcomeLink } from './support/invitations';
 import { signInAs } from './support/sign-in';
 import { uniqueEmail } from './support/unique';
+import { seriousViolations } from './support/axe';
 
 /**
  * Every staff page, in the light and the dark theme, has no serious or critical accessibility violation that
@@ -105,19 +105,6 @@ function watchPolicy(page: Page): string[] {
     if (/Content Security Policy/i.test(message.text())) refusals.push(`${page.url()}: ${message.text()}`);
   });
   return refusals;
-}
-
-async function seriousViolations(page: Page) {
-  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
-  return results.violations
-    .filter((violation) => violation.impact === 'serious' || violation.impact === 'critical')
-    .map(
-      (violation) =>
-        `${violation.id} (${violation.impact}): ${violation.help} — ${violation.nodes
-          .slice(0, 3)
-          .map((node) => node.target.join(' '))
-          .join(' | ')}`,
-    );
 }
 
 for (const theme of ['light', 'dark'] as const) {

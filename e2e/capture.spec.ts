@@ -2,7 +2,7 @@ import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
-import { expect, test, type PlaywrightWorkerArgs } from '@playwright/test';
+import { test as base, expect, type PlaywrightWorkerArgs } from '@playwright/test';
 import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
 import { prepareAssignedCell } from './support/planned-cell';
 import { signInAs, signOut } from './support/sign-in';
@@ -19,6 +19,14 @@ async function prepareCell(playwright: PlaywrightWorkerArgs['playwright'], baseU
   });
   return { ...cell, productLabel: `${cell.maker} ${cell.model}` };
 }
+
+// Each test starts from a cell of its own, prepared within the test's two minutes.
+const test = base.extend<{ setup: Awaited<ReturnType<typeof prepareCell>> }>({
+  setup: async ({ playwright, baseURL }, use) => {
+    await use(await prepareCell(playwright, baseURL ?? ''));
+  },
+});
+test.describe.configure({ timeout: 120_000 });
 
 /**
  * A 30-minute soak (generated, first-order rise to about 62 °C in a steady 21 °C room, a second probe to about 52 °C)
@@ -50,11 +58,8 @@ test.afterAll(async () => {
 
 test('a tester records runs from logger files; the editor accepts a flagged run and sees it in the results', async ({
   page,
-  playwright,
-  baseURL,
+  setup,
 }) => {
-  test.setTimeout(120_000);
-  const setup = await prepareCell(playwright, baseURL ?? '');
   const firstFile = path.join(folder, 'soak-first.csv');
   const secondFile = path.join(folder, 'soak-second.csv');
   await writeFile(firstFile, shortSoak(1));
@@ -171,11 +176,8 @@ async function noisePhoto(width: number, height: number, format: 'jpeg' | 'png')
 
 test('a tester adds photos to a product with progress and thumbnails, reorders them by keyboard, edits and removes one', async ({
   page,
-  playwright,
-  baseURL,
+  setup,
 }) => {
-  test.setTimeout(120_000);
-  const setup = await prepareCell(playwright, baseURL ?? '');
   const notAPhoto = path.join(folder, 'board-overview.jpg');
   const overview = path.join(folder, 'overview.jpg');
   const closeUp = path.join(folder, 'power-stages.png');

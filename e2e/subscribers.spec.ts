@@ -1,9 +1,9 @@
-import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
 import { apiAs, readyRoundup } from './support/ready-roundup';
 import { localIn } from './support/local-time';
 import { signInAs } from './support/sign-in';
 import { uniqueSuffix } from './support/unique';
+import { seriousViolations } from './support/axe';
 
 // The acceptance test of subscribers and mail (issue 11): a reader subscribes on the public site and confirms from
 // the mail the local relay kept (the admin's dev inbox); a roundup goes live at its embargo time; the go-live mail
@@ -56,20 +56,6 @@ function linkIn(text: string, pattern: RegExp): string {
   const found = text.split(/\s+/).find((word) => pattern.test(word));
   if (!found) throw new Error(`no link matching ${pattern} in:\n${text}`);
   return found;
-}
-
-/** Serious or critical axe findings against WCAG 2.1 A and AA on the page as it stands. */
-async function seriousViolations(page: Page) {
-  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
-  return results.violations
-    .filter((violation) => violation.impact === 'serious' || violation.impact === 'critical')
-    .map(
-      (violation) =>
-        `${violation.id} (${violation.impact}): ${violation.help} — ${violation.nodes
-          .slice(0, 3)
-          .map((node) => node.target.join(' '))
-          .join(' | ')}`,
-    );
 }
 
 test('a reader subscribes, confirms from the dev inbox, gets the go-live mail, unsubscribes in one click and is skipped next time', async ({

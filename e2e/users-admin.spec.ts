@@ -26,12 +26,18 @@ async function openUsers(page: Page) {
   await expect(page.getByRole('heading', { level: 1, name: 'Users' })).toBeVisible();
 }
 
-async function createUser(page: Page, account: NewAccount) {
+/** Opens the New user dialog and fills in the name, e-mail and role of the account. */
+async function fillNewUser(page: Page, account: NewAccount) {
   await page.getByRole('button', { name: 'New user' }).click();
   const dialog = page.getByRole('dialog', { name: 'New user' });
   await dialog.getByLabel('Name').fill(account.displayName);
   await dialog.getByLabel('E-mail').fill(account.email);
   await dialog.getByLabel('Role').selectOption({ label: account.roleLabel });
+  return dialog;
+}
+
+async function createUser(page: Page, account: NewAccount) {
+  const dialog = await fillNewUser(page, account);
   await dialog.getByRole('radio', { name: /Set a first password/ }).check();
   await dialog.getByLabel('First password', { exact: true }).fill(account.password);
   await dialog.getByRole('button', { name: 'Create account' }).click();
@@ -106,11 +112,7 @@ test('an admin invites a colleague by mail; the link sets their password and sig
   await signInAs(page, 'admin');
   await openUsers(page);
 
-  await page.getByRole('button', { name: 'New user' }).click();
-  const dialog = page.getByRole('dialog', { name: 'New user' });
-  await dialog.getByLabel('Name').fill(account.displayName);
-  await dialog.getByLabel('E-mail').fill(account.email);
-  await dialog.getByLabel('Role').selectOption({ label: account.roleLabel });
+  const dialog = await fillNewUser(page, account);
   // Inviting is the default way in.
   await expect(dialog.getByRole('radio', { name: /Send an invitation/ })).toBeChecked();
   await expect(dialog.getByLabel('First password', { exact: true })).toHaveCount(0);
@@ -163,11 +165,7 @@ test('an admin sends an invitation again or withdraws it, from the users table',
   const account = newAccount('Writer');
   await signInAs(page, 'admin');
   await openUsers(page);
-  await page.getByRole('button', { name: 'New user' }).click();
-  const dialog = page.getByRole('dialog', { name: 'New user' });
-  await dialog.getByLabel('Name').fill(account.displayName);
-  await dialog.getByLabel('E-mail').fill(account.email);
-  await dialog.getByLabel('Role').selectOption({ label: account.roleLabel });
+  const dialog = await fillNewUser(page, account);
   await dialog.getByRole('button', { name: 'Send invitation' }).click();
   await expect(dialog).toBeHidden();
 

@@ -1,18 +1,11 @@
+import { wallClockAt } from '../../shared/domain/publishing/zoned-time';
+
 /** The local date and HH:MM:SS of an instant in a zone, as the schedule form takes them. */
 export function localIn(instant: Date, timeZone: string) {
-  const parts = new Intl.DateTimeFormat('en-CA', {
-    timeZone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: '2-digit',
-    day: '2-digit',
-    hour: '2-digit',
-    minute: '2-digit',
-    second: '2-digit',
-  }).formatToParts(instant);
-  const part = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
+  const wall = wallClockAt(timeZone, instant);
+  const pad = (n: number) => String(n).padStart(2, '0');
   return {
-    date: `${part('year')}-${part('month')}-${part('day')}`,
-    time: `${part('hour')}:${part('minute')}:${part('second')}`,
+    date: `${wall.year}-${pad(wall.month)}-${pad(wall.day)}`,
+    time: `${pad(wall.hour)}:${pad(wall.minute)}:${pad(wall.second)}`,
   };
 }

@@ -1,4 +1,27 @@
-import type { SyntheticLogSpec } from '../../shared/generators/synthetic-logger-log';
+import { expect } from 'vitest';
+import { analyseLog } from '../../shared/domain/analysis/analyse-log';
+import { syntheticLoggerLog, type SyntheticLogSpec } from '../../shared/generators/synthetic-logger-log';
+import { analysisResultSchema, type AnalysisOptionsInput, type ColumnMapping } from '../../shared/schemas/analysis';
+
+/** The columns of a generated log with two VRM probes, the room, the clock and the package power. */
+export const twoProbeMapping: ColumnMapping = {
+  vrm: ['VRM 1 [°C]', 'VRM 2 [°C]'],
+  ambient: 'Ambient [°C]',
+  clock: 'CPU clock [MHz]',
+  power: 'Package power [W]',
+};
+
+/** A generated log analysed; the result must be the API document, and a refused log fails with its errors. */
+export function analyseSpec(
+  spec: SyntheticLogSpec,
+  options: AnalysisOptionsInput = {},
+  mapping: ColumnMapping = twoProbeMapping,
+) {
+  const outcome = analyseLog(syntheticLoggerLog(spec), { mapping, options });
+  if (!outcome.ok) throw new Error(JSON.stringify(outcome.errors));
+  expect(analysisResultSchema.safeParse(outcome.analysis).success).toBe(true);
+  return outcome.analysis;
+}
 
 /** An hour at 1 Hz with three VRM probes; VRM 3 reads OPEN from the first sample to the last (a dead probe). */
 export function deadThirdProbeSpec(): SyntheticLogSpec {

@@ -22,6 +22,20 @@ async function lab(...args: string[]): Promise<{ code: number; stdout: string; s
 
 const folder = mkdtempSync(join(tmpdir(), 'benchwire-lab-'));
 
+/** A generated logger log written to the test folder; its path. */
+function logFile(name: string, options: Parameters<typeof syntheticLoggerLog>[0]): string {
+  const file = join(folder, name);
+  writeFileSync(file, syntheticLoggerLog(options));
+  return file;
+}
+
+/** `lab analyse … --json`, which must exit 0, read as the API document. */
+async function analyseJson(...args: string[]) {
+  const result = await lab('analyse', ...args, '--json');
+  expect(result.code).toBe(0);
+  return analysisResultSchema.parse(JSON.parse(result.stdout));
+}
+
 describe('lab CLI', { timeout: 30_000 }, () => {
   it('converts type K both ways as JSON (NIST SRD 60 table: 100 °C → 4.096 mV)', async () => {
     const forward = await lab('tc', '--c', '100', '--json');
@@ -42,19 +56,14 @@ describe('lab CLI', { timeout: 30_000 }, () => {
   });
 
   it('analyses a log and prints the API document with --json', async () => {
-    const file = join(folder, 'soak.csv');
-    writeFileSync(
-      file,
-      syntheticLoggerLog({
-        durationS: 1800,
-        sampleHz: 1,
-        probes: [{ name: 'VRM 1', startC: 30, riseC: 45, tauS: 300 }],
-        ambient: { name: 'Ambient', startC: 21 },
-        clock: { name: 'CPU clock [MHz]', mhz: 4600, drop: { fromS: 900, value: 2000 } },
-      }),
-    );
-    const result = await lab(
-      'analyse',
+    const file = logFile('soak.csv', {
+      durationS: 1800,
+      sampleHz: 1,
+      probes: [{ name: 'VRM 1', startC: 30, riseC: 45, tauS: 300 }],
+      ambient: { name: 'Ambient', startC: 21 },
+      clock: { name: 'CPU clock [MHz]', mhz: 4600, drop: { fromS: 900, value: 2000 } },
+    });
+    const analysis = await analyseJson(
       file,
       '--vrm',
       'VRM 1 [°C]',
@@ -64,10 +73,7 @@ describe('lab CLI', { timeout: 30_000 }, () => {
       '4',
       '--soak-min',
       '30',
-      '--json',
     );
-    expect(result.code).toBe(0);
-    const analysis = analysisResultSchema.parse(JSON.parse(result.stdout));
     expect(analysis.throttle).toMatchObject({ detected: true, firstAtS: 900 });
     expect(analysis.verdict.code).toBe('throttled');
     expect(analysis.flags).toEqual([]);
@@ -77,23 +83,17 @@ describe('lab CLI', { timeout: 30_000 }, () => {
   });
 
   it('withholds the verdict of an unfinished soak in JSON and text alike, and names QA flags in words', async () => {
-    const file = join(folder, 'short.csv');
     // A 10-minute log of a rise with τ = 15 min: 0.67 τ shown (first-order step response), far from its plateau.
-    writeFileSync(
-      file,
-      syntheticLoggerLog({
-        durationS: 600,
-        sampleHz: 1,
-        probes: [{ name: 'VRM 1', startC: 65, riseC: 40, tauS: 900 }],
-        ambient: { name: 'Ambient', startC: 21 },
-        clock: { name: 'CPU clock [MHz]', mhz: 4600, idleMhz: 1200 },
-        power: { name: 'Package power [W]', watts: 200, idleWatts: 30 },
-        loadEndS: 480,
-      }),
-    );
-    const json = await lab('analyse', file, '--vrm', 'VRM 1 [°C]', '--json');
-    expect(json.code).toBe(0);
-    const analysis = analysisResultSchema.parse(JSON.parse(json.stdout));
+    const file = logFile('short.csv', {
+      durationS: 600,
+      sampleHz: 1,
+      probes: [{ name: 'VRM 1', startC: 65, riseC: 40, tauS: 900 }],
+      ambient: { name: 'Ambient', startC: 21 },
+      clock: { name: 'CPU clock [MHz]', mhz: 4600, idleMhz: 1200 },
+      power: { name: 'Package power [W]', watts: 200, idleWatts: 30 },
+      loadEndS: 480,
+    });
+    const analysis = await analyseJson(file, '--vrm', 'VRM 1 [°C]');
     expect(analysis.verdict).toMatchObject({ status: 'withheld', code: null, label: 'No verdict yet' });
     expect(analysis.loadEndSource).toBe('detected');
     const text = await lab('analyse', file, '--vrm', 'VRM 1 [°C]');
@@ -102,8 +102,8 @@ describe('lab CLI', { timeout: 30_000 }, () => {
     expect(text.stdout).toContain('Load end      8\u2009min (package power fell to idle)');
     expect(text.stdout).not.toContain('soak-too-short');
     // The tester sets the load end by hand instead.
-    const manual = await lab('analyse', file, '--vrm', 'VRM 1 [°C]', '--load-end-min', '5', '--json');
-    expect(analysisResultSchema.parse(JSON.parse(manual.stdout))).toMatchObject({ loadEndS: 300, soakS: 300 });
+    const manual = await analyseJson(file, '--vrm', 'VRM 1 [°C]', '--load-end-min', '5');
+    expect(manual).toMatchObject({ loadEndS: 300, soakS: 300 });
   });
 
   it('exits 1 with the precise parse errors on a bad log', async () => {

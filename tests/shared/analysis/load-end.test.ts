@@ -1,15 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { analyseLog } from '../../../shared/domain/analysis/analyse-log';
 import { detectLoadEndIndex } from '../../../shared/domain/analysis/load-end';
-import { syntheticLoggerLog, type SyntheticLogSpec } from '../../../shared/generators/synthetic-logger-log';
-import { analysisOptionsSchema, type AnalysisOptionsInput, type ColumnMapping } from '../../../shared/schemas/analysis';
+import type { SyntheticLogSpec } from '../../../shared/generators/synthetic-logger-log';
+import { analysisOptionsSchema } from '../../../shared/schemas/analysis';
+import { analyseSpec, twoProbeMapping } from '../../support/soak-logs';
 
-const mapping: ColumnMapping = {
-  vrm: ['VRM 1 [°C]', 'VRM 2 [°C]'],
-  ambient: 'Ambient [°C]',
-  clock: 'CPU clock [MHz]',
-  power: 'Package power [W]',
-};
+const mapping = twoProbeMapping;
 
 /**
  * An hour under load (200 W, 4600 MHz) followed by a 15-minute cool-down: power falls to 30 W and the clock to
@@ -33,11 +28,7 @@ function soakWithTail(overrides: Partial<SyntheticLogSpec> = {}): SyntheticLogSp
   };
 }
 
-function analyse(spec: SyntheticLogSpec, options: AnalysisOptionsInput = {}, map: ColumnMapping = mapping) {
-  const outcome = analyseLog(syntheticLoggerLog(spec), { mapping: map, options });
-  if (!outcome.ok) throw new Error(JSON.stringify(outcome.errors));
-  return outcome.analysis;
-}
+const analyse = analyseSpec;
 
 describe('the end of the load', () => {
   it('is where package power and the clock fall to idle together, found on plain series', () => {

@@ -1,19 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { analyseLog } from '../../../shared/domain/analysis/analyse-log';
 import { syntheticLoggerLog, type SyntheticLogSpec } from '../../../shared/generators/synthetic-logger-log';
-import {
-  analysisResultSchema,
-  type AnalysisOptionsInput,
-  type AnalysisResult,
-  type ColumnMapping,
-} from '../../../shared/schemas/analysis';
+import { analysisResultSchema, type AnalysisResult } from '../../../shared/schemas/analysis';
+import { analyseSpec, twoProbeMapping } from '../../support/soak-logs';
 
-const mapping: ColumnMapping = {
-  vrm: ['VRM 1 [°C]', 'VRM 2 [°C]'],
-  ambient: 'Ambient [°C]',
-  clock: 'CPU clock [MHz]',
-  power: 'Package power [W]',
-};
+const mapping = twoProbeMapping;
 
 /** An hour at 1 Hz: two probes rising first-order to 75 and 70 °C (τ 7 min), a 21 °C room, a steady 4600 MHz clock. */
 function hourLog(overrides: Partial<SyntheticLogSpec> = {}): SyntheticLogSpec {
@@ -32,11 +23,7 @@ function hourLog(overrides: Partial<SyntheticLogSpec> = {}): SyntheticLogSpec {
   };
 }
 
-function analyse(spec: SyntheticLogSpec, options: AnalysisOptionsInput = {}, map: ColumnMapping | undefined = mapping) {
-  const outcome = analyseLog(syntheticLoggerLog(spec), { mapping: map, options });
-  if (!outcome.ok) throw new Error(JSON.stringify(outcome.errors));
-  return outcome.analysis;
-}
+const analyse = analyseSpec;
 
 const flagCodes = (analysis: AnalysisResult) => analysis.flags.map((flag) => flag.code);
 

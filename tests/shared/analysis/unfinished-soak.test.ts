@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { analyseLog } from '../../../shared/domain/analysis/analyse-log';
-import { syntheticLoggerLog, type SyntheticLogSpec } from '../../../shared/generators/synthetic-logger-log';
-import { analysisResultSchema, type AnalysisOptionsInput, type ColumnMapping } from '../../../shared/schemas/analysis';
+import type { SyntheticLogSpec } from '../../../shared/generators/synthetic-logger-log';
+import type { AnalysisOptionsInput, ColumnMapping } from '../../../shared/schemas/analysis';
+import { analyseSpec } from '../../support/soak-logs';
 
 const mapping: ColumnMapping = { vrm: ['VRM 1 [°C]', 'VRM 2 [°C]'], ambient: 'Ambient [°C]', clock: 'CPU clock [MHz]' };
 
@@ -25,10 +25,7 @@ function rise(durationS: number, overrides: Partial<SyntheticLogSpec> = {}): Syn
 }
 
 function analyse(spec: SyntheticLogSpec, options: AnalysisOptionsInput = {}) {
-  const outcome = analyseLog(syntheticLoggerLog(spec), { mapping, options });
-  if (!outcome.ok) throw new Error(JSON.stringify(outcome.errors));
-  expect(analysisResultSchema.safeParse(outcome.analysis).success).toBe(true);
-  return outcome.analysis;
+  return analyseSpec(spec, options, mapping);
 }
 
 describe('no verdict from an unfinished soak', () => {

@@ -2,6 +2,7 @@ import type { AddressInfo } from 'node:net';
 import { describe, expect, it } from 'vitest';
 import { demoAccounts } from '../../server/seed/demo-staff';
 import { hostileStrings, nonUtf8Body } from '../support/hostile-strings';
+import { bodyWith } from '../support/request-bodies';
 import { demoAgentsByRole, jsonBodyRoutes, seededOutlet, send } from './support/seeded-outlet';
 
 /**
@@ -40,16 +41,6 @@ function textFields(schema: JsonSchema, path: string[] = []): string[][] {
     }
   }
   return found;
-}
-
-function bodyWith(path: string[], value: unknown): Record<string, unknown> {
-  const body: Record<string, unknown> = {};
-  let node = body;
-  path.forEach((key, index) => {
-    if (index === path.length - 1) node[key] = value;
-    else node = (node[key] = {}) as Record<string, unknown>;
-  });
-  return body;
 }
 
 /** Routes that check or analyse what they are sent and store nothing (previews). */

@@ -16,6 +16,7 @@ import { createCanvas } from '@napi-rs/canvas';
 import { LinkSecret } from '../server/mail/link-secret';
 import { MailSender } from '../server/mail/mail-sender';
 import { RoundupEntity } from '../server/entities/roundup.entity';
+import { liveRoundupRow } from '../tests/support/live-roundup';
 import { databaseRelayStore, startLocalRelay } from '../server/mail/local-relay';
 import { enqueueGoLiveMailing } from '../server/mail/outbox';
 import { goLiveMessage, listHeaders, parseFrom } from '../server/mail/compose';
@@ -100,20 +101,9 @@ try {
   await dataSource.query(
     "INSERT INTO subscriber_categories (subscriber_id, category_id) SELECT s.id, c.id FROM subscribers s JOIN mail_categories c ON c.name = 'Every new roundup'",
   );
-  const roundup = await dataSource.getRepository(RoundupEntity).save(
-    dataSource.getRepository(RoundupEntity).create({
-      title: 'Helix-1700 boards under a one-hour soak',
-      category: 'motherboard',
-      platform: 'Helix-1700',
-      state: 'live',
-      priceMinMinor: 10000,
-      priceMaxMinor: 30000,
-      currency: 'EUR',
-      region: 'EU',
-      timeZone: 'Europe/Berlin',
-      stateChangedAt: new Date(),
-    }),
-  );
+  const roundup = await dataSource
+    .getRepository(RoundupEntity)
+    .save(dataSource.getRepository(RoundupEntity).create(liveRoundupRow('Helix-1700 boards under a one-hour soak')));
 
   // The baseline: the same messages straight through a pooled transport of the same size, batch by batch.
   const transport = createMailTransport(relay.url)!;

@@ -2,6 +2,7 @@ import { simpleParser, type ParsedMail } from 'mailparser';
 import { createApp } from '../../../server/app';
 import { createServices } from '../../../server/compose-services';
 import { RoundupEntity } from '../../../server/entities/roundup.entity';
+import { liveRoundupRow } from '../../support/live-roundup';
 import { databaseRelayStore, startLocalRelay, type LocalRelay } from '../../../server/mail/local-relay';
 import type { Env } from '../../../server/env';
 import { testDataSource, testEnv } from '../support/test-app';
@@ -66,16 +67,7 @@ export async function createRoundup(overrides: Partial<RoundupEntity> = {}): Pro
   const repo = ds.getRepository(RoundupEntity);
   return repo.save(
     repo.create({
-      title: `Helix-1700 boards under a soak ${Date.now()}-${roundupCounter}`,
-      category: 'motherboard',
-      platform: 'Helix-1700',
-      state: 'live',
-      priceMinMinor: 10000,
-      priceMaxMinor: 30000,
-      currency: 'EUR',
-      region: 'EU',
-      timeZone: 'Europe/Berlin',
-      stateChangedAt: new Date(),
+      ...liveRoundupRow(`Helix-1700 boards under a soak ${Date.now()}-${roundupCounter}`),
       ...overrides,
     }),
   );

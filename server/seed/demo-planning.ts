@@ -132,152 +132,122 @@ export async function seedPlanning(manager: EntityManager, staff: PlanningStaff,
     configIds.push(Number(identifiers[0].id));
   }
 
-  // --- An earlier roundup, tested and accepted: its results are what reference entries show.
-  const flagship = await createRoundup(manager, staff, {
-    title: 'Helix-1700 flagship boards',
-    state: 'writing',
-    band: [30000, 45000],
-    targetPublishDate: date(12),
-    benchProfileId,
-    configIds: configIds.slice(0, 2),
-    createdDaysAgo: 70,
-    now,
-  });
-  for (const [position, model] of ['KV Stratum X90', 'Fenwright X90', 'Lanthorn X90'].entries()) {
-    const entryId = await addEntry(manager, staff, flagship, product(model), position, 'tested', null);
-    for (const configId of configIds.slice(0, 2)) {
-      await addCell(manager, flagship, entryId, configId, 'accepted', staff.tester.id, date(-30), null, now);
-    }
-    await manager.getRepository(SampleEntity).insert({
-      entryId,
-      source: position === 0 ? 'retail' : 'vendor-loan',
-      orderReference: position === 0 ? 'KC-2025-31170' : null,
-      costMinor: position === 0 ? 39990 : null,
-      costCurrency: position === 0 ? 'EUR' : null,
-      vendorContact: position === 0 ? null : 'Press desk, by e-mail',
-      returnBy: position === 0 ? null : date(-20),
-      receivedOn: date(-60),
-      returnedOn: position === 0 ? null : date(-22),
-      serialNumber: `FX-${4410 + position}-7731`,
-      firmwareOnArrival: '1.02',
-      status: position === 0 ? 'kept' : 'returned',
+  const newRoundup = (
+    title: string,
+    state: RoundupState,
+    band: [number, number],
+    targetDays: number,
+    createdDaysAgo: number,
+    ids = configIds,
+  ) =>
+    createRoundup(manager, staff, {
+      title,
+      state,
+      band,
+      targetPublishDate: date(targetDays),
+      benchProfileId,
+      configIds: ids,
+      createdDaysAgo,
+      now,
     });
-  }
+  /** Tested entries whose every cell is accepted; each sample kept (bought) or back with its maker (lent). */
+  const addFinishedEntries = async (
+    target: { id: number },
+    columns: number[],
+    days: { accepted: number; received: number; returnBy: number; returned: number; firmware: string },
+    boards: [string, [string, number] | null, string][],
+  ) => {
+    for (const [position, [model, purchase, serialNumber]] of boards.entries()) {
+      const entryId = await addEntry(manager, staff, target, product(model), position, 'tested', null);
+      for (const configId of columns) {
+        await addCell(manager, target, entryId, configId, 'accepted', staff.tester.id, date(days.accepted), null, now);
+      }
+      const retail = purchase !== null;
+      await manager.getRepository(SampleEntity).insert({
+        entryId,
+        source: retail ? 'retail' : 'vendor-loan',
+        orderReference: retail ? purchase[0] : null,
+        costMinor: retail ? purchase[1] : null,
+        costCurrency: retail ? 'EUR' : null,
+        vendorContact: retail ? null : 'Press desk, by e-mail',
+        returnBy: retail ? null : date(days.returnBy),
+        receivedOn: date(days.received),
+        returnedOn: retail ? null : date(days.returned),
+        serialNumber,
+        firmwareOnArrival: days.firmware,
+        status: retail ? 'kept' : 'returned',
+      });
+    }
+  };
+  // Finished boards below: model, order reference and price in euro cents if bought (null: lent), serial number.
+
+  // --- An earlier roundup, tested and accepted: its results are what reference entries show.
+  const flagship = await newRoundup(
+    'Helix-1700 flagship boards',
+    'writing',
+    [30000, 45000],
+    12,
+    70,
+    configIds.slice(0, 2),
+  );
+  const flagshipDays = { accepted: -30, received: -60, returnBy: -20, returned: -22, firmware: '1.02' };
+  await addFinishedEntries(flagship, configIds.slice(0, 2), flagshipDays, [
+    ['KV Stratum X90', ['KC-2025-31170', 39990], 'FX-4410-7731'],
+    ['Fenwright X90', null, 'FX-4411-7731'],
+    ['Lanthorn X90', null, 'FX-4412-7731'],
+  ]);
 
   // --- A roundup readers can already read: published (Live), every cell accepted, so the reader site has a demo.
-  const published = await createRoundup(manager, staff, {
-    title: 'Helix-1700 boards under €150',
-    state: 'live',
-    band: [9000, 15000],
-    targetPublishDate: date(-20),
-    benchProfileId,
-    configIds,
-    createdDaysAgo: 40,
-    now,
-  });
+  const published = await newRoundup('Helix-1700 boards under €150', 'live', [9000, 15000], -20, 40);
   // The editor allows the raw logger files in this roundup's open data.
   await manager.getRepository(RoundupEntity).update({ id: published.id }, { openDataRawFiles: true });
-  for (const [position, model] of ['KV Ridgeline B50', 'Holloway B50', 'Cinderline B50', 'Wend B50'].entries()) {
-    const entryId = await addEntry(manager, staff, published, product(model), position, 'tested', null);
-    for (const configId of configIds) {
-      await addCell(manager, published, entryId, configId, 'accepted', staff.tester.id, date(-26), null, now);
-    }
-    const retail = position % 2 === 0;
-    await manager.getRepository(SampleEntity).insert({
-      entryId,
-      source: retail ? 'retail' : 'vendor-loan',
-      orderReference: retail ? `KC-2025-2${position}118` : null,
-      costMinor: retail ? 12990 + position * 500 : null,
-      costCurrency: retail ? 'EUR' : null,
-      vendorContact: retail ? null : 'Press desk, by e-mail',
-      returnBy: retail ? null : date(-10),
-      receivedOn: date(-38),
-      returnedOn: retail ? null : date(-12),
-      serialNumber: `HB5-${7310 + position}-0042`,
-      firmwareOnArrival: '1.03',
-      status: retail ? 'kept' : 'returned',
-    });
-  }
+  const publishedDays = { accepted: -26, received: -38, returnBy: -10, returned: -12, firmware: '1.03' };
+  await addFinishedEntries(published, configIds, publishedDays, [
+    ['KV Ridgeline B50', ['KC-2025-20118', 12990], 'HB5-7310-0042'],
+    ['Holloway B50', null, 'HB5-7311-0042'],
+    ['Cinderline B50', ['KC-2025-22118', 13990], 'HB5-7312-0042'],
+    ['Wend B50', null, 'HB5-7313-0042'],
+  ]);
 
   // --- The roundup on the bench now.
-  const roundup = await createRoundup(manager, staff, {
-    title: 'Helix-1700 boards from €150 to €220',
-    state: 'on-the-bench',
-    band: [15000, 22000],
-    targetPublishDate: date(28),
-    benchProfileId,
-    configIds,
-    createdDaysAgo: 24,
-    now,
-  });
+  const roundup = await newRoundup('Helix-1700 boards from €150 to €220', 'on-the-bench', [15000, 22000], 28, 24);
   const jules = staff.tester.id;
   const priya = staff.secondTester.id;
-  type Row = { model: string; cells: [CellState, number | null, number | null][]; note?: string };
-  // Per configuration: state, tester, due date (days from today).
-  const rows: Row[] = [
-    {
-      model: 'KV Ridgeline B70',
-      cells: [
-        ['accepted', jules, -6],
-        ['accepted', jules, -5],
-        ['accepted', jules, -4],
-      ],
-    },
-    {
-      model: 'Holloway B70 Plus',
-      cells: [
-        ['accepted', jules, -2],
-        ['recorded', jules, -1],
-        ['running', jules, 1],
-      ],
-    },
-    {
-      model: 'Cinderline B70',
-      cells: [
-        ['recorded', priya, 0],
-        ['assigned', priya, -1],
-        ['assigned', priya, 3],
-      ],
-    },
-    {
-      model: 'Q-Marlpit B70',
-      cells: [
-        ['needs-retest', priya, 2],
-        ['assigned', priya, 4],
-        ['assigned', priya, 4],
-      ],
-      note: 'Room drifted to 23.4 °C during the soak; run it again with the door shut.',
-    },
-    {
-      model: 'Wend B70',
-      cells: [
-        ['assigned', jules, 6],
-        ['assigned', jules, 7],
-        ['assigned', jules, 7],
-      ],
-    },
-    {
-      model: 'Halden B70',
-      cells: [
-        ['not-started', null, null],
-        ['not-started', null, null],
-        ['not-started', null, null],
-      ],
-    },
-    {
-      model: 'Holloway B50 Mini',
-      cells: [
-        ['not-started', null, null],
-        ['not-started', null, null],
-        ['not-started', null, null],
-      ],
-    },
+  // The matrix, one line a cell: board, state, tester, due date (days from today); each board's cells in the
+  // order of the load configurations, the boards in entry order.
+  const cells: [string, CellState, number | null, number | null][] = [
+    ['KV Ridgeline B70', 'accepted', jules, -6],
+    ['KV Ridgeline B70', 'accepted', jules, -5],
+    ['KV Ridgeline B70', 'accepted', jules, -4],
+    ['Holloway B70 Plus', 'accepted', jules, -2],
+    ['Holloway B70 Plus', 'recorded', jules, -1],
+    ['Holloway B70 Plus', 'running', jules, 1],
+    ['Cinderline B70', 'recorded', priya, 0],
+    ['Cinderline B70', 'assigned', priya, -1],
+    ['Cinderline B70', 'assigned', priya, 3],
+    ['Q-Marlpit B70', 'needs-retest', priya, 2],
+    ['Q-Marlpit B70', 'assigned', priya, 4],
+    ['Q-Marlpit B70', 'assigned', priya, 4],
+    ['Wend B70', 'assigned', jules, 6],
+    ['Wend B70', 'assigned', jules, 7],
+    ['Wend B70', 'assigned', jules, 7],
+    ['Halden B70', 'not-started', null, null],
+    ['Halden B70', 'not-started', null, null],
+    ['Halden B70', 'not-started', null, null],
+    ['Holloway B50 Mini', 'not-started', null, null],
+    ['Holloway B50 Mini', 'not-started', null, null],
+    ['Holloway B50 Mini', 'not-started', null, null],
   ];
+  const retestNotes: Record<string, string> = {
+    'Q-Marlpit B70': 'Room drifted to 23.4 °C during the soak; run it again with the door shut.',
+  };
+  const models = [...new Set(cells.map(([model]) => model))];
   const cellIds = new Map<string, number>();
-  for (const [position, row] of rows.entries()) {
-    const entryId = await addEntry(manager, staff, roundup, product(row.model), position, 'tested', null);
-    for (const [column, [state, testerId, due]] of row.cells.entries()) {
-      const note = state === 'needs-retest' ? (row.note ?? null) : null;
+  for (const [position, model] of models.entries()) {
+    const entryId = await addEntry(manager, staff, roundup, product(model), position, 'tested', null);
+    const boardCells = cells.filter(([m]) => m === model);
+    for (const [column, [, state, testerId, due]] of boardCells.entries()) {
+      const note = state === 'needs-retest' ? (retestNotes[model] ?? null) : null;
       const id = await addCell(
         manager,
         roundup,
@@ -289,12 +259,12 @@ export async function seedPlanning(manager: EntityManager, staff: PlanningStaff,
         note,
         now,
       );
-      cellIds.set(`${row.model}:${column}`, id);
+      cellIds.set(`${model}:${column}`, id);
     }
-    await manager.getRepository(SampleEntity).insert({ entryId, ...sampleFor(row.model, date) });
+    await manager.getRepository(SampleEntity).insert({ entryId, ...sampleFor(model, date) });
   }
   // The reference entry: last roundup's pick, shown in the charts, not tested again.
-  await addEntry(manager, staff, roundup, product('KV Stratum X90'), rows.length, 'reference', flagship.id);
+  await addEntry(manager, staff, roundup, product('KV Stratum X90'), models.length, 'reference', flagship.id);
 
   // --- Benches and their calendars.
   const benchIds: number[] = [];
@@ -387,28 +357,13 @@ async function createRoundup(manager: EntityManager, staff: PlanningStaff, seed:
   await manager
     .getRepository(RoundupLoadConfigurationEntity)
     .insert(seed.configIds.map((loadConfigurationId, position) => ({ roundupId: id, loadConfigurationId, position })));
-  await recordAudit(manager, {
-    actorId: staff.editor.id,
-    action: 'roundup.created',
-    subjectType: 'roundup',
-    subjectId: id,
-    details: { title: seed.title, platform: DEMO_PLATFORM, loadConfigurationIds: seed.configIds },
-  });
-  await recordAudit(manager, {
-    actorId: staff.editor.id,
-    action: 'roundup.state_changed',
-    subjectType: 'roundup',
-    subjectId: id,
-    details: { from: 'planning', to: 'on-the-bench' },
-  });
-  if (seed.state === 'writing') {
-    await recordAudit(manager, {
-      actorId: staff.editor.id,
-      action: 'roundup.state_changed',
-      subjectType: 'roundup',
-      subjectId: id,
-      details: { from: 'on-the-bench', to: 'writing' },
-    });
+  const audits: [string, Record<string, unknown>][] = [
+    ['roundup.created', { title: seed.title, platform: DEMO_PLATFORM, loadConfigurationIds: seed.configIds }],
+    ['roundup.state_changed', { from: 'planning', to: 'on-the-bench' }],
+  ];
+  if (seed.state === 'writing') audits.push(['roundup.state_changed', { from: 'on-the-bench', to: 'writing' }]);
+  for (const [action, details] of audits) {
+    await recordAudit(manager, { actorId: staff.editor.id, action, subjectType: 'roundup', subjectId: id, details });
   }
   return { id, timeZone: OUTLET_ZONE };
 }
@@ -461,69 +416,52 @@ async function addCell(
   return Number(identifiers[0].id);
 }
 
-/** Where each board of the current roundup came from; one loan is four days past its return-by date. */
+/**
+ * Where each board of the current roundup came from: bought (order reference, price in euro cents) or lent
+ * (vendor contact, return-by date in days from today). One loan is four days past its return-by date.
+ */
+const sampleOrigins: Record<string, ['retail', string, number] | ['vendor-loan', string, number]> = {
+  'KV Ridgeline B70': ['retail', 'KC-2025-44817', 18990],
+  'Holloway B70 Plus': ['vendor-loan', 'Edda Vantongeren, press desk, Ostrel Works', -4],
+  'Cinderline B70': ['vendor-loan', 'Marit Oyelaran, Brightmoor review programme', 21],
+  'Q-Marlpit B70': ['retail', 'PL-118-20934', 17990],
+  'Wend B70': ['vendor-loan', 'Tobin Achterberg, Tarnwell press office', 35],
+  'Halden B70': ['vendor-loan', 'Vesk sample desk', 50],
+  'Holloway B50 Mini': ['retail', 'FH-77310', 16990],
+};
+
+/** Boards already in the lab: received (days from today), serial number, firmware on arrival, state; the rest are ordered. */
+const sampleArrivals: Record<string, [number, string, string, SampleEntity['status']]> = {
+  'KV Ridgeline B70': [-18, 'KV7R-0B2211', 'F04', 'tested'],
+  'Holloway B70 Plus': [-30, 'OW-4411-0097', '0812', 'on-the-bench'],
+  'Cinderline B70': [-14, 'BM-C70-55102', '1.10', 'on-the-bench'],
+  'Q-Marlpit B70': [-12, 'QM70-88-2025', 'A07', 'on-the-bench'],
+  'Wend B70': [-5, 'TW-WB70-3019', '2.0.1', 'received'],
+};
+
+const sampleConditions: Record<string, string> = {
+  'KV Ridgeline B70': 'Sealed retail box',
+  'Holloway B70 Plus': 'Press sample; box dented at one corner, board fine',
+  'Cinderline B70': 'Shipped without the Wi-Fi antenna; asked for one',
+  'Q-Marlpit B70': 'Open-box purchase, all accessories present',
+  'Wend B70': 'New, sealed',
+};
+
 function sampleFor(model: string, date: (days: number) => string): Partial<SampleEntity> {
-  switch (model) {
-    case 'KV Ridgeline B70':
-      return {
-        source: 'retail',
-        orderReference: 'KC-2025-44817',
-        costMinor: 18990,
-        costCurrency: 'EUR',
-        receivedOn: date(-18),
-        serialNumber: 'KV7R-0B2211',
-        firmwareOnArrival: 'F04',
-        conditionNotes: 'Sealed retail box',
-        status: 'tested',
-      };
-    case 'Holloway B70 Plus':
-      return {
-        source: 'vendor-loan',
-        vendorContact: 'Edda Vantongeren, press desk, Ostrel Works',
-        returnBy: date(-4),
-        receivedOn: date(-30),
-        serialNumber: 'OW-4411-0097',
-        firmwareOnArrival: '0812',
-        conditionNotes: 'Press sample; box dented at one corner, board fine',
-        status: 'on-the-bench',
-      };
-    case 'Cinderline B70':
-      return {
-        source: 'vendor-loan',
-        vendorContact: 'Marit Oyelaran, Brightmoor review programme',
-        returnBy: date(21),
-        receivedOn: date(-14),
-        serialNumber: 'BM-C70-55102',
-        firmwareOnArrival: '1.10',
-        conditionNotes: 'Shipped without the Wi-Fi antenna; asked for one',
-        status: 'on-the-bench',
-      };
-    case 'Q-Marlpit B70':
-      return {
-        source: 'retail',
-        orderReference: 'PL-118-20934',
-        costMinor: 17990,
-        costCurrency: 'EUR',
-        receivedOn: date(-12),
-        serialNumber: 'QM70-88-2025',
-        firmwareOnArrival: 'A07',
-        conditionNotes: 'Open-box purchase, all accessories present',
-        status: 'on-the-bench',
-      };
-    case 'Wend B70':
-      return {
-        source: 'vendor-loan',
-        vendorContact: 'Tobin Achterberg, Tarnwell press office',
-        returnBy: date(35),
-        receivedOn: date(-5),
-        serialNumber: 'TW-WB70-3019',
-        firmwareOnArrival: '2.0.1',
-        conditionNotes: 'New, sealed',
-        status: 'received',
-      };
-    case 'Halden B70':
-      return { source: 'vendor-loan', vendorContact: 'Vesk sample desk', returnBy: date(50), status: 'ordered' };
-    default:
-      return { source: 'retail', orderReference: 'FH-77310', costMinor: 16990, costCurrency: 'EUR', status: 'ordered' };
-  }
+  const [source, party, figure] = sampleOrigins[model];
+  const origin: Partial<SampleEntity> =
+    source === 'retail'
+      ? { source, orderReference: party, costMinor: figure, costCurrency: 'EUR' }
+      : { source, vendorContact: party, returnBy: date(figure) };
+  const arrival = sampleArrivals[model];
+  if (!arrival) return { ...origin, status: 'ordered' };
+  const [receivedDays, serialNumber, firmwareOnArrival, status] = arrival;
+  return {
+    ...origin,
+    receivedOn: date(receivedDays),
+    serialNumber,
+    firmwareOnArrival,
+    conditionNotes: sampleConditions[model],
+    status,
+  };
 }

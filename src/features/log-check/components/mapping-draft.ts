@@ -9,7 +9,7 @@ import {
   type TemperatureUnit,
   type ToleranceClass,
 } from '../../../../shared/schemas/analysis';
-import { defaultOptions, optionFigures, type OptionFigure, type OptionFigureName } from './option-figures';
+import { defaultOptions, initialText, optionFigures, type OptionFigure, type OptionFigureName } from './option-figures';
 
 /**
  * What the tester has chosen in the mapping form, as the form holds it (numbers as typed). It survives every failed
@@ -48,7 +48,7 @@ export const roleLabels: Record<ColumnRole, string> = {
 };
 
 function optionFields(): Omit<MappingDraft, 'time' | 'vrm' | 'ambient' | 'clock' | 'power' | 'units'> {
-  const typed = Object.fromEntries(figures.map((figure) => [figure.name, figure.initial(defaultOptions)]));
+  const typed = Object.fromEntries(figures.map((figure) => [figure.name, initialText(figure)]));
   return {
     ...(typed as Record<OptionFigureName, string>),
     coldJunction: 'none',
@@ -277,7 +277,7 @@ export function draftFromStoredRequest(
   const stored = options === undefined ? null : analysisOptionsSchema.safeParse(options);
   if (stored?.success) {
     for (const figure of figures) {
-      if (!figure.optional) next[figure.name as OptionFigureName] = figure.initial(stored.data);
+      if (!figure.optional) next[figure.name as OptionFigureName] = initialText(figure, stored.data);
     }
     next.toleranceClass = stored.data.toleranceClass;
     next.useNormalizedPeak = stored.data.useNormalizedPeak;

@@ -15,8 +15,8 @@ export interface OptionFigure {
   unit: string;
   /** Where the number goes in the request's options, e.g. ['rubric', 'warmUpToC']. */
   path: readonly string[];
-  /** The text the form starts with; empty for an option that is unset by default. */
-  initial: (defaults: Options) => string;
+  /** The text the form starts with, where it is not simply the number at `path` (empty when that is unset). */
+  initial?: (defaults: Options) => string;
   /** The typed number as the request wants it (a share typed in percent, minutes sent as seconds). */
   toRequest?: (typed: number) => number;
   /** Empty means "not set" (sent as null) rather than "enter a number". */
@@ -36,7 +36,6 @@ export const optionFigures = [
     label: 'Required soak',
     unit: 'min',
     path: ['soakMinutes'],
-    initial: (d) => String(d.soakMinutes),
     rangeMessage: 'Enter more than 0 and at most 1440 minutes.',
     group: 'main',
     description: `Default ${defaultOptions.soakMinutes} min per load.`,
@@ -46,7 +45,6 @@ export const optionFigures = [
     label: 'Room target',
     unit: '°C',
     path: ['ambientTargetC'],
-    initial: (d) => String(d.ambientTargetC),
     rangeMessage: 'Enter a room target from −20 to 60 °C.',
     group: 'main',
   },
@@ -55,7 +53,6 @@ export const optionFigures = [
     label: 'Room tolerance (±)',
     unit: '°C',
     path: ['ambientToleranceC'],
-    initial: (d) => String(d.ambientToleranceC),
     rangeMessage: 'Enter a tolerance from 0 to 20 °C.',
     group: 'main',
   },
@@ -64,7 +61,6 @@ export const optionFigures = [
     label: 'Largest room drift',
     unit: '°C',
     path: ['ambientDriftLimitC'],
-    initial: (d) => String(d.ambientDriftLimitC),
     rangeMessage: 'Enter a drift limit from 0 to 20 °C.',
     group: 'main',
     description: 'Over the whole run.',
@@ -74,7 +70,6 @@ export const optionFigures = [
     label: 'Throttled at minute',
     unit: 'min',
     path: ['manualThrottleMinute'],
-    initial: () => '',
     optional: true,
     rangeMessage: 'Enter a minute of 0 or more, or leave it empty.',
     group: 'main',
@@ -86,7 +81,6 @@ export const optionFigures = [
     label: 'Load ended at minute',
     unit: 'min',
     path: ['loadEndS'],
-    initial: () => '',
     toRequest: (minutes) => minutes * 60,
     optional: true,
     rangeMessage: 'Enter the minute the load stopped, after it started, or leave it empty.',
@@ -110,7 +104,6 @@ export const optionFigures = [
     label: 'Throttle lasts at least',
     unit: 's',
     path: ['throttleMinSeconds'],
-    initial: (d) => String(d.throttleMinSeconds),
     rangeMessage: 'Enter more than 0 and at most 3600 seconds.',
     group: 'limits',
   },
@@ -119,7 +112,6 @@ export const optionFigures = [
     label: 'Comfortable below',
     unit: '°C',
     path: ['rubric', 'comfortableBelowC'],
-    initial: (d) => String(d.rubric.comfortableBelowC),
     rangeMessage: 'Enter a limit from 0 to 200 °C.',
     group: 'limits',
   },
@@ -128,11 +120,17 @@ export const optionFigures = [
     label: 'Warm up to',
     unit: '°C',
     path: ['rubric', 'warmUpToC'],
-    initial: (d) => String(d.rubric.warmUpToC),
     rangeMessage: 'Enter a limit from 0 to 250 °C.',
     group: 'limits',
     description: 'Above it, a run that held its clock is Hot but held.',
   },
 ] as const satisfies readonly OptionFigure[];
+
+/** The text a figure's field starts with, from the given options (the schema's defaults unless told). */
+export function initialText(figure: OptionFigure, options: Options = defaultOptions): string {
+  if (figure.initial) return figure.initial(options);
+  const value = figure.path.reduce<unknown>((at, key) => (at as Record<string, unknown>)[key], options);
+  return value === null || value === undefined ? '' : String(value);
+}
 
 export type OptionFigureName = (typeof optionFigures)[number]['name'];

@@ -18,6 +18,13 @@ export interface FormDialogProps extends Pick<DialogProps, 'open' | 'onClose' | 
   children: ReactNode;
 }
 
+/** The props of a dialog that creates one record and hands it back to the page that opened it. */
+export interface CreateDialogProps<Created> {
+  open: boolean;
+  onClose: () => void;
+  onCreated: (created: Created) => void;
+}
+
 /**
  * A form in a dialog: Cancel and the submit button along the bottom, the error summary at the top. A dialog's form
  * may sit inside a page's form (a new bench profile within the New roundup form), so its submit stays its own.

@@ -4,7 +4,7 @@ import { createBenchProfileRequestSchema, type BenchProfile } from '../../../../
 import { useCreateBenchProfile } from '../api/bench-profiles';
 import { numberFromText } from './form-numbers';
 import { SetupFields, type SetupFieldSpec } from './setup-fields';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { FormDialog, type CreateDialogProps } from '../../../components/ui/form-dialog';
 
 const shape = createBenchProfileRequestSchema.shape;
 
@@ -64,11 +64,7 @@ const placementFields: SetupFieldSpec<BenchProfileField>[] = [
   { name: 'notes', optional: true },
 ];
 
-export interface BenchProfileDialogProps {
-  open: boolean;
-  onClose: () => void;
-  onCreated: (profile: BenchProfile) => void;
-}
+export type BenchProfileDialogProps = CreateDialogProps<BenchProfile>;
 
 /** A new reusable bench profile: the test system and the room every result of a roundup comes from. */
 export function BenchProfileDialog({ open, onClose, onCreated }: BenchProfileDialogProps) {

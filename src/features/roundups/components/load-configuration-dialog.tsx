@@ -14,7 +14,7 @@ import {
 import { useCreateLoadConfiguration } from '../api/load-configurations';
 import { numberFromText, optionalNumberFromText } from './form-numbers';
 import { SetupFields, type SetupFieldSpec } from './setup-fields';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { FormDialog, type CreateDialogProps } from '../../../components/ui/form-dialog';
 
 const shape = createLoadConfigurationRequestSchema.shape;
 
@@ -87,11 +87,7 @@ const notesFields: SetupFieldSpec<LoadConfigurationField>[] = [
   { name: 'settingsNotes', optional: true, description: 'Power limits, load-line calibration, the load program.' },
 ];
 
-export interface LoadConfigurationDialogProps {
-  open: boolean;
-  onClose: () => void;
-  onCreated: (configuration: LoadConfiguration) => void;
-}
+export type LoadConfigurationDialogProps = CreateDialogProps<LoadConfiguration>;
 
 /** A new reusable load configuration: one CPU, one set of settings, the load it puts on the board. */
 export function LoadConfigurationDialog({ open, onClose, onCreated }: LoadConfigurationDialogProps) {

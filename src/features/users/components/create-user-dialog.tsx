@@ -9,13 +9,9 @@ import { createUserRequestSchema, INVITATION_HOURS, type User } from '../../../.
 import type { Role } from '../../../../shared/schemas/common';
 import { useCreateUser } from '../api/create-user';
 import { roleOptions } from './role-options';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { FormDialog, type CreateDialogProps } from '../../../components/ui/form-dialog';
 
-export interface CreateUserDialogProps {
-  open: boolean;
-  onClose: () => void;
-  onCreated: (user: User) => void;
-}
+export type CreateUserDialogProps = CreateDialogProps<User>;
 
 type Start = 'invite' | 'password';
 const startOptions: [Start, string, string][] = [

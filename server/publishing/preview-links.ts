@@ -26,8 +26,10 @@ export function verifyPreviewToken(secret: Buffer, token: string, now: Date): Pr
   const match = /^([A-Za-z0-9_-]{1,200})\.([A-Za-z0-9_-]{43})$/.exec(token);
   if (!match) return { ok: false, reason: 'malformed' };
   const [, payload, signature] = match;
-  const expected = sign(secret, payload);
-  const given = Buffer.from(signature, 'base64url');
+  // Compared as text: the last of 43 base64url characters carries two unused bits, so decoding first would accept
+  // four spellings of one signature.
+  const expected = Buffer.from(sign(secret, payload).toString('base64url'));
+  const given = Buffer.from(signature);
   if (given.length !== expected.length || !timingSafeEqual(given, expected))
     return { ok: false, reason: 'bad-signature' };
   let claims: { r?: unknown; e?: unknown };

@@ -38,6 +38,13 @@ describe('preview link tokens', () => {
     });
     const flipped = token.slice(0, -2) + (token.endsWith('AA') ? 'AB' : 'AA');
     expect(verifyPreviewToken(secret, flipped, now).ok).toBe(false);
+    // RFC 4648 §3.5: 32 bytes take 43 base64url characters and the last one's two low bits are padding; a token whose
+    // last character differs only there decodes to the same bytes and must still be refused.
+    const alphabet = 'ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789-_';
+    const last = alphabet.indexOf(token.slice(-1));
+    const respelled = token.slice(0, -1) + alphabet[last ^ 1];
+    expect(Buffer.from(respelled.split('.')[1], 'base64url')).toEqual(Buffer.from(signature, 'base64url'));
+    expect(verifyPreviewToken(secret, respelled, now).ok).toBe(false);
     expect(verifyPreviewToken(secret, 'not-a-token', now)).toEqual({ ok: false, reason: 'malformed' });
   });
 });

@@ -1,10 +1,17 @@
 import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { expect, test } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import { mainNavigation, signInAs } from './support/sign-in';
 
 const thin = '\u2009';
+
+/** A logger file: the header line, then a row every `stepS` seconds from 0 until `endS`, its cells after the time. */
+function soakCsv(header: string, endS: number, stepS: number, cells: (t: number) => string): string {
+  const lines = [header];
+  for (let t = 0; t < endS; t += stepS) lines.push(`${t},${cells(t)}`);
+  return `${lines.join('\n')}\n`;
+}
 
 /**
  * A soak whose answer is known from first principles, not from the engine: a first-order (Newtonian) rise
@@ -13,12 +20,10 @@ const thin = '\u2009';
  * 71.0 °C; that is below the default comfortable limit of 80 °C and nothing throttles, so the verdict is Comfortable.
  */
 function firstOrderSoakCsv(): string {
-  const lines = ['Time [s],VRM 1 [°C],Ambient [°C],CPU clock [MHz]'];
-  for (let t = 0; t < 3600; t += 10) {
+  return soakCsv('Time [s],VRM 1 [°C],Ambient [°C],CPU clock [MHz]', 3600, 10, (t) => {
     const vrmC = 21 + 50 * (1 - Math.exp(-t / 300));
-    lines.push(`${t},${vrmC.toFixed(2)},21.00,5000`);
-  }
-  return `${lines.join('\n')}\n`;
+    return `${vrmC.toFixed(2)},21.00,5000`;
+  });
 }
 
 /** The same soak with one VRM reading typed over: the sample at t = 300 s, on line 1 (header) + 31 = 32. */
@@ -108,24 +113,26 @@ test('a writer has no Log check entry and the page explains why', async ({ page 
  * 1 − e^(−t/τ)), too little to predict the plateau, so no verdict may be given.
  */
 function unfinishedSoakCsv(): string {
-  const lines = ['Time [s],VRM 1 [°C],Ambient [°C],CPU clock [MHz]'];
-  for (let t = 0; t < 600; t += 5) {
+  return soakCsv('Time [s],VRM 1 [°C],Ambient [°C],CPU clock [MHz]', 600, 5, (t) => {
     const vrmC = 60 + 40 * (1 - Math.exp(-t / 900));
-    lines.push(`${t},${vrmC.toFixed(2)},21.00,5000`);
-  }
-  return `${lines.join('\n')}\n`;
+    return `${vrmC.toFixed(2)},21.00,5000`;
+  });
 }
 
-test('a soak stopped while still climbing gets no verdict, and the box says why in words', async ({ page }) => {
-  const file = path.join(folder, 'soak-unfinished.csv');
-  await writeFile(file, unfinishedSoakCsv());
+/** The tester opens Log check, uploads `csv` as `name`, sees `probe` ticked by the guess and analyses; the result. */
+async function analyseAsTester(page: Page, name: string, csv: string, probe: string) {
+  const file = path.join(folder, name);
+  await writeFile(file, csv);
   await signInAs(page, 'tester');
   await mainNavigation(page).getByRole('link', { name: 'Log check' }).click();
   await page.getByLabel('Logger file').setInputFiles(file);
-  await expect(page.getByRole('checkbox', { name: 'VRM 1 [°C]' })).toBeChecked();
+  await expect(page.getByRole('checkbox', { name: probe })).toBeChecked();
   await page.getByRole('button', { name: 'Analyse' }).click();
+  return page.getByRole('region', { name: 'Result' });
+}
 
-  const results = page.getByRole('region', { name: 'Result' });
+test('a soak stopped while still climbing gets no verdict, and the box says why in words', async ({ page }) => {
+  const results = await analyseAsTester(page, 'soak-unfinished.csv', unfinishedSoakCsv(), 'VRM 1 [°C]');
   await expect(results.getByText('No verdict yet', { exact: true })).toBeVisible();
   await expect(results).toContainText('No verdict from an unfinished soak: the soak lasted 9');
   await expect(results).toContainText('Soak shorter than required — withholds the verdict');
@@ -136,24 +143,14 @@ test('a soak stopped while still climbing gets no verdict, and the box says why 
 
 /** The first-order soak with a second VRM probe that read nothing at all (its cells say OPEN). */
 function soakWithDeadProbeCsv(): string {
-  const lines = ['Time [s],VRM 1 [°C],VRM 2 [°C],Ambient [°C],CPU clock [MHz]'];
-  for (let t = 0; t < 3600; t += 10) {
+  return soakCsv('Time [s],VRM 1 [°C],VRM 2 [°C],Ambient [°C],CPU clock [MHz]', 3600, 10, (t) => {
     const vrmC = 21 + 50 * (1 - Math.exp(-t / 300));
-    lines.push(`${t},${vrmC.toFixed(2)},OPEN,21.00,5000`);
-  }
-  return `${lines.join('\n')}\n`;
+    return `${vrmC.toFixed(2)},OPEN,21.00,5000`;
+  });
 }
 
 test('a dead probe withholds the verdict until the tester confirms it', async ({ page }) => {
-  const file = path.join(folder, 'soak-dead-probe.csv');
-  await writeFile(file, soakWithDeadProbeCsv());
-  await signInAs(page, 'tester');
-  await mainNavigation(page).getByRole('link', { name: 'Log check' }).click();
-  await page.getByLabel('Logger file').setInputFiles(file);
-  await expect(page.getByRole('checkbox', { name: 'VRM 2 [°C]' })).toBeChecked();
-  await page.getByRole('button', { name: 'Analyse' }).click();
-
-  const results = page.getByRole('region', { name: 'Result' });
+  const results = await analyseAsTester(page, 'soak-dead-probe.csv', soakWithDeadProbeCsv(), 'VRM 2 [°C]');
   await expect(results.getByText('No verdict yet', { exact: true })).toBeVisible();
   await expect(results).toContainText('Dead probe — withholds the verdict');
   await results.getByRole('button', { name: 'VRM 2 [°C] is dead: judge without it' }).click();

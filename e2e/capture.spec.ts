@@ -1,11 +1,11 @@
-import { mkdtemp, rm, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import sharp from 'sharp';
 import { test as base, expect, type PlaywrightWorkerArgs } from '@playwright/test';
 import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
 import { prepareAssignedCell } from './support/planned-cell';
 import { signInAs, signOut } from './support/sign-in';
+import { specFolder } from './support/temp-folder';
 
 /**
  * As the demo editor, through the API: a roundup on the bench with one product and one load configuration soaking
@@ -46,22 +46,14 @@ function shortSoak(seed: number): string {
   });
 }
 
-let folder: string;
-
-test.beforeAll(async () => {
-  folder = await mkdtemp(path.join(tmpdir(), 'benchwire-capture-'));
-});
-
-test.afterAll(async () => {
-  await rm(folder, { recursive: true, force: true });
-});
+const folder = specFolder('benchwire-capture-');
 
 test('a tester records runs from logger files; the editor accepts a flagged run and sees it in the results', async ({
   page,
   setup,
 }) => {
-  const firstFile = path.join(folder, 'soak-first.csv');
-  const secondFile = path.join(folder, 'soak-second.csv');
+  const firstFile = path.join(folder(), 'soak-first.csv');
+  const secondFile = path.join(folder(), 'soak-second.csv');
   await writeFile(firstFile, shortSoak(1));
   await writeFile(secondFile, shortSoak(2));
 
@@ -178,9 +170,9 @@ test('a tester adds photos to a product with progress and thumbnails, reorders t
   page,
   setup,
 }) => {
-  const notAPhoto = path.join(folder, 'board-overview.jpg');
-  const overview = path.join(folder, 'overview.jpg');
-  const closeUp = path.join(folder, 'power-stages.png');
+  const notAPhoto = path.join(folder(), 'board-overview.jpg');
+  const overview = path.join(folder(), 'overview.jpg');
+  const closeUp = path.join(folder(), 'power-stages.png');
   await writeFile(notAPhoto, 'Time,VRM 1\n0,21.0\n');
   await writeFile(overview, await noisePhoto(1600, 1200, 'jpeg'));
   await writeFile(closeUp, await noisePhoto(640, 480, 'png'));

@@ -1,8 +1,8 @@
-import { mkdtemp, rm, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { expect, test, type Page } from '@playwright/test';
 import { mainNavigation, signInAs } from './support/sign-in';
+import { specFolder } from './support/temp-folder';
 
 const thin = '\u2009';
 
@@ -36,21 +36,13 @@ function soakWithBadCell(): string {
   return lines.join('\n');
 }
 
-let folder: string;
-
-test.beforeAll(async () => {
-  folder = await mkdtemp(path.join(tmpdir(), 'benchwire-log-check-'));
-});
-
-test.afterAll(async () => {
-  await rm(folder, { recursive: true, force: true });
-});
+const folder = specFolder('benchwire-log-check-');
 
 test('a tester uploads a soak, confirms the guessed mapping and gets the verdict; a broken file shows its row and column', async ({
   page,
 }) => {
-  const goodFile = path.join(folder, 'soak-first-order.csv');
-  const brokenFile = path.join(folder, 'soak-typed-over.csv');
+  const goodFile = path.join(folder(), 'soak-first-order.csv');
+  const brokenFile = path.join(folder(), 'soak-typed-over.csv');
   await writeFile(goodFile, firstOrderSoakCsv());
   await writeFile(brokenFile, soakWithBadCell());
 
@@ -121,7 +113,7 @@ function unfinishedSoakCsv(): string {
 
 /** The tester opens Log check, uploads `csv` as `name`, sees `probe` ticked by the guess and analyses; the result. */
 async function analyseAsTester(page: Page, name: string, csv: string, probe: string) {
-  const file = path.join(folder, name);
+  const file = path.join(folder(), name);
   await writeFile(file, csv);
   await signInAs(page, 'tester');
   await mainNavigation(page).getByRole('link', { name: 'Log check' }).click();

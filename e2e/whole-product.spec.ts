@@ -1,5 +1,4 @@
-import { mkdtemp, rm, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import sharp from 'sharp';
 import { expect, test, type BrowserContext } from '@playwright/test';
@@ -23,6 +22,7 @@ import {
   writeSection,
 } from './support/roundup-journey';
 import { uniqueEmail, uniqueSuffix } from './support/unique';
+import { specFolder } from './support/temp-folder';
 
 // The whole product as a new outlet would try it, one story from new colleagues' first sign-in to a reader's
 // unsubscribe: the admin invites an editor, a bench tester and a writer by mail, and each sets a password from the
@@ -52,13 +52,7 @@ function localSlot(offsetMinutes: number): string {
 
 const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
-let folder: string;
-test.beforeAll(async () => {
-  folder = await mkdtemp(path.join(tmpdir(), 'benchwire-journey-'));
-});
-test.afterAll(async () => {
-  await rm(folder, { recursive: true, force: true });
-});
+const folder = specFolder('benchwire-journey-');
 
 test('from new colleagues to a reader: invite, plan, bench, write, approve, go live at the embargo, mail, unsubscribe', async ({
   page,
@@ -172,7 +166,7 @@ test('from new colleagues to a reader: invite, plan, bench, write, approve, go l
   await expect(booked).toBeVisible();
 
   for (const [index, cell] of cells.entries()) {
-    const file = path.join(folder, `soak-${index + 1}.csv`);
+    const file = path.join(folder(), `soak-${index + 1}.csv`);
     await writeFile(file, soakLog(index + 1, 38 + index * 6));
     await openQueuedCell(tester, cell);
     await bench.getByRole('button', { name: 'Upload a log' }).click();
@@ -188,7 +182,7 @@ test('from new colleagues to a reader: invite, plan, bench, write, approve, go l
     await expect(bench.getByText('Run submitted')).toBeVisible();
     await markRecorded(tester);
 
-    const photo = path.join(folder, `board-${index + 1}.jpg`);
+    const photo = path.join(folder(), `board-${index + 1}.jpg`);
     await writeFile(
       photo,
       await sharp({ create: { width: 800, height: 600, channels: 3, background: { r: 40, g: 60, b: 50 } } })

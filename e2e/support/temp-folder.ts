@@ -1,0 +1,16 @@
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { test } from '@playwright/test';
+
+/** A folder of the spec's own for the files it writes: made before its tests, removed after them. Its path. */
+export function specFolder(prefix: string): () => string {
+  let folder = '';
+  test.beforeAll(async () => {
+    folder = await mkdtemp(path.join(tmpdir(), prefix));
+  });
+  test.afterAll(async () => {
+    await rm(folder, { recursive: true, force: true });
+  });
+  return () => folder;
+}

@@ -87,6 +87,17 @@ async function fileDigests(dir: string) {
   return digests;
 }
 
+/** The app over the original outlet and the app over its restored copy, in that order. */
+function originalAndRestoredApps() {
+  return [
+    createApp({ dataSource: dataSources[0], env: testEnv({ DATABASE_URL: sourceUrl, UPLOADS_DIR: sourceUploads }) }),
+    createApp({
+      dataSource: dataSources[1],
+      env: testEnv({ DATABASE_URL: restoredUrl, UPLOADS_DIR: restoredUploads }),
+    }),
+  ];
+}
+
 describe('backup and restore', () => {
   it('names the archive by its date, sortable and free of characters shells mind', () => {
     expect(archiveName(new Date('2026-12-03T09:01:02.345Z'))).toBe('benchwire-backup-20261203T090102Z.tar.gz');
@@ -112,13 +123,7 @@ describe('backup and restore', () => {
   }, 120_000);
 
   it('the restored app answers the same reads, byte for byte, as the original', async () => {
-    const apps = [
-      createApp({ dataSource: dataSources[0], env: testEnv({ DATABASE_URL: sourceUrl, UPLOADS_DIR: sourceUploads }) }),
-      createApp({
-        dataSource: dataSources[1],
-        env: testEnv({ DATABASE_URL: restoredUrl, UPLOADS_DIR: restoredUploads }),
-      }),
-    ];
+    const apps = originalAndRestoredApps();
     const editor = demoAccounts.find((account) => account.role === 'editor')!;
     const answers: string[][] = [];
     for (const app of apps) {
@@ -162,13 +167,7 @@ describe('backup and restore', () => {
   }, 60_000);
 
   it('the restored app serves the same public pages, byte for byte: the published results page and the board pages', async () => {
-    const apps = [
-      createApp({ dataSource: dataSources[0], env: testEnv({ DATABASE_URL: sourceUrl, UPLOADS_DIR: sourceUploads }) }),
-      createApp({
-        dataSource: dataSources[1],
-        env: testEnv({ DATABASE_URL: restoredUrl, UPLOADS_DIR: restoredUploads }),
-      }),
-    ];
+    const apps = originalAndRestoredApps();
     const [results] = (await dataSources[0].query(
       "SELECT path FROM published_pages WHERE roundup_id IS NOT NULL AND variant = '' ORDER BY path LIMIT 1",
     )) as { path: string }[];

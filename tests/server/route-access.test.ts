@@ -1,9 +1,9 @@
 import { randomBytes } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
-import type { Router } from 'express';
 import { SessionEntity } from '../../server/entities/session.entity';
 import { roles, type Role } from '../../shared/schemas/common';
+import { registeredRoutes } from './support/registered-routes';
 import { createTestUser, testApp, testDataSource, TEST_HOST, TEST_ORIGIN, type TestApp } from './support/test-app';
 
 type Caller = Role | 'anonymous';
@@ -159,30 +159,6 @@ const allowed: Record<string, Caller[]> = {
   'PUT /api/roundups/:id/open-data': ['editor', 'admin'],
 };
 
-interface RouteLayer {
-  route?: { path: string; methods: Record<string, boolean> };
-  handle?: { stack?: RouteLayer[] };
-}
-
-/** Walks the Express router (and routers mounted without a path) for every /api route. */
-function registeredRoutes(router: Router): string[] {
-  const found: string[] = [];
-  const walk = (stack: RouteLayer[]) => {
-    for (const layer of stack) {
-      if (layer.route) {
-        for (const method of Object.keys(layer.route.methods)) {
-          if (method !== '_all' && layer.route.path.startsWith('/api/'))
-            found.push(`${method.toUpperCase()} ${layer.route.path}`);
-        }
-      } else if (layer.handle?.stack) {
-        walk(layer.handle.stack);
-      }
-    }
-  };
-  walk((router as unknown as { stack: RouteLayer[] }).stack);
-  return [...new Set(found)];
-}
-
 let app: TestApp;
 const cookies = new Map<Role, () => Promise<string>>();
 
@@ -202,7 +178,14 @@ beforeAll(async () => {
   }
 });
 
-const routes = () => registeredRoutes(app.router as unknown as Router);
+/** Every /api route the app registers, as "METHOD /path". */
+const routes = () => [
+  ...new Set(
+    registeredRoutes(app)
+      .filter((route) => route.path.startsWith('/api/'))
+      .map((route) => `${route.method} ${route.path}`),
+  ),
+];
 
 describe('role × route matrix', () => {
   it('every registered /api route has an entry in the table, and every entry is a registered route', () => {

@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { clientRoutePatterns } from '../support/client-routes';
+import { registeredRoutes } from './support/registered-routes';
 import { TEST_HOST, testDataSource, testEnv } from './support/test-app';
 
 /**
@@ -32,23 +33,11 @@ async function appFor(overrides: Parameters<typeof testEnv>[0] = {}) {
   return createApp({ dataSource: await testDataSource(), env: testEnv(overrides), clientDir });
 }
 
-interface RouteLayer {
-  route?: { path: string; methods: Record<string, boolean> };
-  handle?: { stack?: RouteLayer[] };
-}
-
 /** GET routes the server registers outside /api (server-rendered pages, feeds), with parameters filled in. */
 function serverPages(app: App): string[] {
-  const found: string[] = [];
-  const walk = (stack: RouteLayer[]) => {
-    for (const layer of stack) {
-      if (layer.route?.methods.get && !layer.route.path.startsWith('/api') && !layer.route.path.includes('*')) {
-        found.push(layer.route.path);
-      } else if (layer.handle?.stack) walk(layer.handle.stack);
-    }
-  };
-  walk((app as unknown as { router: { stack: RouteLayer[] } }).router.stack);
-  return found;
+  return registeredRoutes(app)
+    .filter((route) => route.method === 'GET' && !route.path.startsWith('/api') && !route.path.includes('*'))
+    .map((route) => route.path);
 }
 
 const concrete = (pattern: string) =>

@@ -1,4 +1,4 @@
-import { useId } from 'react';
+import { useId, type ReactNode } from 'react';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
 import type { AnalysisResult } from '../../../../shared/schemas/analysis';
 import { formatC, formatDuration, thinSpace } from './format-figures';
@@ -130,23 +130,16 @@ export function TemperatureChart({ series, analysis }: TemperatureChartProps) {
                 fill="var(--color-wash)"
                 opacity="0.8"
               />
-              <line
-                x1={x(analysis.loadEndS)}
-                x2={x(analysis.loadEndS)}
-                y1={margin.top}
-                y2={margin.top + plotHeight}
-                stroke="var(--color-muted)"
-                strokeWidth="1.5"
-                strokeDasharray="4 3"
-              />
-              <text
-                x={x(analysis.loadEndS) + 4}
-                y={margin.top + plotHeight - 6}
-                fill="var(--color-muted)"
+              <MarkerLine
+                atX={x(analysis.loadEndS)}
+                top={margin.top}
+                bottom={margin.top + plotHeight}
+                color="var(--color-muted)"
+                side="after"
                 className="font-sans"
               >
                 after the load · left out
-              </text>
+              </MarkerLine>
             </g>
           )}
           {analysis.throttle.episodes.map((episode) => (
@@ -166,23 +159,15 @@ export function TemperatureChart({ series, analysis }: TemperatureChartProps) {
           ))}
           {analysis.throttle.source === 'manual' && analysis.throttle.firstAtS !== null && (
             <g>
-              <line
-                x1={x(analysis.throttle.firstAtS)}
-                x2={x(analysis.throttle.firstAtS)}
-                y1={margin.top}
-                y2={margin.top + plotHeight}
-                stroke="var(--color-red)"
-                strokeWidth="1.5"
-                strokeDasharray="4 3"
-              />
-              <text
-                x={x(analysis.throttle.firstAtS) - 4}
-                y={margin.top + plotHeight - 6}
-                textAnchor="end"
-                fill="var(--color-red)"
+              <MarkerLine
+                atX={x(analysis.throttle.firstAtS)}
+                top={margin.top}
+                bottom={margin.top + plotHeight}
+                color="var(--color-red)"
+                side="before"
               >
                 throttle noted
-              </text>
+              </MarkerLine>
             </g>
           )}
           {ticks(yMin, yMax, yStep).map((value) => (
@@ -270,6 +255,40 @@ export function TemperatureChart({ series, analysis }: TemperatureChartProps) {
 const minutesOf = (s: number) => (Number.isInteger(s / 60) ? String(s / 60) : (s / 60).toFixed(1));
 
 /** The highest reading of the line within [fromS, toS), or null when it logged nothing there. */
+/** A dashed line down the plot at one moment, its words near the foot, on the side away from what it bounds. */
+function MarkerLine({
+  atX,
+  top,
+  bottom,
+  color,
+  side,
+  className,
+  children,
+}: {
+  atX: number;
+  top: number;
+  bottom: number;
+  color: string;
+  side: 'before' | 'after';
+  className?: string;
+  children: ReactNode;
+}) {
+  return (
+    <>
+      <line x1={atX} x2={atX} y1={top} y2={bottom} stroke={color} strokeWidth="1.5" strokeDasharray="4 3" />
+      <text
+        x={side === 'after' ? atX + 4 : atX - 4}
+        y={bottom - 6}
+        textAnchor={side === 'after' ? undefined : 'end'}
+        fill={color}
+        className={className}
+      >
+        {children}
+      </text>
+    </>
+  );
+}
+
 function highestIn(line: ChartLine, fromS: number, toS: number): number | null {
   let highest: number | null = null;
   for (const [s, c] of line.points) {

@@ -110,20 +110,14 @@ export class TestRunsService {
 
   async run(runId: number, user: CurrentUser): Promise<TestRun> {
     const manager = this.dataSource.manager;
-    const run = await manager.getRepository(TestRunEntity).findOneBy({ id: runId });
-    if (!run) throw notFound('That test run');
-    const cell = await manager.getRepository(MatrixCellEntity).findOneByOrFail({ id: run.matrixCellId });
-    assertMayReadRun(user, run, cell);
+    const { run, cell } = await readableRun(manager, runId, user);
     return (await this.runDtos(manager, [run], cell, user))[0];
   }
 
   /** The stored logger file, byte for byte, for staff to download (a tester: their own runs). */
   async loggerFile(runId: number, user: CurrentUser): Promise<{ file: StoredFileEntity; body: Buffer }> {
     const manager = this.dataSource.manager;
-    const run = await manager.getRepository(TestRunEntity).findOneBy({ id: runId });
-    if (!run) throw notFound('That test run');
-    const cell = await manager.getRepository(MatrixCellEntity).findOneByOrFail({ id: run.matrixCellId });
-    assertMayReadRun(user, run, cell);
+    const { run } = await readableRun(manager, runId, user);
     if (run.loggerFileId === null) throw notFound('A logger file for that run');
     const file = await manager.getRepository(StoredFileEntity).findOneByOrFail({ id: run.loggerFileId });
     const body = await this.files.get(file.storageKey);
@@ -271,10 +265,7 @@ export class TestRunsService {
   /** A new analysis of a stored file with another mapping or options; earlier analyses stay as they were. */
   async reanalyse(actor: CurrentUser, runId: number, input: ParsedReanalyseRunRequest) {
     return this.dataSource.transaction(async (manager) => {
-      const run = await manager
-        .getRepository(TestRunEntity)
-        .findOne({ where: { id: runId }, lock: { mode: 'pessimistic_write' } });
-      if (!run) throw notFound('That test run');
+      const run = await findRun(manager, runId, true);
       if (actor.role !== 'editor' && run.testerId !== actor.id)
         throw forbidden('Only the run’s tester or an editor may re-analyse it.');
       const context = await this.cellContext(manager, run.matrixCellId);
@@ -285,10 +276,7 @@ export class TestRunsService {
 
   async review(actor: CurrentUser, runId: number, input: ParsedReviewRunRequest) {
     return this.dataSource.transaction(async (manager) => {
-      const run = await manager
-        .getRepository(TestRunEntity)
-        .findOne({ where: { id: runId }, lock: { mode: 'pessimistic_write' } });
-      if (!run) throw notFound('That test run');
+      const run = await findRun(manager, runId, true);
       const cell = await manager
         .getRepository(MatrixCellEntity)
         .findOne({ where: { id: run.matrixCellId }, lock: { mode: 'pessimistic_write' } });
@@ -331,8 +319,7 @@ export class TestRunsService {
 
   async markRunOfRecord(actor: CurrentUser, runId: number) {
     return this.dataSource.transaction(async (manager) => {
-      const run = await manager.getRepository(TestRunEntity).findOneBy({ id: runId });
-      if (!run) throw notFound('That test run');
+      const run = await findRun(manager, runId);
       if (run.reviewState === 'sent-back') {
         throw new AppError(
           'run_sent_back',
@@ -837,4 +824,21 @@ function vrmLoadFor(product: ProductEntity, configuration: LoadConfigurationEnti
   } catch {
     return null;
   }
+}
+
+/** The test run, or 404; `lock` holds it until the transaction ends. */
+async function findRun(manager: EntityManager, runId: number, lock = false): Promise<TestRunEntity> {
+  const run = await manager
+    .getRepository(TestRunEntity)
+    .findOne({ where: { id: runId }, ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}) });
+  if (!run) throw notFound('That test run');
+  return run;
+}
+
+/** The run with its cell, once the user may read the run (a tester: their own runs). */
+async function readableRun(manager: EntityManager, runId: number, user: CurrentUser) {
+  const run = await findRun(manager, runId);
+  const cell = await manager.getRepository(MatrixCellEntity).findOneByOrFail({ id: run.matrixCellId });
+  assertMayReadRun(user, run, cell);
+  return { run, cell };
 }

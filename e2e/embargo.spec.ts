@@ -1,7 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import { apiAs, readyRoundup } from './support/ready-roundup';
-import { localIn } from './support/local-time';
+import { scheduleAhead } from './support/local-time';
+import { estimateOnBoardPage } from './support/public-pages';
 import { signInAs } from './support/sign-in';
 
 // The acceptance journey of embargo publishing (issue 10): an editor schedules a roundup that is genuinely ready
@@ -27,14 +28,7 @@ test('an editor schedules a ready roundup a few seconds ahead; it goes live; a r
   await signInAs(page, 'editor');
 
   await page.goto(`/roundups/${roundupId}?tab=publishing`);
-  const at = new Date(Math.ceil((Date.now() + 20_000) / 1000) * 1000);
-  const local = localIn(at, 'America/Los_Angeles');
-  await page.getByLabel('Date').fill(local.date);
-  await page.getByLabel('Time', { exact: true }).fill(local.time);
-  await page.getByLabel('Time zone').fill('America/Los_Angeles');
-  await expect(page.getByText(`= ${at.toISOString()} UTC`)).toBeVisible();
-  await page.getByRole('button', { name: 'Schedule', exact: true }).click();
-  await expect(page.getByTestId('schedule-summary')).toContainText(at.toISOString());
+  const at = await scheduleAhead(page, 20, 'America/Los_Angeles');
 
   // Before the time: a reader finds nothing.
   const reader = await browser.newContext();
@@ -104,18 +98,8 @@ test('an editor schedules a ready roundup a few seconds ahead; it goes live; a r
   await expect(compared).toContainText('°F');
 
   // "Will it cope?" on a board's page: a power within the tested range gives an estimate with its cautions.
-  await compared.getByRole('link', { name: boards[0].name }).click();
-  await expect(readerPage.getByRole('heading', { level: 1, name: boards[0].name })).toBeVisible();
-  await expect(readerPage.getByText('This is an estimate, not a guarantee')).toBeVisible();
-  await readerPage.getByLabel('CPU package power (W)').fill('5000');
-  await readerPage.getByLabel('Room temperature (°F)').fill('75');
-  await readerPage.getByRole('button', { name: 'Estimate' }).click();
-  await expect(readerPage.getByText('Enter a package power between 10 and 1000 W.')).toBeVisible();
-  await expect(readerPage.getByLabel('Room temperature (°F)')).toHaveValue('75');
-  await readerPage.getByLabel('CPU package power (W)').fill('230');
-  await readerPage.getByRole('button', { name: 'Estimate' }).click();
-  await expect(readerPage.getByRole('heading', { name: /Estimated hottest VRM reading/ })).toBeVisible();
-  await expect(readerPage.locator('.estimate-figure')).toContainText('°F');
+  const boardLink = compared.getByRole('link', { name: boards[0].name });
+  await estimateOnBoardPage(readerPage, boardLink, boards[0].name, '230');
 
   // The editor changes the open-data licence line on the Publishing tab; the published page follows without an update.
   const licence = `Results by The Soak Sheet, reuse with credit (${roundupId}).`;

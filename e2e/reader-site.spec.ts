@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { expect, test } from '@playwright/test';
+import { estimateOnBoardPage } from './support/public-pages';
 
 const thin = '\u2009';
 const demoTitle = 'Helix-1700 boards under €150';
@@ -69,18 +70,8 @@ test.describe('reader site with JavaScript off', () => {
     await expect(compared).toContainText('°F'); // the choice of unit stays
 
     // The estimate on a board's page.
-    await compared.getByRole('link', { name: 'Korvath KV Ridgeline B50' }).click();
-    await expect(page.getByRole('heading', { level: 1, name: 'Korvath KV Ridgeline B50' })).toBeVisible();
-    await expect(page.getByText('This is an estimate, not a guarantee')).toBeVisible();
-    await page.getByLabel('CPU package power (W)').fill('5000');
-    await page.getByLabel('Room temperature (°F)').fill('75');
-    await page.getByRole('button', { name: 'Estimate' }).click();
-    await expect(page.getByText('Enter a package power between 10 and 1000 W.')).toBeVisible();
-    await expect(page.getByLabel('Room temperature (°F)')).toHaveValue('75');
-    await page.getByLabel('CPU package power (W)').fill('250');
-    await page.getByRole('button', { name: 'Estimate' }).click();
-    await expect(page.getByRole('heading', { name: /Estimated hottest VRM reading/ })).toBeVisible();
-    await expect(page.locator('.estimate-figure')).toContainText('°F');
+    const board = 'Korvath KV Ridgeline B50';
+    await estimateOnBoardPage(page, compared.getByRole('link', { name: board }), board, '250');
   });
 });
 

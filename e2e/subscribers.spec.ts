@@ -1,6 +1,6 @@
 import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
 import { apiAs, readyRoundup } from './support/ready-roundup';
-import { localIn } from './support/local-time';
+import { scheduleAhead } from './support/local-time';
 import { signInAs } from './support/sign-in';
 import { uniqueSuffix } from './support/unique';
 import { seriousViolations } from './support/axe';
@@ -114,13 +114,7 @@ test('a reader subscribes, confirms from the dev inbox, gets the go-live mail, u
   await testerApi.dispose();
 
   await editor.goto(`/roundups/${roundupId}?tab=publishing`);
-  const at = new Date(Math.ceil((Date.now() + 12_000) / 1000) * 1000);
-  const local = localIn(at, 'Europe/Berlin');
-  await editor.getByLabel('Date').fill(local.date);
-  await editor.getByLabel('Time', { exact: true }).fill(local.time);
-  await editor.getByLabel('Time zone').fill('Europe/Berlin');
-  await editor.getByRole('button', { name: 'Schedule', exact: true }).click();
-  await expect(editor.getByTestId('schedule-summary')).toContainText(at.toISOString());
+  await scheduleAhead(editor, 12, 'Europe/Berlin');
   await expect(editor.getByText('The roundup is live')).toBeVisible({ timeout: 60_000 });
 
   // 4. The subscribers page shows the go-live mailing's progress bar until every row is done.

@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
+import { expect, type Locator, type Page } from '@playwright/test';
 import { publicPaths, readerBase } from '../../server/public-site/public-paths';
 
 /** The server files that declare the pages a reader reaches without an account. */
@@ -32,4 +33,23 @@ function resolvePattern(expression: string, file: string): string {
   const call = /^publicPaths\.(\w+)\(\)$/.exec(expression);
   if (call && call[1] in publicPaths) return (publicPaths as unknown as Record<string, () => string>)[call[1]]();
   throw new Error(`${file}: cannot read the address of router.get(${expression}, …); write it as a literal`);
+}
+
+/**
+ * "Will it cope?" on a board's page, reached from its link: a package power out of range is refused and the room
+ * temperature typed stays; `watts` in range gives an estimate in °F.
+ */
+export async function estimateOnBoardPage(page: Page, link: Locator, board: string, watts: string) {
+  await link.click();
+  await expect(page.getByRole('heading', { level: 1, name: board })).toBeVisible();
+  await expect(page.getByText('This is an estimate, not a guarantee')).toBeVisible();
+  await page.getByLabel('CPU package power (W)').fill('5000');
+  await page.getByLabel('Room temperature (°F)').fill('75');
+  await page.getByRole('button', { name: 'Estimate' }).click();
+  await expect(page.getByText('Enter a package power between 10 and 1000 W.')).toBeVisible();
+  await expect(page.getByLabel('Room temperature (°F)')).toHaveValue('75');
+  await page.getByLabel('CPU package power (W)').fill(watts);
+  await page.getByRole('button', { name: 'Estimate' }).click();
+  await expect(page.getByRole('heading', { name: /Estimated hottest VRM reading/ })).toBeVisible();
+  await expect(page.locator('.estimate-figure')).toContainText('°F');
 }

@@ -16,6 +16,7 @@ import { join } from 'node:path';
 import autocannon from 'autocannon';
 import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
 import {
+  ownDatabase,
   queryDatabase,
   setUpDatabase,
   siteHeaders,
@@ -66,13 +67,9 @@ try {
     `[load] ${availableParallelism()} CPU(s), load average ${loadavg()[0].toFixed(2)}; ${seconds} s per run; ` +
       `readers ${READER_RATE > 0 ? `${READER_RATE} page(s)/s each` : 'unpaced'}`,
   );
-  // @ts-expect-error plain ESM helper of the npm scripts, without types
-  const { ensureDatabase } = await import('./lib/setup.mjs');
-  const database = (await ensureDatabase()) as { url: string; startedHere: boolean; stop: () => Promise<void> };
-  if (database.startedHere) stopDatabase = database.stop;
-  const url = new URL(database.url);
-  url.pathname = `/benchwire_bench_load_${process.pid}`;
-  databaseUrl = url.toString();
+  const database = await ownDatabase(`benchwire_bench_load_${process.pid}`);
+  stopDatabase = database.stop;
+  databaseUrl = database.url;
   const outlet = await startDemoOutlet(databaseUrl, {
     fresh: true,
     env: { JOB_RUNNER: 'on', UPLOADS_DIR: join(workDir, 'uploads') },

@@ -5,7 +5,6 @@
 // run, so that a machine growing busier or a relay table growing larger during the run favours neither side.
 // Needs DATABASE_URL naming a MariaDB server; it works in a database of its own and drops it afterwards.
 import { spawnSync } from 'node:child_process';
-import { randomBytes } from 'node:crypto';
 import { resolve } from 'node:path';
 import { loadavg } from 'node:os';
 import { setFlagsFromString } from 'node:v8';
@@ -22,17 +21,12 @@ import { enqueueGoLiveMailing } from '../server/mail/outbox';
 import { goLiveMessage, listHeaders, parseFrom } from '../server/mail/compose';
 import { loadMailingContent } from '../server/mail/go-live-content';
 import { createMailTransport } from '../server/mail/transport';
+import { scratchDatabaseUrl } from './lib/app-process';
 
 const SUBSCRIBERS = Number(process.env.BENCH_MAIL_SUBSCRIBERS ?? 10_000);
 const BATCH = 100;
 
-const base = process.env.DATABASE_URL;
-if (!base) {
-  console.error('Set DATABASE_URL to a MariaDB server (the bench makes and drops a database of its own).');
-  process.exit(1);
-}
-const url = new URL(base);
-url.pathname = `/benchwire_bench_mail_${process.pid}_${randomBytes(2).toString('hex')}`;
+const url = scratchDatabaseUrl('benchwire_bench_mail', 'the bench');
 const databaseUrl = url.toString();
 const tsx = resolve('node_modules/.bin/tsx');
 const setup = (flag: string) =>

@@ -10,7 +10,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import autocannon from 'autocannon';
-import { queryDatabase, setUpDatabase, startApp, type AppProcess } from './lib/app-process';
+import { ownDatabase, queryDatabase, setUpDatabase, startApp, type AppProcess } from './lib/app-process';
 import { ensureNginx, fetchRaw, startStaticBaseline } from './lib/static-baseline';
 
 const connections = 64;
@@ -45,13 +45,9 @@ async function cleanUp() {
 
 try {
   console.log(`[bench] ${availableParallelism()} CPU(s), load average ${loadavg()[0].toFixed(2)}`);
-  // @ts-expect-error plain ESM helper of the npm scripts, without types
-  const { ensureDatabase } = await import('./lib/setup.mjs');
-  const database = (await ensureDatabase()) as { url: string; startedHere: boolean; stop: () => Promise<void> };
-  if (database.startedHere) stopDatabase = database.stop;
-  const url = new URL(database.url);
-  url.pathname = `/benchwire_bench_public_${process.pid}`;
-  databaseUrl = url.toString();
+  const database = await ownDatabase(`benchwire_bench_public_${process.pid}`);
+  stopDatabase = database.stop;
+  databaseUrl = database.url;
   setUpDatabase(databaseUrl, ['--fresh', '--seed', '--quiet']);
 
   const [row] = await queryDatabase<{ path: string }>(

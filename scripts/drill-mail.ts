@@ -4,16 +4,10 @@
 // the same test with MAIL_DRILL_CONFIRMED set, in a database of its own (dropped afterwards), and prints its figures.
 // Needs DATABASE_URL naming a MariaDB server. MAIL_DRILL_CONFIRMED overrides the 5,000.
 import { spawnSync } from 'node:child_process';
-import { randomBytes } from 'node:crypto';
 import { resolve } from 'node:path';
+import { scratchDatabaseUrl } from './lib/app-process';
 
-const base = process.env.DATABASE_URL;
-if (!base) {
-  console.error('Set DATABASE_URL to a MariaDB server (the drill makes and drops a database of its own).');
-  process.exit(1);
-}
-const url = new URL(base);
-url.pathname = `/benchwire_test_drill_${process.pid}_${randomBytes(2).toString('hex')}`;
+const url = scratchDatabaseUrl('benchwire_test_drill', 'the drill');
 const env = {
   ...process.env,
   DATABASE_URL: url.toString(),

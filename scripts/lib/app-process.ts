@@ -1,6 +1,7 @@
 // Helpers of the drill and load scripts: free ports, the app as its own process on the seeded demo outlet, signed-in
 // staff, the stored reader pages and a query straight to MariaDB. Figures these scripts print come from the real server process on 127.0.0.1.
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { resolve } from 'node:path';
@@ -181,4 +182,32 @@ export function percentile(values: number[], p: number): number {
   if (values.length === 0) return 0;
   const sorted = [...values].sort((a, b) => a - b);
   return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))];
+}
+
+/**
+ * A database of the script's own, `name`, on the server `npm test` uses (started here when DATABASE_URL names none):
+ * its URL, and how to stop the server when it was started here.
+ */
+export async function ownDatabase(name: string): Promise<{ url: string; stop: (() => Promise<void>) | null }> {
+  // @ts-expect-error plain ESM helper of the npm scripts, without types
+  const { ensureDatabase } = await import('./setup.mjs');
+  const database = (await ensureDatabase()) as { url: string; startedHere: boolean; stop: () => Promise<void> };
+  const url = new URL(database.url);
+  url.pathname = `/${name}`;
+  return { url: url.toString(), stop: database.startedHere ? database.stop : null };
+}
+
+/**
+ * A fresh database name, `prefix` with the process id and a random tag, on the MariaDB server DATABASE_URL names;
+ * without DATABASE_URL the script stops, saying that `what` makes and drops a database of its own.
+ */
+export function scratchDatabaseUrl(prefix: string, what: string): URL {
+  const base = process.env.DATABASE_URL;
+  if (!base) {
+    console.error(`Set DATABASE_URL to a MariaDB server (${what} makes and drops a database of its own).`);
+    process.exit(1);
+  }
+  const url = new URL(base);
+  url.pathname = `/${prefix}_${process.pid}_${randomBytes(2).toString('hex')}`;
+  return url;
 }

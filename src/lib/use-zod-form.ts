@@ -4,6 +4,11 @@ import { describeSubmitError, zodFieldErrors, type FormErrorItem } from './form-
 
 type Values = Record<string, string>;
 
+/** What a form sends through: a TanStack mutation's `mutate`, with the parsed input. */
+interface SendingMutation<Input, Result> {
+  mutate: (input: Input, callbacks: { onSuccess: (result: Result) => void; onError: (error: unknown) => void }) => void;
+}
+
 export interface UseZodFormOptions<Schema extends z.ZodType, V extends Values> {
   /** The same schema the server validates the request with (from shared/schemas). */
   schema: Schema;
@@ -126,12 +131,7 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
    * failure the server's problems show beside the fields.
    */
   const submitWith = <Result>(
-    mutation: {
-      mutate: (
-        input: z.output<Schema>,
-        callbacks: { onSuccess: (result: Result) => void; onError: (error: unknown) => void },
-      ) => void;
-    },
+    mutation: SendingMutation<z.output<Schema>, Result>,
     onSaved: (result: Result) => void,
   ) => {
     const input = validate();
@@ -144,6 +144,13 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
       onError: fail,
     });
   };
+
+  /** A FormDialog's submit side: busy while `mutation` runs, sends through submitWith, problems under `title`. */
+  const dialogSubmit = <Result>(
+    mutation: SendingMutation<z.output<Schema>, Result> & { isPending: boolean },
+    onSaved: (result: Result) => void,
+    title: string,
+  ) => ({ pending: mutation.isPending, onSubmit: () => submitWith(mutation, onSaved), problems: problems(title) });
 
   return {
     values,
@@ -160,5 +167,6 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
     fieldId,
     problems,
     submitWith,
+    dialogSubmit,
   };
 }

@@ -79,9 +79,7 @@ export function BenchProfileDialog({ open, onClose, onCreated }: BenchProfileDia
       title="New bench profile"
       description="Saved for reuse: later roundups can pick the same test system."
       submitLabel="Save profile"
-      pending={create.isPending}
-      onSubmit={() => form.submitWith(create, onCreated)}
-      problems={form.problems('The profile was not saved')}
+      {...form.dialogSubmit(create, onCreated, 'The profile was not saved')}
     >
       <SetupFields field={form.field} specs={nameField} />
       <div className="grid gap-4 sm:grid-cols-2">

@@ -108,9 +108,7 @@ export function LoadConfigurationDialog({ open, onClose, onCreated }: LoadConfig
       title="New load configuration"
       description="Saved for reuse; in this roundup it becomes one column of the test matrix."
       submitLabel="Save configuration"
-      pending={create.isPending}
-      onSubmit={() => form.submitWith(create, onCreated)}
-      problems={form.problems('The configuration was not saved')}
+      {...form.dialogSubmit(create, onCreated, 'The configuration was not saved')}
     >
       <div className="grid gap-4 sm:grid-cols-2">
         <SetupFields field={form.field} specs={whatFields} />

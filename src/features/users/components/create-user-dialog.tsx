@@ -48,9 +48,11 @@ export function CreateUserDialog({ open, onClose, onCreated }: CreateUserDialogP
       title="New user"
       description="Invite a colleague by mail, or give them a first password yourself."
       submitLabel={start === 'invite' ? 'Send invitation' : 'Create account'}
-      pending={createUser.isPending}
-      onSubmit={() => form.submitWith(createUser, onCreated)}
-      problems={form.problems(start === 'invite' ? 'The invitation was not sent' : 'The account was not created')}
+      {...form.dialogSubmit(
+        createUser,
+        onCreated,
+        start === 'invite' ? 'The invitation was not sent' : 'The account was not created',
+      )}
     >
       <TextField {...form.field('displayName')} autoComplete="off" description="As colleagues know them." />
       <TextField {...form.field('email')} type="email" autoComplete="off" inputMode="email" />

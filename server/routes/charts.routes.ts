@@ -1,5 +1,6 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
+import { sendStoredBytes } from '../lib/send-stored-bytes';
 import { editorialDeciders, planningReaders } from '../../shared/access/roles';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
@@ -61,11 +62,7 @@ export function registerChartRoutes(api: ApiRegistry, { services }: AppContext) 
     produces: 'image/png',
     handler: async ({ params, res }) => {
       const { body, sha256 } = await charts.image(params.id, params.chartKey);
-      res.setHeader('Content-Type', 'image/png');
-      res.setHeader('X-Content-Type-Options', 'nosniff');
-      res.setHeader('Cache-Control', 'private, max-age=60');
-      res.setHeader('ETag', `"${sha256}"`);
-      res.status(200).end(body);
+      sendStoredBytes(res, body, 'image/png', 'private, max-age=60', { ETag: `"${sha256}"` });
     },
   });
 }

@@ -1,5 +1,6 @@
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
+import { sendStoredBytes } from '../lib/send-stored-bytes';
 import { benchWorkers, planningReaders } from '../../shared/access/roles';
 import {
   entryPhotosParamsSchema,
@@ -94,11 +95,9 @@ export function registerPhotoRoutes(api: ApiRegistry, { services }: AppContext) 
     produces: 'image/webp',
     handler: async ({ params, res }) => {
       const { body, contentType } = await photos.file(params.photoId, params.size);
-      res.setHeader('Content-Type', contentType);
-      res.setHeader('Content-Disposition', `inline; filename="photo-${params.photoId}-${params.size}"`);
-      res.setHeader('X-Content-Type-Options', 'nosniff');
-      res.setHeader('Cache-Control', 'private, max-age=3600');
-      res.status(200).end(body);
+      sendStoredBytes(res, body, contentType, 'private, max-age=3600', {
+        'Content-Disposition': `inline; filename="photo-${params.photoId}-${params.size}"`,
+      });
     },
   });
 }

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { ApiRegistry } from '../api-registry';
 import type { AppContext } from '../app-context';
+import { sendStoredBytes } from '../lib/send-stored-bytes';
 import { benchWorkers, planEditors, planningReaders } from '../../shared/access/roles';
 import { idParamSchema } from '../../shared/schemas/common';
 import {
@@ -93,15 +94,10 @@ export function registerTestRunRoutes(api: ApiRegistry, { services }: AppContext
     handler: async ({ params, res, user }) => {
       const { file, body } = await runs.loggerFile(params.runId, user);
       const asciiName = file.originalName.replace(/[^A-Za-z0-9._-]/g, '_');
-      res.setHeader('Content-Type', 'application/octet-stream');
-      res.setHeader(
-        'Content-Disposition',
-        `attachment; filename="${asciiName}"; filename*=UTF-8''${encodeURIComponent(file.originalName)}`,
-      );
-      res.setHeader('X-Content-Type-Options', 'nosniff');
-      res.setHeader('Cache-Control', 'private, no-store');
-      res.setHeader('X-Checksum-SHA256', file.sha256);
-      res.status(200).end(body);
+      sendStoredBytes(res, body, 'application/octet-stream', 'private, no-store', {
+        'Content-Disposition': `attachment; filename="${asciiName}"; filename*=UTF-8''${encodeURIComponent(file.originalName)}`,
+        'X-Checksum-SHA256': file.sha256,
+      });
     },
   });
 

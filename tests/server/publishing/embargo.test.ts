@@ -2,8 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import sharp from 'sharp';
 import type { DataSource } from 'typeorm';
-import { createApp } from '../../../server/app';
-import { createServices, type Services } from '../../../server/compose-services';
+import type { Services } from '../../../server/compose-services';
 import { AuditEntryEntity } from '../../../server/entities/audit-entry.entity';
 import { JobEntity } from '../../../server/entities/job.entity';
 import { MailingEntity } from '../../../server/entities/mail.entities';
@@ -14,10 +13,10 @@ import { ManualClock } from '../../../server/jobs/clock';
 import { JobRunner } from '../../../server/jobs/job-runner';
 import { buildPublishedRoundup } from '../../../server/public-site/published-roundup';
 import { publishJobKey } from '../../../server/services/publishing.service';
-import { signedIn, testDataSource, testEnv, TEST_HOST, type Client, type TestApp } from '../support/test-app';
+import { signedIn, TEST_HOST, type Client, type TestApp } from '../support/test-app';
 import { WriteUpSectionEntity } from '../../../server/entities/write-up-section.entity';
 import { addEntry, createProduct, createRoundup } from '../planning/support/planning-fixtures';
-import { roundupInReview, scheduleAt } from './support/publishing-fixtures';
+import { publishingContext, roundupInReview, scheduleAt } from './support/publishing-fixtures';
 
 const quiet = { error: () => {}, warn: () => {} };
 let dataSource: DataSource;
@@ -74,9 +73,7 @@ async function publicSurfaces(roundupId: number, title: string) {
 }
 
 beforeAll(async () => {
-  dataSource = await testDataSource();
-  services = createServices(dataSource, testEnv());
-  app = createApp({ dataSource, env: testEnv(), services });
+  ({ dataSource, services, app } = await publishingContext());
 });
 
 // Each publication renders the pages of every published roundup in the shared test database: allow for it.

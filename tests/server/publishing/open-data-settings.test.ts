@@ -1,14 +1,13 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
-import { createApp } from '../../../server/app';
-import { createServices, type Services } from '../../../server/compose-services';
+import type { Services } from '../../../server/compose-services';
 import { createJobRegistry } from '../../../server/jobs/all';
 import { ManualClock } from '../../../server/jobs/clock';
 import { JobRunner } from '../../../server/jobs/job-runner';
 import { publishJobKey } from '../../../server/services/publishing.service';
-import { signedIn, testDataSource, testEnv, TEST_HOST, type TestApp } from '../support/test-app';
-import { roundupInReview, scheduleAt } from './support/publishing-fixtures';
+import { signedIn, TEST_HOST, type TestApp } from '../support/test-app';
+import { publishingContext, roundupInReview, scheduleAt } from './support/publishing-fixtures';
 
 let dataSource: DataSource;
 let services: Services;
@@ -16,9 +15,7 @@ let app: TestApp;
 const reader = (path: string) => request(app).get(path).set('Host', TEST_HOST);
 
 beforeAll(async () => {
-  dataSource = await testDataSource();
-  services = createServices(dataSource, testEnv());
-  app = createApp({ dataSource, env: testEnv(), services });
+  ({ dataSource, services, app } = await publishingContext());
 });
 
 describe('open-data settings', { timeout: 120_000 }, () => {

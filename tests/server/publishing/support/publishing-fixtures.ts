@@ -2,7 +2,9 @@ import type { DataSource } from 'typeorm';
 import { expect } from 'vitest';
 import { RoundupEntity } from '../../../../server/entities/roundup.entity';
 import { instantToZonedTime } from '../../../../shared/domain/publishing/zoned-time';
-import { signedIn, type Client, type TestApp } from '../../support/test-app';
+import { createApp } from '../../../../server/app';
+import { createServices } from '../../../../server/compose-services';
+import { signedIn, testDataSource, testEnv, type Client, type TestApp } from '../../support/test-app';
 import { approveAllCharts, roundupWithResults, signOffWriteUp } from '../../editorial/support/editorial-fixtures';
 
 /**
@@ -10,6 +12,13 @@ import { approveAllCharts, roundupWithResults, signOffWriteUp } from '../../edit
  * each cell accepted with a run of record, a verdict per board, every chart approved, sent to review, and every
  * write-up section signed off. Readiness reports nothing left to do.
  */
+/** The test database, the services over it and an app sharing those services (so a test can drive the job runner). */
+export async function publishingContext() {
+  const dataSource = await testDataSource();
+  const services = createServices(dataSource, testEnv());
+  return { dataSource, services, app: createApp({ dataSource, env: testEnv(), services }) };
+}
+
 export async function roundupInReview(app: TestApp, editor: Client, dataSource: DataSource) {
   const tester = await signedIn(app, 'tester');
   const setup = await roundupWithResults(editor, tester, [[[{ peakC: 68.4 }]], [[{ peakC: 73.9 }]]]);

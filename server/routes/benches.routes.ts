@@ -104,9 +104,7 @@ export function registerBenchRoutes(api: ApiRegistry, { services }: AppContext) 
     summary: 'Cancel a booking: testers their own, editors any.',
     params: bookingParamsSchema,
     successStatus: 204,
-    handler: async ({ user, params }) => {
-      await benches.cancel(user, params.id, params.bookingId);
-    },
+    handler: ({ user, params }) => benches.cancel(user, params.id, params.bookingId),
   });
 
   api.add({

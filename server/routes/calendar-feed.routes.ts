@@ -40,9 +40,7 @@ export function registerCalendarFeedRoutes(api: ApiRegistry, { services }: AppCo
     tag: 'Account',
     summary: 'Turn your calendar feed off; its address stops working.',
     successStatus: 204,
-    handler: async ({ user }) => {
-      await feeds.disable(user);
-    },
+    handler: ({ user }) => feeds.disable(user),
   });
 
   api.add({

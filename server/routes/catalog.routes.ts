@@ -104,9 +104,7 @@ export function registerCatalogRoutes(api: ApiRegistry, { services }: AppContext
     summary: 'Delete a product that no roundup uses (409 product_in_use otherwise: archive it instead).',
     params: idParamSchema,
     successStatus: 204,
-    handler: async ({ user, params }) => {
-      await catalog.remove(user, params.id);
-    },
+    handler: ({ user, params }) => catalog.remove(user, params.id),
   });
 
   api.add({
@@ -141,9 +139,7 @@ export function registerCatalogRoutes(api: ApiRegistry, { services }: AppContext
     summary: 'Remove a mistaken price entry (kept in the audit log).',
     params: productPriceParamsSchema,
     successStatus: 204,
-    handler: async ({ user, params }) => {
-      await catalog.removePrice(user, params.id, params.priceId);
-    },
+    handler: ({ user, params }) => catalog.removePrice(user, params.id, params.priceId),
   });
 
   api.add({

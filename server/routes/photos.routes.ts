@@ -80,9 +80,7 @@ export function registerPhotoRoutes(api: ApiRegistry, { services }: AppContext) 
     tag: 'Photos',
     summary: 'Remove a photo and its web sizes.',
     params: photoParamsSchema,
-    handler: async ({ params, user }) => {
-      await photos.remove(user, params.photoId);
-    },
+    handler: ({ params, user }) => photos.remove(user, params.photoId),
   });
 
   api.add({

@@ -45,9 +45,7 @@ export function registerRoundupEntryRoutes(api: ApiRegistry, { services }: AppCo
     summary: 'Remove a product with its cells and sample (409 entry_has_work once a cell is running or beyond).',
     params: entryParamsSchema,
     successStatus: 204,
-    handler: async ({ user, params }) => {
-      await entries.remove(user, params.id, params.entryId);
-    },
+    handler: ({ user, params }) => entries.remove(user, params.id, params.entryId),
   });
 
   api.add({

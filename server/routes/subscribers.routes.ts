@@ -106,9 +106,7 @@ export function registerSubscriberRoutes(api: ApiRegistry, { services, env }: Ap
     summary: 'Remove a subject; subscribers keep their other subjects.',
     params: idParamSchema,
     successStatus: 204,
-    handler: async ({ user, params }) => {
-      await subscribers.deleteCategory(user, params.id);
-    },
+    handler: ({ user, params }) => subscribers.deleteCategory(user, params.id),
   });
 
   api.add({

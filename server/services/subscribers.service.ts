@@ -353,7 +353,7 @@ export class SubscribersService {
     });
   }
 
-  async deleteCategory(actor: CurrentUser, id: number) {
+  async deleteCategory(actor: CurrentUser, id: number): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
       const found = await manager.getRepository(MailCategoryEntity).findOneBy({ id });
       if (!found) throw notFound('That subject');

@@ -2,6 +2,7 @@ import { useId, useMemo, useState, type ReactNode } from 'react';
 import { cx } from '../../lib/class-names';
 import { useColumnChoice } from '../../lib/use-column-choice';
 import { ColumnChooser } from './column-chooser';
+import { ScrollingTable } from './scrolling-table';
 
 export type SortDirection = 'ascending' | 'descending';
 export interface SortState {
@@ -118,7 +119,6 @@ export function DataTable<Row>({
     [allColumns, columnChoice, choice],
   );
   const [query, setQuery] = useState('');
-  const captionId = useId();
   const filterId = useId();
 
   const visibleRows = useMemo(() => {
@@ -187,95 +187,87 @@ export function DataTable<Row>({
           </p>
         </div>
       )}
-      <div
-        role="region"
-        aria-labelledby={captionId}
-        tabIndex={0}
-        // The area scrolls on its own, at most about a screen high, so its sideways scrollbar is always within reach.
-        className="max-h-[max(20rem,calc(100dvh-7rem))] overflow-auto overscroll-x-contain rounded-[3px] border border-rule bg-surface"
+      <ScrollingTable
+        caption={caption}
+        captionClassName={showCaption ? 'px-3 py-2 text-left font-semibold' : 'sr-only'}
       >
-        <table className="w-full border-separate border-spacing-0 text-sm">
-          <caption id={captionId} className={showCaption ? 'px-3 py-2 text-left font-semibold' : 'sr-only'}>
-            {caption}
-          </caption>
-          <thead>
-            <tr>
+        <thead>
+          <tr>
+            {columns.map((column) => {
+              const sorted = sort?.columnId === column.id ? sort.direction : undefined;
+              return (
+                <th
+                  key={column.id}
+                  scope="col"
+                  aria-sort={column.sortValue ? (sorted ?? 'none') : undefined}
+                  className={cx(
+                    'sticky top-0 z-10 border-b border-edge/70 bg-wash px-3 py-1.5 text-xs font-semibold whitespace-nowrap text-muted',
+                    column.verbatimHeader ? 'font-mono' : 'tracking-wide uppercase',
+                    column.numeric ? 'text-right' : 'text-left',
+                    column.hideBelow && hidden[column.hideBelow],
+                    column.rowHeader && stickyStart,
+                    column.pinEnd && stickyEnd,
+                    (column.rowHeader || column.pinEnd) && 'z-20',
+                  )}
+                >
+                  {column.sortValue ? (
+                    <button
+                      type="button"
+                      onClick={() => toggleSort(column.id)}
+                      className={cx(
+                        'inline-flex items-center gap-1 rounded-[2px] hover:text-ink',
+                        !column.verbatimHeader && 'uppercase',
+                        sorted && 'text-ink',
+                        column.numeric && 'flex-row-reverse',
+                      )}
+                    >
+                      {column.header}
+                      <SortMark direction={sorted} />
+                    </button>
+                  ) : (
+                    column.header
+                  )}
+                </th>
+              );
+            })}
+          </tr>
+        </thead>
+        <tbody>
+          {visibleRows.map((row) => (
+            <tr key={rowKey(row)} className={cx('group hover:bg-wash/60', rowClassName?.(row))}>
               {columns.map((column) => {
-                const sorted = sort?.columnId === column.id ? sort.direction : undefined;
+                const Cell = column.rowHeader ? 'th' : 'td';
                 return (
-                  <th
+                  <Cell
                     key={column.id}
-                    scope="col"
-                    aria-sort={column.sortValue ? (sorted ?? 'none') : undefined}
+                    scope={column.rowHeader ? 'row' : undefined}
                     className={cx(
-                      'sticky top-0 z-10 border-b border-edge/70 bg-wash px-3 py-1.5 text-xs font-semibold whitespace-nowrap text-muted',
-                      column.verbatimHeader ? 'font-mono' : 'tracking-wide uppercase',
-                      column.numeric ? 'text-right' : 'text-left',
-                      column.hideBelow && hidden[column.hideBelow],
+                      'border-b border-rule group-last:border-b-0',
+                      column.flush ? 'p-0 align-top' : 'px-3 py-1.5 align-middle',
+                      column.rowHeader && 'text-left font-medium',
                       column.rowHeader && stickyStart,
                       column.pinEnd && stickyEnd,
-                      (column.rowHeader || column.pinEnd) && 'z-20',
+                      (column.rowHeader || column.pinEnd) && 'z-[1] bg-surface group-hover:bg-wash',
+                      column.numeric && 'numeric text-right whitespace-nowrap',
+                      column.hideBelow && hidden[column.hideBelow],
+                      column.className,
                     )}
                   >
-                    {column.sortValue ? (
-                      <button
-                        type="button"
-                        onClick={() => toggleSort(column.id)}
-                        className={cx(
-                          'inline-flex items-center gap-1 rounded-[2px] hover:text-ink',
-                          !column.verbatimHeader && 'uppercase',
-                          sorted && 'text-ink',
-                          column.numeric && 'flex-row-reverse',
-                        )}
-                      >
-                        {column.header}
-                        <SortMark direction={sorted} />
-                      </button>
-                    ) : (
-                      column.header
-                    )}
-                  </th>
+                    {column.cell(row)}
+                  </Cell>
                 );
               })}
             </tr>
-          </thead>
-          <tbody>
-            {visibleRows.map((row) => (
-              <tr key={rowKey(row)} className={cx('group hover:bg-wash/60', rowClassName?.(row))}>
-                {columns.map((column) => {
-                  const Cell = column.rowHeader ? 'th' : 'td';
-                  return (
-                    <Cell
-                      key={column.id}
-                      scope={column.rowHeader ? 'row' : undefined}
-                      className={cx(
-                        'border-b border-rule group-last:border-b-0',
-                        column.flush ? 'p-0 align-top' : 'px-3 py-1.5 align-middle',
-                        column.rowHeader && 'text-left font-medium',
-                        column.rowHeader && stickyStart,
-                        column.pinEnd && stickyEnd,
-                        (column.rowHeader || column.pinEnd) && 'z-[1] bg-surface group-hover:bg-wash',
-                        column.numeric && 'numeric text-right whitespace-nowrap',
-                        column.hideBelow && hidden[column.hideBelow],
-                        column.className,
-                      )}
-                    >
-                      {column.cell(row)}
-                    </Cell>
-                  );
-                })}
-              </tr>
-            ))}
-            {visibleRows.length === 0 && (
-              <tr>
-                <td colSpan={columns.length} className="px-3 py-6 text-center text-muted">
-                  Nothing matches “{query.trim()}”. Clear the filter to see all {plural}.
-                </td>
-              </tr>
-            )}
-          </tbody>
-        </table>
-      </div>
+          ))}
+          {visibleRows.length === 0 && (
+            <tr>
+              <td colSpan={columns.length} className="px-3 py-6 text-center text-muted">
+                Nothing matches “{query.trim()}”. Clear the filter to see all {plural}.
+              </td>
+            </tr>
+          )}
+        </tbody>
+      </ScrollingTable>
       {footnote && <p className="mt-2 text-[0.8125rem] text-muted">{footnote}</p>}
     </div>
   );

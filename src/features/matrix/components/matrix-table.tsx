@@ -1,4 +1,5 @@
-import { useId, useMemo } from 'react';
+import { useMemo } from 'react';
+import { ScrollingTable } from '../../../components/ui/scrolling-table';
 import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import { CellStateBadge } from '../../../components/ui/cell-state-badge';
@@ -31,60 +32,49 @@ export interface MatrixTableProps {
 
 /** Products down, load configurations across; the product column stays in view while scrolling sideways. */
 export function MatrixTable({ matrix, viewer, assigning, selection, pendingCellId, onAction }: MatrixTableProps) {
-  const captionId = useId();
   const columnName = useMemo(
     () => new Map(matrix.columns.map((column) => [column.loadConfigurationId, column.name])),
     [matrix.columns],
   );
   return (
-    <div
-      role="region"
-      aria-labelledby={captionId}
-      tabIndex={0}
-      className="max-h-[max(20rem,calc(100dvh-7rem))] overflow-auto overscroll-x-contain rounded-[3px] border border-rule bg-surface"
-    >
-      <table className="w-full border-separate border-spacing-0 text-sm">
-        <caption id={captionId} className="sr-only">
-          Test matrix: products by load configuration
-        </caption>
-        <thead>
-          <tr>
+    <ScrollingTable caption="Test matrix: products by load configuration">
+      <thead>
+        <tr>
+          <th
+            scope="col"
+            className="sticky top-0 left-0 z-20 border-b border-edge/70 bg-wash px-3 py-1.5 text-left text-xs font-semibold tracking-wide text-muted uppercase shadow-[inset_-1px_0_0_var(--color-rule)]"
+          >
+            Product
+          </th>
+          {matrix.columns.map((column, index) => (
             <th
+              key={column.loadConfigurationId}
               scope="col"
-              className="sticky top-0 left-0 z-20 border-b border-edge/70 bg-wash px-3 py-1.5 text-left text-xs font-semibold tracking-wide text-muted uppercase shadow-[inset_-1px_0_0_var(--color-rule)]"
+              className="sticky top-0 z-10 min-w-44 border-b border-edge/70 bg-wash px-3 py-1.5 text-left text-xs font-semibold tracking-wide text-muted uppercase"
             >
-              Product
+              <span className="numeric mr-1 font-normal">{index + 1}</span>
+              {column.name}
             </th>
-            {matrix.columns.map((column, index) => (
-              <th
-                key={column.loadConfigurationId}
-                scope="col"
-                className="sticky top-0 z-10 min-w-44 border-b border-edge/70 bg-wash px-3 py-1.5 text-left text-xs font-semibold tracking-wide text-muted uppercase"
-              >
-                <span className="numeric mr-1 font-normal">{index + 1}</span>
-                {column.name}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {matrix.rows.map((row) => (
-            <MatrixRow
-              key={row.entryId}
-              row={row}
-              roundupId={matrix.roundupId}
-              viewer={viewer}
-              columnCount={matrix.columns.length}
-              columnName={columnName}
-              assigning={assigning}
-              selection={selection}
-              pendingCellId={pendingCellId}
-              onAction={onAction}
-            />
           ))}
-        </tbody>
-      </table>
-    </div>
+        </tr>
+      </thead>
+      <tbody>
+        {matrix.rows.map((row) => (
+          <MatrixRow
+            key={row.entryId}
+            row={row}
+            roundupId={matrix.roundupId}
+            viewer={viewer}
+            columnCount={matrix.columns.length}
+            columnName={columnName}
+            assigning={assigning}
+            selection={selection}
+            pendingCellId={pendingCellId}
+            onAction={onAction}
+          />
+        ))}
+      </tbody>
+    </ScrollingTable>
   );
 }
 

@@ -7,16 +7,22 @@ import {
 } from '../../../shared/domain/analysis/log-cell-value';
 
 describe('reading one logger cell', () => {
-  it('reads plain decimals exactly as written, with a point or a decimal comma', () => {
-    expect(readPlainDecimal('45.25', false)).toBe(45.25);
-    expect(readPlainDecimal('-3.1', false)).toBe(-3.1);
-    expect(readPlainDecimal('+7', false)).toBe(7);
-    expect(readPlainDecimal('45,25', true)).toBe(45.25);
-    expect(readPlainDecimal('0.1', false)).toBe(0.1);
-    expect(readPlainDecimal('45,25', false)).toBeNaN();
-    expect(readPlainDecimal('', false)).toBeNaN();
-    expect(readPlainDecimal('-', false)).toBeNaN();
-  });
+  it.each([
+    ['45.25', false, 45.25],
+    ['-3.1', false, -3.1],
+    ['+7', false, 7],
+    ['45,25', true, 45.25],
+    ['0.1', false, 0.1],
+    ['45,25', false, Number.NaN],
+    ['', false, Number.NaN],
+    ['-', false, Number.NaN],
+  ])(
+    'reads plain decimals exactly as written, with a point or a decimal comma: %j (decimal comma %s) → %d',
+    (text, decimalComma, expected) => {
+      // toBe compares with Object.is, so a refused text must give NaN itself.
+      expect(readPlainDecimal(text, decimalComma)).toBe(expected);
+    },
+  );
 
   it('turns blank cells and sensor error markers into gaps, never zeros', () => {
     for (const marker of [
@@ -44,12 +50,14 @@ describe('reading one logger cell', () => {
     expect(readCell(undefined, false)).toEqual({ kind: 'gap' });
   });
 
-  it('reads a unit written after the number', () => {
-    expect(readCell('45.2 °C', false)).toEqual({ kind: 'number', value: 45.2, unit: 'C' });
-    expect(readCell('113.4°F', false)).toEqual({ kind: 'number', value: 113.4, unit: 'F' });
-    expect(readCell('318.2 K', false)).toEqual({ kind: 'number', value: 318.2, unit: 'K' });
-    expect(readCell('1,931 mV', true)).toEqual({ kind: 'number', value: 1.931, unit: 'mV' });
-    expect(readCell(' 12.5 ', false)).toEqual({ kind: 'number', value: 12.5, unit: null });
+  it.each([
+    ['45.2 °C', false, 45.2, 'C'],
+    ['113.4°F', false, 113.4, 'F'],
+    ['318.2 K', false, 318.2, 'K'],
+    ['1,931 mV', true, 1.931, 'mV'],
+    [' 12.5 ', false, 12.5, null],
+  ])('reads a unit written after the number: %j', (text, decimalComma, value, unit) => {
+    expect(readCell(text, decimalComma)).toEqual({ kind: 'number', value, unit });
   });
 
   it('marks anything else invalid', () => {
@@ -57,16 +65,20 @@ describe('reading one logger cell', () => {
     expect(readCell('12.5.3', false)).toEqual({ kind: 'invalid' });
   });
 
-  it('recognises numeric sentinels such as −999.9 and 9999', () => {
-    expect(isNumericSentinel('-999.9')).toBe(true);
-    expect(isNumericSentinel('9999')).toBe(true);
-    expect(isNumericSentinel('812.4')).toBe(false);
+  it.each([
+    ['-999.9', true],
+    ['9999', true],
+    ['812.4', false],
+  ])('recognises numeric sentinels such as −999.9 and 9999: %s → %s', (text, sentinel) => {
+    expect(isNumericSentinel(text)).toBe(sentinel);
   });
 
-  it('tells data from header names', () => {
-    expect(looksLikeData('12,5', true)).toBe(true);
-    expect(looksLikeData('00:01:02', true)).toBe(true);
-    expect(looksLikeData('2025-03-01T09:00:00Z', true)).toBe(true);
-    expect(looksLikeData('VRM 1', true)).toBe(false);
+  it.each([
+    ['12,5', true],
+    ['00:01:02', true],
+    ['2025-03-01T09:00:00Z', true],
+    ['VRM 1', false],
+  ])('tells data from header names: %j → data %s', (text, data) => {
+    expect(looksLikeData(text, true)).toBe(data);
   });
 });

@@ -8,23 +8,37 @@ import {
 } from '../../../shared/domain/analysis/log-time-value';
 
 describe('reading the time column', () => {
-  it('recognises elapsed seconds, milliseconds and minutes by the header', () => {
-    expect(detectTimeFormat('12.5', 'Time [s]')).toBe('seconds');
-    expect(detectTimeFormat('12500', 'Time (ms)')).toBe('milliseconds');
-    expect(detectTimeFormat('1,5', 'Elapsed min')).toBe('minutes');
+  it.each([
+    ['12.5', 'Time [s]', 'seconds'],
+    ['12500', 'Time (ms)', 'milliseconds'],
+    ['1,5', 'Elapsed min', 'minutes'],
+  ])(
+    'recognises elapsed seconds, milliseconds and minutes by the header: %j under %j is %s',
+    (text, header, format) => {
+      expect(detectTimeFormat(text, header)).toBe(format);
+    },
+  );
+
+  it('reads elapsed milliseconds and minutes as seconds', () => {
     expect(createTimeReader({ format: 'milliseconds', decimalComma: false, dayFirst: true })('12500')).toBe(12.5);
     expect(createTimeReader({ format: 'minutes', decimalComma: true, dayFirst: true })('1,5')).toBe(90);
   });
 
-  it('reads mm:ss and hh:mm:ss, with fractions and am/pm (first principles)', () => {
+  it('recognises mm:ss and hh:mm:ss as clock times', () => {
     expect(detectTimeFormat('01:02:03', 'Time')).toBe('clock');
-    expect(readClockTime('01:02:03')).toBe(3723);
-    expect(readClockTime('62:03')).toBe(3723);
-    expect(readClockTime('00:00:01.5')).toBe(1.5);
-    expect(readClockTime('00:00:01,5')).toBe(1.5);
-    expect(readClockTime('12:00:10 AM')).toBe(10);
-    expect(readClockTime('1:00:00 pm')).toBe(13 * 3600);
-    expect(readClockTime('00:61:00')).toBeNaN();
+  });
+
+  it.each([
+    ['01:02:03', 3723],
+    ['62:03', 3723],
+    ['00:00:01.5', 1.5],
+    ['00:00:01,5', 1.5],
+    ['12:00:10 AM', 10],
+    ['1:00:00 pm', 13 * 3600],
+    ['00:61:00', Number.NaN],
+  ])('reads mm:ss and hh:mm:ss, with fractions and am/pm (first principles): %s → %d s', (text, seconds) => {
+    // toBe compares with Object.is, so an impossible time must give NaN itself.
+    expect(readClockTime(text)).toBe(seconds);
   });
 
   it('reads ISO 8601 stamps with and without a zone, and local date-time stamps', () => {
@@ -43,11 +57,13 @@ describe('reading the time column', () => {
     expect(readDateTime('2025-13-01 09:00:00', true)).toBeNull();
   });
 
-  it('decides day-first or month-first from the stamps themselves', () => {
-    expect(detectDayFirst(['13/03/2025 09:00:00'])).toBe(true);
-    expect(detectDayFirst(['03/13/2025 09:00:00'])).toBe(false);
-    expect(detectDayFirst(['01.03.2025 09:00:00'])).toBe(true);
-    expect(detectDayFirst(['03/01/2025 09:00:00'])).toBe(false);
+  it.each([
+    ['13/03/2025 09:00:00', true],
+    ['03/13/2025 09:00:00', false],
+    ['01.03.2025 09:00:00', true],
+    ['03/01/2025 09:00:00', false],
+  ])('decides day-first or month-first from the stamps themselves: %s → day first %s', (stamp, dayFirst) => {
+    expect(detectDayFirst([stamp])).toBe(dayFirst);
   });
 
   it('refuses text that is no time', () => {

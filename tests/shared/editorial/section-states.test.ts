@@ -9,21 +9,36 @@ import { writeUpLockedReason } from '../../../shared/domain/editorial/write-up-a
 
 // Benchwire's own editorial rules (issue 9), no outside source: the checks state the rules as the product defines them.
 describe('write-up section review', () => {
-  it('a writer hands a draft to the editor; the editor signs off or hands back; nothing skips backwards silently', () => {
-    expect(sectionReviewMove('drafting', 'hand-to-editor')).toEqual({ ok: true, to: 'with-editor' });
-    expect(sectionReviewMove('with-editor', 'sign-off')).toEqual({ ok: true, to: 'signed-off' });
-    expect(sectionReviewMove('with-editor', 'hand-back')).toEqual({ ok: true, to: 'drafting' });
-    expect(sectionReviewMove('signed-off', 'hand-back')).toEqual({ ok: true, to: 'drafting' });
-    expect(sectionReviewMove('with-editor', 'hand-to-editor').ok).toBe(false);
-    expect(sectionReviewMove('signed-off', 'sign-off').ok).toBe(false);
-    expect(sectionReviewMove('drafting', 'hand-back').ok).toBe(false);
+  it.each([
+    { from: 'drafting', move: 'hand-to-editor', to: 'with-editor' },
+    { from: 'with-editor', move: 'sign-off', to: 'signed-off' },
+    { from: 'with-editor', move: 'hand-back', to: 'drafting' },
+    { from: 'signed-off', move: 'hand-back', to: 'drafting' },
+  ] as const)(
+    'a writer hands a draft to the editor; the editor signs off or hands back: $from, $move → $to',
+    ({ from, move, to }) => {
+      expect(sectionReviewMove(from, move)).toEqual({ ok: true, to });
+    },
+  );
+
+  it.each([
+    ['with-editor', 'hand-to-editor'],
+    ['signed-off', 'sign-off'],
+    ['drafting', 'hand-back'],
+  ] as const)('nothing skips backwards silently: %s refuses %s', (from, move) => {
+    expect(sectionReviewMove(from, move).ok).toBe(false);
   });
 
-  it('changing a signed-off section sends it back to drafting; other states keep theirs', () => {
-    expect(reviewStateAfterEdit('signed-off')).toBe('drafting');
-    expect(reviewStateAfterEdit('with-editor')).toBe('with-editor');
-    expect(reviewStateAfterEdit('drafting')).toBe('drafting');
-  });
+  it.each([
+    ['signed-off', 'drafting'],
+    ['with-editor', 'with-editor'],
+    ['drafting', 'drafting'],
+  ] as const)(
+    'changing a signed-off section sends it back to drafting; other states keep theirs: %s → %s',
+    (from, to) => {
+      expect(reviewStateAfterEdit(from)).toBe(to);
+    },
+  );
 
   it('says what blocks readiness: unsigned sections and open threads, or a write-up never started', () => {
     expect(writeUpBlockingReasons([])).toEqual([

@@ -8,20 +8,24 @@ import {
 } from '../../../shared/domain/planning/money';
 
 describe('money in integer minor units (ISO 4217 minor-unit column)', () => {
-  it('knows the minor unit digits: EUR 2, JPY 0, KWD 3', () => {
-    expect(minorUnitDigits('EUR')).toBe(2);
-    expect(minorUnitDigits('JPY')).toBe(0);
-    expect(minorUnitDigits('KWD')).toBe(3);
+  it.each([
+    ['EUR', 2],
+    ['JPY', 0],
+    ['KWD', 3],
+  ])('knows the minor unit digits: %s %i', (currency, digits) => {
+    expect(minorUnitDigits(currency)).toBe(digits);
   });
 
-  it('parses typed amounts without floating point', () => {
-    expect(parseMajorAmount('189.99', 'EUR')).toEqual({ ok: true, amountMinor: 18999 });
-    expect(parseMajorAmount('189.9', 'EUR')).toEqual({ ok: true, amountMinor: 18990 });
-    expect(parseMajorAmount('189', 'EUR')).toEqual({ ok: true, amountMinor: 18900 });
+  it.each([
+    ['189.99', 'EUR', 18999],
+    ['189.9', 'EUR', 18990],
+    ['189', 'EUR', 18900],
     // 0.1 + 0.2 style errors do not appear: 0.29 is 29 cents exactly.
-    expect(parseMajorAmount('0.29', 'EUR')).toEqual({ ok: true, amountMinor: 29 });
-    expect(parseMajorAmount('1500', 'JPY')).toEqual({ ok: true, amountMinor: 1500 });
-    expect(parseMajorAmount('1.250', 'KWD')).toEqual({ ok: true, amountMinor: 1250 });
+    ['0.29', 'EUR', 29],
+    ['1500', 'JPY', 1500],
+    ['1.250', 'KWD', 1250],
+  ])('parses typed amounts without floating point: %s %s is %i minor units', (text, currency, amountMinor) => {
+    expect(parseMajorAmount(text, currency)).toEqual({ ok: true, amountMinor });
   });
 
   it('refuses grouping, too many decimals and non-numbers', () => {

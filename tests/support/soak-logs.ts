@@ -11,6 +11,35 @@ export const twoProbeMapping: ColumnMapping = {
   power: 'Package power [W]',
 };
 
+/**
+ * Two VRM probes at 1 Hz rising first-order from 30 °C (VRM 1 by `vrm1RiseC` with τ = 420 s, VRM 2 by 40 °C with
+ * τ = 400 s), each with `noiseC` of noise, in a 21 °C room under a steady 4600 MHz clock: the soak the analysis tests
+ * start from, adding power, a load end or a fault where they need one.
+ */
+export function twoProbeRiseSpec({
+  durationS,
+  seed,
+  noiseC,
+  vrm1RiseC = 45,
+}: {
+  durationS: number;
+  seed: number;
+  noiseC: number;
+  vrm1RiseC?: number;
+}): SyntheticLogSpec {
+  return {
+    durationS,
+    sampleHz: 1,
+    seed,
+    probes: [
+      { name: 'VRM 1', startC: 30, riseC: vrm1RiseC, tauS: 420, noiseC },
+      { name: 'VRM 2', startC: 30, riseC: 40, tauS: 400, noiseC },
+    ],
+    ambient: { name: 'Ambient', startC: 21, noiseC: 0.05 },
+    clock: { name: 'CPU clock [MHz]', mhz: 4600, noiseMhz: 10 },
+  };
+}
+
 /** A generated log analysed; the result must be the API document, and a refused log fails with its errors. */
 export function analyseSpec(
   spec: SyntheticLogSpec,

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { detectLoadEndIndex } from '../../../shared/domain/analysis/load-end';
 import type { SyntheticLogSpec } from '../../../shared/generators/synthetic-logger-log';
 import { analysisOptionsSchema } from '../../../shared/schemas/analysis';
-import { analyseSpec, twoProbeMapping } from '../../support/soak-logs';
+import { analyseSpec, twoProbeMapping, twoProbeRiseSpec } from '../../support/soak-logs';
 
 const mapping = twoProbeMapping;
 
@@ -13,15 +13,8 @@ const mapping = twoProbeMapping;
  */
 function soakWithTail(overrides: Partial<SyntheticLogSpec> = {}): SyntheticLogSpec {
   return {
-    durationS: 4500,
-    sampleHz: 1,
-    seed: 3,
+    ...twoProbeRiseSpec({ durationS: 4500, seed: 3, noiseC: 0.1 }),
     loadEndS: 3600,
-    probes: [
-      { name: 'VRM 1', startC: 30, riseC: 45, tauS: 420, noiseC: 0.1 },
-      { name: 'VRM 2', startC: 30, riseC: 40, tauS: 400, noiseC: 0.1 },
-    ],
-    ambient: { name: 'Ambient', startC: 21, noiseC: 0.05 },
     clock: { name: 'CPU clock [MHz]', mhz: 4600, idleMhz: 1200, noiseMhz: 10 },
     power: { name: 'Package power [W]', watts: 200, idleWatts: 30, noiseW: 1 },
     ...overrides,

@@ -2,22 +2,14 @@ import { describe, expect, it } from 'vitest';
 import { analyseLog } from '../../../shared/domain/analysis/analyse-log';
 import { syntheticLoggerLog, type SyntheticLogSpec } from '../../../shared/generators/synthetic-logger-log';
 import { analysisResultSchema, type AnalysisResult } from '../../../shared/schemas/analysis';
-import { analyseSpec, twoProbeMapping } from '../../support/soak-logs';
+import { analyseSpec, twoProbeMapping, twoProbeRiseSpec } from '../../support/soak-logs';
 
 const mapping = twoProbeMapping;
 
 /** An hour at 1 Hz: two probes rising first-order to 75 and 70 °C (τ 7 min), a 21 °C room, a steady 4600 MHz clock. */
 function hourLog(overrides: Partial<SyntheticLogSpec> = {}): SyntheticLogSpec {
   return {
-    durationS: 3600,
-    sampleHz: 1,
-    seed: 11,
-    probes: [
-      { name: 'VRM 1', startC: 30, riseC: 45, tauS: 420, noiseC: 0.2 },
-      { name: 'VRM 2', startC: 30, riseC: 40, tauS: 400, noiseC: 0.2 },
-    ],
-    ambient: { name: 'Ambient', startC: 21, noiseC: 0.05 },
-    clock: { name: 'CPU clock [MHz]', mhz: 4600, noiseMhz: 10 },
+    ...twoProbeRiseSpec({ durationS: 3600, seed: 11, noiseC: 0.2 }),
     power: { name: 'Package power [W]', watts: 200, noiseW: 1 },
     ...overrides,
   };

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { SyntheticLogSpec } from '../../../shared/generators/synthetic-logger-log';
 import type { AnalysisOptionsInput, ColumnMapping } from '../../../shared/schemas/analysis';
-import { analyseSpec } from '../../support/soak-logs';
+import { analyseSpec, twoProbeRiseSpec } from '../../support/soak-logs';
 
 const mapping: ColumnMapping = { vrm: ['VRM 1 [°C]', 'VRM 2 [°C]'], ambient: 'Ambient [°C]', clock: 'CPU clock [MHz]' };
 
@@ -10,18 +10,17 @@ const mapping: ColumnMapping = { vrm: ['VRM 1 [°C]', 'VRM 2 [°C]'], ambient: '
  * 82 °C (Warm), VRM 2 settles at 70 °C; 1 Hz, a 21 °C room, a steady clock. Cut at `durationS`.
  */
 function rise(durationS: number, overrides: Partial<SyntheticLogSpec> = {}): SyntheticLogSpec {
-  return {
-    durationS,
-    sampleHz: 1,
-    seed: 5,
+  return { ...twoProbeRiseSpec({ durationS, seed: 5, noiseC: 0.1, vrm1RiseC: 52 }), ...overrides };
+}
+
+/** A rise that reaches its plateau early (τ = 1 min): VRM 1 settles at 70 °C, VRM 2 at 60 °C. Cut at `durationS`. */
+function earlyPlateau(durationS: number): SyntheticLogSpec {
+  return rise(durationS, {
     probes: [
-      { name: 'VRM 1', startC: 30, riseC: 52, tauS: 420, noiseC: 0.1 },
-      { name: 'VRM 2', startC: 30, riseC: 40, tauS: 400, noiseC: 0.1 },
+      { name: 'VRM 1', startC: 30, riseC: 40, tauS: 60 },
+      { name: 'VRM 2', startC: 30, riseC: 30, tauS: 60 },
     ],
-    ambient: { name: 'Ambient', startC: 21, noiseC: 0.05 },
-    clock: { name: 'CPU clock [MHz]', mhz: 4600, noiseMhz: 10 },
-    ...overrides,
-  };
+  });
 }
 
 function analyse(spec: SyntheticLogSpec, options: AnalysisOptionsInput = {}) {
@@ -114,26 +113,11 @@ describe('no verdict from an unfinished soak', () => {
   });
 
   it('when a rise reaches its plateau early (τ = 1 min) and the soak runs its full length, then it keeps its normal verdict', () => {
-    const analysis = analyse(
-      rise(3600, {
-        probes: [
-          { name: 'VRM 1', startC: 30, riseC: 40, tauS: 60 },
-          { name: 'VRM 2', startC: 30, riseC: 30, tauS: 60 },
-        ],
-      }),
-    );
+    const analysis = analyse(earlyPlateau(3600));
     expect(analysis.reachedSteadyState).toBe(true);
     expect(analysis.verdict).toMatchObject({ status: 'final', code: 'comfortable', label: 'Comfortable' });
     // The same early plateau on a 30-minute configuration with 30 minutes logged: complete, final.
-    const configured = analyse(
-      rise(1800, {
-        probes: [
-          { name: 'VRM 1', startC: 30, riseC: 40, tauS: 60 },
-          { name: 'VRM 2', startC: 30, riseC: 30, tauS: 60 },
-        ],
-      }),
-      { soakMinutes: 30 },
-    );
+    const configured = analyse(earlyPlateau(1800), { soakMinutes: 30 });
     expect(configured.verdict).toMatchObject({ status: 'final', code: 'comfortable' });
   });
 

@@ -349,17 +349,8 @@ export function configurationChart(
     add(run, key, entry.productName, 'reference', entry.referenceRoundupTitle, omittedLabel);
   }
   bars.sort(compareChartValues);
-  const { title, axis } = titleFor(metric, sources.referenceRoomC, configuration.name);
-  return {
-    kind: 'configuration',
-    key: chartKeyFor.configuration(configuration.id),
-    title,
-    axisLabel: axis,
-    footnote: footnoteFor(sources, [configuration.soakMinutes], shownRuns),
-    metric,
-    bars,
-    omitted,
-  };
+  const chart = { kind: 'configuration', id: configuration.id, subject: configuration.name } as const;
+  return barChart(sources, metric, { bars, omitted, shownRuns }, chart, [configuration.soakMinutes]);
 }
 
 /** One product across the roundup's load configurations, in the plan's order (lightest load first as planned). */
@@ -370,17 +361,26 @@ export function productChart(sources: ChartSources, entry: ChartEntryFacts, sett
     const run = runOf(sources, entry.entryId, configuration.id);
     add(run, `configuration-${configuration.id}`, configuration.name, 'roundup', null);
   }
-  const { title, axis } = titleFor(metric, sources.referenceRoomC, entry.productName);
+  const soakMinutes = sources.configurations.map((c) => c.soakMinutes);
+  const chart = { kind: 'product', id: entry.entryId, subject: entry.productName } as const;
+  return barChart(sources, metric, { bars, omitted, shownRuns }, chart, soakMinutes);
+}
+
+/** A bar chart from what its collector kept: the title names the subject, the footnote the soaks and the runs shown. */
+function barChart(
+  sources: ChartSources,
+  metric: ChartMetric,
+  { bars, omitted, shownRuns }: Omit<ReturnType<typeof barCollector>, 'add'>,
+  chart: { kind: BarChartData['kind']; id: number; subject: string },
+  soakMinutes: number[],
+): BarChartData {
+  const { title, axis } = titleFor(metric, sources.referenceRoomC, chart.subject);
   return {
-    kind: 'product',
-    key: chartKeyFor.product(entry.entryId),
+    kind: chart.kind,
+    key: chartKeyFor[chart.kind](chart.id),
     title,
     axisLabel: axis,
-    footnote: footnoteFor(
-      sources,
-      sources.configurations.map((c) => c.soakMinutes),
-      shownRuns,
-    ),
+    footnote: footnoteFor(sources, soakMinutes, shownRuns),
     metric,
     bars,
     omitted,

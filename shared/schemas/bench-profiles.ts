@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { archivableRecordFields, archivedFilterSchema, decimalSchema, requiredTextSchema } from './planning-fields';
+import { archivableQuerySchema, archivableRecordSchema, decimalSchema, requiredTextSchema } from './planning-fields';
 import { optionalMultiLineText } from './text';
 
 /**
@@ -38,9 +38,7 @@ export const updateBenchProfileRequestSchema = z
 export type UpdateBenchProfileRequest = z.input<typeof updateBenchProfileRequestSchema>;
 export type ParsedUpdateBenchProfileRequest = z.output<typeof updateBenchProfileRequestSchema>;
 
-export const benchProfileSchema = z.object({
-  id: z.number().int(),
-  name: z.string(),
+export const benchProfileSchema = archivableRecordSchema({
   caseAndFans: z.string(),
   cooler: z.string(),
   psu: z.string(),
@@ -51,11 +49,8 @@ export const benchProfileSchema = z.object({
   probePlacement: z.string(),
   requiredSoakMinutes: z.number().int(),
   notes: z.string().nullable(),
-  ...archivableRecordFields,
 });
 export type BenchProfile = z.infer<typeof benchProfileSchema>;
 export const benchProfileListSchema = z.object({ benchProfiles: z.array(benchProfileSchema) });
 
-export const benchProfileListQuerySchema = z.object({
-  archived: archivedFilterSchema,
-});
+export const benchProfileListQuerySchema = archivableQuerySchema;

@@ -1,6 +1,14 @@
 import { z } from 'zod';
 import { instantSchema } from './common';
-import { idSchema, optionalTextSchema, personRefSchema, requiredTextSchema } from './planning-fields';
+import {
+  idSchema,
+  namedRecordFields,
+  namedRefSchema,
+  optionalTextSchema,
+  personRefSchema,
+  requiredTextSchema,
+  timestampFields,
+} from './planning-fields';
 import { queueItemSchema } from './matrix';
 import { bookingInstantSchema, dateRanges, zonedInstant } from './dates';
 import { optionalMultiLineText } from './text';
@@ -31,14 +39,12 @@ export type UpdateBenchRequest = z.input<typeof updateBenchRequestSchema>;
 export type ParsedUpdateBenchRequest = z.output<typeof updateBenchRequestSchema>;
 
 export const benchSchema = z.object({
-  id: z.number().int(),
-  name: z.string(),
+  ...namedRecordFields,
   location: z.string().nullable(),
-  benchProfile: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+  benchProfile: namedRefSchema.nullable(),
   notes: z.string().nullable(),
   active: z.boolean(),
-  createdAt: instantSchema,
-  updatedAt: instantSchema,
+  ...timestampFields,
 });
 export type Bench = z.infer<typeof benchSchema>;
 export const benchListSchema = z.object({ benches: z.array(benchSchema) });
@@ -90,7 +96,7 @@ export type ParsedCreateBookingRequest = z.output<typeof createBookingRequestSch
 
 export const bookingSchema = z.object({
   id: z.number().int(),
-  bench: z.object({ id: z.number().int(), name: z.string() }),
+  bench: namedRefSchema,
   tester: personRefSchema,
   startsAt: instantSchema,
   endsAt: instantSchema,

@@ -10,6 +10,7 @@ import {
   regionSchema,
   requiredTextSchema,
   archivedFilterSchema,
+  timestampFields,
 } from './planning-fields';
 import { phaseMultiplications, stagesPerPhaseProblem } from '../domain/planning/power-design';
 import { roundupStateSchema } from './roundup-state';
@@ -263,19 +264,18 @@ export const productSchema = z.object({
   archivedAt: instantSchema.nullable(),
   /** The latest price per region (latest observation date, then latest record), one per region. */
   latestPrices: z.array(priceSchema),
-  createdAt: instantSchema,
-  updatedAt: instantSchema,
+  ...timestampFields,
 });
 export type Product = z.infer<typeof productSchema>;
 
 /** A product as other records mention it. */
-export const productBriefSchema = z.object({
-  id: z.number().int(),
-  maker: z.string(),
-  model: z.string(),
-  chipset: z.string(),
-  formFactor: formFactorSchema,
-  archived: z.boolean(),
+export const productBriefSchema = productSchema.pick({
+  id: true,
+  maker: true,
+  model: true,
+  chipset: true,
+  formFactor: true,
+  archived: true,
 });
 export type ProductBrief = z.infer<typeof productBriefSchema>;
 

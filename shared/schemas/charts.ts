@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { instantSchema } from './common';
-import { personRefSchema } from './planning-fields';
+import { namedRefSchema, personRefSchema } from './planning-fields';
 import { chartMetrics } from '../domain/editorial/chart-data';
 
 export const chartMetricSchema = z.enum(chartMetrics, 'Choose peak, rise over ambient or normalised peak.');
@@ -116,7 +116,7 @@ export type RoundupChart = z.infer<typeof roundupChartSchema>;
 export const roundupChartsSchema = z.object({
   roundupId: z.number().int(),
   editable: z.boolean(),
-  loadConfigurations: z.array(z.object({ id: z.number().int(), name: z.string() })),
+  loadConfigurations: z.array(namedRefSchema),
   charts: z.array(roundupChartSchema),
 });
 export type RoundupCharts = z.infer<typeof roundupChartsSchema>;

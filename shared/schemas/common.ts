@@ -22,7 +22,15 @@ export const apiErrorSchema = z.object({
 });
 export type ApiError = z.infer<typeof apiErrorSchema>;
 
-export const idParamSchema = z.object({ id: z.coerce.number().int().positive() });
+/** One id in a route path (`/roundups/:id/entries/:entryId`): a positive whole number, read from the text. */
+export const pathIdSchema = z.coerce.number().int().positive();
+
+/** The path parameters of a route whose parameters are all record ids, by name in path order. */
+export function pathIdsSchema<const Name extends string>(...names: Name[]) {
+  return z.object(Object.fromEntries(names.map((name) => [name, pathIdSchema])) as Record<Name, typeof pathIdSchema>);
+}
+
+export const idParamSchema = pathIdsSchema('id');
 
 /** ISO 8601 instant in UTC, as the API sends every time. */
 export const instantSchema = z.iso.datetime();

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { archivableRecordFields, archivedFilterSchema, decimalSchema, requiredTextSchema } from './planning-fields';
+import { archivableQuerySchema, archivableRecordSchema, decimalSchema, requiredTextSchema } from './planning-fields';
 import { optionalMultiLineText } from './text';
 import { whenValid } from './checks';
 
@@ -59,9 +59,7 @@ export const updateLoadConfigurationRequestSchema = z
 export type UpdateLoadConfigurationRequest = z.input<typeof updateLoadConfigurationRequestSchema>;
 export type ParsedUpdateLoadConfigurationRequest = z.output<typeof updateLoadConfigurationRequestSchema>;
 
-export const loadConfigurationSchema = z.object({
-  id: z.number().int(),
-  name: z.string(),
+export const loadConfigurationSchema = archivableRecordSchema({
   cpuDescription: z.string(),
   settingsMode: loadSettingsModeSchema,
   fixedClockMhz: z.number().int().nullable(),
@@ -69,11 +67,8 @@ export const loadConfigurationSchema = z.object({
   expectedPackagePowerW: z.number(),
   coreVoltageV: z.number(),
   soakMinutes: z.number().int(),
-  ...archivableRecordFields,
 });
 export type LoadConfiguration = z.infer<typeof loadConfigurationSchema>;
 export const loadConfigurationListSchema = z.object({ loadConfigurations: z.array(loadConfigurationSchema) });
 
-export const loadConfigurationListQuerySchema = z.object({
-  archived: archivedFilterSchema,
-});
+export const loadConfigurationListQuerySchema = archivableQuerySchema;

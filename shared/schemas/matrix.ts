@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { instantSchema } from './common';
 import { productBriefSchema } from './catalog';
-import { calendarDateSchema, idSchema, personRefSchema } from './planning-fields';
+import { calendarDateSchema, idSchema, namedRefSchema, personRefSchema } from './planning-fields';
 import { cellActions, cellStates } from '../domain/planning/matrix-cell-states';
 import { roundupStateSchema } from './roundup-state';
 import { planningDateSchema } from './dates';
@@ -115,6 +115,6 @@ export const queueItemSchema = z.object({
   cell: matrixCellSchema,
   roundup: z.object({ id: z.number().int(), title: z.string(), state: roundupStateSchema, timeZone: z.string() }),
   product: productBriefSchema,
-  loadConfiguration: z.object({ id: z.number().int(), name: z.string() }),
+  loadConfiguration: namedRefSchema,
 });
 export type QueueItem = z.infer<typeof queueItemSchema>;

@@ -27,11 +27,7 @@ export const photoUploadFieldsSchema = z.object({
 export type PhotoUploadFields = z.input<typeof photoUploadFieldsSchema>;
 export type ParsedPhotoUploadFields = z.output<typeof photoUploadFieldsSchema>;
 
-export const updatePhotoRequestSchema = z.strictObject({
-  kind: photoKindSchema.optional(),
-  caption: captionSchema.optional(),
-  altText: altTextSchema.optional(),
-});
+export const updatePhotoRequestSchema = z.strictObject(photoUploadFieldsSchema.shape).partial();
 export type ParsedUpdatePhotoRequest = z.output<typeof updatePhotoRequestSchema>;
 
 export const reorderPhotosRequestSchema = z.strictObject({

@@ -68,6 +68,14 @@ export function requiredTextSchema(max: number, emptyMessage = 'This cannot be e
 
 export const idSchema = z.number().int().positive();
 
+/** A record that people know by its name (a bench, a bench profile, a load configuration). */
+export const namedRecordFields = { id: z.number().int(), name: z.string() };
+/** Such a record as other records mention it. */
+export const namedRefSchema = z.object(namedRecordFields);
+
+/** When a record was created and last changed. */
+export const timestampFields = { createdAt: instantSchema, updatedAt: instantSchema };
+
 /** A staff member as other records mention them. */
 export const personRefSchema = z.object({ id: z.number().int(), displayName: z.string() });
 export type PersonRef = z.infer<typeof personRefSchema>;
@@ -75,11 +83,17 @@ export type PersonRef = z.infer<typeof personRefSchema>;
 /** Which records a list of archivable ones shows: the archived ones are hidden unless asked for. */
 export const archivedFilterSchema = z.enum(['exclude', 'include', 'only']).default('exclude');
 
-/** What staff see of every archivable record (bench profile, load configuration) after its own fields. */
-export const archivableRecordFields = {
-  archived: z.boolean(),
-  /** Roundups whose plan uses the record. */
-  roundupCount: z.number().int(),
-  createdAt: instantSchema,
-  updatedAt: instantSchema,
-};
+/** What staff see of an archivable record (bench profile, load configuration): id, name, its own `fields`, then use. */
+export function archivableRecordSchema<Fields extends z.ZodRawShape>(fields: Fields) {
+  return z.object({
+    ...namedRecordFields,
+    ...fields,
+    archived: z.boolean(),
+    /** Roundups whose plan uses the record. */
+    roundupCount: z.number().int(),
+    ...timestampFields,
+  });
+}
+
+/** A list of archivable records is asked for with which of them to show. */
+export const archivableQuerySchema = z.object({ archived: archivedFilterSchema });

@@ -14,6 +14,7 @@ import {
   regionSchema,
   requiredTextSchema,
   timeZoneSchema,
+  timestampFields,
 } from './planning-fields';
 import { roundupStateSchema } from './roundup-state';
 import { bandFits } from '../domain/planning/price-band';
@@ -125,8 +126,7 @@ export const roundupSummarySchema = z.object({
   overdueSampleCount: z.number().int(),
   createdBy: personRefSchema.nullable(),
   stateChangedAt: instantSchema,
-  createdAt: instantSchema,
-  updatedAt: instantSchema,
+  ...timestampFields,
 });
 export type RoundupSummary = z.infer<typeof roundupSummarySchema>;
 export const roundupListSchema = z.object({ roundups: z.array(roundupSummarySchema) });

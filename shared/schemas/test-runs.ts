@@ -8,7 +8,7 @@ import {
   verdictStatusSchema,
   verdictRubricSchema,
 } from './analysis';
-import { decimalSchema, idSchema, personRefSchema, requiredTextSchema } from './planning-fields';
+import { decimalSchema, idSchema, namedRefSchema, personRefSchema, requiredTextSchema } from './planning-fields';
 import { dateRanges, zonedInstant } from './dates';
 import { optionalMultiLineText } from './text';
 
@@ -103,7 +103,7 @@ export const testRunSchema = z.object({
   cellId: z.number().int(),
   roundupId: z.number().int(),
   tester: personRefSchema,
-  bench: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+  bench: namedRefSchema.nullable(),
   bookingId: z.number().int().nullable(),
   firmwareVersion: z.string(),
   startedAt: instantSchema,

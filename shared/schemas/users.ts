@@ -1,18 +1,14 @@
 import { z } from 'zod';
 import { instantSchema, roleSchema } from './common';
-import { emailSchema, newPasswordSchema, withRepeatedPassword } from './auth';
+import { currentUserSchema, emailSchema, newPasswordSchema, withRepeatedPassword } from './auth';
+import { timestampFields } from './planning-fields';
 import { singleLineText } from './text';
 
 export const displayNameSchema = singleLineText(120, 'Enter a name.');
 
-export const userSchema = z.object({
-  id: z.number().int(),
-  email: z.string(),
-  displayName: z.string(),
-  role: roleSchema,
+export const userSchema = currentUserSchema.extend({
   active: z.boolean(),
-  createdAt: instantSchema,
-  updatedAt: instantSchema,
+  ...timestampFields,
   lastSignInAt: instantSchema.nullable(),
   /** false for an invited account whose owner has not set a password yet (it cannot sign in). */
   passwordSet: z.boolean(),

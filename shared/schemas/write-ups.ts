@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { instantSchema } from './common';
-import { personRefSchema } from './planning-fields';
+import { personRefSchema, timestampFields } from './planning-fields';
 import { roundupStates } from '../domain/planning/roundup-states';
 import { sectionKinds, sectionReviewMoves, sectionReviewStates } from '../domain/editorial/section-states';
 import { multiLineText, optionalMultiLineText, singleLineText } from './text';
@@ -118,8 +118,7 @@ export const revisionSummarySchema = z.object({
   restoredFromId: z.number().int().nullable(),
   title: z.string(),
   author: personRefSchema.nullable(),
-  createdAt: instantSchema,
-  updatedAt: instantSchema,
+  ...timestampFields,
 });
 export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
 export const revisionListSchema = z.object({ revisions: z.array(revisionSummarySchema) });

@@ -11,7 +11,7 @@ import { createDataSource, initializeDataSource } from '../../server/data-source
 import { setUpDatabase } from '../../server/database-setup';
 import { archiveName, createBackup, restoreBackup, RestoreRefused } from '../../server/lib/backup-archive';
 import { demoAccounts } from '../../server/seed/demo-staff';
-import { TEST_HOST, TEST_ORIGIN, testEnv } from './support/test-app';
+import { asBytes, TEST_HOST, TEST_ORIGIN, testEnv } from './support/test-app';
 import { testDatabaseUrl } from './support/seeded-outlet';
 
 /**
@@ -172,16 +172,7 @@ describe('backup and restore', () => {
       "SELECT path FROM published_pages WHERE roundup_id IS NOT NULL AND variant = '' ORDER BY path LIMIT 1",
     )) as { path: string }[];
     expect(results, 'the demo publishes a roundup').toBeTruthy();
-    const get = (app: (typeof apps)[number], path: string) =>
-      request(app)
-        .get(path)
-        .set('Host', TEST_HOST)
-        .buffer(true)
-        .parse((res, done) => {
-          const chunks: Buffer[] = [];
-          res.on('data', (chunk: Buffer) => chunks.push(chunk));
-          res.on('end', () => done(null, Buffer.concat(chunks)));
-        });
+    const get = (app: (typeof apps)[number], path: string) => asBytes(request(app).get(path).set('Host', TEST_HOST));
     // The board (product) pages the results page links to, rendered live from the restored rows.
     const resultsPage = (await get(apps[0], results.path)).body as Buffer;
     const boards = [...new Set(resultsPage.toString('utf8').match(/\/read\/products\/[a-z0-9-]+/g) ?? [])];

@@ -2,14 +2,11 @@ import sharp from 'sharp';
 import { existsSync, readdirSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { PhotoEntity } from '../../../server/entities/photo.entity';
-import { signedIn, testApp, testDataSource, testUploadsDir, type Client } from '../support/test-app';
+import { asBytes, signedInTeam, testDataSource, testUploadsDir, type Client } from '../support/test-app';
 import { addEntry, createProduct, createRoundup } from '../planning/support/planning-fixtures';
 
 async function setUp() {
-  const app = await testApp();
-  const editor = await signedIn(app, 'editor');
-  const tester = await signedIn(app, 'tester');
-  const writer = await signedIn(app, 'writer');
+  const { editor, tester, writer } = await signedInTeam();
   const { roundupId, platform } = await createRoundup(editor.agent, { configurations: 1 });
   const { entry } = await addEntry(editor.agent, roundupId, await createProduct(editor.agent, platform));
   return {
@@ -56,14 +53,7 @@ describe('photos of a product in a roundup', () => {
     expect(response.body).toMatchObject({ width: 200, height: 300, position: 1, kind: 'overview' });
     expect(response.body.sizes.map((s: { format: string }) => s.format)).toEqual(['webp', 'jpeg']);
     for (const size of response.body.sizes as { url: string; format: string }[]) {
-      const file = await writer.agent
-        .get(size.url)
-        .buffer(true)
-        .parse((res, done) => {
-          const chunks: Buffer[] = [];
-          res.on('data', (chunk: Buffer) => chunks.push(chunk));
-          res.on('end', () => done(null, Buffer.concat(chunks)));
-        });
+      const file = await asBytes(writer.agent.get(size.url));
       expect(file.status).toBe(200);
       expect(file.headers['content-type']).toBe(size.format === 'webp' ? 'image/webp' : 'image/jpeg');
       expect(file.headers['x-content-type-options']).toBe('nosniff');

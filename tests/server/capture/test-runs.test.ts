@@ -6,7 +6,7 @@ import { StoredFileEntity } from '../../../server/entities/stored-file.entity';
 import { TestRunEntity } from '../../../server/entities/test-run.entity';
 import { analysisEngineVersion } from '../../../shared/domain/analysis/engine-version';
 import { syntheticLoggerLog } from '../../../shared/generators/synthetic-logger-log';
-import { signedInTeam, testDataSource, testUploadsDir, type Client } from '../support/test-app';
+import { asBytes, signedInTeam, testDataSource, testUploadsDir, type Client } from '../support/test-app';
 import { bookedCell, dayFromToday, matrixOf, recordManualRun } from '../planning/support/planning-fixtures';
 
 /** A one-hour soak at 1 Hz rising first-order from 21 °C by 50 °C with τ = 600 s (peak ≈ 71 °C), ambient steady. */
@@ -55,14 +55,7 @@ describe('test runs on matrix cells', () => {
     const ds = await testDataSource();
     const stored = await ds.getRepository(StoredFileEntity).findOneByOrFail({ id: run.loggerFile.id });
     expect(stored.sha256).toBe(sha256(bytes));
-    const download = await writer.agent
-      .get(`/api/runs/${run.id}/logger-file`)
-      .buffer(true)
-      .parse((res, done) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (chunk: Buffer) => chunks.push(chunk));
-        res.on('end', () => done(null, Buffer.concat(chunks)));
-      });
+    const download = await asBytes(writer.agent.get(`/api/runs/${run.id}/logger-file`));
     expect(download.status).toBe(200);
     expect(sha256(download.body as Buffer)).toBe(sha256(bytes));
     expect(download.headers['x-content-type-options']).toBe('nosniff');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { signedIn, testApp } from '../support/test-app';
+import { asBytes, signedInTeam } from '../support/test-app';
 import { approveAllCharts, roundupWithResults, setAllVerdicts, signOffWriteUp } from './support/editorial-fixtures';
 
 /** Width and height from a PNG's IHDR chunk (PNG specification, ISO/IEC 15948: bytes 16–23, big-endian). */
@@ -7,17 +7,9 @@ function pngSize(png: Buffer) {
   return { width: png.readUInt32BE(16), height: png.readUInt32BE(20) };
 }
 
-async function setUp() {
-  const app = await testApp();
-  const editor = await signedIn(app, 'editor');
-  const tester = await signedIn(app, 'tester');
-  const writer = await signedIn(app, 'writer');
-  return { app, editor, tester, writer };
-}
-
 describe('chart approval and readiness to schedule', () => {
   it('when a run of record changes after approval, then the chart is stale, says what changed and blocks scheduling until re-approved', async () => {
-    const { editor, tester, writer } = await setUp();
+    const { editor, tester, writer } = await signedInTeam();
     // Two boards under one load; the first board's cell has a second run, kept aside.
     const { roundupId, products } = await roundupWithResults(editor.agent, tester, [
       [[{ peakC: 78.4 }, { peakC: 83.1 }]],
@@ -73,14 +65,7 @@ describe('chart approval and readiness to schedule', () => {
     expect(ready.body).toMatchObject({ roundupId, ready: true, blocking: [], state: 'in-review' });
 
     // The approved image is stored and served: a PNG of 1200 × 630.
-    const image = await writer.agent
-      .get(`/api/roundups/${roundupId}/charts/${first.key}/image.png`)
-      .buffer(true)
-      .parse((res, done) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (chunk: Buffer) => chunks.push(chunk));
-        res.on('end', () => done(null, Buffer.concat(chunks)));
-      });
+    const image = await asBytes(writer.agent.get(`/api/roundups/${roundupId}/charts/${first.key}/image.png`));
     expect(image.status).toBe(200);
     expect(image.headers['content-type']).toBe('image/png');
     expect(pngSize(image.body as Buffer)).toEqual({ width: 1200, height: 630 });
@@ -116,7 +101,7 @@ describe('chart approval and readiness to schedule', () => {
   });
 
   it('a chart’s settings are the editor’s: a writer cannot change them, and a new metric makes the approval stale', async () => {
-    const { editor, tester, writer } = await setUp();
+    const { editor, tester, writer } = await signedInTeam();
     const { roundupId, loadConfigurationIds } = await roundupWithResults(editor.agent, tester, [[[{ peakC: 80.5 }]]]);
     await approveAllCharts(editor.agent, roundupId);
     const key = `configuration-${loadConfigurationIds[0]}`;
@@ -141,7 +126,7 @@ describe('chart approval and readiness to schedule', () => {
   });
 
   it('an editor leaves an open cell out with a reason and can take it back; readiness follows', async () => {
-    const { editor, tester, writer } = await setUp();
+    const { editor, tester, writer } = await signedInTeam();
     const { roundupId, products } = await roundupWithResults(
       editor.agent,
       tester,
@@ -184,7 +169,7 @@ describe('chart approval and readiness to schedule', () => {
   });
 
   it('a tested product without a verdict label blocks readiness until the editor sets one; a product left out entirely needs none', async () => {
-    const { editor, tester } = await setUp();
+    const { editor, tester } = await signedInTeam();
     const { roundupId, products } = await roundupWithResults(
       editor.agent,
       tester,
@@ -220,7 +205,7 @@ describe('chart approval and readiness to schedule', () => {
   });
 
   it('only a roundup that is Writing goes to review, and a tester cannot send it', async () => {
-    const { editor, tester } = await setUp();
+    const { editor, tester } = await signedInTeam();
     const { roundupId } = await roundupWithResults(editor.agent, tester, [[[{ peakC: 70 }]]]);
     const byTester = await tester.agent.post(`/api/roundups/${roundupId}/review-request`).send({});
     expect(byTester.status).toBe(403);

@@ -99,6 +99,15 @@ export function client(app: TestApp) {
 
 export type Client = ReturnType<typeof client>;
 
+/** A request whose body comes back as raw bytes, whatever its type: supertest buffers only text and JSON by itself. */
+export function asBytes(call: request.Test) {
+  return call.buffer(true).parse((res, done) => {
+    const chunks: Buffer[] = [];
+    res.on('data', (chunk: Buffer) => chunks.push(chunk));
+    res.on('end', () => done(null, Buffer.concat(chunks)));
+  });
+}
+
 /** A client signed in as a new (or given) user of the role. */
 export async function signedIn(app: TestApp, roleOrUser: Role | TestUser) {
   const user = typeof roleOrUser === 'string' ? await createTestUser(roleOrUser) : roleOrUser;

@@ -1,4 +1,4 @@
-import { useCallback, useId, useMemo, useState, type ChangeEvent } from 'react';
+import { useCallback, useId, useMemo, useState, type ChangeEvent, type FormEvent } from 'react';
 import type { z } from 'zod';
 import { describeSubmitError, zodFieldErrors, type FormErrorItem } from './form-errors';
 
@@ -127,6 +127,17 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
   const problems = (title: string) => ({ title, items: summaryItems, message: formError, attempt });
 
   /**
+   * A <form>'s onSubmit: `before` clears what the last submit said, then the values are checked and only valid input
+   * reaches `send`; problems show beside the fields, and nothing typed is lost either way.
+   */
+  const handleSubmit = (send: (input: z.output<Schema>) => void, before?: () => void) => (event: FormEvent) => {
+    event.preventDefault();
+    before?.();
+    const input = validate();
+    if (input) send(input);
+  };
+
+  /**
    * Validates, then sends the parsed input; on success the form starts afresh and `onSaved` gets the answer, on
    * failure the server's problems show beside the fields.
    */
@@ -166,6 +177,7 @@ export function useZodForm<Schema extends z.ZodType, V extends Values>({
     dirty,
     fieldId,
     problems,
+    handleSubmit,
     submitWith,
     dialogSubmit,
   };

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
@@ -208,22 +208,20 @@ function AddInstrumentForm({ benchId }: { benchId: number }) {
       calibrationIntervalMonths: 'Months between calibrations',
     },
   });
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    setAdded(null);
-    const instrument = form.validate();
-    if (!instrument) return;
-    add.mutate(
-      { benchId, instrument },
-      {
-        onSuccess: (saved) => {
-          setAdded(`${saved.label} is added.`);
-          form.reset();
+  const submit = form.handleSubmit(
+    (instrument) =>
+      add.mutate(
+        { benchId, instrument },
+        {
+          onSuccess: (saved) => {
+            setAdded(`${saved.label} is added.`);
+            form.reset();
+          },
+          onError: form.fail,
         },
-        onError: (error) => form.fail(error),
-      },
-    );
-  };
+      ),
+    () => setAdded(null),
+  );
   return (
     <form
       noValidate
@@ -263,12 +261,9 @@ function MaintenanceForm({ benchId, today }: { benchId: number; today: string })
     initialValues: { doneOn: today, description: '' },
     labels: { doneOn: 'Done on', description: 'What was done' },
   });
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    const entry = form.validate();
-    if (!entry) return;
-    log.mutate({ benchId, entry }, { onSuccess: () => form.reset(), onError: (error) => form.fail(error) });
-  };
+  const submit = form.handleSubmit((entry) =>
+    log.mutate({ benchId, entry }, { onSuccess: () => form.reset(), onError: form.fail }),
+  );
   return (
     <form noValidate onSubmit={submit} aria-label="Log maintenance" className="space-y-3">
       <FormErrorSummary {...form.problems('Not logged')} />

@@ -1,4 +1,4 @@
-import { useId, useState, type FormEvent } from 'react';
+import { useId, useState } from 'react';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { TextField, type TextFieldProps } from '../../../components/ui/text-field';
 import { ApiError, isApiError } from '../../../lib/api-client';
@@ -88,23 +88,21 @@ export function AddPriceForm({ productId, knownRegions, knownCurrencies, onAdded
     },
   });
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    setSaved(null);
-    const input = form.validate();
-    if (!input) return;
-    addPrice.mutate(
-      { productId, price: input },
-      {
-        onSuccess: (price) => {
-          form.reset({ ...form.values, amount: '', source: '' });
-          setSaved(`Added ${formatPrice(price)} in ${price.region}.`);
-          onAdded?.(price);
+  const submit = form.handleSubmit(
+    (input) =>
+      addPrice.mutate(
+        { productId, price: input },
+        {
+          onSuccess: (price) => {
+            form.reset({ ...form.values, amount: '', source: '' });
+            setSaved(`Added ${formatPrice(price)} in ${price.region}.`);
+            onAdded?.(price);
+          },
+          onError: (error) => form.fail(renameAmountField(error)),
         },
-        onError: (error) => form.fail(renameAmountField(error)),
-      },
-    );
-  };
+      ),
+    () => setSaved(null),
+  );
 
   return (
     <form noValidate onSubmit={submit} className="space-y-3" aria-label="Add a price">

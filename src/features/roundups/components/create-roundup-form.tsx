@@ -1,4 +1,4 @@
-import { useId, useMemo, useState, type FormEvent } from 'react';
+import { useId, useMemo, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Panel } from '../../../components/ui/panel';
@@ -148,27 +148,25 @@ export function CreateRoundupForm({ onCreated, onCancel }: CreateRoundupFormProp
   const amountHint =
     digits === 0 ? 'Whole units, e.g. 25000.' : `In ${currency || 'the currency'}, e.g. 189.${'9'.repeat(digits)}.`;
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    setConfigurationsError(undefined);
-    const parsed = form.validate();
-    if (!parsed) return;
-    createRoundup.mutate(
-      { ...parsed, loadConfigurationIds: configurationIds },
-      {
-        onSuccess: onCreated,
-        onError: (error) => {
-          if (!isApiError(error)) return form.fail(error);
-          const listProblem = Object.entries(error.fields).find(([key]) => key.startsWith('loadConfigurationIds'));
-          if (listProblem) setConfigurationsError(listProblem[1]);
-          const others = Object.fromEntries(
-            Object.entries(error.fields).filter(([key]) => !key.startsWith('loadConfigurationIds')),
-          );
-          form.fail(new ApiError(error.status, error.code, error.message, others));
+  const submit = form.handleSubmit(
+    (parsed) =>
+      createRoundup.mutate(
+        { ...parsed, loadConfigurationIds: configurationIds },
+        {
+          onSuccess: onCreated,
+          onError: (error) => {
+            if (!isApiError(error)) return form.fail(error);
+            const listProblem = Object.entries(error.fields).find(([key]) => key.startsWith('loadConfigurationIds'));
+            if (listProblem) setConfigurationsError(listProblem[1]);
+            const others = Object.fromEntries(
+              Object.entries(error.fields).filter(([key]) => !key.startsWith('loadConfigurationIds')),
+            );
+            form.fail(new ApiError(error.status, error.code, error.message, others));
+          },
         },
-      },
-    );
-  };
+      ),
+    () => setConfigurationsError(undefined),
+  );
 
   return (
     <>

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { NewPasswordFields } from '../../../components/ui/new-password-fields';
 import { useZodForm } from '../../../lib/use-zod-form';
@@ -24,25 +24,23 @@ export function ResetPasswordForm({ user, isSelf, onSaved }: ResetPasswordFormPr
     labels: { password: 'New password' },
   });
 
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    setDone(null);
-    const input = form.validate();
-    if (!input) return;
-    updateUser.mutate(
-      { id: user.id, changes: { password: input.password } },
-      {
-        onSuccess: (updated) => {
-          form.reset();
-          setDone(
-            `Password set. ${updated.displayName} has been signed out everywhere; give them the new one in person.`,
-          );
-          onSaved(updated);
+  const submit = form.handleSubmit(
+    (input) =>
+      updateUser.mutate(
+        { id: user.id, changes: { password: input.password } },
+        {
+          onSuccess: (updated) => {
+            form.reset();
+            setDone(
+              `Password set. ${updated.displayName} has been signed out everywhere; give them the new one in person.`,
+            );
+            onSaved(updated);
+          },
+          onError: form.fail,
         },
-        onError: (error) => form.fail(error),
-      },
-    );
-  };
+      ),
+    () => setDone(null),
+  );
 
   return (
     <form noValidate onSubmit={submit} className="space-y-3">

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useParams } from 'react-router';
-import { Alert } from '../../components/ui/alert';
+import { AnnouncedAlert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { describeSubmitError } from '../../lib/form-errors';
 import { addressId } from '../../lib/address-id';
@@ -54,11 +54,7 @@ function ReadinessPage({ user }: { user: CurrentUser }) {
         ) : undefined
       }
     >
-      {reviewError && (
-        <Alert tone="danger" announce className="mb-4">
-          {reviewError}
-        </Alert>
-      )}
+      <AnnouncedAlert tone="danger" message={reviewError} className="mb-4" />
       <ReadinessPanel
         readiness={readiness}
         canExclude={

@@ -67,6 +67,43 @@ export function Alert({
   );
 }
 
+/** An outcome or failure that has just happened, read out as it appears; shows nothing while there is no message. */
+export function AnnouncedAlert({
+  tone,
+  message,
+  title,
+  className,
+}: {
+  tone: AlertTone;
+  message: ReactNode;
+  title?: ReactNode;
+  className?: string;
+}) {
+  if (!message) return null;
+  return (
+    <Alert tone={tone} title={title} announce className={className}>
+      {message}
+    </Alert>
+  );
+}
+
+/** Points to read one by one (warnings, what still blocks a step) under the alert's title. */
+export function ListAlert({
+  items,
+  listClassName = 'list-disc pl-4',
+  ...alert
+}: Omit<AlertProps, 'children'> & { items: readonly string[]; listClassName?: string }) {
+  return (
+    <Alert {...alert}>
+      <ul className={listClassName}>
+        {items.map((item) => (
+          <li key={item}>{item}</li>
+        ))}
+      </ul>
+    </Alert>
+  );
+}
+
 // Remembered per page and title: a caution met on one page is still shown open the first time on another.
 const readKey = (title: string) => `benchwire:read:${window.location.pathname}:${title}`;
 

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
+import { Alert, ListAlert } from '../../../components/ui/alert';
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
@@ -125,13 +125,7 @@ export function ChartCard({
       bodyClassName="space-y-3"
     >
       {chart.status === 'stale' && (
-        <Alert tone="warning" title="Changed since it was approved: approve it again">
-          <ul className="list-disc pl-4">
-            {chart.changes.map((change) => (
-              <li key={change}>{change}</li>
-            ))}
-          </ul>
-        </Alert>
+        <ListAlert tone="warning" title="Changed since it was approved: approve it again" items={chart.changes} />
       )}
       {values.length > 0 ? (
         <ChartCanvas

@@ -1,5 +1,5 @@
 import { useId, useMemo, useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
+import { AnnouncedAlert, ListAlert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Panel } from '../../../components/ui/panel';
@@ -29,19 +29,14 @@ export function TestPlanPanel({ roundup, canEdit }: TestPlanPanelProps) {
   return (
     <div className="space-y-5">
       {roundup.planWarnings.length > 0 && (
-        <Alert tone="warning" title="Worth a second look">
-          <ul className="list-disc space-y-0.5 pl-4">
-            {roundup.planWarnings.map((warning) => (
-              <li key={warning}>{warning}</li>
-            ))}
-          </ul>
-        </Alert>
+        <ListAlert
+          tone="warning"
+          title="Worth a second look"
+          items={roundup.planWarnings}
+          listClassName="list-disc space-y-0.5 pl-4"
+        />
       )}
-      {saved && (
-        <Alert tone="success" announce>
-          {saved}
-        </Alert>
-      )}
+      <AnnouncedAlert tone="success" message={saved} />
       {editing ? (
         <TestPlanEditor
           roundup={roundup}
@@ -153,11 +148,7 @@ function TestPlanEditor({ roundup, onDone, onCancel }: TestPlanEditorProps) {
   return (
     <Panel title="Change the test plan">
       <div className="space-y-6">
-        {error && (
-          <Alert tone="danger" title="The test plan was not saved" announce>
-            {error}
-          </Alert>
-        )}
+        <AnnouncedAlert tone="danger" title="The test plan was not saved" message={error} />
         <BenchProfilePicker
           id={profileFieldId}
           profiles={allProfiles}

@@ -1,5 +1,5 @@
 import { useCallback, useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
+import { Alert, AnnouncedAlert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { roleLabels } from '../../../../shared/schemas/common';
@@ -87,22 +87,14 @@ export function UsersAdmin({ currentUserId, onUserSaved }: UsersAdminProps) {
           </Button>
         }
       />
-      {notice && (
-        <Alert tone="success" announce className="mb-4">
-          {notice}
-        </Alert>
-      )}
+      <AnnouncedAlert tone="success" message={notice} className="mb-4" />
       {invited?.invitation && (
         <Alert tone="success" announce className="mb-4">
           Invitation sent to {invited.displayName} at {invited.email}. The link works once, until{' '}
           <DateTime value={invited.invitation.expiresAt} />; any earlier link no longer works.
         </Alert>
       )}
-      {failure && (
-        <Alert tone="danger" announce className="mb-4">
-          {failure}
-        </Alert>
-      )}
+      <AnnouncedAlert tone="danger" message={failure} className="mb-4" />
       <UsersTable
         users={users}
         currentUserId={currentUserId}

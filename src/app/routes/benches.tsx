@@ -4,7 +4,7 @@ import { bookingsQueryOptions, useBookings } from '../../features/bench-booking/
 import { BenchCautions } from '../../features/bench-booking/components/bench-cautions';
 import { BookingCalendar } from '../../features/bench-booking/components/booking-calendar';
 import { weekFromParams } from '../../features/bench-booking/components/booking-time';
-import { benchesQueryOptions, useBenches } from '../../features/benches/api/get-benches';
+import { benchesQueryOptions } from '../../features/benches/api/get-benches';
 import { BenchesOverview } from '../../features/benches/components/benches-overview';
 import { myBenchQueryOptions, useMyBench } from '../../features/my-bench/api/get-my-bench';
 import { benchProfilesQueryOptions, useBenchProfiles } from '../../features/roundups/api/bench-profiles';
@@ -60,7 +60,6 @@ function Benches({
   const openedAt = useOpenedAt();
   const [params] = useSearchParams();
   const { from, to } = weekFromParams(params, openedAt);
-  const benches = useBenches();
   const bookings = useBookings({ from, to });
   return (
     <BenchesOverview
@@ -71,13 +70,7 @@ function Benches({
       openedAt={openedAt}
       caution={<BenchCautions className="mb-5" />}
     >
-      <BookingCalendar
-        benches={benches}
-        bookings={bookings}
-        currentUserId={userId}
-        bookableCells={bookableCells}
-        openedAt={openedAt}
-      />
+      <BookingCalendar bookings={bookings} currentUserId={userId} bookableCells={bookableCells} openedAt={openedAt} />
     </BenchesOverview>
   );
 }

@@ -8,34 +8,31 @@ import { formatDayHeading, formatLongDay, formatShortDate, formatSlot } from '..
 import { BookingDetails, CancelBookingButton, CancelBookingDialog } from './booking-details';
 import { addDays, dateParam, dayShare, formatDuration, overlapsDay } from './booking-time';
 
-export interface BookingAgendaProps {
+/** What the address and the moment the page opened say about the calendar on screen. */
+export interface CalendarView {
   weekStart: Date;
   /** Today's local date as YYYY-MM-DD, to mark it. */
   today: string;
-  benches: readonly Bench[];
-  bookings: readonly Booking[];
   /** Null shows every bench. */
   benchId: number | null;
-  currentUserId: number;
   /** A link to another week, keeping the other parts of the address. */
   weekHref: (weekStart: Date) => string;
   zoneLabel: string;
+}
+
+export interface BookingAgendaProps {
+  view: CalendarView;
+  benches: readonly Bench[];
+  bookings: readonly Booking[];
+  currentUserId: number;
 }
 
 /**
  * The week as a list of days. Each day has a strip per bench (a 24-hour rule with the booked spans, for the eye)
  * and the bookings written out (for everyone, screen readers included).
  */
-export function BookingAgenda({
-  weekStart,
-  today,
-  benches,
-  bookings,
-  benchId,
-  currentUserId,
-  weekHref,
-  zoneLabel,
-}: BookingAgendaProps) {
+export function BookingAgenda({ view, benches, bookings, currentUserId }: BookingAgendaProps) {
+  const { weekStart, today, benchId, weekHref, zoneLabel } = view;
   const [cancelling, setCancelling] = useState<Booking | null>(null);
   const shownBenches = benches.filter((bench) => (benchId === null ? bench.active : bench.id === benchId));
   const shown = bookings.filter((booking) => benchId === null || booking.bench.id === benchId);

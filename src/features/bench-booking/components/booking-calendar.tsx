@@ -4,13 +4,13 @@ import { Panel } from '../../../components/ui/panel';
 import { Select } from '../../../components/ui/select';
 import type { Bench, Booking } from '../../../../shared/schemas/benches';
 import type { QueueItem } from '../../../../shared/schemas/matrix';
-import { BookingAgenda } from './booking-agenda';
+import { BookingAgenda, type CalendarView } from './booking-agenda';
 import { BookingForm } from './booking-form';
 import { dateParam, startOfWeek, weekFromParams, zoneLabel } from './booking-time';
 import { formatDayHeading } from '../../../lib/format-time';
+import { useBenches } from '../../benches/api/get-benches';
 
 export interface BookingCalendarProps {
-  benches: readonly Bench[];
   /** This week's bookings (the page loads them for the week in the address). */
   bookings: readonly Booking[];
   currentUserId: number;
@@ -20,23 +20,32 @@ export interface BookingCalendarProps {
   openedAt: number;
 }
 
-/** The week's bookings on every bench (or one, ?bench=), and for testers the booking form beside them. */
-export function BookingCalendar({ benches, bookings, currentUserId, bookableCells, openedAt }: BookingCalendarProps) {
-  const [params, setParams] = useSearchParams();
-  const [lastBooking, setLastBooking] = useState<Booking | null>(null);
-  const { weekStart } = weekFromParams(params, openedAt);
+/** The week and bench the address asks for (?week=, ?bench=), seen from the moment the page opened. */
+function useCalendarView(benches: readonly Bench[], openedAt: number): CalendarView {
+  const [params] = useSearchParams();
   const requestedBench = Number(params.get('bench'));
-  const benchId = benches.some((bench) => bench.id === requestedBench) ? requestedBench : null;
-  const zone = zoneLabel(openedAt);
-  const today = dateParam(new Date(openedAt));
+  return {
+    weekStart: weekFromParams(params, openedAt).weekStart,
+    today: dateParam(new Date(openedAt)),
+    benchId: benches.some((bench) => bench.id === requestedBench) ? requestedBench : null,
+    weekHref: (date: Date) => {
+      const next = new URLSearchParams(params);
+      next.set('week', dateParam(startOfWeek(date)));
+      return `?${next}`;
+    },
+    zoneLabel: zoneLabel(openedAt),
+  };
+}
+
+/** The week's bookings on every bench (or one, ?bench=), and for testers the booking form beside them. */
+export function BookingCalendar({ bookings, currentUserId, bookableCells, openedAt }: BookingCalendarProps) {
+  const benches = useBenches();
+  const [, setParams] = useSearchParams();
+  const [lastBooking, setLastBooking] = useState<Booking | null>(null);
+  const view = useCalendarView(benches, openedAt);
+  const { weekStart, benchId, weekHref } = view;
   const nextHour = new Date(openedAt);
   nextHour.setHours(nextHour.getHours() + 1, 0, 0, 0);
-
-  const weekHref = (date: Date) => {
-    const next = new URLSearchParams(params);
-    next.set('week', dateParam(startOfWeek(date)));
-    return `?${next}`;
-  };
   const lastBookingWeek = lastBooking ? dateParam(startOfWeek(new Date(lastBooking.startsAt))) : null;
 
   return (
@@ -85,16 +94,7 @@ export function BookingCalendar({ benches, bookings, currentUserId, bookableCell
             }
           />
         </div>
-        <BookingAgenda
-          weekStart={weekStart}
-          today={today}
-          benches={benches}
-          bookings={bookings}
-          benchId={benchId}
-          currentUserId={currentUserId}
-          weekHref={weekHref}
-          zoneLabel={zone}
-        />
+        <BookingAgenda view={view} benches={benches} bookings={bookings} currentUserId={currentUserId} />
       </div>
     </div>
   );

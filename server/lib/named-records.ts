@@ -8,7 +8,7 @@ import type {
   QueryDeepPartialEntity,
 } from 'typeorm';
 import { conflict, notFound } from '../errors';
-import { recordAudit } from '../services/audit.service';
+import { recordAction } from '../services/audit.service';
 import { archivedWhere, refusingDuplicates } from './database-errors';
 import { fieldChanges, type FieldChanges } from './field-changes';
 import type { CurrentUser } from '../../shared/schemas/auth';
@@ -59,13 +59,7 @@ export class NamedRecords<E extends ObjectLiteral & { id: number }> {
           await check?.(manager);
           const { identifiers } = await manager.getRepository(this.entity).insert(row);
           const id = Number(identifiers[0].id);
-          await recordAudit(manager, {
-            actorId: actor.id,
-            action: `${this.subject}.created`,
-            subjectType: this.subject,
-            subjectId: id,
-            details,
-          });
+          await recordAction(manager, actor, `${this.subject}.created`, [this.subject, id], details);
           return read(id, manager);
         }),
       () => this.nameTaken(),
@@ -94,13 +88,7 @@ export class NamedRecords<E extends ObjectLiteral & { id: number }> {
           const { patch, changes, afterChange } = await edit(current, manager);
           if (Object.keys(patch).length > 0) {
             await repo.update({ id } as FindOptionsWhere<E>, patch);
-            await recordAudit(manager, {
-              actorId: actor.id,
-              action: `${this.subject}.updated`,
-              subjectType: this.subject,
-              subjectId: id,
-              details: changes,
-            });
+            await recordAction(manager, actor, `${this.subject}.updated`, [this.subject, id], changes);
             await afterChange?.(manager);
           }
           return read(id, manager);

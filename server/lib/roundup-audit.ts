@@ -1,6 +1,6 @@
 import { In, type EntityManager, type FindOptionsWhere } from 'typeorm';
 import { RoundupEntity } from '../entities/roundup.entity';
-import { recordAudit } from '../services/audit.service';
+import { recordAction } from '../services/audit.service';
 import { planEditableStates } from '../../shared/domain/planning/roundup-states';
 import type { CurrentUser } from '../../shared/schemas/auth';
 
@@ -16,7 +16,7 @@ export function recordPlanChange(
   action: string,
   details: Record<string, unknown>,
 ): Promise<void> {
-  return recordAudit(manager, { actorId: actor.id, action, subjectType: 'roundup', subjectId: roundupId, details });
+  return recordAction(manager, actor, action, ['roundup', roundupId], details);
 }
 
 /**

@@ -4,7 +4,7 @@ import { RoundupEntity } from '../entities/roundup.entity';
 import { findRoundup, lockRoundup } from '../lib/roundup-access';
 import { buildPublishedRoundup } from '../public-site/published-roundup';
 import { defaultOutletName, loadReaderSiteSettings } from '../public-site/published-roundup-source';
-import { recordAudit } from '../services/audit.service';
+import { recordAction } from '../services/audit.service';
 import type { PublishingService } from '../services/publishing.service';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type { OpenDataSettings, OpenDataSettingsRequest } from '../../shared/schemas/publishing';
@@ -53,17 +53,11 @@ export class OpenDataSettingsService {
           openDataLicence: input.licence,
         });
       }
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'roundup.open_data_changed',
-        subjectType: 'roundup',
-        subjectId: roundupId,
-        details: {
-          rawFilesAllowed: input.rawFilesAllowed,
-          previousRawFilesAllowed: roundup.openDataRawFiles === true,
-          licence: input.licence,
-          previousLicence: current?.openDataLicence ?? null,
-        },
+      await recordAction(manager, actor, 'roundup.open_data_changed', ['roundup', roundupId], {
+        rawFilesAllowed: input.rawFilesAllowed,
+        previousRawFilesAllowed: roundup.openDataRawFiles === true,
+        licence: input.licence,
+        previousLicence: current?.openDataLicence ?? null,
       });
     });
     // Published pages show the open data as it is now set.

@@ -12,7 +12,7 @@ import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configu
 import { RoundupEntity } from '../entities/roundup.entity';
 import { SampleEntity } from '../entities/sample.entity';
 import type { UserEntity } from '../entities/user.entity';
-import { recordAudit } from '../services/audit.service';
+import { recordAction } from '../services/audit.service';
 import { productColumnsFromInput } from '../mappers/product-fields';
 import { calendarDateIn } from '../../shared/domain/planning/loan-overdue';
 import type { CellState } from '../../shared/domain/planning/matrix-cell-states';
@@ -363,7 +363,7 @@ async function createRoundup(manager: EntityManager, staff: PlanningStaff, seed:
   ];
   if (seed.state === 'writing') audits.push(['roundup.state_changed', { from: 'on-the-bench', to: 'writing' }]);
   for (const [action, details] of audits) {
-    await recordAudit(manager, { actorId: staff.editor.id, action, subjectType: 'roundup', subjectId: id, details });
+    await recordAction(manager, staff.editor, action, ['roundup', id], details);
   }
   return { id, timeZone: OUTLET_ZONE };
 }
@@ -381,12 +381,11 @@ async function addEntry(
     .getRepository(RoundupEntryEntity)
     .insert({ roundupId: roundup.id, productId, kind, referenceRoundupId, position, addedBy: staff.editor.id });
   const entryId = Number(identifiers[0].id);
-  await recordAudit(manager, {
-    actorId: staff.editor.id,
-    action: 'roundup.entry_added',
-    subjectType: 'roundup',
-    subjectId: roundup.id,
-    details: { entryId, productId, kind, referenceRoundupId },
+  await recordAction(manager, staff.editor, 'roundup.entry_added', ['roundup', roundup.id], {
+    entryId,
+    productId,
+    kind,
+    referenceRoundupId,
   });
   return entryId;
 }

@@ -6,7 +6,7 @@ import { hashPassword, verifyPassword } from '../auth/passwords';
 import type { PasswordAttempt } from '../auth/password-guesses';
 import { publicSessionId, type SessionStore } from '../auth/session-store';
 import { AppError } from '../errors';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import type { ChangePasswordRequest, CurrentUser, SessionInfo, SignInRequest } from '../../shared/schemas/auth';
 
 const wrongCredentials = () =>
@@ -48,13 +48,7 @@ export class AuthService {
     const session = await this.sessions.createSession(user.id, { ...client, createdAt: new Date() });
     await this.dataSource.transaction(async (manager) => {
       await manager.getRepository(UserEntity).update({ id: user.id }, { lastSignInAt: new Date() });
-      await recordAudit(manager, {
-        actorId: user.id,
-        action: 'session.signed_in',
-        subjectType: 'user',
-        subjectId: user.id,
-        details: { ip: client.ipAddress },
-      });
+      await recordAction(manager, user, 'session.signed_in', ['user', user.id], { ip: client.ipAddress });
     });
     const current: CurrentUser = { id: user.id, email: user.email, displayName: user.displayName, role: user.role };
     return { session, user: current };
@@ -108,12 +102,7 @@ export class AuthService {
     await this.dataSource.transaction(async (manager) => {
       await manager.getRepository(UserEntity).update({ id: userId }, { passwordHash });
       await manager.getRepository(SessionEntity).delete({ userId, id: Not(currentSessionId) });
-      await recordAudit(manager, {
-        actorId: userId,
-        action: 'user.password_changed',
-        subjectType: 'user',
-        subjectId: userId,
-      });
+      await recordAction(manager, { id: userId }, 'user.password_changed', ['user', userId]);
     });
   }
 }

@@ -6,7 +6,7 @@ import { BenchEntity } from '../entities/bench.entity';
 import { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
 import { AppError, conflict, forbidden, invalid, notFound } from '../errors';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import { NamedRecords } from '../lib/named-records';
 import type { FieldChanges } from '../lib/field-changes';
 import { loadPeople, personOrNull } from '../mappers/people';
@@ -323,18 +323,12 @@ export class BenchesService {
       await manager
         .getRepository(BenchBookingCellEntity)
         .insert(input.cellIds.map((cellId) => ({ bookingId, cellId })));
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'bench.booked',
-        subjectType: 'bench',
-        subjectId: benchId,
-        details: {
-          bookingId,
-          startsAt: startsAt.toISOString(),
-          endsAt: endsAt.toISOString(),
-          cellIds: input.cellIds,
-          ...(overrideReason ? { setUpDifferences: differences, overrideReason } : {}),
-        },
+      await recordAction(manager, actor, 'bench.booked', ['bench', benchId], {
+        bookingId,
+        startsAt: startsAt.toISOString(),
+        endsAt: endsAt.toISOString(),
+        cellIds: input.cellIds,
+        ...(overrideReason ? { setUpDifferences: differences, overrideReason } : {}),
       });
       const booking = await manager.getRepository(BenchBookingEntity).findOneByOrFail({ id: bookingId });
       return (await this.toBookingDtos(manager, [booking], actor))[0];
@@ -451,13 +445,7 @@ export class BenchesService {
       await this.lockBench(manager, benchId);
       const { identifiers } = await manager.getRepository(BenchInstrumentEntity).insert({ ...input, benchId });
       const id = Number(identifiers[0].id);
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'bench.instrument_added',
-        subjectType: 'bench',
-        subjectId: benchId,
-        details: { instrumentId: id, ...input },
-      });
+      await recordAction(manager, actor, 'bench.instrument_added', ['bench', benchId], { instrumentId: id, ...input });
       const saved = await manager.getRepository(BenchInstrumentEntity).findOneByOrFail({ id });
       return toInstrumentDto(saved, new Date().toISOString().slice(0, 10));
     });
@@ -478,12 +466,9 @@ export class BenchesService {
       const changes = Object.fromEntries(Object.entries(input).filter(([, value]) => value !== undefined));
       if (Object.keys(changes).length > 0) {
         await repo.update({ id: instrumentId }, changes);
-        await recordAudit(manager, {
-          actorId: actor.id,
-          action: 'bench.instrument_updated',
-          subjectType: 'bench',
-          subjectId: benchId,
-          details: { instrumentId, ...changes },
+        await recordAction(manager, actor, 'bench.instrument_updated', ['bench', benchId], {
+          instrumentId,
+          ...changes,
         });
       }
       return toInstrumentDto(await repo.findOneByOrFail({ id: instrumentId }), new Date().toISOString().slice(0, 10));
@@ -504,12 +489,9 @@ export class BenchesService {
         .getRepository(BenchMaintenanceEntryEntity)
         .insert({ benchId, doneOn: input.doneOn, description: input.description, recordedBy: actor.id });
       const id = Number(identifiers[0].id);
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'bench.maintenance_logged',
-        subjectType: 'bench',
-        subjectId: benchId,
-        details: { entryId: id, doneOn: input.doneOn },
+      await recordAction(manager, actor, 'bench.maintenance_logged', ['bench', benchId], {
+        entryId: id,
+        doneOn: input.doneOn,
       });
       const entry = await manager.getRepository(BenchMaintenanceEntryEntity).findOneByOrFail({ id });
       return {
@@ -539,17 +521,11 @@ export class BenchesService {
       if (actor.role !== 'editor' && booking.testerId !== actor.id)
         throw forbidden('You can cancel only your own bookings.');
       await repo.delete({ id: bookingId });
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'bench.booking_cancelled',
-        subjectType: 'bench',
-        subjectId: benchId,
-        details: {
-          bookingId,
-          testerId: booking.testerId,
-          startsAt: booking.startsAt.toISOString(),
-          endsAt: booking.endsAt.toISOString(),
-        },
+      await recordAction(manager, actor, 'bench.booking_cancelled', ['bench', benchId], {
+        bookingId,
+        testerId: booking.testerId,
+        startsAt: booking.startsAt.toISOString(),
+        endsAt: booking.endsAt.toISOString(),
       });
     });
   }

@@ -5,7 +5,7 @@ import { CalendarFeedEntity } from '../entities/calendar-feed.entity';
 import { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { UserEntity } from '../entities/user.entity';
 import { notFound } from '../errors';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import type { BenchesService } from './benches.service';
 import { queueItems } from '../mappers/queue-item';
 import { formatCalendar, type CalendarEvent } from '../../shared/domain/planning/icalendar';
@@ -54,12 +54,7 @@ export class CalendarFeedService {
       const had = await repo.existsBy({ userId: user.id });
       await repo.delete({ userId: user.id });
       await repo.insert({ userId: user.id, tokenHash: hashToken(token), createdAt });
-      await recordAudit(manager, {
-        actorId: user.id,
-        action: had ? 'calendar_feed.reset' : 'calendar_feed.created',
-        subjectType: 'user',
-        subjectId: user.id,
-      });
+      await recordAction(manager, user, had ? 'calendar_feed.reset' : 'calendar_feed.created', ['user', user.id]);
     });
     return { path: `/api/calendar/${token}.ics`, createdAt: createdAt.toISOString() };
   }
@@ -68,12 +63,7 @@ export class CalendarFeedService {
     await this.dataSource.transaction(async (manager) => {
       const { affected } = await manager.getRepository(CalendarFeedEntity).delete({ userId: user.id });
       if (affected) {
-        await recordAudit(manager, {
-          actorId: user.id,
-          action: 'calendar_feed.disabled',
-          subjectType: 'user',
-          subjectId: user.id,
-        });
+        await recordAction(manager, user, 'calendar_feed.disabled', ['user', user.id]);
       }
     });
   }

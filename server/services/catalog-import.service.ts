@@ -3,7 +3,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { ProductEntity } from '../entities/product.entity';
 import { ProductPriceEntity } from '../entities/product-price.entity';
 import { AppError, conflict } from '../errors';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import { parseCatalogCsv } from '../lib/catalog-csv';
 import { changedProductFields, productColumnsFromInput, productInputFromEntity } from '../mappers/product-fields';
 import { isDuplicateKey } from '../lib/database-errors';
@@ -86,12 +86,11 @@ export class CatalogImportService {
           }
           result.productIds.push(productId as number);
         }
-        await recordAudit(manager, {
-          actorId: actor.id,
-          action: 'catalog.imported',
-          subjectType: 'catalog',
-          subjectId: null,
-          details: { checksum, created: result.created, updated: result.updated, pricesAdded: result.pricesAdded },
+        await recordAction(manager, actor, 'catalog.imported', ['catalog', null], {
+          checksum,
+          created: result.created,
+          updated: result.updated,
+          pricesAdded: result.pricesAdded,
         });
         return result;
       });

@@ -4,7 +4,7 @@ import { ProductPriceEntity } from '../entities/product-price.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
 import { AppError, conflict, notFound } from '../errors';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import { likeContains } from '../mappers/dto-values';
 import { loadPeople } from '../mappers/people';
 import {
@@ -148,12 +148,9 @@ export class CatalogService {
         const repo = manager.getRepository(ProductEntity);
         const { identifiers } = await repo.insert({ ...productColumnsFromInput(input), createdBy: actor.id });
         const id = Number(identifiers[0].id);
-        await recordAudit(manager, {
-          actorId: actor.id,
-          action: 'product.created',
-          subjectType: 'product',
-          subjectId: id,
-          details: { maker: input.maker, model: input.model },
+        await recordAction(manager, actor, 'product.created', ['product', id], {
+          maker: input.maker,
+          model: input.model,
         });
         return this.get(id, manager);
       });
@@ -186,18 +183,13 @@ export class CatalogService {
           details.archived = archived;
         }
         if (changes.length > 0 || details.archived !== undefined) {
-          await recordAudit(manager, {
-            actorId: actor.id,
-            action:
-              details.archived === true
-                ? 'product.archived'
-                : details.archived === false
-                  ? 'product.restored'
-                  : 'product.updated',
-            subjectType: 'product',
-            subjectId: id,
-            details,
-          });
+          const action =
+            details.archived === true
+              ? 'product.archived'
+              : details.archived === false
+                ? 'product.restored'
+                : 'product.updated';
+          await recordAction(manager, actor, action, ['product', id], details);
         }
         return this.get(id, manager);
       });
@@ -222,12 +214,9 @@ export class CatalogService {
         );
       }
       await manager.getRepository(ProductEntity).delete({ id });
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'product.deleted',
-        subjectType: 'product',
-        subjectId: id,
-        details: { maker: product.maker, model: product.model },
+      await recordAction(manager, actor, 'product.deleted', ['product', id], {
+        maker: product.maker,
+        model: product.model,
       });
     });
   }
@@ -259,18 +248,12 @@ export class CatalogService {
         recordedBy: actor.id,
       });
       const price = await repo.findOneByOrFail({ id: Number(identifiers[0].id) });
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'product.price_added',
-        subjectType: 'product',
-        subjectId: productId,
-        details: {
-          priceId: price.id,
-          region: price.region,
-          currency: price.currency,
-          amountMinor: price.amountMinor,
-          observedOn: price.observedOn,
-        },
+      await recordAction(manager, actor, 'product.price_added', ['product', productId], {
+        priceId: price.id,
+        region: price.region,
+        currency: price.currency,
+        amountMinor: price.amountMinor,
+        observedOn: price.observedOn,
       });
       return toPriceDto(price, await loadPeople(manager, [actor.id]));
     });
@@ -283,19 +266,13 @@ export class CatalogService {
       const price = await repo.findOneBy({ id: priceId, productId });
       if (!price) throw notFound('That price');
       await repo.delete({ id: priceId });
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'product.price_removed',
-        subjectType: 'product',
-        subjectId: productId,
-        details: {
-          priceId,
-          region: price.region,
-          currency: price.currency,
-          amountMinor: price.amountMinor,
-          observedOn: price.observedOn,
-          source: price.source,
-        },
+      await recordAction(manager, actor, 'product.price_removed', ['product', productId], {
+        priceId,
+        region: price.region,
+        currency: price.currency,
+        amountMinor: price.amountMinor,
+        observedOn: price.observedOn,
+        source: price.source,
       });
     });
   }

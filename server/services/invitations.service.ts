@@ -7,7 +7,7 @@ import type { PasswordAttempt } from '../auth/password-guesses';
 import { AppError, conflict, notFound } from '../errors';
 import { enqueueMail } from '../mail/outbox';
 import { invitationMail } from '../mail/staff-invitation';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import { INVITATION_HOURS, type AcceptInvitationRequest, type Invitation } from '../../shared/schemas/users';
 import type { CurrentUser } from '../../shared/schemas/auth';
 
@@ -104,13 +104,7 @@ export class InvitationsService {
         );
       }
       await this.issue(manager, user, actor);
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'user.invitation_sent',
-        subjectType: 'user',
-        subjectId: user.id,
-        details: { email: user.email, again: true },
-      });
+      await recordAction(manager, actor, 'user.invitation_sent', ['user', user.id], { email: user.email, again: true });
     });
   }
 
@@ -156,12 +150,7 @@ export class InvitationsService {
       const invited = user as UserEntity;
       await repo.update({ id: invited.id }, { passwordHash, inviteAcceptedAt: now, inviteExpiresAt: null });
       await manager.getRepository(SessionEntity).delete({ userId: invited.id });
-      await recordAudit(manager, {
-        actorId: invited.id,
-        action: 'user.invitation_accepted',
-        subjectType: 'user',
-        subjectId: invited.id,
-      });
+      await recordAction(manager, invited, 'user.invitation_accepted', ['user', invited.id]);
       return repo.findOneByOrFail({ id: invited.id });
     });
   }

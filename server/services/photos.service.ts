@@ -6,7 +6,7 @@ import { AppError, invalid, notFound } from '../errors';
 import { processPhoto } from '../images/photo-derivatives';
 import { loadPeople, personOrNull } from '../mappers/people';
 import type { FileStore } from '../storage/file-store';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type {
   ParsedPhotoUploadFields,
@@ -87,12 +87,11 @@ export class PhotosService {
             uploadedBy: actor.id,
           }),
         );
-        await recordAudit(manager, {
-          actorId: actor.id,
-          action: 'photo.added',
-          subjectType: 'roundup',
-          subjectId: roundupId,
-          details: { photoId: photo.id, entryId, kind: fields.kind, sizes: derivatives.length },
+        await recordAction(manager, actor, 'photo.added', ['roundup', roundupId], {
+          photoId: photo.id,
+          entryId,
+          kind: fields.kind,
+          sizes: derivatives.length,
         });
         return photo;
       });
@@ -112,13 +111,7 @@ export class PhotosService {
       if (fields.caption !== undefined) photo.caption = fields.caption;
       if (fields.altText !== undefined) photo.altText = fields.altText;
       await repo.save(photo);
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'photo.changed',
-        subjectType: 'roundup',
-        subjectId: photo.roundupId,
-        details: { photoId, ...fields },
-      });
+      await recordAction(manager, actor, 'photo.changed', ['roundup', photo.roundupId], { photoId, ...fields });
       return photo;
     });
     return (await this.toDtos([saved]))[0];
@@ -146,12 +139,9 @@ export class PhotosService {
         });
       }
       for (const [index, id] of input.photoIds.entries()) await repo.update({ id }, { position: index + 1 });
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'photo.reordered',
-        subjectType: 'roundup',
-        subjectId: roundupId,
-        details: { entryId, photoIds: input.photoIds },
+      await recordAction(manager, actor, 'photo.reordered', ['roundup', roundupId], {
+        entryId,
+        photoIds: input.photoIds,
       });
       return repo.find({ where: { entryId }, order: { position: 'ASC' } });
     });
@@ -163,12 +153,9 @@ export class PhotosService {
       const row = await manager.getRepository(PhotoEntity).findOneBy({ id: photoId });
       if (!row) throw notFound('That photo');
       await manager.getRepository(PhotoEntity).delete({ id: photoId });
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'photo.removed',
-        subjectType: 'roundup',
-        subjectId: row.roundupId,
-        details: { photoId, entryId: row.entryId },
+      await recordAction(manager, actor, 'photo.removed', ['roundup', row.roundupId], {
+        photoId,
+        entryId: row.entryId,
       });
       return row;
     });

@@ -7,7 +7,7 @@ import { systemClock, type Clock } from '../jobs/clock';
 import { cancelJob, enqueueJob } from '../jobs/enqueue';
 import { RetryJobLater } from '../jobs/job-registry';
 import { lockRoundup, findRoundup } from '../lib/roundup-access';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import { loadPeople, personOrNull } from '../mappers/people';
 import { storeRenderedPages, type PublishedPageCache } from '../publishing/published-page-cache';
 import type { FrozenRoundup, PublicSiteRenderer, PublishedNote } from '../publishing/public-site-renderer';
@@ -229,19 +229,14 @@ export class PublishingService {
         'replace',
       );
       const rescheduled = roundup.state === 'scheduled';
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: rescheduled ? 'roundup.rescheduled' : 'roundup.scheduled',
-        subjectType: 'roundup',
-        subjectId: roundupId,
-        details: {
-          publishAt: zoned.instant.toISOString(),
-          date: input.date,
-          time: input.time,
-          timeZone: input.timeZone,
-          ...(rescheduled && previous ? { previousPublishAt: previous.publishAt.toISOString() } : {}),
-          ...(rescheduled ? {} : { from: roundup.state, to: 'scheduled' }),
-        },
+      const action = rescheduled ? 'roundup.rescheduled' : 'roundup.scheduled';
+      await recordAction(manager, actor, action, ['roundup', roundupId], {
+        publishAt: zoned.instant.toISOString(),
+        date: input.date,
+        time: input.time,
+        timeZone: input.timeZone,
+        ...(rescheduled && previous ? { previousPublishAt: previous.publishAt.toISOString() } : {}),
+        ...(rescheduled ? {} : { from: roundup.state, to: 'scheduled' }),
       });
     });
     return this.status(roundupId);
@@ -263,12 +258,10 @@ export class PublishingService {
       await manager.getRepository(RoundupScheduleEntity).delete({ roundupId });
       await manager.getRepository(RoundupEntity).update({ id: roundupId }, { state: 'in-review', stateChangedAt: now });
       await cancelJob(manager, publishJobKey(roundupId), now);
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'roundup.unscheduled',
-        subjectType: 'roundup',
-        subjectId: roundupId,
-        details: { from: 'scheduled', to: 'in-review', publishAt: schedule?.publishAt.toISOString() ?? null },
+      await recordAction(manager, actor, 'roundup.unscheduled', ['roundup', roundupId], {
+        from: 'scheduled',
+        to: 'in-review',
+        publishAt: schedule?.publishAt.toISOString() ?? null,
       });
     });
     return this.status(roundupId);
@@ -304,17 +297,11 @@ export class PublishingService {
         await manager
           .getRepository(RoundupEntity)
           .update({ id: roundupId }, { state: 'in-review', stateChangedAt: now });
-        await recordAudit(manager, {
-          actorId: null,
-          action: 'roundup.publish_refused',
-          subjectType: 'roundup',
-          subjectId: roundupId,
-          details: {
-            from: 'scheduled',
-            to: 'in-review',
-            publishAt: schedule.publishAt.toISOString(),
-            problems: problems.map((p) => p.message),
-          },
+        await recordAction(manager, null, 'roundup.publish_refused', ['roundup', roundupId], {
+          from: 'scheduled',
+          to: 'in-review',
+          publishAt: schedule.publishAt.toISOString(),
+          problems: problems.map((p) => p.message),
         });
         return 'refused' as const;
       }
@@ -329,12 +316,11 @@ export class PublishingService {
         now,
         nextState: 'live',
       });
-      await recordAudit(manager, {
-        actorId: null,
-        action: 'roundup.published',
-        subjectType: 'roundup',
-        subjectId: roundupId,
-        details: { from: 'scheduled', to: 'live', publishAt: schedule.publishAt.toISOString(), at: now.toISOString() },
+      await recordAction(manager, null, 'roundup.published', ['roundup', roundupId], {
+        from: 'scheduled',
+        to: 'live',
+        publishAt: schedule.publishAt.toISOString(),
+        at: now.toISOString(),
       });
       return 'published' as const;
     });
@@ -386,12 +372,11 @@ export class PublishingService {
         nextState: 'updated',
         path,
       });
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: input.kind === 'correction' ? 'roundup.correction_published' : 'roundup.update_published',
-        subjectType: 'roundup',
-        subjectId: roundupId,
-        details: { version, note: input.note, ...(roundup.state === 'live' ? { from: 'live', to: 'updated' } : {}) },
+      const action = input.kind === 'correction' ? 'roundup.correction_published' : 'roundup.update_published';
+      await recordAction(manager, actor, action, ['roundup', roundupId], {
+        version,
+        note: input.note,
+        ...(roundup.state === 'live' ? { from: 'live', to: 'updated' } : {}),
       });
       return this.status(roundupId, manager);
     });
@@ -405,12 +390,8 @@ export class PublishingService {
     await findRoundup(manager, roundupId);
     const expiresAt = Math.floor(this.clock.now().getTime() / 1000) + hours * 3600;
     const token = createPreviewToken(await this.previewSecret(), { roundupId, expiresAt });
-    await recordAudit(manager, {
-      actorId: actor.id,
-      action: 'roundup.preview_link_created',
-      subjectType: 'roundup',
-      subjectId: roundupId,
-      details: { expiresAt: new Date(expiresAt * 1000).toISOString() },
+    await recordAction(manager, actor, 'roundup.preview_link_created', ['roundup', roundupId], {
+      expiresAt: new Date(expiresAt * 1000).toISOString(),
     });
     return { path: `/preview/${token}`, expiresAt: new Date(expiresAt * 1000).toISOString() };
   }

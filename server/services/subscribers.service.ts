@@ -10,7 +10,7 @@ import { RoundupEntity } from '../entities/roundup.entity';
 import { AppError, invalid, notFound } from '../errors';
 import { hashConfirmToken, manageToken, newConfirmToken, readManageToken, type LinkSecret } from '../mail/link-secret';
 import { enqueueMail, enqueueRoundupMailing } from '../mail/outbox';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type {
   MailCategory,
@@ -342,13 +342,8 @@ export class SubscribersService {
         await repo.update({ id }, { ...input, position: input.position ?? found.position });
         row = await repo.findOneByOrFail({ id });
       }
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: id === null ? 'mail_category.created' : 'mail_category.updated',
-        subjectType: 'mail_category',
-        subjectId: row.id,
-        details: { name: row.name },
-      });
+      const action = id === null ? 'mail_category.created' : 'mail_category.updated';
+      await recordAction(manager, actor, action, ['mail_category', row.id], { name: row.name });
       return toCategory(row);
     });
   }
@@ -358,13 +353,7 @@ export class SubscribersService {
       const found = await manager.getRepository(MailCategoryEntity).findOneBy({ id });
       if (!found) throw notFound('That subject');
       await manager.getRepository(MailCategoryEntity).delete({ id });
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'mail_category.deleted',
-        subjectType: 'mail_category',
-        subjectId: id,
-        details: { name: found.name },
-      });
+      await recordAction(manager, actor, 'mail_category.deleted', ['mail_category', id], { name: found.name });
     });
   }
 
@@ -405,12 +394,10 @@ export class SubscribersService {
         note,
         actorId: actor.id,
       });
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'roundup.mailing_queued',
-        subjectType: 'roundup',
-        subjectId: roundupId,
-        details: { mailingId, kind, recipients: queued },
+      await recordAction(manager, actor, 'roundup.mailing_queued', ['roundup', roundupId], {
+        mailingId,
+        kind,
+        recipients: queued,
       });
     });
     return this.roundupMailings(roundupId);

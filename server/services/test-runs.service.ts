@@ -19,7 +19,7 @@ import { recordPlanChange } from '../lib/roundup-audit';
 import { sha256InSlices } from '../lib/event-loop-slices';
 import { loadPeople, personOrNull } from '../mappers/people';
 import type { FileStore } from '../storage/file-store';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import { analysedOrThrow, checkLogFileUpload, type LogFileAnalyser, type LogFileUpload } from './log-check.service';
 import { analysisEngineVersion } from '../../shared/domain/analysis/engine-version';
 import { repeatRunStatistics } from '../../shared/domain/analysis/repeat-run-statistics';
@@ -224,12 +224,12 @@ export class TestRunsService {
             .getRepository(BenchProfileEntity)
             .update({ id: context.profile.id }, { logMapping: input.mapping });
         }
-        await recordAudit(manager, {
-          actorId: actor.id,
-          action: 'test-run.created',
-          subjectType: 'test-run',
-          subjectId: run.id,
-          details: { cellId, source: 'logger', sha256, bytes: bytes.length, firmware: input.firmwareVersion },
+        await recordAction(manager, actor, 'test-run.created', ['test-run', run.id], {
+          cellId,
+          source: 'logger',
+          sha256,
+          bytes: bytes.length,
+          firmware: input.firmwareVersion,
         });
         return run.id;
       });
@@ -251,12 +251,11 @@ export class TestRunsService {
       const parameters = { manual: true, options: { rubric: context.rubric, referenceRoomC: 21 } };
       await this.insertAnalysis(manager, actor, run.id, parameters, manualAnalysis(input, context.rubric));
       await this.startCellWithRun(manager, actor, context, run.id);
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'test-run.created',
-        subjectType: 'test-run',
-        subjectId: run.id,
-        details: { cellId, source: 'manual', peakC: input.manualPeakC, ambientC: input.manualAmbientC },
+      await recordAction(manager, actor, 'test-run.created', ['test-run', run.id], {
+        cellId,
+        source: 'manual',
+        peakC: input.manualPeakC,
+        ambientC: input.manualAmbientC,
       });
       return run.id;
     });
@@ -306,12 +305,9 @@ export class TestRunsService {
         if (cell.runOfRecordId === run.id) cell.runOfRecordId = null;
         await manager.getRepository(MatrixCellEntity).save(cell);
       }
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: `test-run.${input.decision}`,
-        subjectType: 'test-run',
-        subjectId: run.id,
-        details: { reason: input.reason ?? null, flags: warnings.map((f) => f.code) },
+      await recordAction(manager, actor, `test-run.${input.decision}`, ['test-run', run.id], {
+        reason: input.reason ?? null,
+        flags: warnings.map((f) => f.code),
       });
       return run.id;
     });
@@ -328,12 +324,8 @@ export class TestRunsService {
         );
       }
       await manager.getRepository(MatrixCellEntity).update({ id: run.matrixCellId }, { runOfRecordId: run.id });
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'test-run.run-of-record',
-        subjectType: 'matrix-cell',
-        subjectId: run.matrixCellId,
-        details: { runId: run.id },
+      await recordAction(manager, actor, 'test-run.run-of-record', ['matrix-cell', run.matrixCellId], {
+        runId: run.id,
       });
       return run.id;
     });
@@ -372,12 +364,9 @@ export class TestRunsService {
           await this.addAnalysisFromStore(manager, actor, run, context, parameters.mapping, parameters.options);
         }
       }
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'roundup.rubric-changed',
-        subjectType: 'roundup',
-        subjectId: roundupId,
-        details: { rubric, runsReanalysed: runs.length },
+      await recordAction(manager, actor, 'roundup.rubric-changed', ['roundup', roundupId], {
+        rubric,
+        runsReanalysed: runs.length,
       });
       return runs.length;
     });

@@ -3,7 +3,7 @@ import { UserEntity } from '../entities/user.entity';
 import { SessionEntity } from '../entities/session.entity';
 import { hashPassword } from '../auth/passwords';
 import { AppError, conflict, notFound } from '../errors';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import { isDuplicateKey } from '../lib/database-errors';
 import type { InvitationsService } from './invitations.service';
 import type { CreateUserRequest, UpdateUserRequest, User } from '../../shared/schemas/users';
@@ -71,16 +71,10 @@ export class UsersService {
           await this.invitations.issue(manager, user, actor);
           user = await repo.findOneByOrFail({ id: user.id });
         }
-        await recordAudit(manager, {
-          actorId: actor.id,
-          action: 'user.created',
-          subjectType: 'user',
-          subjectId: user.id,
-          details: {
-            email: user.email,
-            role: user.role,
-            ...(user.inviteExpiresAt ? { invitedUntil: user.inviteExpiresAt.toISOString() } : {}),
-          },
+        await recordAction(manager, actor, 'user.created', ['user', user.id], {
+          email: user.email,
+          role: user.role,
+          ...(user.inviteExpiresAt ? { invitedUntil: user.inviteExpiresAt.toISOString() } : {}),
         });
         return toUserDto(user);
       });
@@ -122,13 +116,7 @@ export class UsersService {
         if (changes.active || changes.role || changes.password) {
           await manager.getRepository(SessionEntity).delete({ userId: id });
         }
-        await recordAudit(manager, {
-          actorId: actor.id,
-          action: 'user.updated',
-          subjectType: 'user',
-          subjectId: id,
-          details: changes,
-        });
+        await recordAction(manager, actor, 'user.updated', ['user', id], changes);
         return toUserDto(await repo.findOneByOrFail({ id }));
       });
     } catch (error) {

@@ -13,7 +13,7 @@ import { loadWriteUpLiveData, staffPhotoAddress, type PhotoAddress } from '../ed
 import { AppError, forbidden, invalid, notFound } from '../errors';
 import { findRoundup, lockRoundup } from '../lib/roundup-access';
 import { loadPeople, personOrNull } from '../mappers/people';
-import { recordAudit } from './audit.service';
+import { recordAction } from './audit.service';
 import type { TestRunsService } from './test-runs.service';
 import { may, writeUpApprovers, writeUpWriters } from '../../shared/access/roles';
 import { methodologyDraft } from '../../shared/domain/editorial/methodology-draft';
@@ -248,12 +248,12 @@ export class WriteUpsService {
               .create({ sectionId, parentId: null, authorId: actor.id, body: note }),
           );
       }
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: 'write-up.review-moved',
-        subjectType: 'roundup',
-        subjectId: section.roundupId,
-        details: { sectionId, title: section.title, move, from, to: outcome.to },
+      await recordAction(manager, actor, 'write-up.review-moved', ['roundup', section.roundupId], {
+        sectionId,
+        title: section.title,
+        move,
+        from,
+        to: outcome.to,
       });
     });
     return this.summaryOf(sectionId, actor);
@@ -355,12 +355,11 @@ export class WriteUpsService {
         await repo.update({ id: parentId }, { resolvedAt: null, resolvedBy: null });
       }
       const saved = await repo.save(repo.create({ sectionId, parentId, authorId: actor.id, body: input.body }));
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: parentId ? 'write-up.comment-replied' : 'write-up.comment-added',
-        subjectType: 'roundup',
-        subjectId: section.roundupId,
-        details: { sectionId, commentId: saved.id, parentId },
+      const action = parentId ? 'write-up.comment-replied' : 'write-up.comment-added';
+      await recordAction(manager, actor, action, ['roundup', section.roundupId], {
+        sectionId,
+        commentId: saved.id,
+        parentId,
       });
       return parentId ?? saved.id;
     });
@@ -381,13 +380,8 @@ export class WriteUpsService {
       comment.resolvedAt = resolved ? new Date() : null;
       comment.resolvedBy = resolved ? actor.id : null;
       await repo.save(comment);
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: resolved ? 'write-up.thread-resolved' : 'write-up.thread-reopened',
-        subjectType: 'roundup',
-        subjectId: section.roundupId,
-        details: { sectionId: section.id, commentId },
-      });
+      const action = resolved ? 'write-up.thread-resolved' : 'write-up.thread-reopened';
+      await recordAction(manager, actor, action, ['roundup', section.roundupId], { sectionId: section.id, commentId });
       return section.id;
     });
     return this.threadOf(sectionId, commentId);
@@ -479,13 +473,7 @@ export class WriteUpsService {
         created.push(item.key);
       }
       if (created.length > 0) {
-        await recordAudit(manager, {
-          actorId: actor?.id ?? null,
-          action: 'write-up.sections-created',
-          subjectType: 'roundup',
-          subjectId: roundupId,
-          details: { sections: created },
-        });
+        await recordAction(manager, actor, 'write-up.sections-created', ['roundup', roundupId], { sections: created });
       }
     });
   }
@@ -570,18 +558,13 @@ export class WriteUpsService {
       );
     }
     if (!sameSitting || section.reviewState !== fromState) {
-      await recordAudit(manager, {
-        actorId: actor.id,
-        action: change.kind === 'restore' ? 'write-up.revision-restored' : 'write-up.section-saved',
-        subjectType: 'roundup',
-        subjectId: section.roundupId,
-        details: {
-          sectionId: section.id,
-          title: section.title,
-          version: section.version,
-          ...(change.restoredFromId ? { restoredFromId: change.restoredFromId } : {}),
-          ...(section.reviewState !== fromState ? { reviewState: { from: fromState, to: section.reviewState } } : {}),
-        },
+      const action = change.kind === 'restore' ? 'write-up.revision-restored' : 'write-up.section-saved';
+      await recordAction(manager, actor, action, ['roundup', section.roundupId], {
+        sectionId: section.id,
+        title: section.title,
+        version: section.version,
+        ...(change.restoredFromId ? { restoredFromId: change.restoredFromId } : {}),
+        ...(section.reviewState !== fromState ? { reviewState: { from: fromState, to: section.reviewState } } : {}),
       });
     }
   }

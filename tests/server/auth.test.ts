@@ -1,7 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import request from 'supertest';
-import { client, createTestUser, signedIn, testApp, TEST_HOST, type TestApp } from './support/test-app';
+import { client, createTestUser, signedIn, signIn, testApp, TEST_HOST, type TestApp } from './support/test-app';
 
 describe('signing in and out', () => {
   it('when a tester signs in with the right password, then the session cookie is set and the session names them', async () => {
@@ -26,10 +26,10 @@ describe('signing in and out', () => {
     const app = await testApp();
     const user = await createTestUser('writer');
     const agent = client(app);
-    const first = await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
-    const firstCookie = /benchwire_session=([^;]+)/.exec(String(first.headers['set-cookie']))![1];
-    const second = await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
-    const secondCookie = /benchwire_session=([^;]+)/.exec(String(second.headers['set-cookie']))![1];
+    const { sessionCookie: firstCookie } = await signIn(agent, user);
+    const { sessionCookie: secondCookie } = await signIn(agent, user);
+    expect(firstCookie).toBeDefined();
+    expect(secondCookie).toBeDefined();
     expect(secondCookie).not.toBe(firstCookie);
     const withOld = await request(app).get('/api/auth/session').set('Cookie', `benchwire_session=${firstCookie}`);
     expect(withOld.status).toBe(401);
@@ -43,7 +43,7 @@ describe('signing in and out', () => {
     const agent = client(app);
     const responses = [
       await client(app).post('/api/auth/sign-in').send({ email: user.email, password: 'not-the-password' }),
-      await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password }),
+      (await signIn(agent, user)).response,
       await agent.get('/api/auth/session'),
       await agent.get('/api/account/sessions'),
       await agent.get('/api/users'),
@@ -86,7 +86,7 @@ describe('signing in and out', () => {
   it('when a deactivated user tries to sign in, then they are refused like a wrong password', async () => {
     const app = await testApp();
     const user = await createTestUser('tester', { active: false });
-    const response = await client(app).post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+    const { response } = await signIn(client(app), user);
     expect(response.status).toBe(401);
     expect(response.body.error.code).toBe('invalid_credentials');
   });

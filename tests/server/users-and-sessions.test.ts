@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { AuditEntryEntity } from '../../server/entities/audit-entry.entity';
 import { SessionEntity } from '../../server/entities/session.entity';
-import { client, createTestUser, signedIn, testApp, testDataSource, uniqueEmail } from './support/test-app';
+import { client, createTestUser, signedIn, signIn, testApp, testDataSource, uniqueEmail } from './support/test-app';
 
 describe('staff accounts (admin)', () => {
   it('when an admin creates a writer, then the writer can sign in and the creation is audited', async () => {
@@ -76,9 +76,7 @@ describe('staff accounts (admin)', () => {
     expect((await testerPhone.get('/api/auth/session')).status).toBe(401);
     // And reactivating lets them sign in again.
     await admin.patch(`/api/users/${user.id}`).send({ active: true });
-    expect(
-      (await client(app).post('/api/auth/sign-in').send({ email: user.email, password: user.password })).status,
-    ).toBe(200);
+    expect((await signIn(client(app), user)).response.status).toBe(200);
   });
 
   it('an admin cannot deactivate themselves or drop their own admin role', async () => {
@@ -108,9 +106,7 @@ describe('own password and sessions', () => {
     expect(response.status).toBe(200);
     expect((await laptop.get('/api/auth/session')).status).toBe(200);
     expect((await phone.get('/api/auth/session')).status).toBe(401);
-    expect(
-      (await client(app).post('/api/auth/sign-in').send({ email: user.email, password: user.password })).status,
-    ).toBe(401);
+    expect((await signIn(client(app), user)).response.status).toBe(401);
     expect(
       (await client(app).post('/api/auth/sign-in').send({ email: user.email, password: 'the-new-password-1' })).status,
     ).toBe(200);
@@ -151,8 +147,8 @@ describe('own password and sessions', () => {
     const app = await testApp();
     const user = await createTestUser('editor');
     const laptop = client(app);
-    const signIn = await laptop.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
-    const token = /benchwire_session=([^;]+)/.exec(String(signIn.headers['set-cookie']))![1];
+    const { sessionCookie: token } = await signIn(laptop, user);
+    expect(token).toBeDefined();
     const { agent: phone } = await signedIn(app, user);
     const list = await laptop.get('/api/account/sessions');
     expect(list.text).not.toContain(token);

@@ -1,13 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { signedIn, testApp } from '../support/test-app';
+import { signedIn, signedInTeam, testApp } from '../support/test-app';
 import { roundupWithResults } from './support/editorial-fixtures';
 
 describe('editorial verdicts', () => {
   it('a label that contradicts the runs of record needs a written reason; the evidence is shown beside it', async () => {
-    const app = await testApp();
-    const editor = await signedIn(app, 'editor');
-    const tester = await signedIn(app, 'tester');
-    const writer = await signedIn(app, 'writer');
+    const { editor, tester, writer } = await signedInTeam();
     const { roundupId, products } = await roundupWithResults(editor.agent, tester, [
       [[{ peakC: 74.0 }]],
       [[{ peakC: 69.0, throttled: true }]],

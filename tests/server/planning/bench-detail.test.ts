@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { signedIn, testApp } from '../support/test-app';
+import { signedInTeam } from '../support/test-app';
 import { createBenchProfile, dayFromToday, tag } from './support/planning-fixtures';
 
 /** A calendar date `months` calendar months before today (day clamped to 28 so every month has it). */
@@ -11,10 +11,7 @@ function monthsAgo(months: number): string {
 
 describe('bench detail', () => {
   it('shows the set-up, probes and logger with their next calibration, and a maintenance log', async () => {
-    const app = await testApp();
-    const editor = await signedIn(app, 'editor');
-    const tester = await signedIn(app, 'tester');
-    const writer = await signedIn(app, 'writer');
+    const { editor, tester, writer } = await signedInTeam();
     const benchProfileId = await createBenchProfile(editor.agent);
     const bench = await editor.agent.post('/api/benches').send({ name: `Bench ${tag()}`, benchProfileId });
     expect(bench.status, bench.text).toBe(201);

@@ -108,11 +108,17 @@ export function asBytes(call: request.Test) {
   });
 }
 
+/** The client signs in with the user's own e-mail and password: the response, and the session cookie's value if set. */
+export async function signIn(agent: Client, user: TestUser) {
+  const response = await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+  return { response, sessionCookie: /benchwire_session=([^;]+)/.exec(String(response.headers['set-cookie']))?.[1] };
+}
+
 /** A client signed in as a new (or given) user of the role. */
 export async function signedIn(app: TestApp, roleOrUser: Role | TestUser) {
   const user = typeof roleOrUser === 'string' ? await createTestUser(roleOrUser) : roleOrUser;
   const agent = client(app);
-  const response = await agent.post('/api/auth/sign-in').send({ email: user.email, password: user.password });
+  const { response } = await signIn(agent, user);
   if (response.status !== 200) throw new Error(`sign-in failed for ${user.email}: ${response.status} ${response.text}`);
   return { agent, user };
 }

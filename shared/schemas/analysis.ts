@@ -323,6 +323,12 @@ export const verdictStatuses = ['final', 'provisional', 'withheld'] as const;
 export const verdictStatusSchema = z.enum(verdictStatuses);
 export type VerdictStatus = z.infer<typeof verdictStatusSchema>;
 
+/** A stored verdict as lists show it: its status, and its label in words with the status; null before any verdict. */
+export const verdictReadingFields = {
+  verdictStatus: verdictStatusSchema.nullable(),
+  verdictLabel: z.string().nullable(),
+};
+
 /** How a QA flag bears on the verdict: it withholds it, makes it provisional, or is to be read with it. */
 export const verdictConcernSchema = z.object({
   code: qaFlagCodeSchema,

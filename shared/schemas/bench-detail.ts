@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
+import { instantSchema, pathIdsSchema } from './common';
 import { benchProfileSchema } from './bench-profiles';
 import { benchSchema } from './benches';
 import { calendarDateSchema, optionalTextSchema, personRefSchema, requiredTextSchema } from './planning-fields';
@@ -73,7 +73,4 @@ export const benchDetailSchema = z.object({
 });
 export type BenchDetail = z.infer<typeof benchDetailSchema>;
 
-export const instrumentParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  instrumentId: z.coerce.number().int().positive(),
-});
+export const instrumentParamsSchema = pathIdsSchema('id', 'instrumentId');

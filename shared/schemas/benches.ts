@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
+import { instantSchema, pathIdsSchema } from './common';
 import {
   idSchema,
   namedRecordFields,
@@ -117,10 +117,7 @@ export const bookingListQuerySchema = z.object({
   to: z.preprocess((v) => (v === '' ? undefined : v), zonedInstant(dateRanges.booking).optional()),
 });
 
-export const bookingParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  bookingId: z.coerce.number().int().positive(),
-});
+export const bookingParamsSchema = pathIdsSchema('id', 'bookingId');
 
 /** A tester's own work: queue by due date (no date last), recorded cells waiting for the editor, bookings. */
 export const myBenchSchema = z.object({

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { countsSchema } from './common';
 import { catalogImportUploadLimit } from '../upload-limits';
 import { archivedFilterSchema, calendarDateSchema } from './planning-fields';
 import { multiLineText, queryText } from './text';
@@ -113,11 +114,7 @@ export const catalogImportPreviewSchema = z.object({
 });
 export type CatalogImportPreview = z.infer<typeof catalogImportPreviewSchema>;
 
-export const catalogImportResultSchema = z.object({
-  created: z.number().int(),
-  updated: z.number().int(),
-  unchanged: z.number().int(),
-  pricesAdded: z.number().int(),
+export const catalogImportResultSchema = countsSchema('created', 'updated', 'unchanged', 'pricesAdded').extend({
   productIds: z.array(z.number().int()),
 });
 export type CatalogImportResult = z.infer<typeof catalogImportResultSchema>;

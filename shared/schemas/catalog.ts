@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
+import { instantSchema, pathIdsSchema } from './common';
 import {
   amountMinorSchema,
   calendarDateSchema,
@@ -355,7 +355,4 @@ export const productListSchema = z.object({
 });
 export type ProductList = z.infer<typeof productListSchema>;
 
-export const productPriceParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  priceId: z.coerce.number().int().positive(),
-});
+export const productPriceParamsSchema = pathIdsSchema('id', 'priceId');

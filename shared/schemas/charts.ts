@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
+import { instantSchema, pathIdSchema } from './common';
 import { namedRefSchema, personRefSchema } from './planning-fields';
 import { chartMetrics } from '../domain/editorial/chart-data';
 
@@ -15,7 +15,7 @@ export const chartSettingsSchema = z.strictObject({
 export type ChartSettingsInput = z.input<typeof chartSettingsSchema>;
 
 export const chartParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
+  id: pathIdSchema,
   /** configuration-<id>, product-<entry id> or price-scatter; a key that names no chart of the roundup is 404. */
   chartKey: z.string().regex(/^[a-z0-9-]{1,40}$/, 'That is not a chart of a roundup.'),
 });

@@ -35,4 +35,10 @@ export const idParamSchema = pathIdsSchema('id');
 /** ISO 8601 instant in UTC, as the API sends every time. */
 export const instantSchema = z.iso.datetime();
 
+/** Whole-number counts, one per name, in this order (what a job or a mailing did, how many are in each state). */
+export function countsSchema<const Name extends string>(...names: Name[]) {
+  const count = z.number().int();
+  return z.object(Object.fromEntries(names.map((name) => [name, count])) as Record<Name, typeof count>);
+}
+
 export const okSchema = z.object({ ok: z.literal(true) });

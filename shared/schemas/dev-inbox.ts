@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { pathIdsSchema } from './common';
 import { queryText } from './text';
 
 export const devInboxQuerySchema = z
@@ -46,4 +47,4 @@ export const devInboxMessageSchema = devInboxItemSchema.extend({
 });
 export type DevInboxMessage = z.infer<typeof devInboxMessageSchema>;
 
-export const devInboxParamsSchema = z.object({ id: z.coerce.number().int().positive() });
+export const devInboxParamsSchema = pathIdsSchema('id');

@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
+import { instantSchema, pathIdsSchema } from './common';
 import { productBriefSchema } from './catalog';
-import { calendarDateSchema, idSchema, namedRefSchema, personRefSchema } from './planning-fields';
+import { calendarDateSchema, entryRecordFields, idSchema, namedRefSchema, personRefSchema } from './planning-fields';
 import { cellActions, cellStates } from '../domain/planning/matrix-cell-states';
 import { roundupStateSchema } from './roundup-state';
 import { planningDateSchema } from './dates';
@@ -16,9 +16,7 @@ export const cellStateSchema = z.enum(cellStates);
 export const cellActionSchema = z.enum(cellActions);
 
 export const matrixCellSchema = z.object({
-  id: z.number().int(),
-  roundupId: z.number().int(),
-  entryId: z.number().int(),
+  ...entryRecordFields,
   loadConfigurationId: z.number().int(),
   state: cellStateSchema,
   tester: personRefSchema.nullable(),
@@ -103,10 +101,7 @@ export const cellTransitionRequestSchema = z
   });
 export type CellTransitionRequest = z.input<typeof cellTransitionRequestSchema>;
 
-export const cellParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  cellId: z.coerce.number().int().positive(),
-});
+export const cellParamsSchema = pathIdsSchema('id', 'cellId');
 
 export const testerListSchema = z.object({ testers: z.array(personRefSchema) });
 

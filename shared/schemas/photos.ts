@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
-import { idSchema, personRefSchema, requiredTextSchema } from './planning-fields';
+import { instantSchema, pathIdsSchema } from './common';
+import { entryRecordFields, idSchema, personRefSchema, requiredTextSchema } from './planning-fields';
 import { optionalSingleLineText } from './text';
 
 export const photoKinds = ['overview', 'power-delivery', 'heatsinks', 'thermal-image', 'other'] as const;
@@ -35,23 +35,22 @@ export const reorderPhotosRequestSchema = z.strictObject({
 });
 export type ParsedReorderPhotosRequest = z.output<typeof reorderPhotosRequestSchema>;
 
+/** An image's size in pixels. */
+export const pixelSizeFields = { width: z.number().int(), height: z.number().int() };
+
 export const photoSizeSchema = z.object({
-  width: z.number().int(),
-  height: z.number().int(),
+  ...pixelSizeFields,
   format: z.enum(['webp', 'jpeg']),
   url: z.string(),
 });
 
 export const photoSchema = z.object({
-  id: z.number().int(),
-  roundupId: z.number().int(),
-  entryId: z.number().int(),
+  ...entryRecordFields,
   kind: photoKindSchema,
   caption: z.string(),
   altText: z.string(),
   position: z.number().int(),
-  width: z.number().int(),
-  height: z.number().int(),
+  ...pixelSizeFields,
   sizes: z.array(photoSizeSchema),
   uploadedBy: personRefSchema,
   createdAt: instantSchema,
@@ -60,12 +59,8 @@ export type Photo = z.infer<typeof photoSchema>;
 
 export const photoListSchema = z.object({ photos: z.array(photoSchema) });
 
-export const entryPhotosParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  entryId: z.coerce.number().int().positive(),
-});
-export const photoParamsSchema = z.object({ photoId: z.coerce.number().int().positive() });
-export const photoFileParamsSchema = z.object({
-  photoId: z.coerce.number().int().positive(),
+export const entryPhotosParamsSchema = pathIdsSchema('id', 'entryId');
+export const photoParamsSchema = pathIdsSchema('photoId');
+export const photoFileParamsSchema = photoParamsSchema.extend({
   size: z.string().regex(/^\d{1,4}\.(webp|jpeg)$/, 'Ask for a size such as 960.webp.'),
 });

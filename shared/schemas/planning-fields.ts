@@ -76,6 +76,9 @@ export const namedRefSchema = z.object(namedRecordFields);
 /** When a record was created and last changed. */
 export const timestampFields = { createdAt: instantSchema, updatedAt: instantSchema };
 
+/** A record kept for one entry of a roundup (its matrix cells, its sample, its photos). */
+export const entryRecordFields = { id: z.number().int(), roundupId: z.number().int(), entryId: z.number().int() };
+
 /** A staff member as other records mention them. */
 export const personRefSchema = z.object({ id: z.number().int(), displayName: z.string() });
 export type PersonRef = z.infer<typeof personRefSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { pathIdsSchema } from './common';
 import { multiLineText } from './text';
 
 export const readinessBlockerKinds = ['state', 'section', 'chart', 'verdict', 'cell'] as const;
@@ -25,10 +26,7 @@ export const readinessSchema = z.object({
 });
 export type Readiness = z.infer<typeof readinessSchema>;
 
-export const cellExclusionParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  cellId: z.coerce.number().int().positive(),
-});
+export const cellExclusionParamsSchema = pathIdsSchema('id', 'cellId');
 
 export const excludeCellRequestSchema = z.strictObject({
   reason: multiLineText(1000, 'Write why this cell is left out of the roundup.'),

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
+import { instantSchema, pathIdsSchema } from './common';
 import { priceSchema, productBriefSchema, productCategorySchema } from './catalog';
 import { benchProfileSchema } from './bench-profiles';
 import { loadConfigurationSchema } from './load-configurations';
@@ -205,10 +205,7 @@ export const addRoundupEntryResponseSchema = z.object({
   warnings: z.array(z.string()),
 });
 
-export const entryParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  entryId: z.coerce.number().int().positive(),
-});
+export const entryParamsSchema = pathIdsSchema('id', 'entryId');
 
 /**
  * Catalog products of the roundup's category and platform, not archived and not yet in the roundup, whose

@@ -1,10 +1,11 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
+import { instantSchema, pathIdsSchema } from './common';
 import { productBriefSchema } from './catalog';
 import {
   amountMinorSchema,
   calendarDateSchema,
   currencySchema,
+  entryRecordFields,
   moneySchema,
   optionalTextSchema,
 } from './planning-fields';
@@ -38,9 +39,7 @@ export const sampleStatusLabels: Record<SampleStatus, string> = {
  * roundup's time zone while the sample is neither returned nor kept (shared/domain/planning/loan-overdue.ts).
  */
 export const sampleSchema = z.object({
-  id: z.number().int(),
-  roundupId: z.number().int(),
-  entryId: z.number().int(),
+  ...entryRecordFields,
   product: productBriefSchema,
   source: sampleSourceSchema.nullable(),
   /** Retail: the shop's order reference. */
@@ -115,10 +114,7 @@ export function sampleDateOrderProblems(sample: {
   return problems;
 }
 
-export const sampleParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  sampleId: z.coerce.number().int().positive(),
-});
+export const sampleParamsSchema = pathIdsSchema('id', 'sampleId');
 
 /** An overdue loan as the dashboard lists it. */
 export const overdueSampleSchema = sampleSchema.extend({ roundupTitle: z.string() });

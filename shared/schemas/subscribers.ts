@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { countsSchema } from './common';
 import { multiLineText, optionalMultiLineText, optionalSingleLineText, singleLineText } from './text';
 
 export const subscriberEmailSchema = z
@@ -41,7 +42,7 @@ export const mailCategoryListSchema = z.object({ categories: z.array(mailCategor
 export const staffMailCategorySchema = mailCategorySchema.extend({ confirmedSubscribers: z.number().int() });
 export const staffMailCategoryListSchema = z.object({
   categories: z.array(staffMailCategorySchema),
-  subscribers: z.object({ pending: z.number().int(), confirmed: z.number().int(), unsubscribed: z.number().int() }),
+  subscribers: countsSchema('pending', 'confirmed', 'unsubscribed'),
 });
 export type StaffMailCategoryList = z.infer<typeof staffMailCategoryListSchema>;
 
@@ -64,15 +65,15 @@ export const mailCategoryInputSchema = z
   .strict();
 export type MailCategoryInput = z.input<typeof mailCategoryInputSchema>;
 
-export const mailingCountsSchema = z.object({
-  queued: z.number().int(),
-  sending: z.number().int(),
-  sent: z.number().int(),
-  deferred: z.number().int(),
-  failed: z.number().int(),
-  suppressed: z.number().int(),
-  total: z.number().int(),
-});
+export const mailingCountsSchema = countsSchema(
+  'queued',
+  'sending',
+  'sent',
+  'deferred',
+  'failed',
+  'suppressed',
+  'total',
+);
 export type MailingCounts = z.infer<typeof mailingCountsSchema>;
 
 export const mailingSchema = z.object({

@@ -1,11 +1,11 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
+import { instantSchema, pathIdsSchema } from './common';
 import {
   analysisOptionsSchema,
   columnMappingSchema,
   qaFlagSchema,
   verdictCodeSchema,
-  verdictStatusSchema,
+  verdictReadingFields,
   verdictRubricSchema,
 } from './analysis';
 import { decimalSchema, idSchema, namedRefSchema, personRefSchema, requiredTextSchema } from './planning-fields';
@@ -84,8 +84,7 @@ export const runAnalysisSummarySchema = z.object({
   createdBy: personRefSchema,
   verdict: verdictCodeSchema.nullable(),
   /** Final, provisional (judged on the predicted steady state) or withheld (verdict null): never shown as final. */
-  verdictStatus: verdictStatusSchema.nullable(),
-  verdictLabel: z.string().nullable(),
+  ...verdictReadingFields,
   verdictRule: z.string().nullable(),
   peakC: z.number().nullable(),
   ambientC: z.number().nullable(),
@@ -157,8 +156,8 @@ export const createRunResponseSchema = z.object({
   sameFileAsRunId: z.number().int().nullable(),
 });
 
-export const runParamsSchema = z.object({ runId: z.coerce.number().int().positive() });
-export const cellRunsParamsSchema = z.object({ cellId: z.coerce.number().int().positive() });
+export const runParamsSchema = pathIdsSchema('runId');
+export const cellRunsParamsSchema = pathIdsSchema('cellId');
 
 export const reviewRunRequestSchema = z.strictObject({
   decision: z.enum(['accept', 'send-back']),
@@ -190,8 +189,7 @@ export const resultCellSchema = z.object({
   peakC: z.number().nullable(),
   deltaOverAmbientC: z.number().nullable(),
   verdict: verdictCodeSchema.nullable(),
-  verdictStatus: verdictStatusSchema.nullable(),
-  verdictLabel: z.string().nullable(),
+  ...verdictReadingFields,
   throttled: z.boolean(),
   flagCount: z.number().int(),
   reviewState: runReviewStateSchema.nullable(),

@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
-import { verdictCodeSchema, verdictStatusSchema } from './analysis';
+import { instantSchema, pathIdsSchema } from './common';
+import { verdictCodeSchema, verdictReadingFields } from './analysis';
 import { loadSettingsModeSchema } from './load-configurations';
 import { amountMinorSchema, currencySchema, moneySchema, personRefSchema } from './planning-fields';
 import { optionalMultiLineText, singleLineText } from './text';
@@ -19,10 +19,7 @@ export const setVerdictRequestSchema = z.strictObject({
 export type SetVerdictRequest = z.input<typeof setVerdictRequestSchema>;
 export type ParsedSetVerdictRequest = z.output<typeof setVerdictRequestSchema>;
 
-export const verdictEntryParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
-  entryId: z.coerce.number().int().positive(),
-});
+export const verdictEntryParamsSchema = pathIdsSchema('id', 'entryId');
 
 /** The rubric verdict of one run of record: the evidence shown beside the editor's label. */
 export const verdictEvidenceSchema = z.object({
@@ -33,8 +30,7 @@ export const verdictEvidenceSchema = z.object({
   runId: z.number().int().nullable(),
   cellId: z.number().int(),
   verdictCode: verdictCodeSchema.nullable(),
-  verdictStatus: verdictStatusSchema.nullable(),
-  verdictLabel: z.string().nullable(),
+  ...verdictReadingFields,
   throttled: z.boolean(),
   peakC: z.number().nullable(),
 });

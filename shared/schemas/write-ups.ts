@@ -1,10 +1,11 @@
 import { z } from 'zod';
-import { instantSchema } from './common';
+import { instantSchema, pathIdsSchema } from './common';
 import { personRefSchema, timestampFields } from './planning-fields';
 import { roundupStates } from '../domain/planning/roundup-states';
 import { sectionKinds, sectionReviewMoves, sectionReviewStates } from '../domain/editorial/section-states';
 import { multiLineText, optionalMultiLineText, singleLineText } from './text';
 import { liveBlockKinds, writeUpDocumentSchema } from './write-up-document';
+import { pixelSizeFields } from './photos';
 
 export const sectionSummarySchema = z.object({
   id: z.number().int(),
@@ -54,8 +55,7 @@ export const writeUpPhotoSchema = z.object({
   productName: z.string(),
   altText: z.string(),
   caption: z.string(),
-  width: z.number().int(),
-  height: z.number().int(),
+  ...pixelSizeFields,
   /** A small size for the picker and the editor. */
   previewUrl: z.string(),
 });
@@ -71,12 +71,9 @@ export const sectionDetailSchema = sectionSummarySchema.extend({
 });
 export type SectionDetail = z.infer<typeof sectionDetailSchema>;
 
-export const sectionParamsSchema = z.object({ sectionId: z.coerce.number().int().positive() });
-export const revisionParamsSchema = z.object({
-  sectionId: z.coerce.number().int().positive(),
-  revisionId: z.coerce.number().int().positive(),
-});
-export const commentParamsSchema = z.object({ commentId: z.coerce.number().int().positive() });
+export const sectionParamsSchema = pathIdsSchema('sectionId');
+export const revisionParamsSchema = pathIdsSchema('sectionId', 'revisionId');
+export const commentParamsSchema = pathIdsSchema('commentId');
 
 const baseVersionSchema = z
   .number({ error: 'Say which version of the section this change starts from.' })

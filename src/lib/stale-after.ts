@@ -45,16 +45,20 @@ export const staleAfter = {
 
 export type Change = keyof typeof staleAfter;
 
-/** Marks every query that shows data touched by the change as stale (active ones refetch at once). */
-export function invalidateAfter(queryClient: QueryClient, change: Change) {
-  const roots: readonly QueryRoot[] = staleAfter[change];
+/** Marks every query that shows data touched by the change (or changes) as stale (active ones refetch at once). */
+export function invalidateAfter(queryClient: QueryClient, change: Change | readonly Change[]) {
+  const changes: readonly Change[] = typeof change === 'string' ? [change] : change;
+  const roots: readonly QueryRoot[] = changes.flatMap((each) => staleAfter[each]);
   return queryClient.invalidateQueries({
     predicate: (query) => roots.includes(query.queryKey[0] as QueryRoot),
   });
 }
 
 /** A mutation whose success makes `change` stale: how features send a change and refresh what shows it. */
-export function useChangeMutation<Input, Result>(mutationFn: (input: Input) => Promise<Result>, change: Change) {
+export function useChangeMutation<Input, Result>(
+  mutationFn: (input: Input) => Promise<Result>,
+  change: Change | readonly Change[],
+) {
   const queryClient = useQueryClient();
   return useMutation({ mutationFn, onSuccess: () => invalidateAfter(queryClient, change) });
 }

@@ -1,15 +1,15 @@
-import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
-import { sessionListSchema, type SessionInfo } from '../../../../shared/schemas/auth';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
+import { sessionListSchema } from '../../../../shared/schemas/auth';
 import { accountKeys } from './account-keys';
 
-export async function getSessions(signal?: AbortSignal): Promise<SessionInfo[]> {
-  const { sessions } = await apiClient.get('/api/account/sessions', { signal, schema: sessionListSchema });
-  return sessions;
-}
-
 export function sessionsQueryOptions() {
-  return queryOptions({ queryKey: accountKeys.item('sessions'), queryFn: ({ signal }) => getSessions(signal) });
+  return endpointFieldQueryOptions(
+    accountKeys.item('sessions'),
+    '/api/account/sessions',
+    sessionListSchema,
+    'sessions',
+  );
 }
 
 export function useSessions() {

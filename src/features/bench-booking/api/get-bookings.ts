@@ -1,6 +1,6 @@
-import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
-import { bookingListSchema, type Booking } from '../../../../shared/schemas/benches';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
+import { bookingListSchema } from '../../../../shared/schemas/benches';
 import { bookingKeys } from './booking-keys';
 
 export interface BookingWindow {
@@ -9,17 +9,14 @@ export interface BookingWindow {
   to: string;
 }
 
-export async function getBookings(window: BookingWindow, signal?: AbortSignal): Promise<Booking[]> {
-  const params = new URLSearchParams({ from: window.from, to: window.to });
-  const { bookings } = await apiClient.get(`/api/bookings?${params}`, { signal, schema: bookingListSchema });
-  return bookings;
-}
-
 export function bookingsQueryOptions(window: BookingWindow) {
-  return queryOptions({
-    queryKey: bookingKeys.list({ from: window.from, to: window.to }),
-    queryFn: ({ signal }) => getBookings(window, signal),
-  });
+  const params = new URLSearchParams({ from: window.from, to: window.to });
+  return endpointFieldQueryOptions(
+    bookingKeys.list({ from: window.from, to: window.to }),
+    `/api/bookings?${params}`,
+    bookingListSchema,
+    'bookings',
+  );
 }
 
 export function useBookings(window: BookingWindow) {

@@ -1,16 +1,11 @@
-import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
-import { benchListSchema, type Bench } from '../../../../shared/schemas/benches';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
+import { benchListSchema } from '../../../../shared/schemas/benches';
 import { benchKeys } from './bench-keys';
 
 /** The physical test systems (in and out of service): the Benches page and every bench picker. */
-export async function getBenches(signal?: AbortSignal): Promise<Bench[]> {
-  const { benches } = await apiClient.get('/api/benches', { signal, schema: benchListSchema });
-  return benches;
-}
-
 export function benchesQueryOptions() {
-  return queryOptions({ queryKey: benchKeys.list(), queryFn: ({ signal }) => getBenches(signal) });
+  return endpointFieldQueryOptions(benchKeys.list(), '/api/benches', benchListSchema, 'benches');
 }
 
 export function useBenches() {

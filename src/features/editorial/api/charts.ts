@@ -1,16 +1,11 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { endpointQueryOptions } from '../../../lib/endpoint-query';
 import { useChangeMutation } from '../../../lib/stale-after';
 import { roundupChartsSchema, type ChartSettingsInput } from '../../../../shared/schemas/charts';
-import { editorialKeys } from './editorial-keys';
+import { roundupViewQueryOptions } from './roundup-view';
 
 export function chartsQueryOptions(roundupId: number) {
-  return endpointQueryOptions(
-    [...editorialKeys.detail(roundupId), 'charts'],
-    `/api/roundups/${roundupId}/charts`,
-    roundupChartsSchema,
-  );
+  return roundupViewQueryOptions(roundupId, 'charts', roundupChartsSchema);
 }
 
 export function useCharts(roundupId: number) {

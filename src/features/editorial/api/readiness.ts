@@ -1,17 +1,12 @@
-import { useMutation, useQuery, useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { endpointQueryOptions } from '../../../lib/endpoint-query';
-import { invalidateAfter } from '../../../lib/stale-after';
+import { useChangeMutation } from '../../../lib/stale-after';
 import { readinessSchema } from '../../../../shared/schemas/readiness';
 import { roundupDetailSchema } from '../../../../shared/schemas/roundups';
-import { editorialKeys } from './editorial-keys';
+import { roundupViewQueryOptions } from './roundup-view';
 
 export function readinessQueryOptions(roundupId: number) {
-  return endpointQueryOptions(
-    [...editorialKeys.detail(roundupId), 'readiness'],
-    `/api/roundups/${roundupId}/readiness`,
-    readinessSchema,
-  );
+  return roundupViewQueryOptions(roundupId, 'readiness', readinessSchema);
 }
 
 export function useReadiness(roundupId: number) {
@@ -23,18 +18,19 @@ export function useReadinessSummary(roundupId: number, enabled: boolean) {
   return useQuery({ ...readinessQueryOptions(roundupId), enabled });
 }
 
+/** Sending to review and leaving a cell out change the editorial views and the roundup's plan alike. */
+const reviewChanges = ['editorial', 'plan'] as const;
+
 export function useRequestReview(roundupId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: () => apiClient.post(`/api/roundups/${roundupId}/review-request`, {}, { schema: roundupDetailSchema }),
-    onSuccess: () => Promise.all([invalidateAfter(queryClient, 'editorial'), invalidateAfter(queryClient, 'plan')]),
-  });
+  return useChangeMutation(
+    () => apiClient.post(`/api/roundups/${roundupId}/review-request`, {}, { schema: roundupDetailSchema }),
+    reviewChanges,
+  );
 }
 
 export function useCellExclusion(roundupId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ cellId, reason }: { cellId: number; reason: string | null }) =>
+  return useChangeMutation(
+    ({ cellId, reason }: { cellId: number; reason: string | null }) =>
       reason === null
         ? apiClient.delete(`/api/roundups/${roundupId}/cells/${cellId}/exclusion`, { schema: readinessSchema })
         : apiClient.put(
@@ -42,6 +38,6 @@ export function useCellExclusion(roundupId: number) {
             { reason },
             { schema: readinessSchema },
           ),
-    onSuccess: () => Promise.all([invalidateAfter(queryClient, 'editorial'), invalidateAfter(queryClient, 'plan')]),
-  });
+    reviewChanges,
+  );
 }

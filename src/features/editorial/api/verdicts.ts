@@ -1,16 +1,11 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { endpointQueryOptions } from '../../../lib/endpoint-query';
 import { useChangeMutation } from '../../../lib/stale-after';
 import { roundupVerdictsSchema, type SetVerdictRequest } from '../../../../shared/schemas/verdicts';
-import { editorialKeys } from './editorial-keys';
+import { roundupViewQueryOptions } from './roundup-view';
 
 export function verdictsQueryOptions(roundupId: number) {
-  return endpointQueryOptions(
-    [...editorialKeys.detail(roundupId), 'verdicts'],
-    `/api/roundups/${roundupId}/verdicts`,
-    roundupVerdictsSchema,
-  );
+  return roundupViewQueryOptions(roundupId, 'verdicts', roundupVerdictsSchema);
 }
 
 export function useVerdicts(roundupId: number) {

@@ -1,17 +1,11 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
+import { useQuery } from '@tanstack/react-query';
+import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
 import { testerListSchema } from '../../../../shared/schemas/matrix';
-import type { PersonRef } from '../../../../shared/schemas/planning-fields';
 import { matrixKeys } from './matrix-keys';
 
 /** Active bench testers, to assign cells to (editors only). */
-export async function getTesters(signal?: AbortSignal): Promise<PersonRef[]> {
-  const { testers } = await apiClient.get('/api/testers', { signal, schema: testerListSchema });
-  return testers;
-}
-
 export function testersQueryOptions() {
-  return queryOptions({ queryKey: matrixKeys.item('testers'), queryFn: ({ signal }) => getTesters(signal) });
+  return endpointFieldQueryOptions(matrixKeys.item('testers'), '/api/testers', testerListSchema, 'testers');
 }
 
 export function useTesters(enabled: boolean) {

@@ -1,5 +1,6 @@
-import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
+import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
 import { useChangeMutation } from '../../../lib/stale-after';
 import {
   benchProfileListSchema,
@@ -10,16 +11,13 @@ import {
 import { roundupKeys } from './roundup-keys';
 
 /** Bench profiles that may be chosen (archived ones are left out). */
-export async function getBenchProfiles(signal?: AbortSignal): Promise<BenchProfile[]> {
-  const { benchProfiles } = await apiClient.get('/api/bench-profiles', { signal, schema: benchProfileListSchema });
-  return benchProfiles;
-}
-
 export function benchProfilesQueryOptions() {
-  return queryOptions({
-    queryKey: roundupKeys.item('bench-profiles'),
-    queryFn: ({ signal }) => getBenchProfiles(signal),
-  });
+  return endpointFieldQueryOptions(
+    roundupKeys.item('bench-profiles'),
+    '/api/bench-profiles',
+    benchProfileListSchema,
+    'benchProfiles',
+  );
 }
 
 export function useBenchProfiles() {

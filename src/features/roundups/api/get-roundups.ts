@@ -1,15 +1,10 @@
-import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
-import { roundupListSchema, type RoundupSummary } from '../../../../shared/schemas/roundups';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
+import { roundupListSchema } from '../../../../shared/schemas/roundups';
 import { roundupKeys } from './roundup-keys';
 
-export async function getRoundups(signal?: AbortSignal): Promise<RoundupSummary[]> {
-  const { roundups } = await apiClient.get('/api/roundups', { signal, schema: roundupListSchema });
-  return roundups;
-}
-
 export function roundupsQueryOptions() {
-  return queryOptions({ queryKey: roundupKeys.list(), queryFn: ({ signal }) => getRoundups(signal) });
+  return endpointFieldQueryOptions(roundupKeys.list(), '/api/roundups', roundupListSchema, 'roundups');
 }
 
 export function useRoundups() {

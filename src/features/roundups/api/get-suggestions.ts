@@ -1,18 +1,15 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
-import { roundupSuggestionsSchema, type RoundupSuggestions } from '../../../../shared/schemas/roundups';
+import { useQuery } from '@tanstack/react-query';
+import { endpointQueryOptions } from '../../../lib/endpoint-query';
+import { roundupSuggestionsSchema } from '../../../../shared/schemas/roundups';
 import { roundupKeys } from './roundup-keys';
 
 /** Catalog products of the roundup's platform whose latest price in the band's region is inside the band. */
-export function getSuggestions(id: number, signal?: AbortSignal): Promise<RoundupSuggestions> {
-  return apiClient.get(`/api/roundups/${id}/suggestions`, { signal, schema: roundupSuggestionsSchema });
-}
-
 export function suggestionsQueryOptions(id: number) {
-  return queryOptions({
-    queryKey: [...roundupKeys.detail(id), 'suggestions'],
-    queryFn: ({ signal }) => getSuggestions(id, signal),
-  });
+  return endpointQueryOptions(
+    [...roundupKeys.detail(id), 'suggestions'],
+    `/api/roundups/${id}/suggestions`,
+    roundupSuggestionsSchema,
+  );
 }
 
 /** Loaded only for editors, when they open the add-products panel. */

@@ -1,5 +1,6 @@
-import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
+import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
 import { useChangeMutation } from '../../../lib/stale-after';
 import {
   loadConfigurationListSchema,
@@ -10,19 +11,13 @@ import {
 import { roundupKeys } from './roundup-keys';
 
 /** Load configurations that may be chosen (archived ones are left out). */
-export async function getLoadConfigurations(signal?: AbortSignal): Promise<LoadConfiguration[]> {
-  const { loadConfigurations } = await apiClient.get('/api/load-configurations', {
-    signal,
-    schema: loadConfigurationListSchema,
-  });
-  return loadConfigurations;
-}
-
 export function loadConfigurationsQueryOptions() {
-  return queryOptions({
-    queryKey: roundupKeys.item('load-configurations'),
-    queryFn: ({ signal }) => getLoadConfigurations(signal),
-  });
+  return endpointFieldQueryOptions(
+    roundupKeys.item('load-configurations'),
+    '/api/load-configurations',
+    loadConfigurationListSchema,
+    'loadConfigurations',
+  );
 }
 
 export function useLoadConfigurations() {

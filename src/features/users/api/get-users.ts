@@ -1,15 +1,10 @@
-import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
-import { userListSchema, type User } from '../../../../shared/schemas/users';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
+import { userListSchema } from '../../../../shared/schemas/users';
 import { userKeys } from './user-keys';
 
-export async function getUsers(signal?: AbortSignal): Promise<User[]> {
-  const { users } = await apiClient.get('/api/users', { signal, schema: userListSchema });
-  return users;
-}
-
 export function usersQueryOptions() {
-  return queryOptions({ queryKey: userKeys.list(), queryFn: ({ signal }) => getUsers(signal) });
+  return endpointFieldQueryOptions(userKeys.list(), '/api/users', userListSchema, 'users');
 }
 
 export function useUsers() {

@@ -1,25 +1,23 @@
 import { useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
+import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
 import { useChangeMutation } from '../../../lib/stale-after';
 import {
   commentThreadListSchema,
   commentThreadSchema,
   type AddCommentRequest,
-  type CommentThread,
 } from '../../../../shared/schemas/write-ups';
 import { writeUpKeys } from './write-up-keys';
 
 export function useCommentThreads(sectionId: number) {
-  return useQuery({
-    queryKey: [...writeUpKeys.item('comments'), sectionId],
-    queryFn: async ({ signal }): Promise<CommentThread[]> =>
-      (
-        await apiClient.get(`/api/write-up/sections/${sectionId}/comments`, {
-          signal,
-          schema: commentThreadListSchema,
-        })
-      ).threads,
-  });
+  return useQuery(
+    endpointFieldQueryOptions(
+      [...writeUpKeys.item('comments'), sectionId],
+      `/api/write-up/sections/${sectionId}/comments`,
+      commentThreadListSchema,
+      'threads',
+    ),
+  );
 }
 
 export function useAddComment(sectionId: number) {

@@ -1,23 +1,22 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
+import { endpointFieldQueryOptions, endpointQueryOptions } from '../../../lib/endpoint-query';
 import { useChangeMutation } from '../../../lib/stale-after';
 import {
   revisionDetailSchema,
   revisionListSchema,
   sectionSummarySchema,
-  type RevisionDetail,
-  type RevisionSummary,
   type SectionSummary,
 } from '../../../../shared/schemas/write-ups';
 import { writeUpKeys } from './write-up-keys';
 
 export function revisionsQueryOptions(sectionId: number) {
-  return queryOptions({
-    queryKey: [...writeUpKeys.item('revisions'), sectionId],
-    queryFn: async ({ signal }): Promise<RevisionSummary[]> =>
-      (await apiClient.get(`/api/write-up/sections/${sectionId}/revisions`, { signal, schema: revisionListSchema }))
-        .revisions,
-  });
+  return endpointFieldQueryOptions(
+    [...writeUpKeys.item('revisions'), sectionId],
+    `/api/write-up/sections/${sectionId}/revisions`,
+    revisionListSchema,
+    'revisions',
+  );
 }
 
 export function useRevisions(sectionId: number, enabled: boolean) {
@@ -26,12 +25,11 @@ export function useRevisions(sectionId: number, enabled: boolean) {
 
 export function useRevision(sectionId: number, revisionId: number | null) {
   return useQuery({
-    queryKey: [...writeUpKeys.item('revision'), sectionId, revisionId],
-    queryFn: ({ signal }): Promise<RevisionDetail> =>
-      apiClient.get(`/api/write-up/sections/${sectionId}/revisions/${revisionId}`, {
-        signal,
-        schema: revisionDetailSchema,
-      }),
+    ...endpointQueryOptions(
+      [...writeUpKeys.item('revision'), sectionId, revisionId],
+      `/api/write-up/sections/${sectionId}/revisions/${revisionId}`,
+      revisionDetailSchema,
+    ),
     enabled: revisionId !== null,
   });
 }

@@ -1,6 +1,6 @@
-import type { QueryClient } from '@tanstack/react-query';
+import type { EnsureQueryDataOptions, QueryClient, QueryKey } from '@tanstack/react-query';
 import { Suspense, type ComponentType } from 'react';
-import { useLoaderData, type LoaderFunctionArgs } from 'react-router';
+import { useLoaderData, useParams, type LoaderFunctionArgs, type Params } from 'react-router';
 import { sessionQueryOptions, useSession } from '../features/auth/api/get-session';
 import { roundupQueryOptions } from '../features/roundups/api/get-roundup';
 import { addressId } from '../lib/address-id';
@@ -8,6 +8,7 @@ import { paths } from '../lib/paths';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type { Role } from '../../shared/schemas/common';
 import { canOpen } from './navigation';
+import type { RouteModule } from './router';
 import { RoleGate } from './role-gate';
 import { LoadingState } from '../components/ui/loading-state';
 
@@ -80,5 +81,40 @@ export function gatedPage(access: PageAccess, Page: ComponentType<{ user: Curren
           ))}
       </RoleGate>
     );
+  };
+}
+
+/** What a page within one roundup receives: the signed-in user, the roundup's id and the address's parameters. */
+export interface RoundupPageProps {
+  user: CurrentUser;
+  roundupId: number;
+  /** The address's parameters: a page reads its own further id (`cellId`, `entryId`) from them with addressId. */
+  params: Params;
+}
+
+/**
+ * A page within one roundup (`roundups/:id/…`), for the roles that may open Roundups: it receives the roundup's id,
+ * read from the address and checked (an id that is not a number is "not found").
+ */
+export function roundupPage(access: Omit<PageAccess, 'path'>, Page: ComponentType<RoundupPageProps>): ComponentType {
+  function RoundupIdPage({ user }: { user: CurrentUser }) {
+    const params = useParams();
+    return <Page user={user} roundupId={addressId(params.id)} params={params} />;
+  }
+  return gatedPage({ path: paths.roundups, ...access }, RoundupIdPage);
+}
+
+/**
+ * The route of a page within one roundup that reads one query of its own besides the roundup (a view such as its
+ * charts): the loader warms both, and the page receives the roundup's id as in roundupPage.
+ */
+export function roundupRoute<T, Key extends QueryKey>(
+  access: Omit<PageAccess, 'path'>,
+  read: (roundupId: number) => EnsureQueryDataOptions<T, Error, T, Key>,
+  Page: ComponentType<RoundupPageProps>,
+): RouteModule {
+  return {
+    loader: roundupPageLoader((queryClient, roundupId) => [queryClient.ensureQueryData(read(roundupId))]),
+    Component: roundupPage(access, Page),
   };
 }

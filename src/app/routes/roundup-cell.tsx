@@ -1,12 +1,10 @@
-import { useParams } from 'react-router';
 import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
 import { matrixQueryOptions, useMatrix } from '../../features/matrix/api/get-matrix';
 import { useTransitionCell } from '../../features/matrix/api/transition-cell';
 import { cellRunsQueryOptions } from '../../features/test-runs/api/test-runs-api';
 import { CellRunsPage } from '../../features/test-runs/components/cell-runs-page';
-import type { CurrentUser } from '../../../shared/schemas/auth';
-import { gatedPage, pageLoader } from '../page-route';
+import { pageLoader, roundupPage, type RoundupPageProps } from '../page-route';
 
 export const loader = pageLoader(paths.roundups, (queryClient, { params }) =>
   Promise.all([
@@ -15,14 +13,9 @@ export const loader = pageLoader(paths.roundups, (queryClient, { params }) =>
   ]),
 );
 
-export const Component = gatedPage(
-  { path: paths.roundups, pageName: 'Test runs', loading: 'Loading the runs…' },
-  CellRuns,
-);
+export const Component = roundupPage({ pageName: 'Test runs', loading: 'Loading the runs…' }, CellRuns);
 
-function CellRuns({ user }: { user: CurrentUser }) {
-  const params = useParams();
-  const roundupId = addressId(params.id);
+function CellRuns({ user, roundupId, params }: RoundupPageProps) {
   const cellId = addressId(params.cellId);
   const matrix = useMatrix(roundupId);
   const transition = useTransitionCell();

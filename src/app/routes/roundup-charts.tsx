@@ -1,20 +1,13 @@
-import { useParams } from 'react-router';
-import { addressId } from '../../lib/address-id';
-import { paths } from '../../lib/paths';
 import { countOf } from '../../lib/plural';
 import { chartsQueryOptions, useApproveChart, useCharts, useChartSettings } from '../../features/editorial/api/charts';
 import { ChartCard } from '../../features/editorial/components/chart-card';
 import { editorialDeciders, may } from '../../../shared/access/roles';
-import type { CurrentUser } from '../../../shared/schemas/auth';
-import { gatedPage, roundupPageLoader } from '../page-route';
+import { roundupRoute, type RoundupPageProps } from '../page-route';
 import { EditorialPage, useScrollToHash } from '../editorial-page';
 
-export const loader = roundupPageLoader((queryClient, id) => [queryClient.ensureQueryData(chartsQueryOptions(id))]);
+export const { loader, Component } = roundupRoute({ pageName: 'Charts' }, chartsQueryOptions, ChartsPage);
 
-export const Component = gatedPage({ path: paths.roundups, pageName: 'Charts' }, ChartsPage);
-
-function ChartsPage({ user }: { user: CurrentUser }) {
-  const roundupId = addressId(useParams().id);
+function ChartsPage({ user, roundupId }: RoundupPageProps) {
   const charts = useCharts(roundupId);
   const approve = useApproveChart(roundupId);
   const settings = useChartSettings(roundupId);

@@ -1,9 +1,8 @@
 import { Suspense } from 'react';
-import { Link, useLocation, useParams, useSearchParams } from 'react-router';
+import { Link, useLocation, useSearchParams } from 'react-router';
 import { Alert } from '../../components/ui/alert';
 import { buttonStyles } from '../../components/ui/button';
 import { LoadingState } from '../../components/ui/loading-state';
-import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
 import { useRoundup } from '../../features/roundups/api/get-roundup';
 import { benchProfilesQueryOptions } from '../../features/roundups/api/bench-profiles';
@@ -22,8 +21,7 @@ import { productDisplayName } from '../../../shared/domain/planning/product-disp
 import { SamplesTable } from '../../features/samples/components/samples-table';
 import { benchWorkers, may, openDataSettingsEditors, planEditors } from '../../../shared/access/roles';
 import { writeUpReadableStates } from '../../../shared/domain/editorial/write-up-availability';
-import type { CurrentUser } from '../../../shared/schemas/auth';
-import { gatedPage, roundupPageLoader } from '../page-route';
+import { roundupPage, roundupPageLoader, type RoundupPageProps } from '../page-route';
 
 export const loader = roundupPageLoader((queryClient, id, _args, user) => {
   if (may(user.role, planEditors)) {
@@ -34,12 +32,11 @@ export const loader = roundupPageLoader((queryClient, id, _args, user) => {
   return [queryClient.ensureQueryData(matrixQueryOptions(id))];
 });
 
-export const Component = gatedPage({ path: paths.roundups, pageName: 'Roundup' }, RoundupPage);
+export const Component = roundupPage({ pageName: 'Roundup' }, RoundupPage);
 
 const tabIds = ['products', 'matrix', 'results', 'samples', 'plan', 'publishing'] as const;
 
-function RoundupPage({ user }: { user: CurrentUser }) {
-  const roundupId = addressId(useParams().id);
+function RoundupPage({ user, roundupId }: RoundupPageProps) {
   const roundup = useRoundup(roundupId);
   const location = useLocation();
   const [search, setSearch] = useSearchParams();

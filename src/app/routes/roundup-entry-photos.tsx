@@ -1,4 +1,3 @@
-import { useParams } from 'react-router';
 import { addressId } from '../../lib/address-id';
 import { paths } from '../../lib/paths';
 import { productDisplayName } from '../../../shared/domain/planning/product-display-name';
@@ -6,21 +5,15 @@ import { entryPhotosQueryOptions } from '../../features/photos/api/photos-api';
 import { EntryPhotosPage } from '../../features/photos/components/entry-photos-page';
 import { useRoundup } from '../../features/roundups/api/get-roundup';
 import { benchWorkers, may } from '../../../shared/access/roles';
-import type { CurrentUser } from '../../../shared/schemas/auth';
-import { gatedPage, roundupPageLoader } from '../page-route';
+import { roundupPage, roundupPageLoader, type RoundupPageProps } from '../page-route';
 
 export const loader = roundupPageLoader((queryClient, roundupId, { params }) => [
   queryClient.ensureQueryData(entryPhotosQueryOptions(roundupId, addressId(params.entryId))),
 ]);
 
-export const Component = gatedPage(
-  { path: paths.roundups, pageName: 'Photos', loading: 'Loading the photos…' },
-  Photos,
-);
+export const Component = roundupPage({ pageName: 'Photos', loading: 'Loading the photos…' }, Photos);
 
-function Photos({ user }: { user: CurrentUser }) {
-  const params = useParams();
-  const roundupId = addressId(params.id);
+function Photos({ user, roundupId, params }: RoundupPageProps) {
   const entryId = addressId(params.entryId);
   const roundup = useRoundup(roundupId);
   const entry = roundup.entries.find((item) => item.id === entryId);

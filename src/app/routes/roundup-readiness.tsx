@@ -1,10 +1,7 @@
 import { useState } from 'react';
-import { useParams } from 'react-router';
 import { AnnouncedAlert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { describeSubmitError } from '../../lib/form-errors';
-import { addressId } from '../../lib/address-id';
-import { paths } from '../../lib/paths';
 import { useRoundup } from '../../features/roundups/api/get-roundup';
 import {
   readinessQueryOptions,
@@ -14,17 +11,17 @@ import {
 } from '../../features/editorial/api/readiness';
 import { ReadinessPanel } from '../../features/editorial/components/readiness-panel';
 import { editorialDeciders, may } from '../../../shared/access/roles';
-import type { CurrentUser } from '../../../shared/schemas/auth';
-import { gatedPage, roundupPageLoader } from '../page-route';
+import { roundupRoute, type RoundupPageProps } from '../page-route';
 import { EditorialPage } from '../editorial-page';
 import { roundupStateLabels } from '../../../shared/domain/planning/roundup-states';
 
-export const loader = roundupPageLoader((queryClient, id) => [queryClient.ensureQueryData(readinessQueryOptions(id))]);
+export const { loader, Component } = roundupRoute(
+  { pageName: 'Ready to schedule?' },
+  readinessQueryOptions,
+  ReadinessPage,
+);
 
-export const Component = gatedPage({ path: paths.roundups, pageName: 'Ready to schedule?' }, ReadinessPage);
-
-function ReadinessPage({ user }: { user: CurrentUser }) {
-  const roundupId = addressId(useParams().id);
+function ReadinessPage({ user, roundupId }: RoundupPageProps) {
   const roundup = useRoundup(roundupId);
   const readiness = useReadiness(roundupId);
   const review = useRequestReview(roundupId);

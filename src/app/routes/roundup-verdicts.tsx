@@ -1,20 +1,13 @@
-import { useParams } from 'react-router';
-import { addressId } from '../../lib/address-id';
-import { paths } from '../../lib/paths';
 import { useSetVerdict, useVerdicts, verdictsQueryOptions } from '../../features/editorial/api/verdicts';
 import { VerdictCard } from '../../features/editorial/components/verdict-card';
 import { editorialDeciders, may } from '../../../shared/access/roles';
-import type { CurrentUser } from '../../../shared/schemas/auth';
-import { gatedPage, roundupPageLoader } from '../page-route';
+import { roundupRoute, type RoundupPageProps } from '../page-route';
 import { EditorialPage, useScrollToHash } from '../editorial-page';
 import { EmptyState } from '../../components/ui/empty-state';
 
-export const loader = roundupPageLoader((queryClient, id) => [queryClient.ensureQueryData(verdictsQueryOptions(id))]);
+export const { loader, Component } = roundupRoute({ pageName: 'Verdicts' }, verdictsQueryOptions, VerdictsPage);
 
-export const Component = gatedPage({ path: paths.roundups, pageName: 'Verdicts' }, VerdictsPage);
-
-function VerdictsPage({ user }: { user: CurrentUser }) {
-  const roundupId = addressId(useParams().id);
+function VerdictsPage({ user, roundupId }: RoundupPageProps) {
   const verdicts = useVerdicts(roundupId);
   const save = useSetVerdict(roundupId);
   // The readiness list links to a product's verdict (#verdict-<entry>).

@@ -1,29 +1,16 @@
-import { apiClient } from '../../../lib/api-client';
+import { createRecord, editRecord } from '../../../lib/record-requests';
+import { useChangeMutation } from '../../../lib/stale-after';
 import {
   benchSchema,
   type Bench,
   type CreateBenchRequest,
   type UpdateBenchRequest,
 } from '../../../../shared/schemas/benches';
-import { useChangeMutation } from '../../../lib/stale-after';
-
-export function createBench(input: CreateBenchRequest): Promise<Bench> {
-  return apiClient.post('/api/benches', input, { schema: benchSchema });
-}
-
-export interface UpdateBenchInput {
-  id: number;
-  changes: UpdateBenchRequest;
-}
-
-export function updateBench({ id, changes }: UpdateBenchInput): Promise<Bench> {
-  return apiClient.patch(`/api/benches/${id}`, changes, { schema: benchSchema });
-}
 
 export function useCreateBench() {
-  return useChangeMutation(createBench, 'bench');
+  return useChangeMutation(createRecord<CreateBenchRequest, Bench>('/api/benches', benchSchema), 'bench');
 }
 
 export function useUpdateBench() {
-  return useChangeMutation(updateBench, 'bench');
+  return useChangeMutation(editRecord<UpdateBenchRequest, Bench>('/api/benches', benchSchema), 'bench');
 }

@@ -6,22 +6,9 @@ import {
   type ProductDetail,
   type UpdateProductRequest,
 } from '../../../../shared/schemas/catalog';
+import { createRecord, editRecord } from '../../../lib/record-requests';
 import { catalogKeys } from './catalog-keys';
 import { invalidateAfter } from '../../../lib/stale-after';
-
-export function createProduct(input: CreateProductRequest): Promise<ProductDetail> {
-  return apiClient.post('/api/catalog/products', input, { schema: productDetailSchema });
-}
-
-export interface UpdateProductInput {
-  id: number;
-  /** powerDesign and features are replaced as a whole when sent; `archived` archives or restores. */
-  changes: UpdateProductRequest;
-}
-
-export function updateProduct({ id, changes }: UpdateProductInput): Promise<ProductDetail> {
-  return apiClient.patch(`/api/catalog/products/${id}`, changes, { schema: productDetailSchema });
-}
 
 export function deleteProduct(id: number): Promise<void> {
   return apiClient.delete(`/api/catalog/products/${id}`);
@@ -40,11 +27,14 @@ function useProductSave<Input>(mutationFn: (input: Input) => Promise<ProductDeta
 }
 
 export function useCreateProduct() {
-  return useProductSave(createProduct);
+  return useProductSave(
+    createRecord<CreateProductRequest, ProductDetail>('/api/catalog/products', productDetailSchema),
+  );
 }
 
+/** powerDesign and features are replaced as a whole when sent; `archived` archives or restores. */
 export function useUpdateProduct() {
-  return useProductSave(updateProduct);
+  return useProductSave(editRecord<UpdateProductRequest, ProductDetail>('/api/catalog/products', productDetailSchema));
 }
 
 export function useDeleteProduct() {

@@ -1,6 +1,6 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
 import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
+import { createRecord } from '../../../lib/record-requests';
 import { useChangeMutation } from '../../../lib/stale-after';
 import {
   benchProfileListSchema,
@@ -24,10 +24,9 @@ export function useBenchProfiles() {
   return useSuspenseQuery(benchProfilesQueryOptions()).data;
 }
 
-export function createBenchProfile(input: CreateBenchProfileRequest): Promise<BenchProfile> {
-  return apiClient.post('/api/bench-profiles', input, { schema: benchProfileSchema });
-}
-
 export function useCreateBenchProfile() {
-  return useChangeMutation(createBenchProfile, 'benchProfile');
+  return useChangeMutation(
+    createRecord<CreateBenchProfileRequest, BenchProfile>('/api/bench-profiles', benchProfileSchema),
+    'benchProfile',
+  );
 }

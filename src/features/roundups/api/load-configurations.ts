@@ -1,6 +1,6 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
 import { endpointFieldQueryOptions } from '../../../lib/endpoint-query';
+import { createRecord } from '../../../lib/record-requests';
 import { useChangeMutation } from '../../../lib/stale-after';
 import {
   loadConfigurationListSchema,
@@ -24,10 +24,12 @@ export function useLoadConfigurations() {
   return useSuspenseQuery(loadConfigurationsQueryOptions()).data;
 }
 
-export function createLoadConfiguration(input: CreateLoadConfigurationRequest): Promise<LoadConfiguration> {
-  return apiClient.post('/api/load-configurations', input, { schema: loadConfigurationSchema });
-}
-
 export function useCreateLoadConfiguration() {
-  return useChangeMutation(createLoadConfiguration, 'loadConfiguration');
+  return useChangeMutation(
+    createRecord<CreateLoadConfigurationRequest, LoadConfiguration>(
+      '/api/load-configurations',
+      loadConfigurationSchema,
+    ),
+    'loadConfiguration',
+  );
 }

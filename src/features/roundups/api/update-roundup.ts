@@ -1,20 +1,14 @@
-import { apiClient } from '../../../lib/api-client';
+import { editRecord } from '../../../lib/record-requests';
+import { useChangeMutation } from '../../../lib/stale-after';
 import {
   roundupDetailSchema,
   type RoundupDetail,
   type UpdateRoundupRequest,
 } from '../../../../shared/schemas/roundups';
-import { useChangeMutation } from '../../../lib/stale-after';
-
-export interface UpdateRoundupInput {
-  id: number;
-  changes: UpdateRoundupRequest;
-}
-
-export function updateRoundup({ id, changes }: UpdateRoundupInput): Promise<RoundupDetail> {
-  return apiClient.patch(`/api/roundups/${id}`, changes, { schema: roundupDetailSchema });
-}
 
 export function useUpdateRoundup() {
-  return useChangeMutation(updateRoundup, 'plan');
+  return useChangeMutation(
+    editRecord<UpdateRoundupRequest, RoundupDetail>('/api/roundups', roundupDetailSchema),
+    'plan',
+  );
 }

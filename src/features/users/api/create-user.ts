@@ -1,11 +1,7 @@
-import { apiClient } from '../../../lib/api-client';
-import { userSchema, type CreateUserRequest, type User } from '../../../../shared/schemas/users';
+import { createRecord } from '../../../lib/record-requests';
 import { useChangeMutation } from '../../../lib/stale-after';
-
-export function createUser(input: CreateUserRequest): Promise<User> {
-  return apiClient.post('/api/users', input, { schema: userSchema });
-}
+import { userSchema, type CreateUserRequest, type User } from '../../../../shared/schemas/users';
 
 export function useCreateUser() {
-  return useChangeMutation(createUser, 'user');
+  return useChangeMutation(createRecord<CreateUserRequest, User>('/api/users', userSchema), 'user');
 }

@@ -1,17 +1,8 @@
-import { apiClient } from '../../../lib/api-client';
-import { userSchema, type UpdateUserRequest, type User } from '../../../../shared/schemas/users';
+import { editRecord } from '../../../lib/record-requests';
 import { useChangeMutation } from '../../../lib/stale-after';
+import { userSchema, type UpdateUserRequest, type User } from '../../../../shared/schemas/users';
 
-export interface UpdateUserInput {
-  id: number;
-  /** Only the fields that change: a role change, deactivation or password reset ends the user's sessions. */
-  changes: UpdateUserRequest;
-}
-
-export function updateUser({ id, changes }: UpdateUserInput): Promise<User> {
-  return apiClient.patch(`/api/users/${id}`, changes, { schema: userSchema });
-}
-
+/** Sends only the fields that change: a role change, deactivation or password reset ends the user's sessions. */
 export function useUpdateUser() {
-  return useChangeMutation(updateUser, 'user');
+  return useChangeMutation(editRecord<UpdateUserRequest, User>('/api/users', userSchema), 'user');
 }

@@ -1,3 +1,4 @@
+import { useRef, useState } from 'react';
 import type { UploadProgress as Progress } from '../../lib/upload';
 import { formatBytes } from '../../lib/upload-size';
 import { Button } from './button';
@@ -10,6 +11,23 @@ export interface UploadProgressProps {
   processingText: string;
   /** Offered while bytes are going out; once they are sent, the server's work cannot be called back. */
   onCancel?: () => void;
+}
+
+/** One upload at a time: its progress while it runs, and cancelling it while bytes go out. */
+export function useCancellableUpload() {
+  const [progress, setProgress] = useState<Progress | null>(null);
+  const controller = useRef<AbortController | null>(null);
+  return {
+    /** What the progress display takes, or null when nothing is being sent. */
+    shown: progress && { progress, onCancel: () => controller.current?.abort() },
+    /** For a request about to go out: where it reports its progress, and the signal that cancels it. */
+    start: () => {
+      controller.current = new AbortController();
+      return { onProgress: setProgress, signal: controller.current.signal };
+    },
+    /** Once the request has settled, answered or not. */
+    settled: () => setProgress(null),
+  };
 }
 
 /** Bytes sent so far while uploading, then an open-ended bar while the server works on the file. */

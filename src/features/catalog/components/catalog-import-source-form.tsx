@@ -3,6 +3,7 @@ import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
 import { TextArea } from '../../../components/ui/text-area';
 import { UploadProgress } from '../../../components/ui/upload-progress';
+import { FileField } from '../../../components/ui/file-field';
 import { acceptAttribute, formatBytes } from '../../../lib/upload-size';
 import { catalogImportUploadLimit } from '../../../../shared/upload-limits';
 import type { CatalogImportFlow } from './use-catalog-import';
@@ -15,8 +16,6 @@ const sourceModes = [
 /** Step 1: a CSV file or pasted text, checked by the server without saving anything. */
 export function CatalogImportSourceForm({ flow }: { flow: CatalogImportFlow }) {
   const fileInputId = useId();
-  const fileHintId = useId();
-  const fileErrorId = useId();
   const { mode, file, sourceError, sending } = flow;
   const busy = sending !== null;
 
@@ -48,29 +47,21 @@ export function CatalogImportSourceForm({ flow }: { flow: CatalogImportFlow }) {
         </fieldset>
 
         <div hidden={mode !== 'file'}>
-          <label htmlFor={fileInputId} className="mb-1 block text-sm font-semibold text-ink">
-            CSV file
-          </label>
-          <input
+          <FileField
             key={flow.fileInputKey}
             id={fileInputId}
-            type="file"
+            label="CSV file"
             accept={`${acceptAttribute(catalogImportUploadLimit)},text/csv`}
-            aria-invalid={sourceError ? true : undefined}
-            aria-describedby={[sourceError ? fileErrorId : '', fileHintId].filter(Boolean).join(' ')}
+            error={sourceError ?? undefined}
+            description={
+              <>
+                {file ? `${file.name}, ${formatBytes(file.size)}.` : 'Nothing chosen yet.'} An exported catalog file
+                imports back as it is.
+              </>
+            }
             onChange={(event) => flow.chooseFile(event.target.files?.[0] ?? null)}
-            className="block w-full text-sm file:mr-3 file:min-h-9 file:rounded-[3px] file:border file:border-edge file:bg-surface file:px-3.5 file:font-medium file:text-ink hover:file:bg-wash"
+            inputClassName="block w-full text-sm file:mr-3 file:min-h-9 file:rounded-[3px] file:border file:border-edge file:bg-surface file:px-3.5 file:font-medium file:text-ink hover:file:bg-wash"
           />
-          {sourceError && (
-            <p id={fileErrorId} className="mt-1 flex gap-1.5 text-sm font-medium text-red">
-              <span aria-hidden="true">✕</span>
-              <span>{sourceError}</span>
-            </p>
-          )}
-          <p id={fileHintId} className="mt-1 text-[0.8125rem] text-muted">
-            {file ? `${file.name}, ${formatBytes(file.size)}.` : 'Nothing chosen yet.'} An exported catalog file imports
-            back as it is.
-          </p>
         </div>
         {mode === 'paste' && (
           <TextArea

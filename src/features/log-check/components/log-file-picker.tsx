@@ -1,5 +1,6 @@
-import { useId, useRef, useState, type DragEvent } from 'react';
+import { useRef, useState, type DragEvent } from 'react';
 import { cx } from '../../../lib/class-names';
+import { ChosenFile, FileField } from '../../../components/ui/file-field';
 import { acceptAttribute, formatBytes } from '../../../lib/upload-size';
 import { logFileUploadLimit } from '../../../../shared/upload-limits';
 
@@ -20,9 +21,6 @@ const accept = `${acceptAttribute(logFileUploadLimit)},text/csv,text/plain,text/
  * the input, Enter or Space opens the browser's file chooser).
  */
 export function LogFilePicker({ file, onChoose, error, disabled = false, kept = false }: LogFilePickerProps) {
-  const inputId = useId();
-  const hintId = useId();
-  const errorId = useId();
   const [dragging, setDragging] = useState(false);
   const dragDepth = useRef(0);
   const input = useRef<HTMLInputElement>(null);
@@ -73,47 +71,27 @@ export function LogFilePicker({ file, onChoose, error, disabled = false, kept = 
       <p className="mt-0.5 text-[0.8125rem] text-muted" aria-hidden="true">
         or choose it below.
       </p>
-      <div className="mt-3">
-        <label htmlFor={inputId} className="mb-1 block text-sm font-semibold text-ink">
-          Logger file
-        </label>
-        <input
-          ref={input}
-          id={inputId}
-          type="file"
-          accept={accept}
-          disabled={disabled}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={cx(error ? errorId : undefined, hintId) || undefined}
-          onChange={(event) => {
-            const chosen = event.target.files?.[0];
-            if (chosen) onChoose(chosen);
-          }}
-          className={cx(
-            'block w-full max-w-md text-sm text-ink',
-            'file:mr-3 file:min-h-9 file:cursor-pointer file:rounded-[3px] file:border file:border-edge file:bg-surface file:px-3.5 file:text-sm file:font-medium file:text-ink hover:file:bg-wash',
-            'disabled:cursor-not-allowed disabled:opacity-55',
-          )}
-        />
-        {error && (
-          <p id={errorId} className="mt-1 flex gap-1.5 text-sm font-medium text-red">
-            <span aria-hidden="true">✕</span>
-            <span>{error}</span>
-          </p>
-        )}
-        <p id={hintId} className="mt-1 text-[0.8125rem] text-muted">
-          A CSV, TSV or text export of the logger, up to {formatBytes(logFileUploadLimit.maxFileBytes)}.{' '}
-          {kept
-            ? 'When you submit the run, the file is stored byte for byte with its SHA-256 as the run’s evidence.'
-            : 'Nothing is saved: the file is read and analysed, then forgotten.'}
-        </p>
-      </div>
-      {file && (
-        <p className="mt-3 text-sm text-ink">
-          Chosen: <span className="font-mono text-[0.8125rem] break-all">{file.name}</span>{' '}
-          <span className="numeric text-muted">({formatBytes(file.size)})</span>
-        </p>
-      )}
+      <FileField
+        ref={input}
+        className="mt-3"
+        label="Logger file"
+        accept={accept}
+        disabled={disabled}
+        error={error ?? undefined}
+        description={
+          <>
+            A CSV, TSV or text export of the logger, up to {formatBytes(logFileUploadLimit.maxFileBytes)}.{' '}
+            {kept
+              ? 'When you submit the run, the file is stored byte for byte with its SHA-256 as the run’s evidence.'
+              : 'Nothing is saved: the file is read and analysed, then forgotten.'}
+          </>
+        }
+        onChange={(event) => {
+          const chosen = event.target.files?.[0];
+          if (chosen) onChoose(chosen);
+        }}
+      />
+      <ChosenFile file={file} className="mt-3" />
     </div>
   );
 }

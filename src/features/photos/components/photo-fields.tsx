@@ -1,5 +1,6 @@
 import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
+import { draftField } from '../../../components/ui/draft-field';
 import type { FieldErrors } from '../../../lib/form-errors';
 import { zodFieldErrors } from '../../../lib/form-errors';
 import {
@@ -41,8 +42,7 @@ export function PhotoFields({
   errors: FieldErrors;
   disabled?: boolean;
 }) {
-  const set = (name: keyof PhotoFieldsDraft) => (event: { target: { value: string } }) =>
-    onChange({ ...draft, [name]: event.target.value });
+  const field = draftField(draft, onChange, errors);
   return (
     <>
       <Select
@@ -50,9 +50,7 @@ export function PhotoFields({
         label="What it shows"
         placeholder="Choose…"
         options={kindOptions}
-        value={draft.kind}
-        onChange={set('kind')}
-        error={errors.kind}
+        {...field('kind')}
         disabled={disabled}
       />
       <TextField
@@ -60,9 +58,7 @@ export function PhotoFields({
         label="Caption"
         optional
         description="Shown under the photo, e.g. what to notice."
-        value={draft.caption}
-        onChange={set('caption')}
-        error={errors.caption}
+        {...field('caption')}
         maxLength={300}
         disabled={disabled}
       />
@@ -70,9 +66,7 @@ export function PhotoFields({
         id={`${idPrefix}-alt`}
         label="Alt text"
         description="What a screen reader says instead of the photo: what is in it, in a sentence."
-        value={draft.altText}
-        onChange={set('altText')}
-        error={errors.altText}
+        {...field('altText')}
         maxLength={300}
         disabled={disabled}
       />

@@ -1,12 +1,12 @@
-import { useId, useRef, useState, type FormEvent } from 'react';
+import { useId, useState, type FormEvent } from 'react';
 import { Link } from 'react-router';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { UploadProgress } from '../../../components/ui/upload-progress';
+import { UploadProgress, useCancellableUpload } from '../../../components/ui/upload-progress';
+import { ChosenFile, FileField } from '../../../components/ui/file-field';
 import { isApiError } from '../../../lib/api-client';
-import { cx } from '../../../lib/class-names';
 import type { FieldErrors } from '../../../lib/form-errors';
-import { isUploadCancelled, type UploadProgress as Progress } from '../../../lib/upload';
+import { isUploadCancelled } from '../../../lib/upload';
 import { acceptAttribute, fileTooLargeMessage, formatBytes, hasAcceptedExtension } from '../../../lib/upload-size';
 import { photoUploadLimit } from '../../../../shared/upload-limits';
 import { useUploadPhoto } from '../api/photos-api';
@@ -35,16 +35,13 @@ export interface PhotoUploadFormProps {
  */
 export function PhotoUploadForm({ roundupId, entryId, signInPath }: PhotoUploadFormProps) {
   const inputId = useId();
-  const hintId = useId();
-  const fileErrorId = useId();
   const [file, setFile] = useState<File | null>(null);
   const [inputKey, setInputKey] = useState(0);
   const [draft, setDraft] = useState<PhotoFieldsDraft>(emptyPhotoFields);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [message, setMessage] = useState<{ text: string; signedOut: boolean } | null>(null);
-  const [progress, setProgress] = useState<Progress | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
-  const controller = useRef<AbortController | null>(null);
+  const sender = useCancellableUpload();
   const upload = useUploadPhoto(roundupId, entryId);
 
   const choose = (chosen: File | undefined) => {
@@ -67,9 +64,8 @@ export function PhotoUploadForm({ roundupId, entryId, signInPath }: PhotoUploadF
     }
     setErrors(found);
     if (!file || !checked.fields || Object.values(found).some(Boolean)) return;
-    controller.current = new AbortController();
     upload.mutate(
-      { file, fields: checked.fields, onProgress: setProgress, signal: controller.current.signal },
+      { file, fields: checked.fields, ...sender.start() },
       {
         onSuccess: (photo) => {
           setFile(null);
@@ -102,7 +98,7 @@ export function PhotoUploadForm({ roundupId, entryId, signInPath }: PhotoUploadF
             setMessage({ text: failure.message, signedOut: false });
           }
         },
-        onSettled: () => setProgress(null),
+        onSettled: sender.settled,
       },
     );
   };
@@ -111,50 +107,31 @@ export function PhotoUploadForm({ roundupId, entryId, signInPath }: PhotoUploadF
   return (
     <form noValidate onSubmit={submit} aria-label="Add a photo" className="space-y-4">
       <div>
-        <label htmlFor={inputId} className="mb-1 block text-sm font-semibold text-ink">
-          Photo file
-        </label>
-        <input
+        <FileField
           key={inputKey}
           id={inputId}
-          type="file"
+          label="Photo file"
           accept={`${acceptAttribute(photoUploadLimit)},image/jpeg,image/png,image/webp`}
           disabled={sending}
-          aria-invalid={errors.file ? true : undefined}
-          aria-describedby={cx(errors.file ? fileErrorId : undefined, hintId) || undefined}
+          error={errors.file}
+          description={
+            <>
+              JPEG, PNG or WebP up to {formatBytes(photoUploadLimit.maxFileBytes)}. It is turned upright, stripped of
+              its metadata (location included) and kept in web sizes only.
+            </>
+          }
           onChange={(event) => choose(event.target.files?.[0])}
-          className={cx(
-            'block w-full max-w-md text-sm text-ink',
-            'file:mr-3 file:min-h-9 file:cursor-pointer file:rounded-[3px] file:border file:border-edge file:bg-surface file:px-3.5 file:text-sm file:font-medium file:text-ink hover:file:bg-wash',
-            'disabled:cursor-not-allowed disabled:opacity-55',
-          )}
         />
-        {errors.file && (
-          <p id={fileErrorId} className="mt-1 flex gap-1.5 text-sm font-medium text-red">
-            <span aria-hidden="true">✕</span>
-            <span>{errors.file}</span>
-          </p>
-        )}
-        <p id={hintId} className="mt-1 text-[0.8125rem] text-muted">
-          JPEG, PNG or WebP up to {formatBytes(photoUploadLimit.maxFileBytes)}. It is turned upright, stripped of its
-          metadata (location included) and kept in web sizes only.
-        </p>
-        {file && (
-          <p className="mt-1 text-sm text-ink">
-            Chosen: <span className="font-mono text-[0.8125rem] break-all">{file.name}</span>{' '}
-            <span className="numeric text-muted">({formatBytes(file.size)})</span>
-          </p>
-        )}
+        <ChosenFile file={file} className="mt-1" />
       </div>
       <div className="grid gap-4 md:grid-cols-3">
         <PhotoFields idPrefix="new-photo" draft={draft} onChange={setDraft} errors={errors} disabled={sending} />
       </div>
-      {progress && (
+      {sender.shown && (
         <UploadProgress
-          progress={progress}
+          {...sender.shown}
           label="Uploading the photo"
           processingText="Uploaded. The server is turning it upright and making the web sizes…"
-          onCancel={() => controller.current?.abort()}
         />
       )}
       {message && (

@@ -1,12 +1,10 @@
 import { useState, type FormEvent } from 'react';
-import type { FieldErrors } from '../../../lib/form-errors';
-import { Alert } from '../../../components/ui/alert';
+import { AnnouncedAlert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
-import { describeSubmitError } from '../../../lib/form-errors';
 import { useRecordManualRun } from '../api/test-runs-api';
 import { CelsiusFields, readCelsius, type CelsiusFieldSpec } from './celsius-field';
-import { emptyFacts, factsRequest, RunFactsFields } from './record-run';
+import { RunFactsFields, useRunFacts } from './record-run';
 
 const manualFields: readonly CelsiusFieldSpec<'manualPeakC' | 'manualAmbientC'>[] = [
   {
@@ -25,58 +23,40 @@ const manualFields: readonly CelsiusFieldSpec<'manualPeakC' | 'manualAmbientC'>[
 
 /** A run entered by hand when no log exists: peak and ambient. Marked "Manual" everywhere it is shown. */
 export function ManualRunForm({ cellId, onRecorded }: { cellId: number; onRecorded: (runId: number) => void }) {
-  const [facts, setFacts] = useState(emptyFacts);
+  const run = useRunFacts();
   const [temperatures, setTemperatures] = useState({ manualPeakC: '', manualAmbientC: '' });
   const [throttled, setThrottled] = useState(false);
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const [message, setMessage] = useState<string | null>(null);
-  const [askBookingReason, setAskBookingReason] = useState(false);
   const record = useRecordManualRun();
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    const checked = factsRequest(facts);
     const measured = readCelsius(manualFields, temperatures);
-    const found = { ...checked.errors, ...measured.errors };
-    setErrors(found);
-    setMessage(null);
-    if (!checked.request || Object.keys(found).length > 0) return;
+    const facts = run.check(measured.errors);
+    if (!facts) return;
     record.mutate(
-      { cellId, request: { ...checked.request, ...measured.values, throttled } },
-      {
-        onSuccess: ({ run }) => onRecorded(run.id),
-        onError: (error) => {
-          const described = describeSubmitError(error);
-          if (described.fields.outsideBookingReason) setAskBookingReason(true);
-          setErrors(described.fields);
-          setMessage(described.message);
-        },
-      },
+      { cellId, request: { ...facts, ...measured.values, throttled } },
+      { onSuccess: (recorded) => onRecorded(recorded.run.id), onError: run.fail },
     );
   };
 
   return (
     <form noValidate onSubmit={submit} className="space-y-4" aria-label="Manual entry">
-      <RunFactsFields
-        idPrefix="manual-run"
-        facts={facts}
-        onChange={setFacts}
-        errors={errors}
-        askBookingReason={askBookingReason}
-      />
+      <RunFactsFields idPrefix="manual-run" {...run.fields} />
       <div className="grid gap-4 sm:grid-cols-2">
-        <CelsiusFields fields={manualFields} typed={temperatures} onChange={setTemperatures} errors={errors} required />
+        <CelsiusFields
+          fields={manualFields}
+          typed={temperatures}
+          onChange={setTemperatures}
+          errors={run.errors}
+          required
+        />
       </div>
       <Checkbox
         label="The board throttled"
         checked={throttled}
         onChange={(event) => setThrottled(event.target.checked)}
       />
-      {message && (
-        <Alert tone="danger" announce>
-          {message}
-        </Alert>
-      )}
+      <AnnouncedAlert tone="danger" message={run.message} />
       <Button type="submit" variant="primary" pending={record.isPending}>
         Save the manual run
       </Button>

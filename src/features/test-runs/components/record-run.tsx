@@ -1,13 +1,13 @@
-import { useRef, useState, type FormEvent } from 'react';
-import type { FieldErrors } from '../../../lib/form-errors';
-import { Alert } from '../../../components/ui/alert';
+import { useState, type FormEvent } from 'react';
+import { describeSubmitError, type FieldErrors } from '../../../lib/form-errors';
+import { AnnouncedAlert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
 import { TextArea } from '../../../components/ui/text-area';
 import { TextField } from '../../../components/ui/text-field';
-import { UploadProgress } from '../../../components/ui/upload-progress';
-import { isApiError } from '../../../lib/api-client';
-import { isUploadCancelled, type UploadProgress as Progress } from '../../../lib/upload';
+import { draftField } from '../../../components/ui/draft-field';
+import { UploadProgress, useCancellableUpload } from '../../../components/ui/upload-progress';
+import { isUploadCancelled } from '../../../lib/upload';
 import type { AnalysisRequestInput, ColumnMapping } from '../../../../shared/schemas/analysis';
 import { LogCheckSteps } from '../../log-check/components/log-check-steps';
 import { LogFilePanel } from '../../log-check/components/log-file-panel';
@@ -44,43 +44,24 @@ export function RunFactsFields({
   errors: FieldErrors;
   askBookingReason: boolean;
 }) {
-  const set = (name: keyof RunFactsDraft) => (event: { target: { value: string } }) =>
-    onChange({ ...facts, [name]: event.target.value });
+  const field = draftField(facts, onChange, errors);
   return (
     <>
-      <TextField
-        id={`${idPrefix}-firmware`}
-        label="Firmware (BIOS) version"
-        value={facts.firmwareVersion}
-        onChange={set('firmwareVersion')}
-        error={errors.firmwareVersion}
-        required
-      />
+      <TextField id={`${idPrefix}-firmware`} label="Firmware (BIOS) version" {...field('firmwareVersion')} required />
       <TextField
         id={`${idPrefix}-started`}
         type="datetime-local"
         label="Soak started"
         description={zoneSentence()}
-        value={facts.startedAt}
-        onChange={set('startedAt')}
-        error={errors.startedAt}
+        {...field('startedAt')}
         required
       />
-      <TextArea
-        id={`${idPrefix}-notes`}
-        label="Notes"
-        optional
-        value={facts.notes}
-        onChange={set('notes')}
-        error={errors.notes}
-      />
+      <TextArea id={`${idPrefix}-notes`} label="Notes" optional {...field('notes')} />
       {askBookingReason && (
         <TextArea
           id={`${idPrefix}-outside-booking`}
           label="Why this run is outside your bookings"
-          value={facts.outsideBookingReason}
-          onChange={set('outsideBookingReason')}
-          error={errors.outsideBookingReason}
+          {...field('outsideBookingReason')}
         />
       )}
     </>
@@ -105,6 +86,36 @@ export function factsRequest(facts: RunFactsDraft) {
   };
 }
 
+/**
+ * A run form's facts as typed, their problems and the form's message; once the server asks why a run is outside the
+ * bookings, the reason field appears and stays.
+ */
+export function useRunFacts() {
+  const [facts, setFacts] = useState(emptyFacts);
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const [message, setMessage] = useState<string | null>(null);
+  const [askBookingReason, setAskBookingReason] = useState(false);
+
+  /** Checks the facts (with the form's own problems, `more`); the request when nothing is wrong, else null. */
+  const check = (more: FieldErrors = {}) => {
+    const checked = factsRequest(facts);
+    const found = { ...checked.errors, ...more };
+    setErrors(found);
+    setMessage(null);
+    return Object.keys(found).length > 0 ? null : checked.request;
+  };
+
+  /** Shows a refused request: problems beside their fields, the server's message under the form. */
+  const fail = (error: unknown) => {
+    const described = describeSubmitError(error);
+    if (described.fields.outsideBookingReason) setAskBookingReason(true);
+    setErrors(described.fields);
+    setMessage(described.message);
+  };
+
+  return { check, fail, message, errors, fields: { facts, onChange: setFacts, errors, askBookingReason } };
+}
+
 export interface RecordLoggerRunProps {
   cellId: number;
   rememberedMapping: ColumnMapping | null;
@@ -120,45 +131,31 @@ export function RecordLoggerRun({ cellId, rememberedMapping, signInPath, onRecor
   const check = useLogCheck();
   const { file, result } = check;
   const remembered = useAppliedMapping(check, rememberedMapping);
-  const [facts, setFacts] = useState(emptyFacts);
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const [message, setMessage] = useState<string | null>(null);
-  const [askBookingReason, setAskBookingReason] = useState(false);
-  const [progress, setProgress] = useState<Progress | null>(null);
-  const controller = useRef<AbortController | null>(null);
+  const run = useRunFacts();
+  const sender = useCancellableUpload();
   const record = useRecordLoggerRun();
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
     if (!file || !result) return;
-    const checked = factsRequest(facts);
-    setErrors(checked.errors);
-    setMessage(null);
-    if (!checked.request) return;
+    const facts = run.check();
+    if (!facts) return;
     const analysed = JSON.parse(result.requestJson) as AnalysisRequestInput;
     if (!analysed.mapping) return;
     const { mapping } = analysed;
-    controller.current = new AbortController();
     record.mutate(
       {
         cellId,
         file,
-        request: { ...checked.request, mapping, options: analysed.options, rememberMapping: true },
-        onProgress: setProgress,
-        signal: controller.current.signal,
+        request: { ...facts, mapping, options: analysed.options, rememberMapping: true },
+        ...sender.start(),
       },
       {
         onSuccess: ({ run }) => onRecorded(run.id),
         onError: (failure: unknown) => {
-          const error = failure;
-          if (isUploadCancelled(error)) return;
-          if (isApiError(error)) {
-            if (error.code === 'outside_booking') setAskBookingReason(true);
-            setErrors(error.fields);
-            setMessage(error.message);
-          } else setMessage('Something went wrong. Try again.');
+          if (!isUploadCancelled(failure)) run.fail(failure);
         },
-        onSettled: () => setProgress(null),
+        onSettled: sender.settled,
       },
     );
   };
@@ -179,24 +176,13 @@ export function RecordLoggerRun({ cellId, rememberedMapping, signInPath, onRecor
           description="What the board ran and when; the file above is stored with the run as evidence."
         >
           <form noValidate onSubmit={submit} className="space-y-4" aria-label="Run details">
-            <RunFactsFields
-              idPrefix="logger-run"
-              facts={facts}
-              onChange={setFacts}
-              errors={errors}
-              askBookingReason={askBookingReason}
-            />
-            {message && (
-              <Alert tone="danger" announce>
-                {message}
-              </Alert>
-            )}
-            {progress && (
+            <RunFactsFields idPrefix="logger-run" {...run.fields} />
+            <AnnouncedAlert tone="danger" message={run.message} />
+            {sender.shown && (
               <UploadProgress
-                progress={progress}
+                {...sender.shown}
                 label="Submitting the run"
                 processingText="Uploaded. The server is storing and analysing the log…"
-                onCancel={() => controller.current?.abort()}
               />
             )}
             <Button type="submit" variant="primary" pending={record.isPending}>

@@ -3,7 +3,7 @@ import type { Role } from '../shared/schemas/common';
 import { clientRoutePatterns } from '../tests/support/client-routes';
 import { demoAccounts } from './support/demo-accounts';
 import { linkIn, openDevInbox } from './support/dev-inbox';
-import { publicRoutePatterns } from './support/public-pages';
+import { compareUnder, publicRoutePatterns } from './support/public-pages';
 import { invitedWelcomeLink } from './support/invitations';
 import { signInAs } from './support/sign-in';
 import { uniqueEmail } from './support/unique';
@@ -196,11 +196,7 @@ const publicPages: Record<string, (tour: PublicTour) => AsyncGenerator<string>> 
     yield '/read/compare with its errors';
     // Two boards of the demo outlet under one load (as e2e/reader-site.spec.ts compares them).
     await page.getByLabel('Tarnwell Wend B50').check();
-    const stock = await page
-      .locator('#compare-configuration option', { hasText: 'HX-16 stock, all-core load' })
-      .getAttribute('value');
-    await page.getByLabel('Load configuration').selectOption(stock ?? '');
-    await form.getByRole('button', { name: 'Compare' }).click();
+    await compareUnder(page, 'HX-16 stock, all-core load', form);
     await expect(page.getByRole('table', { name: /hottest VRM reading over the room/ })).toBeVisible();
     const charts = await chartsWithoutTables(page);
     expect(charts.count, 'the comparison is drawn as a chart').toBeGreaterThan(0);

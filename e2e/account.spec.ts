@@ -1,15 +1,13 @@
 import { expect, test } from '@playwright/test';
 import { mainNavigation, signIn } from './support/sign-in';
-import { createStaffAccount } from './support/staff-accounts';
+import { createStaffAccount, onOwnAccountPage } from './support/staff-accounts';
 
 test('a wrong current password is shown beside its field, and the right one changes the password', async ({
   page,
   playwright,
   baseURL,
 }) => {
-  const account = await createStaffAccount(playwright, baseURL!, 'writer');
-  await signIn(page, account.email, account.password, account.displayName);
-  await mainNavigation(page).getByRole('link', { name: 'Account' }).click();
+  const account = await onOwnAccountPage(page, playwright, baseURL!, 'writer');
 
   const current = page.getByLabel('Current password', { exact: true });
   await current.fill('not-my-password');

@@ -1,15 +1,12 @@
 import { expect, test } from '@playwright/test';
-import { mainNavigation, signIn } from './support/sign-in';
-import { createStaffAccount } from './support/staff-accounts';
+import { onOwnAccountPage } from './support/staff-accounts';
 
 test('a bench tester makes a private calendar address, subscribes to it, and a reset stops the old one', async ({
   page,
   playwright,
   baseURL,
 }) => {
-  const account = await createStaffAccount(playwright, baseURL!, 'tester');
-  await signIn(page, account.email, account.password, account.displayName);
-  await mainNavigation(page).getByRole('link', { name: 'Account' }).click();
+  await onOwnAccountPage(page, playwright, baseURL!, 'tester');
 
   await page.getByRole('button', { name: 'Make my calendar address' }).click();
   const address = page.getByLabel('Your calendar address');

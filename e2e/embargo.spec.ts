@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import { apiAs, readyRoundup } from './support/ready-roundup';
 import { scheduleAhead } from './support/local-time';
-import { estimateOnBoardPage } from './support/public-pages';
+import { compareUnder, estimateOnBoardPage } from './support/public-pages';
 import { signInAs } from './support/sign-in';
 
 // The acceptance journey of embargo publishing (issue 10): an editor schedules a roundup that is genuinely ready
@@ -88,11 +88,7 @@ test('an editor schedules a ready roundup a few seconds ahead; it goes live; a r
   await readerPage.getByRole('navigation', { name: 'Site' }).getByRole('link', { name: 'Compare boards' }).click();
   await readerPage.getByLabel(boards[0].name).check();
   await readerPage.getByLabel(boards[1].name).check();
-  const stock = await readerPage
-    .locator('#compare-configuration option', { hasText: configurations[0].name })
-    .getAttribute('value');
-  await readerPage.getByLabel('Load configuration').selectOption(stock ?? '');
-  await readerPage.getByRole('button', { name: 'Compare' }).click();
+  await compareUnder(readerPage, configurations[0].name);
   const compared = readerPage.getByRole('table', { name: /hottest VRM reading over the room/ });
   await expect(compared.getByRole('row')).toHaveCount(3);
   await expect(compared).toContainText('°F');

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { expect, test } from '@playwright/test';
-import { estimateOnBoardPage } from './support/public-pages';
+import { compareUnder, estimateOnBoardPage } from './support/public-pages';
 
 const thin = '\u2009';
 const demoTitle = 'Helix-1700 boards under €150';
@@ -60,11 +60,7 @@ test.describe('reader site with JavaScript off', () => {
     await page.getByRole('navigation', { name: 'Site' }).getByRole('link', { name: 'Compare boards' }).click();
     await page.getByLabel('Korvath KV Ridgeline B50').check();
     await page.getByLabel('Tarnwell Wend B50').check();
-    const stock = await page
-      .locator('#compare-configuration option', { hasText: 'HX-16 stock, all-core load' })
-      .getAttribute('value');
-    await page.getByLabel('Load configuration').selectOption(stock ?? '');
-    await page.getByRole('button', { name: 'Compare' }).click();
+    await compareUnder(page, 'HX-16 stock, all-core load');
     const compared = page.getByRole('table', { name: /hottest VRM reading over the room/ });
     await expect(compared.getByRole('row')).toHaveCount(3);
     await expect(compared).toContainText('°F'); // the choice of unit stays

@@ -53,3 +53,13 @@ export async function estimateOnBoardPage(page: Page, link: Locator, board: stri
   await expect(page.getByRole('heading', { name: /Estimated hottest VRM reading/ })).toBeVisible();
   await expect(page.locator('.estimate-figure')).toContainText('°F');
 }
+
+/**
+ * On the Compare boards page, with the boards ticked: chooses the load configuration whose name the option shows and
+ * sends the form (its button looked for `within` the given part of the page).
+ */
+export async function compareUnder(page: Page, configuration: string, within: Page | Locator = page) {
+  const option = await page.locator('#compare-configuration option', { hasText: configuration }).getAttribute('value');
+  await page.getByLabel('Load configuration').selectOption(option ?? '');
+  await within.getByRole('button', { name: 'Compare' }).click();
+}

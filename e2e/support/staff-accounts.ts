@@ -1,6 +1,7 @@
-import { expect, type PlaywrightWorkerArgs } from '@playwright/test';
+import { expect, type Page, type PlaywrightWorkerArgs } from '@playwright/test';
 import type { Role } from '../../shared/schemas/common';
 import { demoAccounts } from './demo-accounts';
+import { mainNavigation, signIn } from './sign-in';
 import { uniqueEmail, uniqueSuffix } from './unique';
 
 export interface StaffAccount {
@@ -40,4 +41,17 @@ export async function createStaffAccount(
   } finally {
     await api.dispose();
   }
+}
+
+/** A fresh account of the role, signed in on the page and opened on its own Account page. */
+export async function onOwnAccountPage(
+  page: Page,
+  playwright: PlaywrightWorkerArgs['playwright'],
+  baseURL: string,
+  role: Role,
+): Promise<StaffAccount> {
+  const account = await createStaffAccount(playwright, baseURL, role);
+  await signIn(page, account.email, account.password, account.displayName);
+  await mainNavigation(page).getByRole('link', { name: 'Account' }).click();
+  return account;
 }

@@ -1,8 +1,9 @@
-import { useId, useMemo, useState, type ReactNode } from 'react';
+import { useMemo, useState, type ReactNode } from 'react';
 import { cx } from '../../lib/class-names';
 import { useColumnChoice } from '../../lib/use-column-choice';
 import { ColumnChooser } from './column-chooser';
 import { ScrollingTable } from './scrolling-table';
+import { SearchField } from './search-field';
 
 export type SortDirection = 'ascending' | 'descending';
 export interface SortState {
@@ -39,16 +40,28 @@ export interface DataTableColumn<Row> {
   className?: string;
 }
 
-export interface DataTableProps<Row> {
+/** A table's columns; left-out ones (false, null or undefined) are skipped, e.g. `canEdit && actionsColumn(…)`. */
+export type DataTableColumns<Row> = readonly (DataTableColumn<Row> | false | null | undefined)[];
+
+type RowKey<Row> = (row: Row) => string | number;
+
+export interface DataTableFilter {
+  label: string;
+  placeholder?: string;
+  /** Shown only while the table has more rows than this: a short table is read at a glance. */
+  aboveRows?: number;
+}
+
+interface DataTableOwnProps<Row> {
   /** Names the table for screen readers (shown when `showCaption`). */
   caption: string;
   showCaption?: boolean;
   rows: readonly Row[];
-  columns: readonly DataTableColumn<Row>[];
-  rowKey: (row: Row) => string | number;
-  initialSort?: SortState;
-  /** A filter box above the table; pass false to leave it out. */
-  filter?: { label: string; placeholder?: string } | false;
+  columns: DataTableColumns<Row>;
+  /** The sort the table opens with; a column id sorts that column ascending. */
+  initialSort?: SortState | string;
+  /** A filter box above the table; none when left out (or false). */
+  filter?: DataTableFilter | false;
   /** Singular and plural noun for the count line, e.g. ['user', 'users']. */
   noun?: [string, string];
   /** Extra controls next to the filter box. */
@@ -61,6 +74,12 @@ export interface DataTableProps<Row> {
   /** A "Columns" chooser in the toolbar; the choice is remembered on this device under `storageKey`. */
   columnChoice?: { storageKey: string };
 }
+
+/** Rows with an `id` are keyed by it unless `rowKey` says otherwise; other rows need a `rowKey`. */
+export type DataTableProps<Row> = DataTableOwnProps<Row> &
+  (Row extends { id: string | number } ? { rowKey?: RowKey<Row> } : { rowKey: RowKey<Row> });
+
+const keyById = (row: unknown) => (row as { id: string | number }).id;
 
 // Sticky cells need their own background so the scrolled columns pass underneath; the line shows the edge.
 const stickyStart = 'sticky left-0 shadow-[inset_-1px_0_0_var(--color-rule)]';
@@ -79,22 +98,30 @@ function compare(a: string | number | null, b: string | number | null): number {
 }
 
 /** A dense, sortable, filterable table: headers are buttons, the sorted one carries aria-sort. */
-export function DataTable<Row>({
-  caption,
-  showCaption = false,
-  rows,
-  rowKey,
-  initialSort,
-  filter = { label: 'Filter' },
-  noun = ['row', 'rows'],
-  toolbar,
-  footnote,
-  empty,
-  rowClassName,
-  columnChoice,
-  columns: allColumns,
-}: DataTableProps<Row>) {
-  const [sort, setSort] = useState<SortState | undefined>(initialSort);
+export function DataTable<Row>(props: DataTableProps<Row>) {
+  const {
+    caption,
+    showCaption = false,
+    rows,
+    rowKey = keyById,
+    initialSort,
+    filter: filterOption,
+    noun = ['row', 'rows'],
+    toolbar,
+    footnote,
+    empty,
+    rowClassName,
+    columnChoice,
+    columns: givenColumns,
+  } = props as DataTableOwnProps<Row> & { rowKey?: RowKey<Row> };
+  const [sort, setSort] = useState<SortState | undefined>(() =>
+    typeof initialSort === 'string' ? { columnId: initialSort, direction: 'ascending' } : initialSort,
+  );
+  const allColumns = useMemo(
+    () => givenColumns.filter((column): column is DataTableColumn<Row> => Boolean(column)),
+    [givenColumns],
+  );
+  const filter = filterOption && rows.length > (filterOption.aboveRows ?? -1) ? filterOption : undefined;
   const choice = useColumnChoice(columnChoice?.storageKey);
   const choosable = useMemo(
     () =>
@@ -119,7 +146,6 @@ export function DataTable<Row>({
     [allColumns, columnChoice, choice],
   );
   const [query, setQuery] = useState('');
-  const filterId = useId();
 
   const visibleRows = useMemo(() => {
     const needle = query.trim().toLocaleLowerCase();
@@ -166,19 +192,13 @@ export function DataTable<Row>({
       {(filter || toolbar || columnChoice) && (
         <div className="mb-2.5 flex flex-wrap items-end gap-3">
           {filter && (
-            <div className="w-full sm:w-72">
-              <label htmlFor={filterId} className="mb-1 block text-sm font-semibold">
-                {filter.label}
-              </label>
-              <input
-                id={filterId}
-                type="search"
-                value={query}
-                onChange={(event) => setQuery(event.target.value)}
-                placeholder={filter.placeholder}
-                className="block w-full rounded-[3px] border border-edge bg-surface px-2.5 py-1.5 placeholder:text-muted focus-visible:border-copper"
-              />
-            </div>
+            <SearchField
+              label={filter.label}
+              value={query}
+              onChange={(event) => setQuery(event.target.value)}
+              placeholder={filter.placeholder}
+              className="w-full sm:w-72"
+            />
           )}
           {toolbar}
           {columnChoice && <ColumnChooser columns={choosable} {...choice} />}

@@ -16,3 +16,12 @@ export function DateTime({ value, fallback = '—' }: DateTimeProps) {
     </time>
   );
 }
+
+/** The line under a table of such times that names the zone they are in. */
+export function DeviceTimeZoneNote() {
+  return (
+    <>
+      Times are in <strong className="font-medium">{userTimeZone()}</strong>, the time zone of this device.
+    </>
+  );
+}

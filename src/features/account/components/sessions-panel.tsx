@@ -3,9 +3,10 @@ import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
-import { DateTime } from '../../../components/ui/date-time';
+import { actionsColumn, instantColumn } from '../../../components/ui/data-table-columns';
+import { DeviceTimeZoneNote } from '../../../components/ui/date-time';
 import { Panel } from '../../../components/ui/panel';
-import { formatInstant, userTimeZone } from '../../../lib/format-time';
+import { formatInstant } from '../../../lib/format-time';
 import type { SessionInfo } from '../../../../shared/schemas/auth';
 import { useSessions } from '../api/get-sessions';
 import { useRevokeSession } from '../api/revoke-session';
@@ -47,38 +48,23 @@ export function SessionsPanel({ className }: { className?: string }) {
         numeric: true,
         cell: (session) => session.ipAddress ?? <span className="text-muted">—</span>,
       },
-      {
-        id: 'created',
-        header: 'Signed in',
-        numeric: true,
-        sortValue: (session) => Date.parse(session.createdAt),
-        cell: (session) => <DateTime value={session.createdAt} />,
-      },
-      {
-        id: 'expires',
-        header: 'Expires',
-        numeric: true,
-        sortValue: (session) => Date.parse(session.expiresAt),
-        cell: (session) => <DateTime value={session.expiresAt} />,
-      },
-      {
-        id: 'actions',
-        header: 'Actions',
-        cell: (session) =>
-          session.current ? (
-            <span className="text-xs text-muted">Sign out ends it</span>
-          ) : (
-            <Button
-              size="sm"
-              variant="danger"
-              pending={revoke.isPending && revoke.variables === session.id}
-              onClick={() => revoke.mutate(session.id)}
-              aria-label={`Revoke the session signed in ${formatInstant(session.createdAt)}`}
-            >
-              Revoke
-            </Button>
-          ),
-      },
+      instantColumn('created', 'Signed in', (session) => session.createdAt),
+      instantColumn('expires', 'Expires', (session) => session.expiresAt),
+      actionsColumn((session) =>
+        session.current ? (
+          <span className="text-xs text-muted">Sign out ends it</span>
+        ) : (
+          <Button
+            size="sm"
+            variant="danger"
+            pending={revoke.isPending && revoke.variables === session.id}
+            onClick={() => revoke.mutate(session.id)}
+            aria-label={`Revoke the session signed in ${formatInstant(session.createdAt)}`}
+          >
+            Revoke
+          </Button>
+        ),
+      ),
     ],
     [revoke],
   );
@@ -104,15 +90,9 @@ export function SessionsPanel({ className }: { className?: string }) {
         caption="Your sessions"
         rows={sessions}
         columns={columns}
-        rowKey={(session) => session.id}
         initialSort={{ columnId: 'created', direction: 'descending' }}
-        filter={false}
         noun={['session', 'sessions']}
-        footnote={
-          <>
-            Times are in <strong className="font-medium">{userTimeZone()}</strong>, the time zone of this device.
-          </>
-        }
+        footnote={<DeviceTimeZoneNote />}
       />
     </Panel>
   );

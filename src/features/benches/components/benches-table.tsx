@@ -2,8 +2,8 @@ import { useMemo } from 'react';
 import { Link } from 'react-router';
 import { paths } from '../../../lib/paths';
 import { Badge } from '../../../components/ui/badge';
-import { Button } from '../../../components/ui/button';
-import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { DataTable, type DataTableColumns } from '../../../components/ui/data-table';
+import { buttonColumn, textColumn } from '../../../components/ui/data-table-columns';
 import type { Bench, Booking } from '../../../../shared/schemas/benches';
 import { formatDayAndTime } from '../../../lib/format-time';
 
@@ -18,41 +18,29 @@ export interface BenchesTableProps {
 }
 
 export function BenchesTable({ benches, bookings, onEdit, now }: BenchesTableProps) {
-  const columns = useMemo<DataTableColumn<Bench>[]>(() => {
+  const columns = useMemo<DataTableColumns<Bench>>(() => {
     const nextBooking = (bench: Bench) =>
       bookings.find((booking) => booking.bench.id === bench.id && Date.parse(booking.endsAt) > now) ?? null;
-    const list: DataTableColumn<Bench>[] = [
-      {
-        id: 'name',
-        header: 'Bench',
+    return [
+      textColumn('name', 'Bench', (bench) => bench.name, {
         rowHeader: true,
-        sortValue: (bench) => bench.name,
         cell: (bench) => (
           <Link to={paths.bench(bench.id)} className="whitespace-nowrap text-copper underline-offset-2 hover:underline">
             {bench.name}
           </Link>
         ),
-      },
-      {
-        id: 'status',
-        header: 'Status',
-        sortValue: (bench) => (bench.active ? 'In service' : 'Out of service'),
+      }),
+      textColumn('status', 'Status', (bench) => (bench.active ? 'In service' : 'Out of service'), {
         cell: (bench) =>
           bench.active ? <Badge tone="positive">In service</Badge> : <Badge tone="muted">Out of service</Badge>,
-      },
-      {
-        id: 'location',
-        header: 'Location',
-        sortValue: (bench) => bench.location,
+      }),
+      textColumn('location', 'Location', (bench) => bench.location, {
         cell: (bench) => bench.location ?? <span className="text-muted">—</span>,
-      },
-      {
-        id: 'profile',
-        header: 'Built to profile',
+      }),
+      textColumn('profile', 'Built to profile', (bench) => bench.benchProfile?.name ?? null, {
         hideBelow: 'md',
-        sortValue: (bench) => bench.benchProfile?.name ?? null,
         cell: (bench) => bench.benchProfile?.name ?? <span className="text-muted">None</span>,
-      },
+      }),
       {
         id: 'next',
         header: 'Next booking this week',
@@ -76,19 +64,8 @@ export function BenchesTable({ benches, bookings, onEdit, now }: BenchesTablePro
           <span className="text-[0.8125rem]">{bench.notes ?? <span className="text-muted">—</span>}</span>
         ),
       },
+      onEdit && buttonColumn({ label: 'Edit', name: (bench) => `Edit ${bench.name}`, onClick: onEdit }),
     ];
-    if (onEdit) {
-      list.push({
-        id: 'actions',
-        header: 'Actions',
-        cell: (bench) => (
-          <Button size="sm" onClick={() => onEdit(bench)} aria-label={`Edit ${bench.name}`}>
-            Edit
-          </Button>
-        ),
-      });
-    }
-    return list;
   }, [bookings, onEdit, now]);
 
   return (
@@ -96,9 +73,7 @@ export function BenchesTable({ benches, bookings, onEdit, now }: BenchesTablePro
       caption="Benches"
       rows={benches}
       columns={columns}
-      rowKey={(bench) => bench.id}
-      initialSort={{ columnId: 'name', direction: 'ascending' }}
-      filter={false}
+      initialSort="name"
       rowClassName={(bench) => (bench.active ? undefined : 'text-muted')}
     />
   );

@@ -1,7 +1,8 @@
-import { useEffect, useId, useRef, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useSearchParams } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
+import { SearchField } from '../../../components/ui/search-field';
 import { Select } from '../../../components/ui/select';
 import {
   formFactorLabels,
@@ -19,7 +20,6 @@ const toOptions = (values: readonly string[]) => values.map((value) => ({ value,
 /** Search and filters above the catalog table; every change is written to the address. */
 export function CatalogFilters({ facets }: { facets: ProductList['facets'] }) {
   const [params, setParams] = useSearchParams();
-  const searchId = useId();
   const urlSearch = params.get('q') ?? '';
   const [search, setSearch] = useState(urlSearch);
   const [seenUrlSearch, setSeenUrlSearch] = useState(urlSearch);
@@ -83,25 +83,19 @@ export function CatalogFilters({ facets }: { facets: ProductList['facets'] }) {
       className="mb-4 rounded-[3px] border border-rule bg-surface px-4 py-3"
     >
       <div className="grid grid-cols-2 gap-3 lg:grid-cols-4">
-        <div className="col-span-2">
-          <label htmlFor={searchId} className="mb-1 block text-sm font-semibold">
-            Search
-          </label>
-          <input
-            id={searchId}
-            type="search"
-            value={search}
-            onChange={(event) => typeSearch(event.target.value)}
-            onKeyDown={(event) => {
-              if (event.key === 'Enter') {
-                clearTimeout(timer.current);
-                update('q', search.trim());
-              }
-            }}
-            placeholder="Maker, model, chipset, controller, stage part"
-            className="block w-full rounded-[3px] border border-edge bg-surface px-2.5 py-1.5 placeholder:text-muted focus-visible:border-copper"
-          />
-        </div>
+        <SearchField
+          label="Search"
+          value={search}
+          onChange={(event) => typeSearch(event.target.value)}
+          onKeyDown={(event) => {
+            if (event.key === 'Enter') {
+              clearTimeout(timer.current);
+              update('q', search.trim());
+            }
+          }}
+          placeholder="Maker, model, chipset, controller, stage part"
+          className="col-span-2"
+        />
         {select('maker', 'Maker', toOptions(facets.makers))}
         {select('platform', 'Platform', toOptions(facets.platforms))}
         {select('chipset', 'Chipset', toOptions(facets.chipsets))}

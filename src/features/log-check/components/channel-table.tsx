@@ -1,5 +1,6 @@
 import { useMemo } from 'react';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { numericColumn, textColumn } from '../../../components/ui/data-table-columns';
 import type { ChannelFigures } from '../../../../shared/schemas/analysis';
 import { formatC, formatDeltaC, formatDuration, unitLabel } from './format-figures';
 
@@ -7,36 +8,20 @@ import { formatC, formatDeltaC, formatDuration, unitLabel } from './format-figur
 export function ChannelTable({ channels, peakChannel }: { channels: readonly ChannelFigures[]; peakChannel: string }) {
   const columns = useMemo<DataTableColumn<ChannelFigures>[]>(
     () => [
-      {
-        id: 'column',
-        header: 'Probe',
+      textColumn('column', 'Probe', (channel) => channel.column, {
         rowHeader: true,
-        sortValue: (channel) => channel.column,
         cell: (channel) => (
           <span className="font-mono text-[0.8125rem]">
             {channel.column}
             {channel.column === peakChannel && <span className="ml-1.5 font-sans text-xs text-copper">hottest</span>}
           </span>
         ),
-      },
+      }),
       { id: 'unit', header: 'Logged in', cell: (channel) => unitLabel(channel.unit), hideBelow: 'md' },
-      { id: 'peak', header: 'Peak', numeric: true, sortValue: (c) => c.peakC, cell: (c) => formatC(c.peakC) },
-      {
-        id: 'peakAt',
-        header: 'Peak at',
-        numeric: true,
-        sortValue: (c) => c.peakAtS,
-        cell: (c) => formatDuration(c.peakAtS),
-        hideBelow: 'sm',
-      },
+      numericColumn('peak', 'Peak', (c) => c.peakC, formatC),
+      numericColumn('peakAt', 'Peak at', (c) => c.peakAtS, formatDuration, { hideBelow: 'sm' }),
       { id: 'min', header: 'Lowest', numeric: true, cell: (c) => formatC(c.minC), hideBelow: 'md' },
-      {
-        id: 'steady',
-        header: 'Final mean',
-        numeric: true,
-        sortValue: (c) => c.steadyStateMeanC,
-        cell: (c) => formatC(c.steadyStateMeanC),
-      },
+      numericColumn('steady', 'Final mean', (c) => c.steadyStateMeanC, formatC),
       {
         id: 'change',
         header: 'Final change',
@@ -80,7 +65,6 @@ export function ChannelTable({ channels, peakChannel }: { channels: readonly Cha
       rows={channels}
       columns={columns}
       rowKey={(channel) => channel.column}
-      filter={false}
       noun={['probe', 'probes']}
       footnote="Final mean and change are over the final window of the soak; predicted steady is the plateau of a first-order fit good enough to judge by; gaps and spikes count samples."
     />

@@ -1,5 +1,6 @@
 import { useMemo } from 'react';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { numericColumn, textColumn } from '../../../components/ui/data-table-columns';
 import type { ParseError } from '../../../../shared/schemas/analysis';
 
 export interface ParseErrorTableProps {
@@ -13,32 +14,28 @@ export interface ParseErrorTableProps {
 }
 
 interface NumberedError extends ParseError {
-  key: number;
+  id: number;
 }
 
 /** The 422 answer: every problem the server found, with the line of the file and the column it is in. */
 export function ParseErrorTable({ errors, message, stage, hasPreview }: ParseErrorTableProps) {
-  const rows = useMemo<NumberedError[]>(() => errors.map((error, key) => ({ ...error, key })), [errors]);
+  const rows = useMemo<NumberedError[]>(() => errors.map((error, id) => ({ ...error, id })), [errors]);
   const columns = useMemo<DataTableColumn<NumberedError>[]>(
     () => [
-      {
-        id: 'row',
-        header: 'Row',
-        numeric: true,
-        sortValue: (error) => error.row,
-        cell: (error) => error.row ?? '—',
-      },
-      {
-        id: 'column',
-        header: 'Column',
-        sortValue: (error) => error.column ?? '',
+      numericColumn(
+        'row',
+        'Row',
+        (error) => error.row,
+        (row) => row ?? '—',
+      ),
+      textColumn('column', 'Column', (error) => error.column ?? '', {
         cell: (error) =>
           error.column ? (
             <span className="font-mono text-[0.8125rem] break-all">{error.column}</span>
           ) : (
             <span className="text-muted">—</span>
           ),
-      },
+      }),
       {
         id: 'message',
         header: 'What is wrong',
@@ -71,8 +68,7 @@ export function ParseErrorTable({ errors, message, stage, hasPreview }: ParseErr
         caption="Problems found in the logger file"
         rows={rows}
         columns={columns}
-        rowKey={(error) => error.key}
-        filter={rows.length > 8 ? { label: 'Filter problems', placeholder: 'Column or message' } : false}
+        filter={{ label: 'Filter problems', placeholder: 'Column or message', aboveRows: 8 }}
         noun={['problem', 'problems']}
       />
     </div>

@@ -1,7 +1,8 @@
 import { useMemo } from 'react';
 import { Link } from 'react-router';
 import { Button, buttonStyles } from '../../../components/ui/button';
-import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { DataTable, type DataTableColumns } from '../../../components/ui/data-table';
+import { actionsColumn, textColumn } from '../../../components/ui/data-table-columns';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { cx } from '../../../lib/class-names';
 import { cellActionRules, cellStates, type CellAction } from '../../../../shared/domain/planning/matrix-cell-states';
@@ -36,8 +37,8 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
   // column pinned to the right edge. Rendered in one place only, so each move is one button.
   const wide = useMediaQuery('(min-width: 40rem)');
 
-  const columns = useMemo<DataTableColumn<QueueItem>[]>(() => {
-    const list: DataTableColumn<QueueItem>[] = [
+  const columns = useMemo<DataTableColumns<QueueItem>>(
+    () => [
       {
         id: 'due',
         header: 'Due',
@@ -53,12 +54,9 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
             <span className="text-muted">No date</span>
           ),
       },
-      {
-        id: 'product',
-        header: 'Product',
+      textColumn('product', 'Product', (item) => productDisplayName(item.product), {
         rowHeader: true,
         className: 'min-w-40',
-        sortValue: (item) => productDisplayName(item.product),
         cell: (item) => (
           <>
             {productDisplayName(item.product)}
@@ -69,25 +67,17 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
             )}
           </>
         ),
-      },
-      {
-        id: 'configuration',
-        header: 'Configuration',
-        sortValue: (item) => item.loadConfiguration.name,
-        cell: (item) => item.loadConfiguration.name,
-      },
-      {
-        id: 'roundup',
-        header: 'Roundup',
+      }),
+      textColumn('configuration', 'Configuration', (item) => item.loadConfiguration.name),
+      textColumn('roundup', 'Roundup', (item) => item.roundup.title, {
         hideBelow: 'md',
         className: 'min-w-44',
-        sortValue: (item) => item.roundup.title,
         cell: (item) => (
           <Link to={matrixPath(item.roundup.id)} className="text-copper underline-offset-2 hover:underline">
             {item.roundup.title}
           </Link>
         ),
-      },
+      }),
       {
         id: 'state',
         header: 'State',
@@ -119,17 +109,14 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
           );
         },
       },
-    ];
-    if (onMove && wide) {
-      list.push({
-        id: 'actions',
-        header: 'Actions',
-        pinEnd: true,
-        cell: (item) => <QueueActions item={item} onMove={onMove} pending={pendingCellId === item.cell.id} />,
-      });
-    }
-    return list;
-  }, [matrixPath, onMove, pendingCellId, slotByCell, wide]);
+      onMove &&
+        wide &&
+        actionsColumn((item) => <QueueActions item={item} onMove={onMove} pending={pendingCellId === item.cell.id} />, {
+          pinEnd: true,
+        }),
+    ],
+    [matrixPath, onMove, pendingCellId, slotByCell, wide],
+  );
 
   return (
     <DataTable
@@ -137,8 +124,8 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
       rows={items}
       columns={columns}
       rowKey={(item) => item.cell.id}
-      initialSort={{ columnId: 'due', direction: 'ascending' }}
-      filter={items.length > 6 ? { label: 'Filter cells', placeholder: 'Product, configuration or roundup' } : false}
+      initialSort="due"
+      filter={{ label: 'Filter cells', placeholder: 'Product, configuration or roundup', aboveRows: 6 }}
       noun={['cell', 'cells']}
       rowClassName={(item) => (item.cell.overdue ? 'bg-red/5' : undefined)}
       empty={<EmptyState title={empty.title}>{empty.text}</EmptyState>}

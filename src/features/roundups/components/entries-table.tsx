@@ -1,8 +1,8 @@
 import { useMemo } from 'react';
 import { Link } from 'react-router';
 import { Badge } from '../../../components/ui/badge';
-import { Button } from '../../../components/ui/button';
-import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { DataTable, type DataTableColumns } from '../../../components/ui/data-table';
+import { buttonColumn, numericColumn, textColumn } from '../../../components/ui/data-table-columns';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { formFactorLabels } from '../../../../shared/schemas/catalog';
 import { sampleStatusLabels } from '../../../../shared/schemas/samples';
@@ -19,22 +19,18 @@ export interface EntriesTableProps {
 }
 
 export function EntriesTable({ roundupId, entries, onRemove }: EntriesTableProps) {
-  const columns = useMemo<DataTableColumn<RoundupEntry>[]>(() => {
-    const list: DataTableColumn<RoundupEntry>[] = [
-      {
-        id: 'position',
-        header: '#',
-        numeric: true,
-        hideBelow: 'sm',
-        sortValue: (e) => e.position,
-        cell: (e) => e.position + 1,
-      },
-      {
-        id: 'product',
-        header: 'Product',
+  const columns = useMemo<DataTableColumns<RoundupEntry>>(
+    () => [
+      numericColumn(
+        'position',
+        '#',
+        (e) => e.position,
+        (position) => position + 1,
+        { hideBelow: 'sm' },
+      ),
+      textColumn('product', 'Product', (e) => productDisplayName(e.product), {
         rowHeader: true,
         className: 'min-w-40',
-        sortValue: (e) => productDisplayName(e.product),
         cell: (e) => (
           <span>
             {productDisplayName(e.product)}
@@ -44,7 +40,7 @@ export function EntriesTable({ roundupId, entries, onRemove }: EntriesTableProps
             </span>
           </span>
         ),
-      },
+      }),
       {
         id: 'kind',
         header: 'Role',
@@ -99,34 +95,24 @@ export function EntriesTable({ roundupId, entries, onRemove }: EntriesTableProps
           </Link>
         ),
       },
-    ];
-    if (onRemove) {
-      list.push({
-        id: 'actions',
-        header: 'Actions',
-        cell: (e) => (
-          <Button
-            size="sm"
-            variant="quiet"
-            onClick={() => onRemove(e)}
-            aria-label={`Remove ${productDisplayName(e.product)}`}
-          >
-            Remove
-          </Button>
-        ),
-      });
-    }
-    return list;
-  }, [onRemove, roundupId]);
+      onRemove &&
+        buttonColumn({
+          label: 'Remove',
+          name: (e) => `Remove ${productDisplayName(e.product)}`,
+          onClick: onRemove,
+          variant: 'quiet',
+        }),
+    ],
+    [onRemove, roundupId],
+  );
 
   return (
     <DataTable
       caption="Products in this roundup"
       rows={entries}
       columns={columns}
-      rowKey={(e) => e.id}
-      initialSort={{ columnId: 'position', direction: 'ascending' }}
-      filter={entries.length > 8 ? { label: 'Filter products', placeholder: 'Maker or model' } : false}
+      initialSort="position"
+      filter={{ label: 'Filter products', placeholder: 'Maker or model', aboveRows: 8 }}
       noun={['product', 'products']}
       empty={
         <EmptyState title="No products yet">

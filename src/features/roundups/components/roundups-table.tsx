@@ -3,6 +3,7 @@ import { Link, useSearchParams } from 'react-router';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { calendarDateColumn, textColumn } from '../../../components/ui/data-table-columns';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Select } from '../../../components/ui/select';
 import {
@@ -11,7 +12,6 @@ import {
   type RoundupState,
 } from '../../../../shared/domain/planning/roundup-states';
 import type { RoundupSummary } from '../../../../shared/schemas/roundups';
-import { formatCalendarDate } from '../../../lib/format-time';
 import { formatBandRange } from './planning-format';
 import { ProgressMeter } from '../../../components/ui/progress-meter';
 import { RoundupStateBadge } from '../../../components/ui/roundup-state-badge';
@@ -52,32 +52,23 @@ export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTa
 
   const columns = useMemo<DataTableColumn<RoundupSummary>[]>(
     () => [
-      {
-        id: 'title',
-        header: 'Roundup',
+      textColumn('title', 'Roundup', (r) => r.title, {
         rowHeader: true,
         className: 'min-w-48',
-        sortValue: (r) => r.title,
         filterValue: (r) => `${r.title} ${r.platform} ${roundupStateLabels[r.state]}`,
         cell: (r) => (
           <Link to={roundupPath(r.id)} className="font-semibold text-copper underline-offset-2 hover:underline">
             {r.title}
           </Link>
         ),
-      },
+      }),
       {
         id: 'state',
         header: 'State',
         sortValue: (r) => roundupStates.indexOf(r.state),
         cell: (r) => <RoundupStateBadge state={r.state} />,
       },
-      {
-        id: 'platform',
-        header: 'Platform',
-        sortValue: (r) => r.platform,
-        hideBelow: 'md',
-        cell: (r) => r.platform,
-      },
+      textColumn('platform', 'Platform', (r) => r.platform, { hideBelow: 'md' }),
       {
         id: 'band',
         header: 'Price band',
@@ -91,14 +82,7 @@ export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTa
           </span>
         ),
       },
-      {
-        id: 'target',
-        header: 'Target publish',
-        numeric: true,
-        sortValue: (r) => r.targetPublishDate,
-        cell: (r) =>
-          r.targetPublishDate ? formatCalendarDate(r.targetPublishDate) : <span className="text-muted">Not set</span>,
-      },
+      calendarDateColumn('target', 'Target publish', (r) => r.targetPublishDate, { empty: 'Not set' }),
       {
         id: 'products',
         header: 'Products',
@@ -140,8 +124,7 @@ export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTa
       caption="Roundups"
       rows={rows}
       columns={columns}
-      rowKey={(r) => r.id}
-      initialSort={{ columnId: 'target', direction: 'ascending' }}
+      initialSort="target"
       filter={{ label: 'Filter roundups', placeholder: 'Title, platform or state' }}
       noun={['roundup', 'roundups']}
       columnChoice={{ storageKey: 'benchwire:roundups:columns' }}

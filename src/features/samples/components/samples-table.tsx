@@ -1,8 +1,8 @@
 import { useCallback, useMemo, useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
-import { Button } from '../../../components/ui/button';
-import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { DataTable, type DataTableColumns } from '../../../components/ui/data-table';
+import { buttonColumn, calendarDateColumn, textColumn } from '../../../components/ui/data-table-columns';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { sampleSourceLabels, sampleStatuses, type Sample } from '../../../../shared/schemas/samples';
 import { useSamples } from '../api/get-samples';
@@ -34,21 +34,14 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
     setEditing({ id: sample.id, open: true });
   }, []);
 
-  const columns = useMemo<DataTableColumn<Sample>[]>(() => {
-    const list: DataTableColumn<Sample>[] = [
-      {
-        id: 'product',
-        header: 'Product',
+  const columns = useMemo<DataTableColumns<Sample>>(
+    () => [
+      textColumn('product', 'Product', (s) => productDisplayName(s.product), {
         rowHeader: true,
         className: 'min-w-40',
-        sortValue: (s) => productDisplayName(s.product),
-        cell: (s) => productDisplayName(s.product),
-      },
-      {
-        id: 'source',
-        header: 'Source',
+      }),
+      textColumn('source', 'Source', (s) => (s.source ? sampleSourceLabels[s.source] : null), {
         className: 'min-w-44',
-        sortValue: (s) => (s.source ? sampleSourceLabels[s.source] : null),
         cell: (s) =>
           s.source ? (
             <span>
@@ -62,7 +55,7 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
           ) : (
             <span className="text-muted">Not known yet</span>
           ),
-      },
+      }),
       {
         id: 'status',
         header: 'Status',
@@ -70,14 +63,7 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
         filterValue: (s) => s.status,
         cell: (s) => <SampleStatusBadge status={s.status} />,
       },
-      {
-        id: 'received',
-        header: 'Received',
-        numeric: true,
-        hideBelow: 'md',
-        sortValue: (s) => s.receivedOn,
-        cell: (s) => (s.receivedOn ? formatCalendarDate(s.receivedOn) : <span className="text-muted">—</span>),
-      },
+      calendarDateColumn('received', 'Received', (s) => s.receivedOn, { hideBelow: 'md' }),
       {
         id: 'returnBy',
         header: 'Return by',
@@ -110,24 +96,15 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
           </span>
         ),
       },
-    ];
-    if (canEdit) {
-      list.push({
-        id: 'actions',
-        header: 'Actions',
-        cell: (s) => (
-          <Button
-            size="sm"
-            onClick={() => startEditing(s)}
-            aria-label={`Edit sample: ${productDisplayName(s.product)}`}
-          >
-            Edit
-          </Button>
-        ),
-      });
-    }
-    return list;
-  }, [canEdit, startEditing]);
+      canEdit &&
+        buttonColumn({
+          label: 'Edit',
+          name: (s) => `Edit sample: ${productDisplayName(s.product)}`,
+          onClick: startEditing,
+        }),
+    ],
+    [canEdit, startEditing],
+  );
 
   return (
     <div className="space-y-3">
@@ -148,8 +125,7 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
         caption="Samples"
         rows={samples}
         columns={columns}
-        rowKey={(s) => s.id}
-        initialSort={{ columnId: 'product', direction: 'ascending' }}
+        initialSort="product"
         filter={{ label: 'Filter samples', placeholder: 'Product, source or status' }}
         noun={['sample', 'samples']}
         rowClassName={(s) => (s.overdue ? 'bg-red/5' : undefined)}

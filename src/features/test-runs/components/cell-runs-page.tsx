@@ -5,6 +5,7 @@ import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { CellStateBadge } from '../../../components/ui/cell-state-badge';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
+import { numericColumn, textColumn } from '../../../components/ui/data-table-columns';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Panel } from '../../../components/ui/panel';
 import { describeSubmitError } from '../../../lib/form-errors';
@@ -44,11 +45,8 @@ function RunsTable({
   onSelect: (id: number) => void;
 }) {
   const columns: DataTableColumn<TestRun>[] = [
-    {
-      id: 'firmware',
-      header: 'Firmware',
+    textColumn('firmware', 'Firmware', (run) => run.firmwareVersion, {
       rowHeader: true,
-      sortValue: (run) => run.firmwareVersion,
       cell: (run) => (
         <>
           <Button size="sm" variant="quiet" aria-pressed={run.id === selectedId} onClick={() => onSelect(run.id)}>
@@ -62,22 +60,10 @@ function RunsTable({
           )}
         </>
       ),
-    },
-    {
-      id: 'started',
-      header: 'Started',
-      numeric: true,
-      sortValue: (run) => run.startedAt,
-      cell: (run) => formatInstant(run.startedAt),
-    },
+    }),
+    numericColumn('started', 'Started', (run) => run.startedAt, formatInstant),
     { id: 'source', header: 'Source', cell: (run) => (run.source === 'manual' ? <ManualMark /> : 'Logger') },
-    {
-      id: 'peak',
-      header: 'Peak',
-      numeric: true,
-      sortValue: (run) => run.analysis.peakC,
-      cell: (run) => formatC(run.analysis.peakC),
-    },
+    numericColumn('peak', 'Peak', (run) => run.analysis.peakC, formatC),
     {
       id: 'verdict',
       header: 'Verdict',
@@ -99,8 +85,6 @@ function RunsTable({
       caption="Runs of this cell, newest first"
       rows={runs}
       columns={columns}
-      rowKey={(run) => run.id}
-      filter={false}
       rowClassName={(run) => (run.id === selectedId ? 'bg-wash' : undefined)}
     />
   );

@@ -2,9 +2,9 @@ import { useMemo, useState } from 'react';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
-import { DateTime } from '../../../components/ui/date-time';
+import { actionsColumn, instantColumn, textColumn } from '../../../components/ui/data-table-columns';
+import { DateTime, DeviceTimeZoneNote } from '../../../components/ui/date-time';
 import { Select } from '../../../components/ui/select';
-import { userTimeZone } from '../../../lib/format-time';
 import { roleLabels } from '../../../../shared/schemas/common';
 import type { User } from '../../../../shared/schemas/users';
 
@@ -84,64 +84,43 @@ export function UsersTable({
           </span>
         ),
       },
-      {
-        id: 'email',
-        header: 'E-mail',
-        sortValue: (user) => user.email,
-        cell: (user) => <span className="whitespace-nowrap">{user.email}</span>,
-      },
-      {
-        id: 'role',
-        header: 'Role',
-        sortValue: (user) => roleLabels[user.role],
-        cell: (user) => <span className="whitespace-nowrap">{roleLabels[user.role]}</span>,
-      },
+      textColumn('email', 'E-mail', (user) => user.email, { className: 'whitespace-nowrap' }),
+      textColumn('role', 'Role', (user) => roleLabels[user.role], { className: 'whitespace-nowrap' }),
       {
         id: 'status',
         header: 'Status',
         sortValue: statusWords,
         cell: (user) => <UserStatus user={user} />,
       },
-      {
-        id: 'lastSignIn',
-        header: 'Last sign-in',
-        numeric: true,
-        sortValue: (user) => (user.lastSignInAt ? Date.parse(user.lastSignInAt) : null),
-        cell: (user) => <DateTime value={user.lastSignInAt} fallback="Never" />,
-      },
-      {
-        id: 'actions',
-        header: 'Actions',
-        numeric: false,
-        cell: (user) => (
-          <span className="flex flex-wrap gap-1.5">
-            <Button size="sm" variant="secondary" onClick={() => onEdit(user)} aria-label={`Edit ${user.displayName}`}>
-              Edit
-            </Button>
-            {user.active && !user.passwordSet && (
-              <>
-                <Button
-                  size="sm"
-                  variant="secondary"
-                  pending={sendingId === user.id}
-                  onClick={() => onSendAgain(user)}
-                  aria-label={`Send the invitation to ${user.displayName} again`}
-                >
-                  Send again
-                </Button>
-                <Button
-                  size="sm"
-                  variant="secondary"
-                  onClick={() => onWithdraw(user)}
-                  aria-label={`Withdraw the invitation to ${user.displayName}`}
-                >
-                  Withdraw
-                </Button>
-              </>
-            )}
-          </span>
-        ),
-      },
+      instantColumn('lastSignIn', 'Last sign-in', (user) => user.lastSignInAt, { fallback: 'Never' }),
+      actionsColumn((user) => (
+        <span className="flex flex-wrap gap-1.5">
+          <Button size="sm" variant="secondary" onClick={() => onEdit(user)} aria-label={`Edit ${user.displayName}`}>
+            Edit
+          </Button>
+          {user.active && !user.passwordSet && (
+            <>
+              <Button
+                size="sm"
+                variant="secondary"
+                pending={sendingId === user.id}
+                onClick={() => onSendAgain(user)}
+                aria-label={`Send the invitation to ${user.displayName} again`}
+              >
+                Send again
+              </Button>
+              <Button
+                size="sm"
+                variant="secondary"
+                onClick={() => onWithdraw(user)}
+                aria-label={`Withdraw the invitation to ${user.displayName}`}
+              >
+                Withdraw
+              </Button>
+            </>
+          )}
+        </span>
+      )),
     ],
     [currentUserId, onEdit, onSendAgain, onWithdraw, sendingId],
   );
@@ -151,8 +130,7 @@ export function UsersTable({
       caption="Staff accounts"
       rows={rows}
       columns={columns}
-      rowKey={(user) => user.id}
-      initialSort={{ columnId: 'name', direction: 'ascending' }}
+      initialSort="name"
       filter={{ label: 'Filter users', placeholder: 'Name, e-mail or role' }}
       noun={['account', 'accounts']}
       toolbar={
@@ -165,11 +143,7 @@ export function UsersTable({
         />
       }
       rowClassName={(user) => (user.active ? undefined : 'text-muted')}
-      footnote={
-        <>
-          Times are in <strong className="font-medium">{userTimeZone()}</strong>, the time zone of this device.
-        </>
-      }
+      footnote={<DeviceTimeZoneNote />}
     />
   );
 }

@@ -3,18 +3,12 @@
 // MariaDB (started for the occasion when it is not running), and the uploads folder.
 import { spawnSync } from 'node:child_process';
 import { resolve } from 'node:path';
-import { ensureDebianPackages, SetupError } from './lib/mariadb.mjs';
-import { ensureDatabase, projectRoot } from './lib/setup.mjs';
+import { ensureDebianPackages } from './lib/mariadb.mjs';
+import { ensureDatabaseOrExit, projectRoot } from './lib/setup.mjs';
 
 const [command, ...args] = process.argv.slice(2);
 ensureDebianPackages(['mariadb-client'], ['mariadb-dump', 'mysqldump']);
-let database;
-try {
-  database = await ensureDatabase();
-} catch (error) {
-  console.error(error instanceof SetupError ? error.message : `[backup] ${error.message}`);
-  process.exit(1);
-}
+const database = await ensureDatabaseOrExit('backup');
 const result = spawnSync(
   resolve(projectRoot, 'node_modules', '.bin', 'tsx'),
   ['server/cli/backup.ts', command, ...args],

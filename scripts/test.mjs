@@ -5,8 +5,8 @@
 import { randomBytes } from 'node:crypto';
 import { ensureBuilt } from './lib/build.mjs';
 import { freePort, startMailRelay } from './lib/mail-relay.mjs';
-import { ensureDebianPackages, SetupError } from './lib/mariadb.mjs';
-import { ensureDatabase, ensureDependencies, runStep } from './lib/setup.mjs';
+import { ensureDebianPackages } from './lib/mariadb.mjs';
+import { ensureDatabaseOrExit, ensureDependencies, runStep } from './lib/setup.mjs';
 
 // e.g. `npm test -- unit`, `npm test -- e2e`, or `npm test -- e2e e2e/capture.spec.ts` for chosen specs only.
 const args = process.argv.slice(2);
@@ -16,13 +16,7 @@ const wants = (step) => only.length === 0 || only.includes(step);
 
 ensureDependencies();
 if (wants('e2e')) ensureDebianPackages(['chromium'], ['chromium']);
-let database;
-try {
-  database = await ensureDatabase();
-} catch (error) {
-  console.error(error instanceof SetupError ? error.message : `[test] ${error.message}`);
-  process.exit(1);
-}
+const database = await ensureDatabaseOrExit('test');
 
 const suffix = `${process.pid}_${randomBytes(3).toString('hex')}`;
 const withDatabase = (name) => {

@@ -2,7 +2,7 @@
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, statSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { startPrivateMariadb } from './mariadb.mjs';
+import { SetupError, startPrivateMariadb } from './mariadb.mjs';
 
 export const projectRoot = resolve(import.meta.dirname, '..', '..');
 
@@ -25,6 +25,16 @@ export async function ensureDatabase() {
     return { url: process.env.DATABASE_URL, startedHere: false, stop: async () => {} };
   }
   return startPrivateMariadb();
+}
+
+/** The database for a command-line script; when there is none, says why (`tag` names the script) and exits 1. */
+export async function ensureDatabaseOrExit(tag) {
+  try {
+    return await ensureDatabase();
+  } catch (error) {
+    console.error(error instanceof SetupError ? error.message : `[${tag}] ${error.message}`);
+    process.exit(1);
+  }
 }
 
 const bin = (name) => resolve(projectRoot, 'node_modules', '.bin', name);

@@ -20,14 +20,20 @@ function seededClient() {
   return queryClient;
 }
 
+/** The form on its own, with what it reads already in the cache; the user who fills it in. */
+function renderForm() {
+  const user = userEvent.setup();
+  render(
+    <QueryClientProvider client={seededClient()}>
+      <CreateRoundupForm onCreated={() => {}} onCancel={() => {}} />
+    </QueryClientProvider>,
+  );
+  return user;
+}
+
 describe('New roundup form', () => {
   it('when an empty form is submitted, then every missing field is flagged in the same submit', async () => {
-    const user = userEvent.setup();
-    render(
-      <QueryClientProvider client={seededClient()}>
-        <CreateRoundupForm onCreated={() => {}} onCancel={() => {}} />
-      </QueryClientProvider>,
-    );
+    const user = renderForm();
     await user.click(screen.getByRole('button', { name: 'Create roundup' }));
 
     const summary = await screen.findByRole('alert');
@@ -38,12 +44,7 @@ describe('New roundup form', () => {
   });
 
   it('when the target publish date has already passed, then the form says so beside the other problems', async () => {
-    const user = userEvent.setup();
-    render(
-      <QueryClientProvider client={seededClient()}>
-        <CreateRoundupForm onCreated={() => {}} onCancel={() => {}} />
-      </QueryClientProvider>,
-    );
+    const user = renderForm();
     await user.type(screen.getByLabelText(/^Target publish date/), '2001-01-01');
     await user.click(screen.getByRole('button', { name: 'Create roundup' }));
 

@@ -1,5 +1,5 @@
 import { useId, useState, type FormEvent } from 'react';
-import { Alert } from '../../../components/ui/alert';
+import { Alert, ListAlert } from '../../../components/ui/alert';
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { Panel } from '../../../components/ui/panel';
@@ -180,13 +180,7 @@ export function VerdictCard({
             />
           </div>
           {contradictions.length > 0 && (
-            <Alert tone="warning" title="This label goes against the measurements">
-              <ul className="list-disc pl-4">
-                {contradictions.map((text) => (
-                  <li key={text}>{text}</li>
-                ))}
-              </ul>
-            </Alert>
+            <ListAlert tone="warning" title="This label goes against the measurements" items={contradictions} />
           )}
           <TextArea
             label="Reason"

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
+import { Alert, ListAlert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -91,13 +91,13 @@ export function RoundupHeader({ roundup, canChangeState }: RoundupHeaderProps) {
         </Alert>
       )}
       {canChangeState && next && !next.allowed && (
-        <Alert tone="info" title={`Before it can move to ${roundupStateLabels[next.to]}`} className="mb-4">
-          <ul className="list-disc space-y-0.5 pl-4">
-            {next.problems.map((problem) => (
-              <li key={problem}>{problem}</li>
-            ))}
-          </ul>
-        </Alert>
+        <ListAlert
+          tone="info"
+          title={`Before it can move to ${roundupStateLabels[next.to]}`}
+          className="mb-4"
+          items={next.problems}
+          listClassName="list-disc space-y-0.5 pl-4"
+        />
       )}
 
       <Alert tone="caution" title="Overclocking caution" className="mb-5">

@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import { Alert } from '../../../components/ui/alert';
+import { Alert, ListAlert } from '../../../components/ui/alert';
 import { buttonStyles } from '../../../components/ui/button';
 import { DateTime } from '../../../components/ui/date-time';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -55,13 +55,13 @@ export function WriteUpOverview({ roundupId }: { roundupId: number }) {
         </Alert>
       )}
       {writeUp.blocking.length > 0 && writeUp.sections.length > 0 && (
-        <Alert tone="warning" title="Not ready yet" className="mb-4">
-          <ul className="list-disc pl-5">
-            {writeUp.blocking.map((reason) => (
-              <li key={reason}>{reason}</li>
-            ))}
-          </ul>
-        </Alert>
+        <ListAlert
+          tone="warning"
+          title="Not ready yet"
+          className="mb-4"
+          items={writeUp.blocking}
+          listClassName="list-disc pl-5"
+        />
       )}
       {writeUp.sections.length > 0 && writeUp.blocking.length === 0 && (
         <Alert tone="success" className="mb-4">

@@ -4,6 +4,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextArea } from '../../../components/ui/text-area';
 import { describeSubmitError } from '../../../lib/form-errors';
+import { useZodForm } from '../../../lib/use-zod-form';
 import type { Readiness } from '../../../../shared/schemas/readiness';
 import { excludeCellRequestSchema } from '../../../../shared/schemas/readiness';
 
@@ -23,9 +24,12 @@ function CellExclusion({
   onExclude: (cellId: number, reason: string) => Promise<unknown>;
 }) {
   const [open, setOpen] = useState(false);
-  const [reason, setReason] = useState('');
-  const [error, setError] = useState<string>();
   const [pending, setPending] = useState(false);
+  const form = useZodForm({
+    schema: excludeCellRequestSchema,
+    initialValues: { reason: '' },
+    labels: { reason: 'Why this cell is left out' },
+  });
   if (!open) {
     return (
       <Button size="sm" variant="quiet" onClick={() => setOpen(true)}>
@@ -37,34 +41,19 @@ function CellExclusion({
     <form
       noValidate
       className="mt-2 space-y-2"
-      onSubmit={async (event) => {
-        event.preventDefault();
-        const parsed = excludeCellRequestSchema.safeParse({ reason });
-        if (!parsed.success) {
-          setError(parsed.error.issues[0]?.message);
-          return;
-        }
+      onSubmit={form.handleSubmit(async ({ reason }) => {
         setPending(true);
         try {
-          await onExclude(cellId, parsed.data.reason);
+          await onExclude(cellId, reason);
         } catch (failure) {
-          setError(describeSubmitError(failure).fields.reason ?? describeSubmitError(failure).message);
+          form.fail(failure);
         } finally {
           setPending(false);
         }
-      }}
+      })}
     >
-      <TextArea
-        label="Why this cell is left out"
-        rows={2}
-        maxLength={1000}
-        value={reason}
-        error={error}
-        onChange={(event) => {
-          setReason(event.target.value);
-          setError(undefined);
-        }}
-      />
+      {/* A refusal that names no field is still about the reason: it shows beside it. */}
+      <TextArea {...form.field('reason')} error={form.errors.reason ?? form.formError} rows={2} maxLength={1000} />
       <div className="flex gap-2">
         <Button size="sm" type="submit" variant="danger" pending={pending}>
           Leave out

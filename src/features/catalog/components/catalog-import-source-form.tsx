@@ -4,6 +4,7 @@ import { Panel } from '../../../components/ui/panel';
 import { TextArea } from '../../../components/ui/text-area';
 import { UploadProgress } from '../../../components/ui/upload-progress';
 import { FileField } from '../../../components/ui/file-field';
+import { RadioGroup } from '../../../components/ui/radio-group';
 import { acceptAttribute, formatBytes } from '../../../lib/upload-size';
 import { catalogImportUploadLimit } from '../../../../shared/upload-limits';
 import type { CatalogImportFlow } from './use-catalog-import';
@@ -27,24 +28,14 @@ export function CatalogImportSourceForm({ flow }: { flow: CatalogImportFlow }) {
   return (
     <Panel title="1 · Choose the file" description="Checking saves nothing; you see every row first.">
       <form noValidate onSubmit={submit} className="space-y-4">
-        <fieldset>
-          <legend className="mb-1.5 text-sm font-semibold text-ink">Where the CSV comes from</legend>
-          <div className="flex flex-wrap gap-x-5 gap-y-1.5 text-sm">
-            {sourceModes.map(([value, label]) => (
-              <label key={value} className="inline-flex items-center gap-2">
-                <input
-                  type="radio"
-                  name="csv-source"
-                  value={value}
-                  checked={mode === value}
-                  onChange={() => flow.setMode(value)}
-                  className="size-4 accent-copper"
-                />
-                {label}
-              </label>
-            ))}
-          </div>
-        </fieldset>
+        <RadioGroup
+          legend="Where the CSV comes from"
+          name="csv-source"
+          choices={sourceModes}
+          value={mode}
+          onChange={flow.setMode}
+          inline
+        />
 
         <div hidden={mode !== 'file'}>
           <FileField

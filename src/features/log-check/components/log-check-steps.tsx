@@ -28,16 +28,19 @@ export interface LogCheckStepsProps {
 export function LogCheckSteps({ check, headingLevel, filledFrom, resultHeadingRef }: LogCheckStepsProps) {
   const { file, reading, draft, failure, result, sending } = check;
   const Heading = headingLevel === 2 ? 'h2' : 'h3';
+  // What could not be read shows where it failed: above the mapping when reading, below it when analysing.
+  const failureAt = (stage: 'reading' | 'analysing') =>
+    failure?.stage === stage && (
+      <ParseErrorTable
+        errors={failure.errors}
+        message={failure.message}
+        stage={stage}
+        hasPreview={failure.hasPreview}
+      />
+    );
   return (
     <>
-      {failure?.stage === 'reading' && (
-        <ParseErrorTable
-          errors={failure.errors}
-          message={failure.message}
-          stage="reading"
-          hasPreview={failure.hasPreview}
-        />
-      )}
+      {failureAt('reading')}
 
       {file && reading && draft && (
         <>
@@ -65,14 +68,7 @@ export function LogCheckSteps({ check, headingLevel, filledFrom, resultHeadingRe
         </>
       )}
 
-      {failure?.stage === 'analysing' && (
-        <ParseErrorTable
-          errors={failure.errors}
-          message={failure.message}
-          stage="analysing"
-          hasPreview={failure.hasPreview}
-        />
-      )}
+      {failureAt('analysing')}
 
       {file && result && (
         <AnalysisResults

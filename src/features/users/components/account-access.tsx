@@ -2,14 +2,10 @@ import { useState } from 'react';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
-import type { User } from '../../../../shared/schemas/users';
 import { useUpdateUser } from '../api/update-user';
+import type { UserSectionProps } from './user-section';
 
-export interface AccountAccessProps {
-  user: User;
-  isSelf: boolean;
-  onSaved: (user: User) => void;
-}
+export type AccountAccessProps = UserSectionProps;
 
 /** Deactivate or reactivate, always through a confirmation that says what happens to the person's sessions. */
 export function AccountAccess({ user, isSelf, onSaved }: AccountAccessProps) {

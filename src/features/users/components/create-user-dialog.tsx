@@ -10,11 +10,12 @@ import type { Role } from '../../../../shared/schemas/common';
 import { useCreateUser } from '../api/create-user';
 import { roleOptions } from './role-options';
 import { FormDialog, type CreateDialogProps } from '../../../components/ui/form-dialog';
+import { RadioGroup, type RadioChoice } from '../../../components/ui/radio-group';
 
 export type CreateUserDialogProps = CreateDialogProps<User>;
 
 type Start = 'invite' | 'password';
-const startOptions: [Start, string, string][] = [
+const startOptions: RadioChoice<Start>[] = [
   [
     'invite',
     'Send an invitation',
@@ -62,27 +63,13 @@ export function CreateUserDialog({ open, onClose, onCreated }: CreateUserDialogP
         placeholder="Choose a role…"
         description={chosenRole ? roleGuides[chosenRole].summary : 'The role decides what they can open.'}
       />
-      <fieldset>
-        <legend className="mb-1.5 text-sm font-semibold text-ink">How they get in</legend>
-        <div className="space-y-2 text-sm">
-          {startOptions.map(([value, label, hint]) => (
-            <label key={value} className="flex items-start gap-2.5">
-              <input
-                type="radio"
-                name="account-start"
-                value={value}
-                checked={start === value}
-                onChange={() => setStart(value)}
-                className="mt-0.5 size-4 shrink-0 accent-copper"
-              />
-              <span>
-                <span className="font-medium text-ink">{label}</span>
-                <span className="block text-[0.8125rem] text-muted">{hint}</span>
-              </span>
-            </label>
-          ))}
-        </div>
-      </fieldset>
+      <RadioGroup
+        legend="How they get in"
+        name="account-start"
+        choices={startOptions}
+        value={start}
+        onChange={setStart}
+      />
       {start === 'password' && (
         <PasswordField
           {...form.field('password')}

@@ -3,15 +3,12 @@ import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { NewPasswordFields } from '../../../components/ui/new-password-fields';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { PASSWORD_MIN } from '../../../../shared/schemas/auth';
-import { updateUserRequestSchema, type User } from '../../../../shared/schemas/users';
+import { updateUserRequestSchema } from '../../../../shared/schemas/users';
 import { useUpdateUser } from '../api/update-user';
 import { SubmitRow } from '../../../components/ui/submit-row';
+import type { UserSectionProps } from './user-section';
 
-export interface ResetPasswordFormProps {
-  user: User;
-  isSelf: boolean;
-  onSaved: (user: User) => void;
-}
+export type ResetPasswordFormProps = UserSectionProps;
 
 const passwordOnly = updateUserRequestSchema.pick({ password: true }).required();
 

@@ -5,16 +5,13 @@ import { Select } from '../../../components/ui/select';
 import { TextField } from '../../../components/ui/text-field';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { roleLabels } from '../../../../shared/schemas/common';
-import { updateUserRequestSchema, type UpdateUserRequest, type User } from '../../../../shared/schemas/users';
+import { updateUserRequestSchema, type UpdateUserRequest } from '../../../../shared/schemas/users';
 import { useUpdateUser } from '../api/update-user';
 import { roleOptions } from './role-options';
 import { SubmitRow } from '../../../components/ui/submit-row';
+import type { UserSectionProps } from './user-section';
 
-export interface UserDetailsFormProps {
-  user: User;
-  isSelf: boolean;
-  onSaved: (user: User) => void;
-}
+export type UserDetailsFormProps = UserSectionProps;
 
 /** Name, e-mail and role; sends only what changed, so an unchanged role never ends anyone's sessions. */
 export function UserDetailsForm({ user, isSelf, onSaved }: UserDetailsFormProps) {

@@ -1,11 +1,9 @@
-import { writeFile } from 'node:fs/promises';
-import path from 'node:path';
 import sharp from 'sharp';
 import { test as base, expect, type PlaywrightWorkerArgs } from '@playwright/test';
 import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
 import { prepareAssignedCell } from './support/planned-cell';
 import { signInAs, signOut } from './support/sign-in';
-import { specFolder } from './support/temp-folder';
+import { specFolder, writeInto } from './support/temp-folder';
 
 /**
  * As the demo editor, through the API: a roundup on the bench with one product and one load configuration soaking
@@ -52,10 +50,8 @@ test('a tester records runs from logger files; the editor accepts a flagged run 
   page,
   setup,
 }) => {
-  const firstFile = path.join(folder(), 'soak-first.csv');
-  const secondFile = path.join(folder(), 'soak-second.csv');
-  await writeFile(firstFile, shortSoak(1));
-  await writeFile(secondFile, shortSoak(2));
+  const firstFile = await writeInto(folder(), 'soak-first.csv', shortSoak(1));
+  const secondFile = await writeInto(folder(), 'soak-second.csv', shortSoak(2));
 
   await signInAs(page, 'tester');
   await page.goto('/my-bench');
@@ -170,12 +166,9 @@ test('a tester adds photos to a product with progress and thumbnails, reorders t
   page,
   setup,
 }) => {
-  const notAPhoto = path.join(folder(), 'board-overview.jpg');
-  const overview = path.join(folder(), 'overview.jpg');
-  const closeUp = path.join(folder(), 'power-stages.png');
-  await writeFile(notAPhoto, 'Time,VRM 1\n0,21.0\n');
-  await writeFile(overview, await noisePhoto(1600, 1200, 'jpeg'));
-  await writeFile(closeUp, await noisePhoto(640, 480, 'png'));
+  const notAPhoto = await writeInto(folder(), 'board-overview.jpg', 'Time,VRM 1\n0,21.0\n');
+  const overview = await writeInto(folder(), 'overview.jpg', await noisePhoto(1600, 1200, 'jpeg'));
+  const closeUp = await writeInto(folder(), 'power-stages.png', await noisePhoto(640, 480, 'png'));
 
   await signInAs(page, 'tester');
   await page.goto(`/roundups/${setup.roundupId}`);

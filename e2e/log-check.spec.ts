@@ -1,8 +1,6 @@
-import { writeFile } from 'node:fs/promises';
-import path from 'node:path';
 import { expect, test, type Page } from '@playwright/test';
 import { mainNavigation, signInAs } from './support/sign-in';
-import { specFolder } from './support/temp-folder';
+import { specFolder, writeInto } from './support/temp-folder';
 
 const thin = '\u2009';
 
@@ -41,10 +39,8 @@ const folder = specFolder('benchwire-log-check-');
 test('a tester uploads a soak, confirms the guessed mapping and gets the verdict; a broken file shows its row and column', async ({
   page,
 }) => {
-  const goodFile = path.join(folder(), 'soak-first-order.csv');
-  const brokenFile = path.join(folder(), 'soak-typed-over.csv');
-  await writeFile(goodFile, firstOrderSoakCsv());
-  await writeFile(brokenFile, soakWithBadCell());
+  const goodFile = await writeInto(folder(), 'soak-first-order.csv', firstOrderSoakCsv());
+  const brokenFile = await writeInto(folder(), 'soak-typed-over.csv', soakWithBadCell());
 
   await signInAs(page, 'tester');
   await mainNavigation(page).getByRole('link', { name: 'Log check' }).click();
@@ -113,8 +109,7 @@ function unfinishedSoakCsv(): string {
 
 /** The tester opens Log check, uploads `csv` as `name`, sees `probe` ticked by the guess and analyses; the result. */
 async function analyseAsTester(page: Page, name: string, csv: string, probe: string) {
-  const file = path.join(folder(), name);
-  await writeFile(file, csv);
+  const file = await writeInto(folder(), name, csv);
   await signInAs(page, 'tester');
   await mainNavigation(page).getByRole('link', { name: 'Log check' }).click();
   await page.getByLabel('Logger file').setInputFiles(file);

@@ -1,5 +1,3 @@
-import { writeFile } from 'node:fs/promises';
-import path from 'node:path';
 import sharp from 'sharp';
 import { expect, test, type BrowserContext } from '@playwright/test';
 import { syntheticLoggerLog } from '../shared/generators/synthetic-logger-log';
@@ -22,7 +20,7 @@ import {
   writeSection,
 } from './support/roundup-journey';
 import { uniqueEmail, uniqueSuffix } from './support/unique';
-import { specFolder } from './support/temp-folder';
+import { specFolder, writeInto } from './support/temp-folder';
 
 // The whole product as a new outlet would try it, one story from new colleagues' first sign-in to a reader's
 // unsubscribe: the admin invites an editor, a bench tester and a writer by mail, and each sets a password from the
@@ -166,8 +164,7 @@ test('from new colleagues to a reader: invite, plan, bench, write, approve, go l
   await expect(booked).toBeVisible();
 
   for (const [index, cell] of cells.entries()) {
-    const file = path.join(folder(), `soak-${index + 1}.csv`);
-    await writeFile(file, soakLog(index + 1, 38 + index * 6));
+    const file = await writeInto(folder(), `soak-${index + 1}.csv`, soakLog(index + 1, 38 + index * 6));
     await openQueuedCell(tester, cell);
     await bench.getByRole('button', { name: 'Upload a log' }).click();
     await bench.getByLabel('Logger file').setInputFiles(file);
@@ -182,9 +179,9 @@ test('from new colleagues to a reader: invite, plan, bench, write, approve, go l
     await expect(bench.getByText('Run submitted')).toBeVisible();
     await markRecorded(tester);
 
-    const photo = path.join(folder(), `board-${index + 1}.jpg`);
-    await writeFile(
-      photo,
+    const photo = await writeInto(
+      folder(),
+      `board-${index + 1}.jpg`,
       await sharp({ create: { width: 800, height: 600, channels: 3, background: { r: 40, g: 60, b: 50 } } })
         .jpeg()
         .toBuffer(),

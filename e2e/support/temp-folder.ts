@@ -1,4 +1,4 @@
-import { mkdtemp, rm } from 'node:fs/promises';
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { test } from '@playwright/test';
@@ -13,4 +13,11 @@ export function specFolder(prefix: string): () => string {
     await rm(folder, { recursive: true, force: true });
   });
   return () => folder;
+}
+
+/** Writes `content` as the file `name` in `folder`; the file's path. */
+export async function writeInto(folder: string, name: string, content: string | Buffer): Promise<string> {
+  const file = path.join(folder, name);
+  await writeFile(file, content);
+  return file;
 }

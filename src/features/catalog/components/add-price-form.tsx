@@ -1,6 +1,7 @@
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
-import { TextField, type TextFieldProps } from '../../../components/ui/text-field';
+import { TextField } from '../../../components/ui/text-field';
+import { SuggestingField, type SuggestingFieldProps } from '../../../components/ui/suggesting-field';
 import { ApiError, isApiError } from '../../../lib/api-client';
 import { useZodForm } from '../../../lib/use-zod-form';
 import { formSchema } from '../../../lib/form-schema';
@@ -59,18 +60,8 @@ export interface AddPriceFormProps {
 }
 
 /** A short code typed in capitals (region, currency), with the codes already used offered as suggestions. */
-function CodeField({ suggestions, ...field }: TextFieldProps & { suggestions: readonly string[] }) {
-  const listId = useId();
-  return (
-    <>
-      <TextField {...field} list={listId} autoComplete="off" autoCapitalize="characters" inputClassName="uppercase" />
-      <datalist id={listId}>
-        {suggestions.map((code) => (
-          <option key={code} value={code} />
-        ))}
-      </datalist>
-    </>
-  );
+function CodeField(field: SuggestingFieldProps) {
+  return <SuggestingField {...field} autoCapitalize="characters" inputClassName="uppercase" />;
 }
 
 export function AddPriceForm({ productId, knownRegions, knownCurrencies, onAdded }: AddPriceFormProps) {

@@ -3,7 +3,8 @@ import { Button } from '../../../components/ui/button';
 import { FormErrorSummary } from '../../../components/ui/form-error-summary';
 import { Panel } from '../../../components/ui/panel';
 import { Select } from '../../../components/ui/select';
-import { TextField, type TextFieldProps } from '../../../components/ui/text-field';
+import { TextField } from '../../../components/ui/text-field';
+import { SuggestingField } from '../../../components/ui/suggesting-field';
 import { ApiError, isApiError } from '../../../lib/api-client';
 import { userTimeZone } from '../../../lib/format-time';
 import { useZodForm } from '../../../lib/use-zod-form';
@@ -104,21 +105,6 @@ export interface CreateRoundupFormProps {
 }
 
 /** Plans a new roundup: what is compared, in which price band, when it should publish, and how it is tested. */
-/** A free-text field that offers the values already known (platforms in the catalog, time zones) as suggestions. */
-function SuggestingField({ suggestions, ...field }: TextFieldProps & { suggestions: readonly string[] }) {
-  const listId = useId();
-  return (
-    <>
-      <TextField {...field} autoComplete="off" list={listId} />
-      <datalist id={listId}>
-        {suggestions.map((suggestion) => (
-          <option key={suggestion} value={suggestion} />
-        ))}
-      </datalist>
-    </>
-  );
-}
-
 export function CreateRoundupForm({ onCreated, onCancel }: CreateRoundupFormProps) {
   const formId = useId();
   const profiles = useBenchProfiles();

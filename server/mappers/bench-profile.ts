@@ -4,7 +4,8 @@ import { decimalToNumber } from './dto-values';
 import { countsById } from '../lib/counts-by-id';
 import type { BenchProfile } from '../../shared/schemas/bench-profiles';
 
-export function toBenchProfileDto(profile: BenchProfileEntity, roundupCount: number): BenchProfile {
+/** A bench profile's name and test system as stored, shown the same to staff and in a published roundup. */
+export function benchProfileSystem(profile: BenchProfileEntity) {
   return {
     id: profile.id,
     name: profile.name,
@@ -12,6 +13,12 @@ export function toBenchProfileDto(profile: BenchProfileEntity, roundupCount: num
     cooler: profile.cooler,
     psu: profile.psu,
     memory: profile.memory,
+  };
+}
+
+export function toBenchProfileDto(profile: BenchProfileEntity, roundupCount: number): BenchProfile {
+  return {
+    ...benchProfileSystem(profile),
     roomTempTargetC: decimalToNumber(profile.roomTempTargetC),
     roomTempToleranceC: decimalToNumber(profile.roomTempToleranceC),
     probeType: profile.probeType,

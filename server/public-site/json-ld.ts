@@ -12,9 +12,9 @@ const labelRatings: Record<string, number> = {
   'Fine at stock': 2,
   'Skip for overclocking': 1,
 };
-export const labelRatingScale = { best: 4, worst: 1 };
+const labelRatingScale = { best: 4, worst: 1 };
 
-export function ratingForLabel(label: string | null): number | null {
+function ratingForLabel(label: string | null): number | null {
   if (!label) return null;
   return labelRatings[label.trim()] ?? null;
 }
@@ -36,49 +36,62 @@ export function offerJsonLd(product: PublishedProduct, url: string) {
   };
 }
 
+/** The outlet as a schema.org Organization: author (and publisher) of every review. */
+export function outletJsonLd(site: ReaderSite) {
+  return { '@type': 'Organization', name: site.outletName, url: absoluteUrl(site, '/read') };
+}
+
+/** A board as a schema.org Product at its page's address, with its offer where a price was known. */
+export function productNode(site: ReaderSite, product: PublishedProduct, offer: ReturnType<typeof offerJsonLd>) {
+  return {
+    '@type': 'Product',
+    '@id': `${absoluteUrl(site, product.path)}#product`,
+    name: product.name,
+    brand: { '@type': 'Brand', name: product.maker },
+    url: absoluteUrl(site, product.path),
+    ...(offer ? { offers: offer } : {}),
+  };
+}
+
+/** A Review's `reviewRating` for the editor's label, to spread into it; nothing for a label without a rating. */
+export function reviewRatingJsonLd(label: string | null) {
+  const rating = ratingForLabel(label);
+  if (rating === null) return {};
+  return {
+    reviewRating: {
+      '@type': 'Rating',
+      ratingValue: rating,
+      bestRating: labelRatingScale.best,
+      worstRating: labelRatingScale.worst,
+      ratingExplanation: label,
+    },
+  };
+}
+
 /**
  * schema.org for a results page: each tested board as a Product carrying our Review (author, date, URL), with a
  * reviewRating where the editor gave a label (schema.org Review and Product; REFERENCES.md "Web").
  */
 export function roundupJsonLd(site: ReaderSite, model: PublishedRoundup) {
   const url = absoluteUrl(site, model.path);
-  const outlet = { '@type': 'Organization', name: site.outletName, url: absoluteUrl(site, '/read') };
+  const outlet = outletJsonLd(site);
   return {
     '@context': 'https://schema.org',
     '@graph': model.products
       .filter((p) => p.kind === 'tested')
-      .map((product) => {
-        const rating = ratingForLabel(product.label);
-        const offer = offerJsonLd(product, absoluteUrl(site, product.path));
-        return {
-          '@type': 'Product',
-          '@id': `${absoluteUrl(site, product.path)}#product`,
-          name: product.name,
-          brand: { '@type': 'Brand', name: product.maker },
-          url: absoluteUrl(site, product.path),
-          ...(offer ? { offers: offer } : {}),
-          review: {
-            '@type': 'Review',
-            name: `${product.name} in ${model.headline}`,
-            url: `${url}#board-${product.entryId}`,
-            datePublished: model.publishedAt,
-            dateModified: model.updatedAt,
-            author: outlet,
-            publisher: outlet,
-            itemReviewed: { '@id': `${absoluteUrl(site, product.path)}#product` },
-            ...(rating !== null
-              ? {
-                  reviewRating: {
-                    '@type': 'Rating',
-                    ratingValue: rating,
-                    bestRating: labelRatingScale.best,
-                    worstRating: labelRatingScale.worst,
-                    ratingExplanation: product.label,
-                  },
-                }
-              : {}),
-          },
-        };
-      }),
+      .map((product) => ({
+        ...productNode(site, product, offerJsonLd(product, absoluteUrl(site, product.path))),
+        review: {
+          '@type': 'Review',
+          name: `${product.name} in ${model.headline}`,
+          url: `${url}#board-${product.entryId}`,
+          datePublished: model.publishedAt,
+          dateModified: model.updatedAt,
+          author: outlet,
+          publisher: outlet,
+          itemReviewed: { '@id': `${absoluteUrl(site, product.path)}#product` },
+          ...reviewRatingJsonLd(product.label),
+        },
+      })),
   };
 }

@@ -12,6 +12,7 @@ import { RunAnalysisEntity } from '../entities/run-analysis.entity';
 import { SampleEntity } from '../entities/sample.entity';
 import { StoredFileEntity } from '../entities/stored-file.entity';
 import { TestRunEntity } from '../entities/test-run.entity';
+import { benchProfileSystem } from '../mappers/bench-profile';
 import { productDisplayName } from '../../shared/domain/planning/product-display-name';
 import {
   effectivePhaseCount,
@@ -511,12 +512,7 @@ export async function buildPublishedRoundup(
     priceBand: { minMinor: roundup.priceMinMinor, maxMinor: roundup.priceMaxMinor, currency: roundup.currency },
     benchProfile: profile
       ? {
-          id: profile.id,
-          name: profile.name,
-          caseAndFans: profile.caseAndFans,
-          cooler: profile.cooler,
-          psu: profile.psu,
-          memory: profile.memory,
+          ...benchProfileSystem(profile),
           roomTargetC: Number(profile.roomTempTargetC),
           roomToleranceC: Number(profile.roomTempToleranceC),
           probeType: profile.probeType,

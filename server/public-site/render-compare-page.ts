@@ -4,7 +4,7 @@ import { html } from './html';
 import { watts } from './format';
 import type { PublishedConfiguration, PublishedRoundup } from './published-roundup';
 import { renderPage, type ReaderSite } from './render-layout';
-import { renderResultsChart } from './render-results-chart';
+import { renderResultsChart, resultFigures } from './render-results-chart';
 import { productAnchor } from './render-roundup-page';
 import { publicPaths } from './public-paths';
 
@@ -117,16 +117,7 @@ export function renderComparePage(
         href: catalog.products.find((p) => p.productId === row.productId)?.path ?? '#',
         reference: false,
         valueC: row.deltaOverAmbientC,
-        peakC: result?.peakC ?? null,
-        ambientC: result?.ambientC ?? null,
-        deltaOverAmbientC: result?.deltaOverAmbientC ?? null,
-        toleranceC: result?.toleranceC ?? null,
-        throttled: result?.throttled ?? false,
-        verdictLabel: result?.verdict?.label ?? null,
-        verdictCode: result?.verdict?.code ?? null,
-        provisional: result?.verdict?.status === 'provisional',
-        manual: result?.manual ?? false,
-        notes: result?.notes ?? [],
+        ...resultFigures(result),
         source: source ? { label: row.roundupTitle, href: source.path } : null,
       };
     });

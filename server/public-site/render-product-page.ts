@@ -2,7 +2,7 @@ import type { DisplayUnit } from '../../shared/domain/reader/temperature-display
 import { estimateVrmPeak, type EstimatePoint, type VrmEstimate } from '../../shared/domain/reader/vrm-estimate';
 import { html, type SafeHtml } from './html';
 import { longDate, price, temperature, watts } from './format';
-import { labelRatingScale, offerJsonLd, ratingForLabel } from './json-ld';
+import { offerJsonLd, outletJsonLd, productNode, reviewRatingJsonLd } from './json-ld';
 import type { PublishedProduct, PublishedResult, PublishedRoundup } from './published-roundup';
 import { absoluteUrl, renderPage, type ReaderSite } from './render-layout';
 import { productAnchor, renderPhoto } from './render-roundup-page';
@@ -179,41 +179,23 @@ function renderEstimate(
 }
 
 function productJsonLd(site: ReaderSite, appearances: readonly ProductAppearance[], latest: PublishedProduct) {
-  const outlet = { '@type': 'Organization', name: site.outletName, url: absoluteUrl(site, '/read') };
+  const outlet = outletJsonLd(site);
   // The price at the latest publication that knew one.
   const priced = [latest, ...appearances.map((a) => a.product)].find((p) => p.priceAtPublication);
   const offer = priced ? offerJsonLd(priced, absoluteUrl(site, latest.path)) : null;
   return {
     '@context': 'https://schema.org',
-    '@type': 'Product',
-    '@id': `${absoluteUrl(site, latest.path)}#product`,
-    name: latest.name,
-    brand: { '@type': 'Brand', name: latest.maker },
-    url: absoluteUrl(site, latest.path),
-    ...(offer ? { offers: offer } : {}),
+    ...productNode(site, latest, offer),
     review: appearances
       .filter((a) => a.product.kind === 'tested')
-      .map((a) => {
-        const rating = ratingForLabel(a.product.label);
-        return {
-          '@type': 'Review',
-          name: `${latest.name} in ${a.model.headline}`,
-          url: `${absoluteUrl(site, a.model.path)}#${productAnchor(a.product.entryId)}`,
-          datePublished: a.model.publishedAt,
-          author: outlet,
-          ...(rating !== null
-            ? {
-                reviewRating: {
-                  '@type': 'Rating',
-                  ratingValue: rating,
-                  bestRating: labelRatingScale.best,
-                  worstRating: labelRatingScale.worst,
-                  ratingExplanation: a.product.label,
-                },
-              }
-            : {}),
-        };
-      }),
+      .map((a) => ({
+        '@type': 'Review',
+        name: `${latest.name} in ${a.model.headline}`,
+        url: `${absoluteUrl(site, a.model.path)}#${productAnchor(a.product.entryId)}`,
+        datePublished: a.model.publishedAt,
+        author: outlet,
+        ...reviewRatingJsonLd(a.product.label),
+      })),
   };
 }
 

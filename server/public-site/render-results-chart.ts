@@ -1,6 +1,7 @@
 import { formatTemperature, type DisplayUnit } from '../../shared/domain/reader/temperature-display';
 import { html, type SafeHtml } from './html';
 import { plusMinusTemperature, temperature } from './format';
+import type { PublishedResult } from './published-roundup';
 
 /** One bar of a results chart: a board's run of record under one load configuration. */
 export interface ChartRow {
@@ -23,6 +24,24 @@ export interface ChartRow {
   notes: string[];
   /** Extra leading cell (the roundup a compared result comes from). */
   source?: { label: string; href: string } | null;
+}
+
+/** A row's figures, verdict and notes from the published result it shows; none where that result is missing. */
+export function resultFigures(
+  result: PublishedResult | null | undefined,
+): Omit<ChartRow, 'name' | 'href' | 'reference' | 'valueC' | 'source'> {
+  return {
+    peakC: result?.peakC ?? null,
+    ambientC: result?.ambientC ?? null,
+    deltaOverAmbientC: result?.deltaOverAmbientC ?? null,
+    toleranceC: result?.toleranceC ?? null,
+    throttled: result?.throttled ?? false,
+    verdictLabel: result?.verdict?.label ?? null,
+    verdictCode: result?.verdict?.code ?? null,
+    provisional: result?.verdict?.status === 'provisional',
+    manual: result?.manual ?? false,
+    notes: result?.notes ?? [],
+  };
 }
 
 export interface ChartSpec {

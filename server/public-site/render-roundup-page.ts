@@ -3,7 +3,7 @@ import { html, trustedHtml, type SafeHtml } from './html';
 import { longDate, plusMinusTemperature, price, temperature, watts } from './format';
 import type { PublishedProduct, PublishedResult, PublishedRoundup } from './published-roundup';
 import { renderPage, type ReaderSite } from './render-layout';
-import { renderResultsChart, type ChartRow } from './render-results-chart';
+import { renderResultsChart, resultFigures, type ChartRow } from './render-results-chart';
 import { roundupJsonLd } from './json-ld';
 
 const thinSpace = '\u2009';
@@ -61,15 +61,7 @@ export function chartRowsFor(
         href: hrefOf(product),
         reference: product.kind === 'reference',
         valueC,
-        peakC: result.peakC,
-        ambientC: result.ambientC,
-        deltaOverAmbientC: result.deltaOverAmbientC,
-        toleranceC: result.toleranceC,
-        throttled: result.throttled,
-        verdictLabel: result.verdict?.label ?? null,
-        verdictCode: result.verdict?.code ?? null,
-        provisional: result.verdict?.status === 'provisional',
-        manual: result.manual,
+        ...resultFigures(result),
         notes:
           product.kind === 'reference' && product.reference
             ? [`From ${product.reference.title}.`, ...result.notes]

@@ -1,7 +1,7 @@
 // Matrix cells and matrix progress as the API sends them.
 import type { EntityManager } from 'typeorm';
 import type { MatrixCellEntity } from '../entities/matrix-cell.entity';
-import { personOrNull } from './people';
+import { loadPeople, personOrNull } from './people';
 import { availableCellActions, cellStates, type CellState } from '../../shared/domain/planning/matrix-cell-states';
 import { hasDateEnded } from '../../shared/domain/planning/loan-overdue';
 import { qaFlagLabels } from '../../shared/domain/analysis/qa-flag-labels';
@@ -52,6 +52,19 @@ export async function runFactsByCell(manager: EntityManager, cellIds: number[]):
     });
   }
   return facts;
+}
+
+/** What the DTOs of the given cells need besides the cells: their testers and their runs' facts, read once. */
+export async function cellDtoFacts(manager: EntityManager, cells: readonly MatrixCellEntity[]) {
+  const people = await loadPeople(
+    manager,
+    cells.map((c) => c.testerId),
+  );
+  const runFacts = await runFactsByCell(
+    manager,
+    cells.map((c) => c.id),
+  );
+  return { people, runFacts };
 }
 
 export function toMatrixCellDto(

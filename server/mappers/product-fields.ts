@@ -1,6 +1,8 @@
 import { In, type EntityManager } from 'typeorm';
 import { ProductEntity } from '../entities/product.entity';
 import { ProductPriceEntity } from '../entities/product-price.entity';
+import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
+import { rowsById } from '../lib/rows-by-id';
 import { booleanOrNull, decimalOrNull, isoOrNull } from './dto-values';
 import { personOrNull } from './people';
 import {
@@ -250,4 +252,18 @@ export async function productBriefs(manager: EntityManager, ids: number[]): Prom
   if (unique.length === 0) return new Map();
   const products = await manager.getRepository(ProductEntity).findBy({ id: In(unique) });
   return new Map(products.map((p) => [p.id, toProductBrief(p)]));
+}
+
+/** The roundup entries that `items` refer to, by key, and the brief of each one's product by product key. */
+export async function entriesWithProducts<T>(
+  manager: EntityManager,
+  items: readonly T[],
+  entryIdOf: (item: T) => number,
+) {
+  const entryById = await rowsById(manager, RoundupEntryEntity, items, entryIdOf);
+  const products = await productBriefs(
+    manager,
+    [...entryById.values()].map((e) => e.productId),
+  );
+  return { entryById, products };
 }

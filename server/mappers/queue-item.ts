@@ -1,13 +1,13 @@
 // Matrix cells listed outside the matrix (queues, bookable cells), each with its roundup, product and
 // load configuration.
-import { In, type EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { LoadConfigurationEntity } from '../entities/load-configuration.entity';
 import type { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
-import { runFactsByCell, toMatrixCellDto } from './matrix-cell';
-import { loadPeople } from './people';
-import { productBriefs } from './product-fields';
+import { cellDtoFacts, toMatrixCellDto } from './matrix-cell';
+import { entriesWithProducts } from './product-fields';
+import { rowsById } from '../lib/rows-by-id';
 import type { CurrentUser } from '../../shared/schemas/auth';
 import type { ProductBrief } from '../../shared/schemas/catalog';
 import type { QueueItem } from '../../shared/schemas/matrix';
@@ -20,31 +20,13 @@ export async function queueItems(
   now: Date,
 ): Promise<QueueItem[]> {
   if (cells.length === 0) return [];
-  const roundups = await manager
-    .getRepository(RoundupEntity)
-    .findBy({ id: In([...new Set(cells.map((c) => c.roundupId))]) });
-  const roundupById = new Map(roundups.map((r) => [r.id, r]));
-  const entries = await manager
-    .getRepository(RoundupEntryEntity)
-    .findBy({ id: In([...new Set(cells.map((c) => c.entryId))]) });
-  const entryById = new Map(entries.map((e) => [e.id, e]));
-  const products = await productBriefs(
-    manager,
-    entries.map((e) => e.productId),
-  );
-  const configs = await manager.getRepository(LoadConfigurationEntity).find({
-    where: { id: In([...new Set(cells.map((c) => c.loadConfigurationId))]) },
-    select: { id: true, name: true },
+  const roundupById = await rowsById(manager, RoundupEntity, cells, (c) => c.roundupId);
+  const { entryById, products } = await entriesWithProducts(manager, cells, (c) => c.entryId);
+  const configById = await rowsById(manager, LoadConfigurationEntity, cells, (c) => c.loadConfigurationId, {
+    id: true,
+    name: true,
   });
-  const configById = new Map(configs.map((c) => [c.id, c]));
-  const people = await loadPeople(
-    manager,
-    cells.map((c) => c.testerId),
-  );
-  const runFacts = await runFactsByCell(
-    manager,
-    cells.map((c) => c.id),
-  );
+  const { people, runFacts } = await cellDtoFacts(manager, cells);
   return cells.map((cell) => {
     const roundup = roundupById.get(cell.roundupId) as RoundupEntity;
     const entry = entryById.get(cell.entryId) as RoundupEntryEntity;

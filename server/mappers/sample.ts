@@ -1,9 +1,9 @@
 // Samples as the API sends them, with loan overdue flags computed by shared/domain rules.
-import { In, type EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import type { RoundupEntity } from '../entities/roundup.entity';
 import { SampleEntity } from '../entities/sample.entity';
-import { productBriefs } from './product-fields';
+import { entriesWithProducts } from './product-fields';
 import { isLoanOverdue, loanDaysOverdue } from '../../shared/domain/planning/loan-overdue';
 import type { ProductBrief } from '../../shared/schemas/catalog';
 import type { Sample } from '../../shared/schemas/samples';
@@ -64,12 +64,7 @@ export async function samplesOfRoundups(
   }
   const samples = await qb.getMany();
   if (samples.length === 0) return [];
-  const entries = await manager.getRepository(RoundupEntryEntity).findBy({ id: In(samples.map((s) => s.entryId)) });
-  const entryById = new Map(entries.map((e) => [e.id, e]));
-  const products = await productBriefs(
-    manager,
-    entries.map((e) => e.productId),
-  );
+  const { entryById, products } = await entriesWithProducts(manager, samples, (s) => s.entryId);
   return samples.map((sample) => {
     const entry = entryById.get(sample.entryId) as RoundupEntryEntity;
     const roundup = byId.get(entry.roundupId) as RoundupEntity;

@@ -6,9 +6,8 @@ import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { RoundupLoadConfigurationEntity } from '../entities/roundup-load-configuration.entity';
 import { UserEntity } from '../entities/user.entity';
 import { AppError, conflict, forbidden, invalid, notFound } from '../errors';
-import { loadPeople } from '../mappers/people';
 import { recordPlanChange } from '../lib/roundup-audit';
-import { emptyProgress, progressByRoundup, runFactsByCell, toMatrixCellDto } from '../mappers/matrix-cell';
+import { cellDtoFacts, emptyProgress, progressByRoundup, toMatrixCellDto } from '../mappers/matrix-cell';
 import { productBriefs } from '../mappers/product-fields';
 import { assertPlanEditable, findRoundup, lockRoundup } from '../lib/roundup-access';
 import { cellBookingAt } from './benches.service';
@@ -52,15 +51,8 @@ export class MatrixService {
       entries.map((e) => e.productId),
     );
     const cells = await manager.getRepository(MatrixCellEntity).findBy({ roundupId });
-    const people = await loadPeople(
-      manager,
-      cells.map((c) => c.testerId),
-    );
+    const { people, runFacts } = await cellDtoFacts(manager, cells);
     const cellAt = new Map(cells.map((c) => [`${c.entryId}:${c.loadConfigurationId}`, c]));
-    const runFacts = await runFactsByCell(
-      manager,
-      cells.map((c) => c.id),
-    );
     return {
       roundupId,
       roundupState: roundup.state,
@@ -183,14 +175,7 @@ export class MatrixService {
         });
       }
       const updated = cellIds.length ? await repo.findBy({ id: In(cellIds) }) : [];
-      const people = await loadPeople(
-        manager,
-        updated.map((c) => c.testerId),
-      );
-      const runFacts = await runFactsByCell(
-        manager,
-        updated.map((c) => c.id),
-      );
+      const { people, runFacts } = await cellDtoFacts(manager, updated);
       return updated.map((cell) => toMatrixCellDto(cell, roundup.timeZone, people, actor, now, runFacts));
     });
   }
@@ -270,8 +255,8 @@ export class MatrixService {
         await StaffMailService.cellSentBack(manager, { cellId, testerId: cell.testerId, roundupId, note, at: now });
       }
       const updated = await repo.findOneByOrFail({ id: cellId });
-      const people = await loadPeople(manager, [updated.testerId]);
-      return toMatrixCellDto(updated, roundup.timeZone, people, actor, now, await runFactsByCell(manager, [cellId]));
+      const { people, runFacts } = await cellDtoFacts(manager, [updated]);
+      return toMatrixCellDto(updated, roundup.timeZone, people, actor, now, runFacts);
     });
   }
 }

@@ -2,11 +2,11 @@ import { In, type DataSource, type EntityManager } from 'typeorm';
 import { MailOptOutEntity } from '../entities/mail.entities';
 import { MatrixCellEntity } from '../entities/matrix-cell.entity';
 import { RoundupEntity } from '../entities/roundup.entity';
-import { RoundupEntryEntity } from '../entities/roundup-entry.entity';
 import { SampleEntity } from '../entities/sample.entity';
 import { UserEntity } from '../entities/user.entity';
 import { LoadConfigurationEntity } from '../entities/load-configuration.entity';
-import { productBriefs } from '../mappers/product-fields';
+import { entriesWithProducts } from '../mappers/product-fields';
+import { rowsById } from '../lib/rows-by-id';
 import { enqueueMail } from '../mail/outbox';
 import { oneLine } from '../mail/compose';
 import { calendarDateIn, daysPast, isLoanOverdue } from '../../shared/domain/planning/loan-overdue';
@@ -126,16 +126,8 @@ export class StaffMailService {
       .getMany();
     const editors = await manager.getRepository(UserEntity).findBy({ role: 'editor', active: true });
     if (loans.length) {
-      const entries = await manager.getRepository(RoundupEntryEntity).findBy({ id: In(loans.map((l) => l.entryId)) });
-      const entryById = new Map(entries.map((e) => [e.id, e]));
-      const roundups = await manager
-        .getRepository(RoundupEntity)
-        .findBy({ id: In([...new Set(entries.map((e) => e.roundupId))]) });
-      const roundupById = new Map(roundups.map((r) => [r.id, r]));
-      const products = await productBriefs(
-        manager,
-        entries.map((e) => e.productId),
-      );
+      const { entryById, products } = await entriesWithProducts(manager, loans, (l) => l.entryId);
+      const roundupById = await rowsById(manager, RoundupEntity, [...entryById.values()], (e) => e.roundupId);
       for (const loan of loans) {
         const entry = entryById.get(loan.entryId);
         const roundup = entry ? roundupById.get(entry.roundupId) : undefined;
@@ -186,10 +178,7 @@ export class StaffMailService {
       .andWhere('c.state IN (:...states)', { states: [...queueStates] })
       .getMany();
     if (cells.length === 0 || editors.length === 0) return 0;
-    const roundups = await manager
-      .getRepository(RoundupEntity)
-      .findBy({ id: In([...new Set(cells.map((c) => c.roundupId))]) });
-    const roundupById = new Map(roundups.map((r) => [r.id, r]));
+    const roundupById = await rowsById(manager, RoundupEntity, cells, (c) => c.roundupId);
     const overdue = cells.filter((c) => {
       const roundup = roundupById.get(c.roundupId);
       return (
@@ -229,12 +218,7 @@ export class StaffMailService {
 async function cellLines(manager: EntityManager, cellIds: number[]): Promise<string[]> {
   if (cellIds.length === 0) return [];
   const cells = await manager.getRepository(MatrixCellEntity).findBy({ id: In(cellIds) });
-  const entries = await manager.getRepository(RoundupEntryEntity).findBy({ id: In(cells.map((c) => c.entryId)) });
-  const entryById = new Map(entries.map((e) => [e.id, e]));
-  const products = await productBriefs(
-    manager,
-    entries.map((e) => e.productId),
-  );
+  const { entryById, products } = await entriesWithProducts(manager, cells, (c) => c.entryId);
   const configs = await manager
     .getRepository(LoadConfigurationEntity)
     .findBy({ id: In([...new Set(cells.map((c) => c.loadConfigurationId))]) });

@@ -1,5 +1,5 @@
-import { CreateDateColumn, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
-import { OptionalIntColumn, OptionalInstantColumn } from './columns';
+import { CreateDateColumn, PrimaryColumn, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { OptionalIntColumn, OptionalInstantColumn, VarcharColumn } from './columns';
 
 // The columns most tables share, declared once; an entity extends the one that fits. Column names and types match
 // the migrations (INT UNSIGNED AUTO_INCREMENT keys, DATETIME(3) UTC times).
@@ -26,4 +26,25 @@ export abstract class ArchivableEntity extends EditedEntity {
 
   @OptionalIntColumn('created_by')
   createdBy: number | null;
+}
+
+/** An archivable record known by a name no other of its kind has (bench profiles, load configurations). */
+export abstract class NamedArchivableEntity extends ArchivableEntity {
+  @VarcharColumn(120, { unique: true })
+  name: string;
+}
+
+/**
+ * A row that links two others, keyed by both references (INT UNSIGNED, e.g. `booking_id` + `matrix_cell_id`): the
+ * base of a link table, given each reference as [property, column].
+ */
+export function KeyedByPair<A extends string, B extends string>(
+  first: readonly [A, string],
+  second: readonly [B, string],
+) {
+  abstract class PairKeyedEntity {}
+  for (const [property, name] of [first, second]) {
+    PrimaryColumn({ type: 'int', unsigned: true, name })(PairKeyedEntity.prototype, property);
+  }
+  return PairKeyedEntity as abstract new () => Record<A | B, number>;
 }

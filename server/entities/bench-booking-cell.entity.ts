@@ -1,11 +1,6 @@
-import { Entity, PrimaryColumn } from 'typeorm';
+import { Entity } from 'typeorm';
+import { KeyedByPair } from './base-entities';
 
 /** Which assigned matrix cells a booking is for. */
 @Entity({ name: 'bench_booking_cells' })
-export class BenchBookingCellEntity {
-  @PrimaryColumn({ type: 'int', unsigned: true, name: 'booking_id' })
-  bookingId: number;
-
-  @PrimaryColumn({ type: 'int', unsigned: true, name: 'matrix_cell_id' })
-  cellId: number;
-}
+export class BenchBookingCellEntity extends KeyedByPair(['bookingId', 'booking_id'], ['cellId', 'matrix_cell_id']) {}

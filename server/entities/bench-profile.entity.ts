@@ -1,14 +1,11 @@
 import type { ColumnMapping } from '../../shared/schemas/analysis';
 import { Column, Entity } from 'typeorm';
 import { VarcharColumn, DecimalColumn } from './columns';
-import { ArchivableEntity } from './base-entities';
+import { NamedArchivableEntity } from './base-entities';
 
 /** A reusable description of the test system and the conditions a roundup is measured under. */
 @Entity({ name: 'bench_profiles' })
-export class BenchProfileEntity extends ArchivableEntity {
-  @VarcharColumn(120, { unique: true })
-  name: string;
-
+export class BenchProfileEntity extends NamedArchivableEntity {
   @VarcharColumn(300, { name: 'case_and_fans' })
   caseAndFans: string;
 

@@ -1,13 +1,10 @@
 import { Column, Entity } from 'typeorm';
 import { VarcharColumn, DecimalColumn } from './columns';
-import { ArchivableEntity } from './base-entities';
+import { NamedArchivableEntity } from './base-entities';
 
 /** A reusable CPU + settings + load; each one a roundup uses becomes a matrix column. */
 @Entity({ name: 'load_configurations' })
-export class LoadConfigurationEntity extends ArchivableEntity {
-  @VarcharColumn(120, { unique: true })
-  name: string;
-
+export class LoadConfigurationEntity extends NamedArchivableEntity {
   @VarcharColumn(200, { name: 'cpu_description' })
   cpuDescription: string;
 

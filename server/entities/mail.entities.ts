@@ -8,6 +8,7 @@ import {
   DefaultNowColumn,
   VarcharColumn,
 } from './columns';
+import { KeyedByPair } from './base-entities';
 
 export const subscriberStatuses = ['pending', 'confirmed', 'unsubscribed'] as const;
 export type SubscriberStatus = (typeof subscriberStatuses)[number];
@@ -94,13 +95,10 @@ export class SubscriberEntity {
 }
 
 @Entity({ name: 'subscriber_categories' })
-export class SubscriberCategoryEntity {
-  @PrimaryColumn({ type: 'int', unsigned: true, name: 'subscriber_id' })
-  subscriberId: number;
-
-  @PrimaryColumn({ type: 'int', unsigned: true, name: 'category_id' })
-  categoryId: number;
-}
+export class SubscriberCategoryEntity extends KeyedByPair(
+  ['subscriberId', 'subscriber_id'],
+  ['categoryId', 'category_id'],
+) {}
 
 /** An address never to mail again, kept only as a salted hash. */
 @Entity({ name: 'mail_suppressions' })

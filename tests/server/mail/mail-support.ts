@@ -30,6 +30,19 @@ export async function closeMailTestContext(context: { relay: LocalRelay; service
   await context.relay.close();
 }
 
+/** Runs `check` against an app of its own with other settings, and closes its relay afterwards whatever happens. */
+export async function withMailTestContext<T>(
+  overrides: Partial<Record<keyof Env, string>>,
+  check: (context: MailTestContext) => Promise<T>,
+): Promise<T> {
+  const context = await mailTestContext(overrides);
+  try {
+    return await check(context);
+  } finally {
+    await closeMailTestContext(context);
+  }
+}
+
 /**
  * Sends what is due and waits until no due row is left: other test files send from the same outbox at the same
  * time (SKIP LOCKED hands each row to one sender), so a row this file queued may be in another sender's hands.

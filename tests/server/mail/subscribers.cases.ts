@@ -13,6 +13,7 @@ import {
   mailTestContext,
   messagesTo,
   rawHeader,
+  withMailTestContext,
   type MailTestContext,
 } from './mail-support';
 
@@ -34,12 +35,17 @@ async function signUp(email: string, categoryIds = [everyRoundup]) {
   return client(ctx.app).post('/api/subscribers').send({ email, categoryIds });
 }
 
-/** Signs up and opens the confirmation link from the mail; returns the self-service token. */
-async function subscribeAndConfirm(email: string) {
+/** Signs up and returns the token of the confirmation link in the mail that follows. */
+async function signUpForConfirmation(email: string) {
   await signUp(email);
   await sendAll(ctx.services.mailSender);
   const [confirmation] = await messagesTo(email);
-  const token = linkIn(confirmation.text, `${site}/subscribe/confirm/`).split('/').pop() as string;
+  return linkIn(confirmation.text, `${site}/subscribe/confirm/`).split('/').pop() as string;
+}
+
+/** Signs up and opens the confirmation link from the mail; returns the self-service token. */
+async function subscribeAndConfirm(email: string) {
+  const token = await signUpForConfirmation(email);
   const confirmed = await client(ctx.app).post(`/subscribe/confirm/${token}`);
   expect(confirmed.status).toBe(200);
   return { token, manage: /\/subscribe\/manage\/([^"]+)"/.exec(confirmed.text)![1] };
@@ -91,23 +97,13 @@ describe('double opt-in', () => {
   });
 
   it('a confirmation link works once and expires', async () => {
-    const email = uniqueEmail('once');
-    await signUp(email);
-    await sendAll(ctx.services.mailSender);
-    const token = linkIn((await messagesTo(email))[0].text, `${site}/subscribe/confirm/`)
-      .split('/')
-      .pop()!;
+    const token = await signUpForConfirmation(uniqueEmail('once'));
     expect((await client(ctx.app).get(`/subscribe/confirm/${token}`)).status).toBe(200);
     expect((await client(ctx.app).post(`/subscribe/confirm/${token}`)).status).toBe(200);
     expect((await client(ctx.app).post(`/subscribe/confirm/${token}`)).status).toBe(410);
     expect((await client(ctx.app).post('/api/subscribers/confirm').send({ token })).status).toBe(410);
 
-    const late = uniqueEmail('late');
-    await signUp(late);
-    await sendAll(ctx.services.mailSender);
-    const lateToken = linkIn((await messagesTo(late))[0].text, `${site}/subscribe/confirm/`)
-      .split('/')
-      .pop()!;
+    const lateToken = await signUpForConfirmation(uniqueEmail('late'));
     // 48 hours and a minute later (the link's stated lifetime is 48 hours).
     const later = new Date(Date.now() + 48 * 3_600_000 + 60_000);
     await expect(ctx.services.subscribers.confirm(lateToken, later)).rejects.toMatchObject({
@@ -142,8 +138,7 @@ describe('double opt-in', () => {
   });
 
   it('limits sign-ups per client address', async () => {
-    const limited = await mailTestContext({ SUBSCRIBE_LIMIT_PER_IP: '2' });
-    try {
+    await withMailTestContext({ SUBSCRIBE_LIMIT_PER_IP: '2' }, async (limited) => {
       const statuses = [];
       for (let i = 0; i < 3; i++) {
         statuses.push(
@@ -155,9 +150,7 @@ describe('double opt-in', () => {
         );
       }
       expect(statuses).toEqual([202, 202, 429]);
-    } finally {
-      await closeMailTestContext(limited);
-    }
+    });
   });
 });
 
@@ -325,8 +318,7 @@ describe('editors and the relay', () => {
       reason: 'bounced',
     });
 
-    const withSecret = await mailTestContext({ MAIL_WEBHOOK_SECRET: 'a-shared-secret-of-enough-length' });
-    try {
+    await withMailTestContext({ MAIL_WEBHOOK_SECRET: 'a-shared-secret-of-enough-length' }, async (withSecret) => {
       const events = { events: [{ type: 'complaint', email: uniqueEmail('complains') }] };
       expect((await client(withSecret.app).post('/api/mail/events').send(events)).status).toBe(401);
       const ok = await client(withSecret.app)
@@ -335,9 +327,7 @@ describe('editors and the relay', () => {
         .send(events);
       expect(ok.status).toBe(200);
       expect(ok.body).toEqual({ received: 1, suppressed: 1 });
-    } finally {
-      await closeMailTestContext(withSecret);
-    }
+    });
   });
 });
 

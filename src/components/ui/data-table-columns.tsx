@@ -84,10 +84,16 @@ export interface RowButton<Row> {
 }
 
 /** An actions column holding one small button per row. */
-export function buttonColumn<Row>({ label, name, onClick, variant }: RowButton<Row>): DataTableColumn<Row> {
-  return actionsColumn((row) => (
-    <Button size="sm" variant={variant} onClick={() => onClick(row)} aria-label={name(row)}>
-      {label}
-    </Button>
-  ));
+export function buttonColumn<Row>(
+  { label, name, onClick, variant }: RowButton<Row>,
+  extras: ColumnExtras<Row> = {},
+): DataTableColumn<Row> {
+  return actionsColumn(
+    (row) => (
+      <Button size="sm" variant={variant} onClick={() => onClick(row)} aria-label={name(row)}>
+        {label}
+      </Button>
+    ),
+    extras,
+  );
 }

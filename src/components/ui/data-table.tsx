@@ -33,6 +33,8 @@ export interface DataTableColumn<Row> {
   fixed?: boolean;
   /** Hidden below this breakpoint (keeps phones readable); never hide the row header. */
   hideBelow?: 'sm' | 'md' | 'lg';
+  /** The header is read out only: the cells speak for themselves (a badge, the row's buttons). */
+  headerHidden?: boolean;
   /** The header as written, in the mono face: names read from a file, which capitals would misquote. */
   verbatimHeader?: boolean;
   /** The content fills the cell to its edges and carries its own padding (a link or a coloured block). */
@@ -230,7 +232,9 @@ export function DataTable<Row>(props: DataTableProps<Row>) {
                     (column.rowHeader || column.pinEnd) && 'z-20',
                   )}
                 >
-                  {column.sortValue ? (
+                  {column.headerHidden ? (
+                    <span className="sr-only">{column.header}</span>
+                  ) : column.sortValue ? (
                     <button
                       type="button"
                       onClick={() => toggleSort(column.id)}

@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { Badge } from '../../../components/ui/badge';
-import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
+import { DataTable, type DataTableColumns } from '../../../components/ui/data-table';
+import { buttonColumn } from '../../../components/ui/data-table-columns';
 import { describeSubmitError } from '../../../lib/form-errors';
 import type { Price } from '../../../../shared/schemas/catalog';
 import { useRemovePrice } from '../api/prices';
@@ -26,6 +27,44 @@ export function PriceHistory({ productId, productName, prices, latestIds, canRem
   const [removeError, setRemoveError] = useState<string | undefined>();
   const regions = [...new Set(prices.map((price) => price.region))].sort();
 
+  // The Remove button names the region, so screen-reader users hear which price it removes.
+  const columnsFor = (region: string): DataTableColumns<Price> => [
+    {
+      id: 'seen',
+      header: 'Seen on',
+      numeric: true,
+      cell: (price) => formatCalendarDate(price.observedOn),
+    },
+    { id: 'price', header: 'Price', numeric: true, cell: (price) => formatPrice(price) },
+    {
+      id: 'latest',
+      header: 'Counts as latest',
+      headerHidden: true,
+      cell: (price) => latestIds.has(price.id) && <Badge tone="accent">Latest</Badge>,
+    },
+    { id: 'source', header: 'Source', cell: (price) => price.source },
+    {
+      id: 'recordedBy',
+      header: 'Recorded by',
+      className: 'text-muted',
+      cell: (price) => price.recordedBy?.displayName ?? 'Import or former staff',
+    },
+    canRemove &&
+      buttonColumn(
+        {
+          label: 'Remove',
+          name: (price) =>
+            `Remove the ${region} price of ${formatPrice(price)} seen ${formatCalendarDate(price.observedOn)}`,
+          onClick: (price) => {
+            setRemoveError(undefined);
+            setRemoving(price);
+          },
+          variant: 'quiet',
+        },
+        { headerHidden: true, className: 'text-right' },
+      ),
+  ];
+
   if (prices.length === 0) {
     return <p className="text-sm text-muted">No prices recorded yet for {productName}.</p>;
   }
@@ -42,69 +81,7 @@ export function PriceHistory({ productId, productName, prices, latestIds, canRem
             >
               {region} · {rows.length} {rows.length === 1 ? 'entry' : 'entries'}
             </h3>
-            <div
-              role="region"
-              aria-label={`Prices in ${region}`}
-              tabIndex={0}
-              className="overflow-x-auto rounded-[3px] border border-rule"
-            >
-              <table className="w-full border-collapse text-sm">
-                <thead>
-                  <tr className="border-b border-edge/70 bg-wash text-xs tracking-wide text-muted uppercase">
-                    <th scope="col" className="px-3 py-1.5 text-right font-semibold">
-                      Seen on
-                    </th>
-                    <th scope="col" className="px-3 py-1.5 text-right font-semibold">
-                      Price
-                    </th>
-                    <th scope="col" className="px-1 py-1.5 text-left font-semibold">
-                      <span className="sr-only">Counts as latest</span>
-                    </th>
-                    <th scope="col" className="px-3 py-1.5 text-left font-semibold">
-                      Source
-                    </th>
-                    <th scope="col" className="px-3 py-1.5 text-left font-semibold">
-                      Recorded by
-                    </th>
-                    {canRemove && (
-                      <th scope="col" className="px-3 py-1.5 text-left font-semibold">
-                        <span className="sr-only">Actions</span>
-                      </th>
-                    )}
-                  </tr>
-                </thead>
-                <tbody>
-                  {rows.map((price) => (
-                    <tr key={price.id} className="border-b border-rule last:border-b-0">
-                      <td className="numeric px-3 py-1.5 text-right whitespace-nowrap">
-                        {formatCalendarDate(price.observedOn)}
-                      </td>
-                      <td className="numeric px-3 py-1.5 text-right whitespace-nowrap">{formatPrice(price)}</td>
-                      <td className="px-1 py-1.5">{latestIds.has(price.id) && <Badge tone="accent">Latest</Badge>}</td>
-                      <td className="px-3 py-1.5">{price.source}</td>
-                      <td className="px-3 py-1.5 text-muted">
-                        {price.recordedBy?.displayName ?? 'Import or former staff'}
-                      </td>
-                      {canRemove && (
-                        <td className="px-3 py-1 text-right">
-                          <Button
-                            size="sm"
-                            variant="quiet"
-                            aria-label={`Remove the ${region} price of ${formatPrice(price)} seen ${formatCalendarDate(price.observedOn)}`}
-                            onClick={() => {
-                              setRemoveError(undefined);
-                              setRemoving(price);
-                            }}
-                          >
-                            Remove
-                          </Button>
-                        </td>
-                      )}
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            </div>
+            <DataTable caption={`Prices in ${region}`} rows={rows} columns={columnsFor(region)} />
           </section>
         );
       })}

@@ -2,7 +2,7 @@ import { render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { DataTable } from '../../src/components/ui/data-table';
-import { buttonColumn, numericColumn, textColumn } from '../../src/components/ui/data-table-columns';
+import { buttonColumn, dateColumn, numericColumn, textColumn } from '../../src/components/ui/data-table-columns';
 
 interface Probe {
   id: number;
@@ -26,6 +26,12 @@ const columns = [
     (peak) => peak ?? '—',
   ),
 ];
+
+interface Visit {
+  id: number;
+  day: string | null;
+  at: string | null;
+}
 
 const rowHeaders = () => screen.getAllByRole('rowheader').map((cell) => cell.textContent);
 
@@ -65,5 +71,36 @@ describe('DataTable', () => {
     expect(within(table).getByRole('columnheader', { name: 'Actions' })).toBeTruthy();
     await userEvent.click(within(table).getByRole('button', { name: 'Edit Choke' }));
     expect(onEdit).toHaveBeenCalledWith(probes[2]);
+  });
+
+  it('when a date column is sorted, then calendar days and instants go in time order and none shows its empty text', async () => {
+    // Invented dates; the ISO 8601 order of days and instants is that of the calendar.
+    const visits: Visit[] = [
+      { id: 1, day: '2026-03-01', at: '2026-03-01T08:00:00Z' },
+      { id: 2, day: null, at: null },
+      { id: 3, day: '2025-12-31', at: '2026-02-28T23:30:00Z' },
+    ];
+    render(
+      <DataTable
+        caption="Visits"
+        rows={visits}
+        columns={[
+          textColumn<Visit>('id', 'Visit', (visit) => `Visit ${visit.id}`, { rowHeader: true }),
+          dateColumn<Visit>('day', 'Day', (visit) => visit.day, { empty: 'Not set' }),
+          dateColumn<Visit>('at', 'Signed in', (visit) => visit.at, {
+            instant: true,
+            empty: 'Never',
+          }),
+        ]}
+        initialSort="day"
+      />,
+    );
+    expect(rowHeaders()).toEqual(['Visit 3', 'Visit 1', 'Visit 2']);
+    expect(screen.getByText('Not set')).toBeTruthy();
+    await userEvent.click(screen.getByRole('button', { name: /Signed in/ }));
+    expect(rowHeaders()).toEqual(['Visit 3', 'Visit 1', 'Visit 2']);
+    expect(screen.getByText('Never')).toBeTruthy();
+    await userEvent.click(screen.getByRole('button', { name: /Signed in/ }));
+    expect(rowHeaders()).toEqual(['Visit 1', 'Visit 3', 'Visit 2']);
   });
 });

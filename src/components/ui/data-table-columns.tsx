@@ -34,36 +34,31 @@ export function numericColumn<Row, Value extends string | number | null | undefi
   };
 }
 
-/** A calendar day (YYYY-MM-DD), sorted in time; `empty` stands for none. */
-export function calendarDateColumn<Row>(
+/**
+ * A date sorted in time: a calendar day (YYYY-MM-DD), or with `instant` an instant from the API shown in the user's
+ * time zone; `empty` stands for none. Days sort as written, so the filter box finds them too.
+ */
+export function dateColumn<Row>(
   id: string,
   header: string,
   date: (row: Row) => string | null,
-  extras: ColumnExtras<Row> & { empty?: string } = {},
+  { instant = false, empty = '—', ...extras }: ColumnExtras<Row> & { instant?: boolean; empty?: string } = {},
 ): DataTableColumn<Row> {
-  const { empty = '—', ...rest } = extras;
-  const show = (day: string | null) => (day ? formatCalendarDate(day) : <span className="text-muted">{empty}</span>);
-  return numericColumn(id, header, date, show, rest);
-}
-
-/** An instant from the API in the user's time zone, sorted in time; `fallback` stands for none. */
-export function instantColumn<Row>(
-  id: string,
-  header: string,
-  instant: (row: Row) => string | null,
-  extras: ColumnExtras<Row> & { fallback?: string } = {},
-): DataTableColumn<Row> {
-  const { fallback, ...rest } = extras;
+  const moment = (row: Row) => {
+    const value = date(row);
+    return value ? Date.parse(value) : null;
+  };
+  const day = (row: Row) => {
+    const value = date(row);
+    return value ? formatCalendarDate(value) : <span className="text-muted">{empty}</span>;
+  };
   return {
     id,
     header,
     numeric: true,
-    sortValue: (row) => {
-      const value = instant(row);
-      return value ? Date.parse(value) : null;
-    },
-    cell: (row) => <DateTime value={instant(row)} fallback={fallback} />,
-    ...rest,
+    sortValue: instant ? moment : date,
+    cell: instant ? (row) => <DateTime value={date(row)} fallback={empty} /> : day,
+    ...extras,
   };
 }
 

@@ -3,7 +3,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
-import { actionsColumn, instantColumn } from '../../../components/ui/data-table-columns';
+import { actionsColumn, dateColumn } from '../../../components/ui/data-table-columns';
 import { DeviceTimeZoneNote } from '../../../components/ui/date-time';
 import { Panel } from '../../../components/ui/panel';
 import { formatInstant } from '../../../lib/format-time';
@@ -48,8 +48,8 @@ export function SessionsPanel({ className }: { className?: string }) {
         numeric: true,
         cell: (session) => session.ipAddress ?? <span className="text-muted">—</span>,
       },
-      instantColumn('created', 'Signed in', (session) => session.createdAt),
-      instantColumn('expires', 'Expires', (session) => session.expiresAt),
+      dateColumn('created', 'Signed in', (session) => session.createdAt, { instant: true }),
+      dateColumn('expires', 'Expires', (session) => session.expiresAt, { instant: true }),
       actionsColumn((session) =>
         session.current ? (
           <span className="text-xs text-muted">Sign out ends it</span>

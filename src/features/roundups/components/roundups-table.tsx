@@ -3,7 +3,7 @@ import { Link, useSearchParams } from 'react-router';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
-import { calendarDateColumn, textColumn } from '../../../components/ui/data-table-columns';
+import { dateColumn, textColumn } from '../../../components/ui/data-table-columns';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Select } from '../../../components/ui/select';
 import {
@@ -82,7 +82,7 @@ export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTa
           </span>
         ),
       },
-      calendarDateColumn('target', 'Target publish', (r) => r.targetPublishDate, { empty: 'Not set' }),
+      dateColumn('target', 'Target publish', (r) => r.targetPublishDate, { empty: 'Not set' }),
       {
         id: 'products',
         header: 'Products',

@@ -2,7 +2,7 @@ import { useCallback, useMemo, useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { DataTable, type DataTableColumns } from '../../../components/ui/data-table';
-import { buttonColumn, calendarDateColumn, textColumn } from '../../../components/ui/data-table-columns';
+import { buttonColumn, dateColumn, textColumn } from '../../../components/ui/data-table-columns';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { sampleSourceLabels, sampleStatuses, type Sample } from '../../../../shared/schemas/samples';
 import { useSamples } from '../api/get-samples';
@@ -63,7 +63,7 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
         filterValue: (s) => s.status,
         cell: (s) => <SampleStatusBadge status={s.status} />,
       },
-      calendarDateColumn('received', 'Received', (s) => s.receivedOn, { hideBelow: 'md' }),
+      dateColumn('received', 'Received', (s) => s.receivedOn, { hideBelow: 'md' }),
       {
         id: 'returnBy',
         header: 'Return by',

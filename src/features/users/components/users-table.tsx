@@ -2,7 +2,7 @@ import { useMemo, useState } from 'react';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataTableColumn } from '../../../components/ui/data-table';
-import { actionsColumn, instantColumn, textColumn } from '../../../components/ui/data-table-columns';
+import { actionsColumn, dateColumn, textColumn } from '../../../components/ui/data-table-columns';
 import { DateTime, DeviceTimeZoneNote } from '../../../components/ui/date-time';
 import { Select } from '../../../components/ui/select';
 import { roleLabels } from '../../../../shared/schemas/common';
@@ -92,7 +92,7 @@ export function UsersTable({
         sortValue: statusWords,
         cell: (user) => <UserStatus user={user} />,
       },
-      instantColumn('lastSignIn', 'Last sign-in', (user) => user.lastSignInAt, { fallback: 'Never' }),
+      dateColumn('lastSignIn', 'Last sign-in', (user) => user.lastSignInAt, { instant: true, empty: 'Never' }),
       actionsColumn((user) => (
         <span className="flex flex-wrap gap-1.5">
           <Button size="sm" variant="secondary" onClick={() => onEdit(user)} aria-label={`Edit ${user.displayName}`}>

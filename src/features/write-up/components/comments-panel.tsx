@@ -4,8 +4,8 @@ import { DateTime } from '../../../components/ui/date-time';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { Panel } from '../../../components/ui/panel';
 import { TextArea } from '../../../components/ui/text-area';
-import { isApiError } from '../../../lib/api-client';
-import type { CommentThread } from '../../../../shared/schemas/write-ups';
+import { useZodForm } from '../../../lib/use-zod-form';
+import { addCommentRequestSchema, type CommentThread } from '../../../../shared/schemas/write-ups';
 import { useAddComment, useCommentThreads, useResolveThread } from '../api/comments';
 
 function CommentForm({
@@ -20,38 +20,22 @@ function CommentForm({
   submitLabel: string;
 }) {
   const add = useAddComment(sectionId);
-  const [body, setBody] = useState('');
-  const [error, setError] = useState<string | null>(null);
+  const form = useZodForm({
+    schema: addCommentRequestSchema,
+    initialValues: { body: '' },
+    labels: { body: label },
+    issueMessage: (issue) => (issue.code === 'too_small' ? 'Write the comment first.' : issue.message),
+  });
   return (
     <form
       className="space-y-2"
-      onSubmit={(event) => {
-        event.preventDefault();
-        if (!body.trim()) {
-          setError('Write the comment first.');
-          return;
-        }
-        add.mutate(
-          { body, parentId },
-          {
-            onSuccess: () => {
-              setBody('');
-              setError(null);
-            },
-            // What was typed stays in the box when the server refuses it.
-            onError: (caught) =>
-              setError(isApiError(caught) ? (caught.fields.body ?? caught.message) : 'The comment was not saved.'),
-          },
-        );
-      }}
+      onSubmit={form.handleSubmit(({ body }) =>
+        // What was typed stays in the box when the server refuses it.
+        add.mutate({ body, parentId }, { onSuccess: () => form.reset(), onError: form.fail }),
+      )}
     >
-      <TextArea
-        label={label}
-        value={body}
-        onChange={(e) => setBody(e.target.value)}
-        error={error ?? undefined}
-        rows={2}
-      />
+      {/* A refusal that names no field is still about the comment: it shows beside it. */}
+      <TextArea {...form.field('body')} error={form.errors.body ?? form.formError} rows={2} />
       <Button type="submit" size="sm" pending={add.isPending}>
         {submitLabel}
       </Button>

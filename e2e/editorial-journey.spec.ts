@@ -46,6 +46,8 @@ async function openWriteUp(page: Page, roundupTitle: string) {
   await page.goto('/roundups');
   await page.getByRole('link', { name: roundupTitle }).first().click();
   await page.getByRole('link', { name: 'Write-up', exact: true }).click();
+  // The roundup's own page has the same heading: wait until the write-up is the page shown.
+  await expect(page).toHaveURL(/\/roundups\/\d+\/write-up$/);
   await expect(page.getByRole('heading', { level: 1, name: roundupTitle })).toBeVisible();
 }
 

@@ -49,13 +49,17 @@ describe('DataTable', () => {
     expect(screen.getAllByRole('cell').map((cell) => cell.textContent)).toEqual(['64', '71.5', '—']);
   });
 
-  it('when no filter is asked for, or the table is no longer than `aboveRows`, then there is no filter box', () => {
+  it('when no filter is asked for, or the table is no longer than `aboveRows`, then there is no filter box; a placeholder alone gets the label from the noun', () => {
     const { rerender } = render(<DataTable caption="Probes" rows={probes} columns={columns} />);
     expect(screen.queryByRole('searchbox')).toBeNull();
     rerender(<DataTable caption="Probes" rows={probes} columns={columns} filter={{ label: 'Filter', aboveRows: 3 }} />);
     expect(screen.queryByRole('searchbox')).toBeNull();
     rerender(<DataTable caption="Probes" rows={probes} columns={columns} filter={{ label: 'Filter', aboveRows: 2 }} />);
     expect(screen.getByRole('searchbox', { name: 'Filter' })).toBeTruthy();
+    rerender(
+      <DataTable caption="Probes" rows={probes} columns={columns} filter="Probe name" noun={['probe', 'probes']} />,
+    );
+    expect(screen.getByRole('searchbox', { name: 'Filter probes' }).getAttribute('placeholder')).toBe('Probe name');
   });
 
   it('when a column is left out, then it is skipped; a button column names its row', async () => {

@@ -48,7 +48,8 @@ export type DataTableColumns<Row> = readonly (DataTableColumn<Row> | false | nul
 type RowKey<Row> = (row: Row) => string | number;
 
 export interface DataTableFilter {
-  label: string;
+  /** Default: "Filter" and the plural noun, e.g. "Filter samples". */
+  label?: string;
   placeholder?: string;
   /** Shown only while the table has more rows than this: a short table is read at a glance. */
   aboveRows?: number;
@@ -62,8 +63,8 @@ interface DataTableOwnProps<Row> {
   columns: DataTableColumns<Row>;
   /** The sort the table opens with; a column id sorts that column ascending. */
   initialSort?: SortState | string;
-  /** A filter box above the table; none when left out (or false). */
-  filter?: DataTableFilter | false;
+  /** A filter box above the table (a string is its placeholder); none when left out (or false). */
+  filter?: DataTableFilter | string | false;
   /** Singular and plural noun for the count line, e.g. ['user', 'users']. */
   noun?: [string, string];
   /** Extra controls next to the filter box. */
@@ -123,7 +124,12 @@ export function DataTable<Row>(props: DataTableProps<Row>) {
     () => givenColumns.filter((column): column is DataTableColumn<Row> => Boolean(column)),
     [givenColumns],
   );
-  const filter = filterOption && rows.length > (filterOption.aboveRows ?? -1) ? filterOption : undefined;
+  const [singular, plural] = noun;
+  const filterSettings = typeof filterOption === 'string' ? { placeholder: filterOption } : filterOption;
+  const filter =
+    filterSettings && rows.length > (filterSettings.aboveRows ?? -1)
+      ? { label: `Filter ${plural}`, ...filterSettings }
+      : undefined;
   const choice = useColumnChoice(columnChoice?.storageKey);
   const choosable = useMemo(
     () =>
@@ -183,7 +189,6 @@ export function DataTable<Row>(props: DataTableProps<Row>) {
         : { columnId, direction: 'ascending' },
     );
 
-  const [singular, plural] = noun;
   const countText =
     visibleRows.length === rows.length
       ? `${rows.length} ${rows.length === 1 ? singular : plural}`

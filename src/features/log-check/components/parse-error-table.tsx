@@ -68,7 +68,7 @@ export function ParseErrorTable({ errors, message, stage, hasPreview }: ParseErr
         caption="Problems found in the logger file"
         rows={rows}
         columns={columns}
-        filter={{ label: 'Filter problems', placeholder: 'Column or message', aboveRows: 8 }}
+        filter={{ placeholder: 'Column or message', aboveRows: 8 }}
         noun={['problem', 'problems']}
       />
     </div>

@@ -125,7 +125,7 @@ export function QueueTable({ caption, items, bookings, matrixPath, onMove, pendi
       columns={columns}
       rowKey={(item) => item.cell.id}
       initialSort="due"
-      filter={{ label: 'Filter cells', placeholder: 'Product, configuration or roundup', aboveRows: 6 }}
+      filter={{ placeholder: 'Product, configuration or roundup', aboveRows: 6 }}
       noun={['cell', 'cells']}
       rowClassName={(item) => (item.cell.overdue ? 'bg-red/5' : undefined)}
       empty={<EmptyState title={empty.title}>{empty.text}</EmptyState>}

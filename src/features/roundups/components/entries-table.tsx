@@ -112,7 +112,7 @@ export function EntriesTable({ roundupId, entries, onRemove }: EntriesTableProps
       rows={entries}
       columns={columns}
       initialSort="position"
-      filter={{ label: 'Filter products', placeholder: 'Maker or model', aboveRows: 8 }}
+      filter={{ placeholder: 'Maker or model', aboveRows: 8 }}
       noun={['product', 'products']}
       empty={
         <EmptyState title="No products yet">

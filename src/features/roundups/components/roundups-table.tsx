@@ -125,7 +125,7 @@ export function RoundupsTable({ roundups, roundupPath, emptyAction }: RoundupsTa
       rows={rows}
       columns={columns}
       initialSort="target"
-      filter={{ label: 'Filter roundups', placeholder: 'Title, platform or state' }}
+      filter="Title, platform or state"
       noun={['roundup', 'roundups']}
       columnChoice={{ storageKey: 'benchwire:roundups:columns' }}
       toolbar={

@@ -126,7 +126,7 @@ export function SamplesTable({ roundupId, canEdit, defaultCurrency }: SamplesTab
         rows={samples}
         columns={columns}
         initialSort="product"
-        filter={{ label: 'Filter samples', placeholder: 'Product, source or status' }}
+        filter="Product, source or status"
         noun={['sample', 'samples']}
         rowClassName={(s) => (s.overdue ? 'bg-red/5' : undefined)}
         empty={

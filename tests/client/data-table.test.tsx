@@ -62,6 +62,17 @@ describe('DataTable', () => {
     expect(screen.getByRole('searchbox', { name: 'Filter probes' }).getAttribute('placeholder')).toBe('Probe name');
   });
 
+  it('when the table shrinks to no more than `aboveRows` while a filter is typed, then the box goes and every row shows again', async () => {
+    const filter = { label: 'Filter', aboveRows: 2 };
+    const { rerender } = render(<DataTable caption="Probes" rows={probes} columns={columns} filter={filter} />);
+    await userEvent.type(screen.getByRole('searchbox', { name: 'Filter' }), 'VRM');
+    expect(rowHeaders()).toEqual(['VRM rear', 'VRM front']);
+    const twoLeft = probes.slice(1);
+    rerender(<DataTable caption="Probes" rows={twoLeft} columns={columns} filter={filter} />);
+    expect(screen.queryByRole('searchbox')).toBeNull();
+    expect(rowHeaders()).toEqual(['VRM front', 'Choke']);
+  });
+
   it('when a column is left out, then it is skipped; a button column names its row', async () => {
     const onEdit = vi.fn();
     const withActions = (canEdit: boolean) => [

@@ -155,8 +155,10 @@ export function DataTable<Row>(props: DataTableProps<Row>) {
   );
   const [query, setQuery] = useState('');
 
+  // What was typed applies only while the box is shown: a table that shrank below `aboveRows` hides no rows.
+  const activeQuery = filter ? query : '';
   const visibleRows = useMemo(() => {
-    const needle = query.trim().toLocaleLowerCase();
+    const needle = activeQuery.trim().toLocaleLowerCase();
     let result = [...rows];
     if (needle) {
       result = result.filter((row) =>
@@ -178,7 +180,7 @@ export function DataTable<Row>(props: DataTableProps<Row>) {
       });
     }
     return result;
-  }, [rows, columns, query, sort]);
+  }, [rows, columns, activeQuery, sort]);
 
   if (rows.length === 0 && empty) return <>{empty}</>;
 

@@ -90,9 +90,7 @@ export function CatalogBrowser({ canEdit }: CatalogBrowserProps) {
             caption="Catalog products"
             rows={list.products}
             columns={columns}
-            rowKey={(product) => product.id}
             initialSort={{ columnId: 'maker', direction: 'ascending' }}
-            filter={false}
             noun={['product', 'products']}
             columnChoice={{ storageKey: 'benchwire:catalog:columns' }}
             empty={

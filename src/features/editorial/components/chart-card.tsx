@@ -71,7 +71,7 @@ function ChartTable({ chart }: { chart: RoundupChart['data'] }) {
     <details className="mt-3 text-sm">
       <summary className="cursor-pointer text-copper">Data table</summary>
       <div className="mt-2">
-        <DataTable caption={chart.title} rows={rows} columns={columns} rowKey={(row) => row.key} filter={false} />
+        <DataTable caption={chart.title} rows={rows} columns={columns} rowKey={(row) => row.key} />
       </div>
     </details>
   );

@@ -132,7 +132,6 @@ export function LogPreviewPanel({ preview, fileName }: LogPreviewPanelProps) {
           rows={preview.columns}
           columns={fileColumns(preview)}
           rowKey={(column) => column.index}
-          filter={false}
         />
       </div>
 
@@ -158,7 +157,6 @@ export function LogPreviewPanel({ preview, fileName }: LogPreviewPanelProps) {
         rows={preview.rows.map((values, index) => ({ line: index + 1, values }))}
         columns={firstRowColumns(preview)}
         rowKey={(row) => row.line}
-        filter={false}
       />
     </Panel>
   );

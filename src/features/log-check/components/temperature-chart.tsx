@@ -334,7 +334,6 @@ function ChartTable({ lines, endS, ambient }: { lines: ChartLine[]; endS: number
           rows={rows}
           columns={columns}
           rowKey={(from) => from}
-          filter={false}
         />
       </div>
     </details>

@@ -184,7 +184,6 @@ export function ResultsMatrix({ roundupId, rows, columns, cellPath, canEditRubri
           })),
         ]}
         rowKey={(row) => row.entryId}
-        filter={false}
       />
       {canEditRubric && (
         <RubricForm key={JSON.stringify(rubric)} roundupId={roundupId} rubric={rubric} isDefault={rubricIsDefault} />

@@ -168,8 +168,6 @@ function AnalysesTable({ run }: { run: TestRun }) {
         caption="Analyses of this run, oldest first"
         rows={run.analyses}
         columns={columns}
-        rowKey={(entry) => entry.id}
-        filter={false}
         noun={['analysis', 'analyses']}
       />
     </section>

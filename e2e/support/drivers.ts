@@ -57,7 +57,7 @@ export function keyboardDriver(page: Page): Driver {
     date: (target, iso) => typeDate(page, target, iso),
     time: async (target, value) => {
       await tabTo(page, target);
-      await page.keyboard.type(value.replace(/:/g, ''));
+      await page.keyboard.type(timeFieldKeys(value));
       await expect(target).toHaveValue(value);
     },
     choose: (target, label) => chooseOption(page, target, label),
@@ -74,4 +74,16 @@ export function keyboardDriver(page: Page): Driver {
       await expect(wanted).toHaveAttribute('aria-selected', 'true');
     },
   };
+}
+
+/**
+ * The keys that type `value` (HH:MM or HH:MM:SS, 24-hour) into a time field as Debian's Chromium draws it here: in
+ * hour, minute, second and AM/PM segments whatever the page's locale (measured: typing "12" into the hour gives
+ * 00 until PM is typed, and "23" does not fit the hour segment). So the hour goes in on the 12-hour clock and the
+ * letter A or P sets the half of the day.
+ */
+function timeFieldKeys(value: string): string {
+  const [hours, ...rest] = value.split(':');
+  const hour = Number(hours);
+  return String(hour % 12 || 12).padStart(2, '0') + rest.join('') + (hour >= 12 ? 'P' : 'A');
 }

@@ -21,6 +21,7 @@ import { In, type DataSource } from 'typeorm';
 import { PasswordGuessCounterEntity } from '../entities/password-guess-counter.entity';
 import type { Env } from '../env';
 import { AppError } from '../errors';
+import { retryingDeadlocks } from '../lib/database-errors';
 
 export interface PasswordGuessPolicy {
   /** Wrong passwords for one account before every further attempt waits for a lock to pass. */
@@ -99,14 +100,7 @@ export class PasswordGuesses {
   async admit(subject: PasswordAttemptSubject): Promise<PasswordAttempt> {
     const accountKey = counterKey('account', subject.email);
     const addressKey = subject.address ? counterKey('address', ipKeyGenerator(subject.address)) : null;
-    for (let attempt = 1; ; attempt++) {
-      try {
-        return await this.admitOnce(subject.check, accountKey, addressKey);
-      } catch (error) {
-        const deadlock = (error as { driverError?: { errno?: number } })?.driverError?.errno === 1213;
-        if (!deadlock || attempt >= DEADLOCK_RETRIES) throw error;
-      }
-    }
+    return retryingDeadlocks(() => this.admitOnce(subject.check, accountKey, addressKey), DEADLOCK_RETRIES);
   }
 
   private async admitOnce(check: PasswordCheck, accountKey: string, addressKey: string | null) {

@@ -3,6 +3,7 @@ import { hostname } from 'node:os';
 import type { DataSource } from 'typeorm';
 import { systemClock, type Clock } from './clock';
 import { defaultBackoffMs, PermanentJobError, RetryJobLater, type JobRegistry } from './job-registry';
+import { retryingDeadlocks } from '../lib/database-errors';
 
 export interface JobRunnerOptions {
   clock?: Clock;
@@ -109,27 +110,30 @@ export class JobRunner {
   private async claim(kinds: string[]): Promise<ClaimedRow | null> {
     const now = this.clock.now();
     const abandonedBefore = new Date(now.getTime() - this.leaseMs);
-    return this.dataSource.transaction(async (manager) => {
-      const placeholders = kinds.map(() => '?').join(', ');
-      const keys = this.onlyUniqueKeys;
-      const keyFilter = keys ? `AND unique_key IN (${keys.map(() => '?').join(', ') || 'NULL'})` : '';
-      const rows: ClaimedRow[] = await manager.query(
-        `SELECT id, kind, unique_key, payload, run_at, attempts, max_attempts FROM jobs
+    // Two runners claiming at once can deadlock on the index locks of the claim's UPDATE; the loser claims again.
+    return retryingDeadlocks(() =>
+      this.dataSource.transaction(async (manager) => {
+        const placeholders = kinds.map(() => '?').join(', ');
+        const keys = this.onlyUniqueKeys;
+        const keyFilter = keys ? `AND unique_key IN (${keys.map(() => '?').join(', ') || 'NULL'})` : '';
+        const rows: ClaimedRow[] = await manager.query(
+          `SELECT id, kind, unique_key, payload, run_at, attempts, max_attempts FROM jobs
          WHERE kind IN (${placeholders}) ${keyFilter}
            AND ((state = 'pending' AND run_at <= ?) OR (state = 'running' AND locked_at <= ?))
          ORDER BY run_at, id
          LIMIT 1
          FOR UPDATE SKIP LOCKED`,
-        [...kinds, ...(keys ?? []), now, abandonedBefore],
-      );
-      const row = rows[0];
-      if (!row) return null;
-      await manager.query(
-        `UPDATE jobs SET state = 'running', locked_by = ?, locked_at = ?, attempts = attempts + 1 WHERE id = ?`,
-        [this.workerId, now, row.id],
-      );
-      return { ...row, attempts: row.attempts + 1 };
-    });
+          [...kinds, ...(keys ?? []), now, abandonedBefore],
+        );
+        const row = rows[0];
+        if (!row) return null;
+        await manager.query(
+          `UPDATE jobs SET state = 'running', locked_by = ?, locked_at = ?, attempts = attempts + 1 WHERE id = ?`,
+          [this.workerId, now, row.id],
+        );
+        return { ...row, attempts: row.attempts + 1 };
+      }),
+    );
   }
 
   private async execute(row: ClaimedRow): Promise<void> {

@@ -6,6 +6,21 @@ export function isDuplicateKey(error: unknown): boolean {
   return driverError.code === 'ER_DUP_ENTRY' || driverError.driverError?.code === 'ER_DUP_ENTRY';
 }
 
+/**
+ * Runs `transaction` again when InnoDB picked it as a deadlock victim (errno 1213, "try restarting transaction":
+ * the transaction was rolled back whole, so running it again is safe), at most `attempts` times in all.
+ */
+export async function retryingDeadlocks<T>(transaction: () => Promise<T>, attempts = 3): Promise<T> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await transaction();
+    } catch (error) {
+      const deadlock = (error as { driverError?: { errno?: number } })?.driverError?.errno === 1213;
+      if (!deadlock || attempt >= attempts) throw error;
+    }
+  }
+}
+
 /** TypeORM `where` for lists that can hide, include or show only archived rows. */
 export function archivedWhere(archived: 'exclude' | 'include' | 'only') {
   if (archived === 'exclude') return { archivedAt: IsNull() };
